@@ -1,0 +1,68 @@
+package org.spanlift.cli.options;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.spanlift.io.InputException;
+
+/** Angles of attack in degrees, from a list {@code 0,2,4} or a range {@code from:to:step}. */
+public final class AlphaList {
+
+    private static final int MAX_POINTS = 1000;
+
+    private AlphaList() {
+    }
+
+    public static List<Double> parse(String text) {
+        String t = text.trim();
+        List<Double> out = new ArrayList<>();
+        if (t.contains(":")) {
+            String[] p = t.split(":");
+            if (p.length != 3) {
+                throw bad(text);
+            }
+            double from = number(p[0], text);
+            double to = number(p[1], text);
+            double step = number(p[2], text);
+            if (step == 0 || (to - from) / step < 0) {
+                throw new InputException("--alpha", 0, "", "the step of " + text + " must be non-zero and lead from "
+                        + "the first value to the second");
+            }
+            long n = (long) Math.floor((to - from) / step + 1e-9) + 1;
+            if (n > MAX_POINTS) {
+                throw new InputException("--alpha", 0, "", "at most " + MAX_POINTS + " angles, got " + n);
+            }
+            for (long i = 0; i < n; i++) {
+                out.add(from + i * step);
+            }
+        } else {
+            for (String s : t.split(",")) {
+                out.add(number(s, text));
+            }
+        }
+        for (double a : out) {
+            if (Math.abs(a) > 30) {
+                throw new InputException("--alpha", 0, "", "angles of attack must lie within -30 to 30 degrees "
+                        + "(linear theory), got " + a);
+            }
+        }
+        return out;
+    }
+
+    private static double number(String s, String whole) {
+        try {
+            double d = Double.parseDouble(s.trim());
+            if (!Double.isFinite(d)) {
+                throw bad(whole);
+            }
+            return d;
+        } catch (NumberFormatException e) {
+            throw bad(whole);
+        }
+    }
+
+    private static InputException bad(String text) {
+        return new InputException("--alpha", 0, "", "expected degrees as a list (0,2,4) or a range from:to:step "
+                + "(-4:12:2), got '" + text + "'");
+    }
+}

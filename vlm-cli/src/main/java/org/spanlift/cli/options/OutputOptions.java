@@ -1,0 +1,81 @@
+package org.spanlift.cli.options;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.EnumSet;
+import java.util.Set;
+
+import org.spanlift.io.InputException;
+
+import picocli.CommandLine.Option;
+
+/**
+ * The output options every command shares: where to write and in which format. A file is written whole
+ * or not at all (a temporary file beside it, moved into place when complete).
+ */
+public final class OutputOptions {
+
+    @Option(names = {"-o", "--output"}, paramLabel = "FILE",
+            description = "Write to FILE instead of standard output. Written whole or not at all.")
+    Path output;
+
+    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT",
+            description = "Output format: ${COMPLETION-CANDIDATES}. Default: from the output file's extension, "
+                    + "else table.")
+    Format format;
+
+    /** The chosen format, checked against what the command offers. */
+    public Format format(Set<Format> offered) {
+        Format f = format;
+        if (f == null && output != null) {
+            f = Format.fromFileName(output.getFileName().toString());
+        }
+        if (f == null) {
+            f = offered.contains(Format.TABLE) ? Format.TABLE : offered.iterator().next();
+        }
+        if (!offered.contains(f)) {
+            throw new InputException("--format", 0, "", "this command writes " + names(offered) + ", not " + f);
+        }
+        return f;
+    }
+
+    private static String names(Set<Format> formats) {
+        return String.join(", ", EnumSet.copyOf(formats).stream().map(Format::toString).toList());
+    }
+
+    /** Writes the text to the output file atomically, or to {@code stdout}. */
+    public void write(String text, PrintWriter stdout) {
+        if (output == null) {
+            stdout.print(text);
+            stdout.flush();
+            return;
+        }
+        writeAtomically(output, text.getBytes(StandardCharsets.UTF_8));
+    }
+
+    /** Writes bytes to a file via a temporary file in the same folder, then moves it into place. */
+    public static void writeAtomically(Path target, byte[] bytes) {
+        Path absolute = target.toAbsolutePath();
+        Path dir = absolute.getParent();
+        try {
+            Path tmp = Files.createTempFile(dir, "." + absolute.getFileName(), ".part");
+            try {
+                Files.write(tmp, bytes);
+                Files.move(tmp, absolute, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+            } finally {
+                Files.deleteIfExists(tmp);
+            }
+        } catch (IOException e) {
+            throw new InputException(target.toString(), 0, "", "cannot write the output file ("
+                    + e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage()) + ")");
+        }
+    }
+
+    public Path outputFile() {
+        return output;
+    }
+}

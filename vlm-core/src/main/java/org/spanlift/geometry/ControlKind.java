@@ -1,0 +1,9 @@
+package org.spanlift.geometry;
+
+/** How a control surface deflects on a mirrored surface. */
+public enum ControlKind {
+    /** Both sides deflect the same way (symmetric). */
+    FLAP,
+    /** The left side deflects opposite to the right (antisymmetric); mirrored surfaces only. */
+    AILERON
+}

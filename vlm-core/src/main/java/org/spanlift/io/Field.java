@@ -1,0 +1,215 @@
+package org.spanlift.io;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.Set;
+import java.util.regex.Pattern;
+
+/**
+ * A value of an input file together with where it is (file, line, dotted field path), with typed readers
+ * that fail with an {@link InputException} naming that place and what was expected.
+ */
+public final class Field {
+
+    private static final Pattern NON_FINITE = Pattern.compile("[-+]?(\\.?nan|\\.?inf|infinity)",
+            Pattern.CASE_INSENSITIVE);
+
+    private final String file;
+    private final String path;
+    private final YamlValue value;
+
+    public Field(String file, String path, YamlValue value) {
+        this.file = file;
+        this.path = path;
+        this.value = value;
+    }
+
+    public String file() {
+        return file;
+    }
+
+    public String path() {
+        return path;
+    }
+
+    public int line() {
+        return value.line();
+    }
+
+    public YamlValue value() {
+        return value;
+    }
+
+    /** An error at this field. */
+    public InputException error(String problem) {
+        return new InputException(file, value.line(), path, problem);
+    }
+
+    private String child(String key) {
+        return path.isEmpty() ? key : path + "." + key;
+    }
+
+    public YamlValue.Mapping mapping() {
+        if (value instanceof YamlValue.Mapping m) {
+            return m;
+        }
+        throw error("expected a mapping of keys, got " + value.describe());
+    }
+
+    /** Refuses keys outside {@code allowed}, naming the first unknown one and the keys accepted. */
+    public Field allowOnly(Set<String> allowed) {
+        for (YamlValue.Entry e : mapping().entries()) {
+            if (!allowed.contains(e.key())) {
+                throw new InputException(file, e.keyLine(), child(e.key()),
+                        "unknown key; expected one of " + String.join(", ", allowed.stream().sorted().toList()));
+            }
+        }
+        return this;
+    }
+
+    public boolean has(String key) {
+        return mapping().get(key).filter(v -> !(v instanceof YamlValue.Scalar s && s.isNull())).isPresent();
+    }
+
+    public Optional<Field> optional(String key) {
+        return has(key) ? Optional.of(new Field(file, child(key), mapping().get(key).orElseThrow()))
+                : Optional.empty();
+    }
+
+    public Field required(String key, String expected) {
+        return optional(key).orElseThrow(() -> error("missing key '" + key + "'; expected " + expected));
+    }
+
+    public List<Field> items() {
+        if (!(value instanceof YamlValue.Sequence seq)) {
+            throw error("expected a list, got " + value.describe());
+        }
+        List<Field> out = new ArrayList<>();
+        for (int i = 0; i < seq.items().size(); i++) {
+            out.add(new Field(file, path + "[" + i + "]", seq.items().get(i)));
+        }
+        return out;
+    }
+
+    /** The keys of a mapping with their fields, in file order. */
+    public List<Field> entries() {
+        List<Field> out = new ArrayList<>();
+        for (YamlValue.Entry e : mapping().entries()) {
+            out.add(new Field(file, child(e.key()), e.value()));
+        }
+        return out;
+    }
+
+    /** The last key of the path (for entries of a mapping). */
+    public String key() {
+        int dot = path.lastIndexOf('.');
+        return dot < 0 ? path : path.substring(dot + 1);
+    }
+
+    public String text() {
+        if (value instanceof YamlValue.Scalar s && !s.isNull()) {
+            return s.text();
+        }
+        throw error("expected a text value, got " + value.describe());
+    }
+
+    /** A finite number. */
+    public double number() {
+        if (!(value instanceof YamlValue.Scalar s) || s.isNull()) {
+            throw error("expected a number, got " + value.describe());
+        }
+        String t = s.text().trim();
+        if (NON_FINITE.matcher(t).matches()) {
+            throw error("expected a finite number, got " + t);
+        }
+        if (!s.plain()) {
+            throw error("expected a number, got " + s.describe());
+        }
+        try {
+            double d = Double.parseDouble(t.replace("_", ""));
+            if (!Double.isFinite(d)) {
+                throw error("expected a finite number, got " + t);
+            }
+            return d;
+        } catch (NumberFormatException e) {
+            throw error("expected a number, got " + s.describe());
+        }
+    }
+
+    public double positive() {
+        double d = number();
+        if (!(d > 0)) {
+            throw error("must be positive, got " + format(d));
+        }
+        return d;
+    }
+
+    public double nonNegative() {
+        double d = number();
+        if (d < 0) {
+            throw error("must not be negative, got " + format(d));
+        }
+        return d;
+    }
+
+    /** A number within [lo, hi]. */
+    public double inRange(double lo, double hi) {
+        double d = number();
+        if (d < lo || d > hi) {
+            throw error("must be from " + format(lo) + " to " + format(hi) + ", got " + format(d));
+        }
+        return d;
+    }
+
+    public int integer(int lo, int hi) {
+        double d = number();
+        if (d != Math.rint(d)) {
+            throw error("expected a whole number, got " + format(d));
+        }
+        if (d < lo || d > hi) {
+            throw error("must be from " + lo + " to " + hi + ", got " + format(d));
+        }
+        return (int) d;
+    }
+
+    public boolean bool() {
+        if (value instanceof YamlValue.Scalar s && s.plain()) {
+            String t = s.text().toLowerCase(Locale.ROOT);
+            if (t.equals("true")) {
+                return true;
+            }
+            if (t.equals("false")) {
+                return false;
+            }
+        }
+        throw error("expected true or false, got " + value.describe());
+    }
+
+    /** One of the given words (case-insensitive), returned in lower case. */
+    public String choice(List<String> words) {
+        String t = text().trim().toLowerCase(Locale.ROOT);
+        if (!words.contains(t)) {
+            throw error("expected one of " + String.join(", ", words) + ", got '" + text() + "'");
+        }
+        return t;
+    }
+
+    /** A list of exactly n numbers. */
+    public double[] numbers(int n) {
+        List<Field> list = items();
+        if (list.size() != n) {
+            throw error("expected a list of " + n + " numbers, got " + list.size());
+        }
+        double[] out = new double[n];
+        for (int i = 0; i < n; i++) {
+            out[i] = list.get(i).number();
+        }
+        return out;
+    }
+
+    public static String format(double d) {
+        return d == Math.rint(d) && Math.abs(d) < 1e15 ? String.valueOf((long) d) : String.valueOf(d);
+    }
+}

@@ -1,0 +1,358 @@
+package org.spanlift.io;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+
+import org.spanlift.geometry.ControlKind;
+import org.spanlift.geometry.ControlSurface;
+import org.spanlift.geometry.EllipticPlanform;
+import org.spanlift.geometry.LatticeSpec;
+import org.spanlift.geometry.LengthUnit;
+import org.spanlift.geometry.Planform;
+import org.spanlift.geometry.Reference;
+import org.spanlift.geometry.Section;
+import org.spanlift.geometry.Spacing;
+import org.spanlift.geometry.Station;
+import org.spanlift.geometry.StationPlanform;
+import org.spanlift.geometry.Surface;
+import org.spanlift.geometry.Vec3;
+import org.spanlift.geometry.Wing;
+import org.spanlift.section.CamberLine;
+import org.spanlift.section.CamberLines;
+
+/**
+ * Reads a wing file ({@code .wing.yaml}) into a {@link Wing}, in two stages: the YAML tree with line marks
+ * ({@link YamlParser}), then the model, checked field by field. Lengths are converted from the file's
+ * {@code units} to metres, angles from degrees to radians. Every problem is an {@link InputException}
+ * naming the file, line and field.
+ */
+public final class WingFileReader {
+
+    /** Keys accepted at each level of a wing file (the schema sweeps check their paths against). */
+    public static final Set<String> TOP_KEYS = Set.of("name", "units", "reference", "surfaces", "sections");
+    public static final Set<String> REFERENCE_KEYS = Set.of("area", "span", "chord", "moment-point");
+    public static final Set<String> SURFACE_KEYS = Set.of("name", "mirror", "section", "stations", "trapezoid",
+            "elliptic", "controls", "lattice");
+    public static final Set<String> STATION_KEYS = Set.of("y", "chord", "nose-x", "nose-z", "twist", "section");
+    public static final Set<String> TRAPEZOID_KEYS = Set.of("span", "root-chord", "taper", "sweep", "dihedral",
+            "washout", "root-twist", "root-nose");
+    public static final Set<String> ELLIPTIC_KEYS = Set.of("span", "root-chord", "dihedral", "washout",
+            "root-twist", "root-nose");
+    public static final Set<String> CONTROL_KEYS = Set.of("name", "kind", "from", "to", "chord-fraction",
+            "deflection");
+    public static final Set<String> LATTICE_KEYS = Set.of("strips", "rows", "strip-spacing", "row-spacing");
+    public static final Set<String> SECTION_KEYS = Set.of("camber");
+
+    /** Largest lattice accepted: strips per surface, rows, and panels over the whole wing. */
+    public static final int MAX_STRIPS = 400;
+    public static final int MAX_ROWS = 64;
+    public static final int MAX_PANELS = 12_000;
+
+    /** Name of the section a station gets when neither it nor its surface names one: a flat plate. */
+    public static final String FLAT_SECTION = "flat";
+
+    private WingFileReader() {
+    }
+
+    /** Reads and checks a wing file. */
+    public static Wing read(Path path) {
+        String file = path.toString();
+        String text;
+        try {
+            text = Files.readString(path, StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new InputException(file, 0, "", "cannot read the file (" + e.getClass().getSimpleName() + ")");
+        }
+        return parse(text, file);
+    }
+
+    /** Reads a wing from YAML text; {@code file} names it in messages. */
+    public static Wing parse(String text, String file) {
+        return fromTree(YamlParser.parse(text, file), file);
+    }
+
+    /** The second stage: a wing from a YAML tree (perhaps changed by a sweep). */
+    public static Wing fromTree(YamlValue tree, String file) {
+        Field root = new Field(file, "", tree);
+        root.mapping();
+        root.allowOnly(TOP_KEYS);
+        String name = root.optional("name").map(Field::text).orElse(Path.of(file).getFileName().toString());
+        LengthUnit unit = readUnit(root.required("units", "m, ft or in"));
+        double k = unit.metres();
+
+        Map<String, Section> sections = new LinkedHashMap<>();
+        sections.put(FLAT_SECTION, Section.of(FLAT_SECTION, CamberLines.parse("flat")));
+        root.optional("sections").ifPresent(s -> {
+            for (Field entry : s.entries()) {
+                sections.put(entry.key(), readSection(entry));
+            }
+        });
+
+        Field surfacesField = root.required("surfaces", "a list of surfaces");
+        List<Field> surfaceFields = surfacesField.items();
+        if (surfaceFields.isEmpty()) {
+            throw surfacesField.error("expected at least one surface");
+        }
+        List<Surface> surfaces = new ArrayList<>();
+        Set<String> surfaceNames = new HashSet<>();
+        Set<String> controlNames = new HashSet<>();
+        int panels = 0;
+        for (Field sf : surfaceFields) {
+            Surface surface = readSurface(sf, k, sections, controlNames);
+            if (!surfaceNames.add(surface.name())) {
+                throw sf.required("name", "a name").error("another surface has the name '" + surface.name() + "'");
+            }
+            panels += (surface.mirrored() ? 2 : 1) * surface.lattice().strips() * surface.lattice().rows();
+            if (panels > MAX_PANELS) {
+                throw sf.error("the lattice has more than " + MAX_PANELS + " panels over the whole wing; "
+                        + "lower strips or rows");
+            }
+            surfaces.add(surface);
+        }
+        Reference defaults = Wing.defaultReference(surfaces.get(0));
+        Reference reference = root.optional("reference").map(r -> readReference(r, k, defaults)).orElse(defaults);
+        return new Wing(name, unit, reference, surfaces, sections);
+    }
+
+    private static LengthUnit readUnit(Field f) {
+        String t = f.choice(List.of("m", "ft", "in"));
+        return LengthUnit.parse(t);
+    }
+
+    private static Section readSection(Field f) {
+        f.allowOnly(SECTION_KEYS);
+        CamberLine camber = f.optional("camber").map(c -> {
+            try {
+                return CamberLines.parse(c.text());
+            } catch (IllegalArgumentException e) {
+                throw c.error(e.getMessage());
+            }
+        }).orElseGet(() -> CamberLines.parse("flat"));
+        return Section.of(f.key(), camber);
+    }
+
+    private static Reference readReference(Field f, double k, Reference defaults) {
+        f.allowOnly(REFERENCE_KEYS);
+        double area = f.optional("area").map(a -> a.positive() * k * k).orElse(defaults.area());
+        double span = f.optional("span").map(a -> a.positive() * k).orElse(defaults.span());
+        double chord = f.optional("chord").map(a -> a.positive() * k).orElse(defaults.chord());
+        Vec3 point = f.optional("moment-point").map(p -> {
+            double[] v = p.numbers(3);
+            return new Vec3(v[0] * k, v[1] * k, v[2] * k);
+        }).orElse(defaults.momentPoint());
+        return new Reference(area, span, chord, point);
+    }
+
+    private static Surface readSurface(Field f, double k, Map<String, Section> sections, Set<String> controlNames) {
+        f.allowOnly(SURFACE_KEYS);
+        String name = f.required("name", "a name for the surface").text();
+        boolean mirrored = f.optional("mirror").map(Field::bool).orElse(true);
+        Optional<Field> sectionField = f.optional("section");
+        String surfaceSection = sectionField.map(s -> sectionName(s, sections)).orElse(FLAT_SECTION);
+
+        List<String> shapes = new ArrayList<>();
+        for (String key : List.of("stations", "trapezoid", "elliptic")) {
+            if (f.has(key)) {
+                shapes.add(key);
+            }
+        }
+        if (shapes.size() != 1) {
+            throw f.error(shapes.isEmpty() ? "missing the planform; give one of stations, trapezoid or elliptic"
+                    : "give only one of stations, trapezoid or elliptic, not " + String.join(" and ", shapes));
+        }
+        Field shapeField = f.required(shapes.get(0), "");
+        Planform planform = switch (shapes.get(0)) {
+            case "stations" -> readStations(shapeField, k, mirrored, surfaceSection, sections);
+            case "trapezoid" -> readTrapezoid(shapeField, k, mirrored, surfaceSection);
+            default -> readElliptic(shapeField, k, mirrored, surfaceSection);
+        };
+
+        List<ControlSurface> controls = new ArrayList<>();
+        List<Field> controlFields = f.optional("controls").map(Field::items).orElse(List.of());
+        for (Field cf : controlFields) {
+            ControlSurface c = readControl(cf, k, mirrored, planform, controls);
+            if (!controlNames.add(c.name())) {
+                throw cf.required("name", "").error("another control has the name '" + c.name()
+                        + "'; control names are unique in the file");
+            }
+            controls.add(c);
+        }
+        LatticeSpec lattice = f.optional("lattice").map(l -> readLattice(l, controls.isEmpty()))
+                .orElse(LatticeSpec.DEFAULT);
+        int cuts = countInteriorCuts(planform, controls, lattice);
+        if (cuts > lattice.strips() - 1) {
+            Field at = f.optional("lattice").map(l -> l.optional("strips").orElse(l)).orElse(f);
+            throw at.error("needs at least " + (cuts + 1) + " strips to place a strip edge on each of its " + cuts
+                    + " control ends and stations");
+        }
+        return new Surface(name, mirrored, planform, controls, lattice);
+    }
+
+    private static int countInteriorCuts(Planform p, List<ControlSurface> controls, LatticeSpec spec) {
+        Set<Long> cuts = new HashSet<>();
+        double tol = 1e-9 * (p.yEnd() - p.yStart());
+        List<Double> ys = new ArrayList<>();
+        for (ControlSurface c : controls) {
+            ys.add(c.from());
+            ys.add(c.to());
+        }
+        if (p.stationYs().size() - 1 <= spec.strips() / 2) {
+            ys.addAll(p.stationYs());
+        }
+        for (double y : ys) {
+            if (y > p.yStart() + tol && y < p.yEnd() - tol) {
+                cuts.add(Math.round(y / tol));
+            }
+        }
+        return cuts.size();
+    }
+
+    private static String sectionName(Field f, Map<String, Section> sections) {
+        String name = f.text();
+        if (!sections.containsKey(name)) {
+            List<String> known = sections.keySet().stream().filter(s -> !s.equals(FLAT_SECTION)).toList();
+            throw f.error("unknown section '" + name + "'; the file's sections are "
+                    + (known.isEmpty() ? "none (add a 'sections' mapping)" : String.join(", ", known)));
+        }
+        return name;
+    }
+
+    private static Planform readStations(Field f, double k, boolean mirrored, String surfaceSection,
+            Map<String, Section> sections) {
+        List<Field> items = f.items();
+        if (items.size() < 2) {
+            throw f.error("expected at least two stations (root and tip), got " + items.size());
+        }
+        List<Station> stations = new ArrayList<>();
+        for (int i = 0; i < items.size(); i++) {
+            Field s = items.get(i);
+            s.allowOnly(STATION_KEYS);
+            Field yField = s.required("y", "the station's spanwise position");
+            double y = yField.number() * k;
+            if (mirrored && i == 0 && y < 0) {
+                throw yField.error("a mirrored surface is described on its right half: the root y must be 0 or "
+                        + "more, got " + Field.format(y / k));
+            }
+            if (i > 0 && !(y > stations.get(i - 1).y())) {
+                throw yField.error("stations must be in increasing y from root to tip; this one is at "
+                        + Field.format(y / k) + " after " + Field.format(stations.get(i - 1).y() / k));
+            }
+            Field chordField = s.required("chord", "the local chord");
+            double chord = chordField.number() * k;
+            boolean tip = i == items.size() - 1;
+            if (tip ? chord < 0 : !(chord > 0)) {
+                throw chordField.error(tip ? "must not be negative, got " + Field.format(chord / k)
+                        : "must be positive (only the tip station may have zero chord), got " + Field.format(chord / k));
+            }
+            double noseX = s.optional("nose-x").map(Field::number).orElse(0.0) * k;
+            double noseZ = s.optional("nose-z").map(Field::number).orElse(0.0) * k;
+            double twist = Math.toRadians(s.optional("twist").map(t -> t.inRange(-45, 45)).orElse(0.0));
+            String section = s.optional("section").map(x -> sectionName(x, sections)).orElse(surfaceSection);
+            stations.add(new Station(y, chord, noseX, noseZ, twist, section));
+        }
+        return new StationPlanform(stations);
+    }
+
+    private static Planform readTrapezoid(Field f, double k, boolean mirrored, String section) {
+        f.allowOnly(TRAPEZOID_KEYS);
+        requireMirrored(f, mirrored);
+        double semi = f.required("span", "the tip-to-tip span").positive() * k / 2;
+        double rootChord = f.required("root-chord", "the root chord").positive() * k;
+        double taper = f.optional("taper").map(t -> t.inRange(0, 10)).orElse(1.0);
+        double sweep = Math.toRadians(f.optional("sweep").map(t -> t.inRange(-60, 60)).orElse(0.0));
+        double dihedral = Math.toRadians(f.optional("dihedral").map(t -> t.inRange(-30, 30)).orElse(0.0));
+        double washout = Math.toRadians(f.optional("washout").map(t -> t.inRange(-20, 20)).orElse(0.0));
+        double rootTwist = Math.toRadians(f.optional("root-twist").map(t -> t.inRange(-45, 45)).orElse(0.0));
+        double[] nose = f.optional("root-nose").map(n -> n.numbers(2)).orElse(new double[2]);
+        double x0 = nose[0] * k;
+        double z0 = nose[1] * k;
+        double tipChord = taper * rootChord;
+        double xQuarter = x0 + 0.25 * rootChord + semi * Math.tan(sweep);
+        Station root = new Station(0, rootChord, x0, z0, rootTwist, section);
+        Station tip = new Station(semi, tipChord, xQuarter - 0.25 * tipChord, z0 + semi * Math.tan(dihedral),
+                rootTwist - washout, section);
+        return new StationPlanform(List.of(root, tip));
+    }
+
+    private static Planform readElliptic(Field f, double k, boolean mirrored, String section) {
+        f.allowOnly(ELLIPTIC_KEYS);
+        requireMirrored(f, mirrored);
+        double semi = f.required("span", "the tip-to-tip span").positive() * k / 2;
+        double rootChord = f.required("root-chord", "the root chord").positive() * k;
+        double dihedral = Math.toRadians(f.optional("dihedral").map(t -> t.inRange(-30, 30)).orElse(0.0));
+        double washout = Math.toRadians(f.optional("washout").map(t -> t.inRange(-20, 20)).orElse(0.0));
+        double rootTwist = Math.toRadians(f.optional("root-twist").map(t -> t.inRange(-45, 45)).orElse(0.0));
+        double[] nose = f.optional("root-nose").map(n -> n.numbers(2)).orElse(new double[2]);
+        return new EllipticPlanform(semi, rootChord, nose[0] * k, nose[1] * k, dihedral, rootTwist, washout, section);
+    }
+
+    private static void requireMirrored(Field f, boolean mirrored) {
+        if (!mirrored) {
+            throw f.error("describes a mirrored surface (right half from y = 0); set mirror: true or give stations");
+        }
+    }
+
+    private static ControlSurface readControl(Field f, double k, boolean mirrored, Planform planform,
+            List<ControlSurface> earlier) {
+        f.allowOnly(CONTROL_KEYS);
+        String name = f.required("name", "a name for the control").text();
+        Field kindField = f.required("kind", "flap or aileron");
+        ControlKind kind = kindField.choice(List.of("flap", "aileron")).equals("flap") ? ControlKind.FLAP
+                : ControlKind.AILERON;
+        if (kind == ControlKind.AILERON && !mirrored) {
+            throw kindField.error("an aileron deflects antisymmetrically and needs a mirrored surface");
+        }
+        Field fromField = f.required("from", "the y of the control's inner end");
+        Field toField = f.required("to", "the y of the control's outer end");
+        double from = fromField.number() * k;
+        double to = toField.number() * k;
+        double tol = 1e-9 * (planform.yEnd() - planform.yStart());
+        if (from < planform.yStart() - tol || from > planform.yEnd() + tol) {
+            throw fromField.error("lies outside the surface's span (y from " + Field.format(planform.yStart() / k)
+                    + " to " + Field.format(planform.yEnd() / k) + ")");
+        }
+        if (to < planform.yStart() - tol || to > planform.yEnd() + tol) {
+            throw toField.error("lies outside the surface's span (y from " + Field.format(planform.yStart() / k)
+                    + " to " + Field.format(planform.yEnd() / k) + ")");
+        }
+        if (!(to > from)) {
+            throw toField.error("must be greater than 'from' (" + Field.format(from / k) + ")");
+        }
+        for (ControlSurface c : earlier) {
+            if (from < c.to() - tol && to > c.from() + tol) {
+                throw fromField.error("overlaps control '" + c.name() + "' (y from " + Field.format(c.from() / k)
+                        + " to " + Field.format(c.to() / k) + ")");
+            }
+        }
+        Field cfField = f.required("chord-fraction", "the control's chord over the local chord, between 0 and 1");
+        double cf = cfField.number();
+        if (!(cf > 0 && cf < 1)) {
+            throw cfField.error("must lie between 0 and 1 (exclusive), got " + Field.format(cf));
+        }
+        double deflection = Math.toRadians(f.optional("deflection").map(d -> d.inRange(-45, 45)).orElse(0.0));
+        return new ControlSurface(name, kind, from, to, cf, deflection);
+    }
+
+    private static LatticeSpec readLattice(Field f, boolean noControls) {
+        f.allowOnly(LATTICE_KEYS);
+        LatticeSpec d = LatticeSpec.DEFAULT;
+        int strips = f.optional("strips").map(s -> s.integer(1, MAX_STRIPS)).orElse(d.strips());
+        int rows = f.optional("rows").map(s -> s.integer(noControls ? 1 : 2, MAX_ROWS)).orElse(d.rows());
+        Spacing ss = f.optional("strip-spacing").map(WingFileReader::spacing).orElse(d.stripSpacing());
+        Spacing rs = f.optional("row-spacing").map(WingFileReader::spacing).orElse(d.rowSpacing());
+        return new LatticeSpec(strips, rows, ss, rs);
+    }
+
+    private static Spacing spacing(Field f) {
+        return f.choice(List.of("uniform", "cosine")).equals("uniform") ? Spacing.UNIFORM : Spacing.COSINE;
+    }
+}

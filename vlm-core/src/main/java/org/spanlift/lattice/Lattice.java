@@ -1,0 +1,157 @@
+package org.spanlift.lattice;
+
+import java.util.List;
+
+/**
+ * The discretized wing: panels, each carrying a horseshoe vortex, grouped in spanwise strips. Arrays are
+ * stored flat (structure of arrays) for the influence loops; accessors never expose them for writing.
+ *
+ * <p>Frame: wing axes (x aft, y right, z up), metres. Each horseshoe runs from +infinity along +x to
+ * the bound-leg end A, along the bound leg from A to B (A at the smaller y, so a positive circulation
+ * lifts), and from B back to +infinity along +x. The chordwise unit vector of every panel is exactly +x:
+ * the lattice lies on the flat, untwisted surface with its dihedral; twist, camber and deflections enter
+ * only through the panel incidence.
+ *
+ * <p>Order: when every surface is mirrored, panels {@code 0..H-1} are the right halves (y &gt;= 0) and
+ * panel {@code H + i} is the mirror image of panel {@code i}; otherwise {@code H} equals the panel count
+ * and there are no images. Strips follow the same rule.
+ */
+public final class Lattice {
+
+    private final double[] a;       // bound-leg start, xyz per panel
+    private final double[] b;       // bound-leg end
+    private final double[] control; // control point
+    private final double[] normal;  // unit normal
+    private final double[] incidence;
+    private final double[] cutoff;
+    private final int[] stripOf;
+    private final int[] controlOf;
+    private final double[] controlSign;
+    private final List<Strip> strips;
+    private final int half;
+    private final boolean mirrored;
+    private final int rowsMax;
+
+    Lattice(double[] a, double[] b, double[] control, double[] normal, double[] incidence, double[] cutoff,
+            int[] stripOf, int[] controlOf, double[] controlSign, List<Strip> strips, int half,
+            boolean mirrored, int rowsMax) {
+        this.a = a;
+        this.b = b;
+        this.control = control;
+        this.normal = normal;
+        this.incidence = incidence;
+        this.cutoff = cutoff;
+        this.stripOf = stripOf;
+        this.controlOf = controlOf;
+        this.controlSign = controlSign;
+        this.strips = List.copyOf(strips);
+        this.half = half;
+        this.mirrored = mirrored;
+        this.rowsMax = rowsMax;
+    }
+
+    /** Number of panels on the whole surface, both halves. */
+    public int panelCount() {
+        return stripOf.length;
+    }
+
+    /**
+     * Number of panels that carry independent unknowns under symmetry: the right halves when mirrored,
+     * all panels otherwise.
+     */
+    public int halfCount() {
+        return half;
+    }
+
+    /** True when panel {@code i + halfCount()} is the mirror image of panel {@code i}. */
+    public boolean mirrored() {
+        return mirrored;
+    }
+
+    public List<Strip> strips() {
+        return strips;
+    }
+
+    /** The largest number of chordwise rows on any strip. */
+    public int rowsMax() {
+        return rowsMax;
+    }
+
+    public int stripOf(int panel) {
+        return stripOf[panel];
+    }
+
+    /** Index of the control (in {@code Wing.controls()} order) the panel belongs to, or -1. */
+    public int controlOf(int panel) {
+        return controlOf[panel];
+    }
+
+    /**
+     * The sign of the panel's deflection per unit control deflection: +1, or -1 on the left half of an
+     * aileron; 0 when the panel is on no control.
+     */
+    public double controlSign(int panel) {
+        return controlSign[panel];
+    }
+
+    /**
+     * The panel's incidence in radians from twist, camber slope and section correction (not control
+     * deflection): the eps of the boundary condition.
+     */
+    public double incidence(int panel) {
+        return incidence[panel];
+    }
+
+    /** Distance below which a point counts as on one of this panel's vortex lines, m. */
+    public double cutoff(int panel) {
+        return cutoff[panel];
+    }
+
+    public double ax(int p) {
+        return a[3 * p];
+    }
+
+    public double ay(int p) {
+        return a[3 * p + 1];
+    }
+
+    public double az(int p) {
+        return a[3 * p + 2];
+    }
+
+    public double bx(int p) {
+        return b[3 * p];
+    }
+
+    public double by(int p) {
+        return b[3 * p + 1];
+    }
+
+    public double bz(int p) {
+        return b[3 * p + 2];
+    }
+
+    public double cx(int p) {
+        return control[3 * p];
+    }
+
+    public double cy(int p) {
+        return control[3 * p + 1];
+    }
+
+    public double cz(int p) {
+        return control[3 * p + 2];
+    }
+
+    public double nx(int p) {
+        return normal[3 * p];
+    }
+
+    public double ny(int p) {
+        return normal[3 * p + 1];
+    }
+
+    public double nz(int p) {
+        return normal[3 * p + 2];
+    }
+}

@@ -1,0 +1,95 @@
+package org.spanlift.solve;
+
+import org.spanlift.lattice.Lattice;
+
+/**
+ * Biot-Savart velocity of a unit-strength horseshoe vortex (circulation 1 m^2/s): a semi-infinite leg
+ * from +infinity along +x to A, the bound leg from A to B, and a semi-infinite leg from B to +infinity
+ * along +x. A point within the cut-off distance of a leg gets no velocity from that leg, so a point on a
+ * vortex line never yields NaN.
+ */
+public final class HorseshoeKernel {
+
+    private static final double FOUR_PI = 4 * Math.PI;
+
+    private HorseshoeKernel() {
+    }
+
+    /**
+     * The normal component n . v at control point {@code i} of the velocity induced by horseshoe {@code j}
+     * of the lattice at unit circulation.
+     */
+    public static double normalwash(Lattice lat, int i, int j) {
+        double[] v = new double[3];
+        velocity(lat, j, lat.cx(i), lat.cy(i), lat.cz(i), v);
+        return v[0] * lat.nx(i) + v[1] * lat.ny(i) + v[2] * lat.nz(i);
+    }
+
+    /**
+     * Writes into {@code out} (length 3, overwritten) the velocity at (px, py, pz) induced by horseshoe
+     * {@code j} at unit circulation.
+     */
+    public static void velocity(Lattice lat, int j, double px, double py, double pz, double[] out) {
+        double ax = lat.ax(j);
+        double ay = lat.ay(j);
+        double az = lat.az(j);
+        double bx = lat.bx(j);
+        double by = lat.by(j);
+        double bz = lat.bz(j);
+        double eps = lat.cutoff(j);
+        out[0] = 0;
+        out[1] = 0;
+        out[2] = 0;
+        segment(ax, ay, az, bx, by, bz, px, py, pz, eps, out);
+        trailing(bx, by, bz, px, py, pz, eps, 1, out);
+        trailing(ax, ay, az, px, py, pz, eps, -1, out);
+    }
+
+    /** Adds the velocity of the finite segment A -> B (unit circulation) at P. */
+    static void segment(double ax, double ay, double az, double bx, double by, double bz, double px, double py,
+            double pz, double eps, double[] out) {
+        double r1x = px - ax;
+        double r1y = py - ay;
+        double r1z = pz - az;
+        double r2x = px - bx;
+        double r2y = py - by;
+        double r2z = pz - bz;
+        double cx = r1y * r2z - r1z * r2y;
+        double cy = r1z * r2x - r1x * r2z;
+        double cz = r1x * r2y - r1y * r2x;
+        double c2 = cx * cx + cy * cy + cz * cz;
+        double r0x = bx - ax;
+        double r0y = by - ay;
+        double r0z = bz - az;
+        double r02 = r0x * r0x + r0y * r0y + r0z * r0z;
+        double r1 = Math.sqrt(r1x * r1x + r1y * r1y + r1z * r1z);
+        double r2 = Math.sqrt(r2x * r2x + r2y * r2y + r2z * r2z);
+        if (c2 <= eps * eps * r02 || r1 <= eps || r2 <= eps) {
+            return;
+        }
+        double k = ((r0x * r1x + r0y * r1y + r0z * r1z) / r1 - (r0x * r2x + r0y * r2y + r0z * r2z) / r2)
+                / (FOUR_PI * c2);
+        out[0] += k * cx;
+        out[1] += k * cy;
+        out[2] += k * cz;
+    }
+
+    /**
+     * Adds the velocity of a semi-infinite leg along +x starting at Q (sense +1: from Q downstream;
+     * sense -1: from downstream into Q) at P.
+     */
+    static void trailing(double qx, double qy, double qz, double px, double py, double pz, double eps,
+            double sense, double[] out) {
+        double rx = px - qx;
+        double ry = py - qy;
+        double rz = pz - qz;
+        double d2 = ry * ry + rz * rz;
+        if (d2 <= eps * eps) {
+            return;
+        }
+        double r = Math.sqrt(rx * rx + d2);
+        double k = sense * (1 + rx / r) / (FOUR_PI * d2);
+        out[1] -= k * rz;
+        out[2] += k * ry;
+    }
+}

@@ -1,0 +1,11 @@
+package org.spanlift.solve;
+
+/** The influence system cannot be solved reliably: the geometry is degenerate (crossing or coincident panels). */
+public final class SingularSystemException extends RuntimeException {
+
+    private static final long serialVersionUID = 1L;
+
+    public SingularSystemException(String message) {
+        super(message);
+    }
+}

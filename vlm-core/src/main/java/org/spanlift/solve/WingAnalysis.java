@@ -1,0 +1,146 @@
+package org.spanlift.solve;
+
+import java.util.List;
+import java.util.Map;
+
+import org.spanlift.geometry.ControlSurface;
+import org.spanlift.geometry.Wing;
+import org.spanlift.lattice.Lattice;
+import org.spanlift.lattice.LatticeBuilder;
+import org.spanlift.results.Solution;
+
+/**
+ * One wing, discretized and solved once: its lattice and basis solutions, from which any angle of attack
+ * and control deflection follows by superposition. This is the library's entry point:
+ *
+ * <pre>
+ * WingAnalysis analysis = WingAnalysis.of(wing);
+ * Solution s = analysis.solve(Math.toRadians(4));
+ * double cl = s.coefficients().lift();
+ * </pre>
+ *
+ * Immutable and safe to share between threads once built.
+ */
+public final class WingAnalysis {
+
+    private final Wing wing;
+    private final Lattice lattice;
+    private final BasisSolutions basis;
+    private final List<ControlSurface> controls;
+
+    private WingAnalysis(Wing wing, Lattice lattice, BasisSolutions basis) {
+        this.wing = wing;
+        this.lattice = lattice;
+        this.basis = basis;
+        this.controls = wing.controls();
+    }
+
+    /** Builds the lattice and solves the basis, with half-span symmetric systems where the wing allows. */
+    public static WingAnalysis of(Wing wing) {
+        return of(wing, true);
+    }
+
+    /**
+     * As {@link #of(Wing)}; with {@code useSymmetry} false every panel is an unknown of one full-span
+     * system (slower; for checks).
+     */
+    public static WingAnalysis of(Wing wing, boolean useSymmetry) {
+        Lattice lattice = LatticeBuilder.build(wing);
+        return new WingAnalysis(wing, lattice, BasisSolutions.solve(lattice, wing.controls(), useSymmetry));
+    }
+
+    public Wing wing() {
+        return wing;
+    }
+
+    public Lattice lattice() {
+        return lattice;
+    }
+
+    public BasisSolutions basis() {
+        return basis;
+    }
+
+    /** The control deflections of the wing file, rad, in control order. */
+    public double[] fileDeflections() {
+        return controls.stream().mapToDouble(ControlSurface::deflection).toArray();
+    }
+
+    /**
+     * The file's deflections with some replaced, rad, in control order.
+     *
+     * @throws IllegalArgumentException naming a control the wing does not have
+     */
+    public double[] deflections(Map<String, Double> overrides) {
+        double[] d = fileDeflections();
+        for (Map.Entry<String, Double> e : overrides.entrySet()) {
+            int index = controlIndex(e.getKey());
+            d[index] = e.getValue();
+        }
+        return d;
+    }
+
+    /** Index of a control by name. */
+    public int controlIndex(String name) {
+        for (int i = 0; i < controls.size(); i++) {
+            if (controls.get(i).name().equals(name)) {
+                return i;
+            }
+        }
+        throw new IllegalArgumentException("no control named '" + name + "'; the wing has "
+                + (controls.isEmpty() ? "none" : String.join(", ", controls.stream().map(ControlSurface::name).toList())));
+    }
+
+    /** The condition at angle of attack {@code alpha} (rad) with the file's deflections. */
+    public Solution solve(double alpha) {
+        return solve(alpha, fileDeflections());
+    }
+
+    /** The condition at angle of attack {@code alpha} (rad) with deflections in rad, in control order. */
+    public Solution solve(double alpha, double[] deflections) {
+        double[] g = new double[lattice.panelCount()];
+        basis.combine(alpha, deflections, g);
+        return new Solution(lattice, wing.reference(), alpha, deflections, g);
+    }
+
+    /**
+     * The lift line of the wing at the given deflections: CL(alpha) = R sin(alpha - alpha0) exactly, with
+     * the freestream (cos alpha, 0, sin alpha).
+     */
+    public LiftLine liftLine(double[] deflections) {
+        double x = 0;
+        double z = 0;
+        double s = wing.reference().area();
+        int n = lattice.panelCount();
+        for (int i = 0; i < n; i++) {
+            double ly = lattice.by(i) - lattice.ay(i);
+            double gx = basis.alongX(i);
+            for (int c = 0; c < deflections.length; c++) {
+                gx += deflections[c] * basis.control(c, i);
+            }
+            x += 2 * gx * ly;
+            z += 2 * basis.alongZ(i) * ly;
+        }
+        return new LiftLine(Math.hypot(x, z) / s, Math.atan2(-x, z));
+    }
+
+    /**
+     * CL against alpha: CL = slope sin(alpha - zeroLiftAngle), so {@code slope} is dCL/dalpha at zero lift
+     * (per radian) and {@code zeroLiftAngle} is in radians.
+     */
+    public record LiftLine(double slope, double zeroLiftAngle) {
+
+        /** CL at angle of attack alpha (rad). */
+        public double lift(double alpha) {
+            return slope * Math.sin(alpha - zeroLiftAngle);
+        }
+
+        /** The angle of attack (rad) for a target CL, or NaN-free failure when |CL| exceeds the slope. */
+        public double alphaFor(double cl) {
+            if (Math.abs(cl) >= slope) {
+                throw new IllegalArgumentException("CL " + cl + " is beyond this wing's linear range");
+            }
+            return zeroLiftAngle + Math.asin(cl / slope);
+        }
+    }
+}
