@@ -1,0 +1,22 @@
+package org.spanlift.stall;
+
+import java.util.List;
+
+/** Stall results were asked for, but some sections give no cl_max and no default was allowed. */
+public final class MissingSectionDataException extends RuntimeException {
+
+    private static final long serialVersionUID = 1L;
+
+    private final List<String> sections;
+
+    public MissingSectionDataException(List<String> sections) {
+        super("section" + (sections.size() > 1 ? "s " : " ") + String.join(", ", sections)
+                + (sections.size() > 1 ? " give" : " gives") + " no cl-max; add cl-max to the section data, or allow "
+                + "the conservative default with --assume-cl-max");
+        this.sections = List.copyOf(sections);
+    }
+
+    public List<String> sections() {
+        return sections;
+    }
+}

@@ -1,0 +1,148 @@
+package org.spanlift.stall;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+
+import org.spanlift.geometry.ControlKind;
+import org.spanlift.geometry.ControlSurface;
+import org.spanlift.geometry.Wing;
+import org.spanlift.lattice.Lattice;
+import org.spanlift.lattice.Strip;
+import org.spanlift.solve.BasisSolutions;
+import org.spanlift.solve.WingAnalysis;
+
+/**
+ * The critical-section method: with the freestream (cos a, 0, sin a), each strip's section lift is exactly
+ * cl(a) = A cos a + B sin a in linear theory (A from the x basis with the deflections, B from the z basis),
+ * so the angle at which it reaches cl_max is found in closed form on the rising branch; the wing stalls
+ * first where that angle is lowest. The basic and additional loads (cl at zero wing lift, and per unit CL)
+ * are reported for the usual decomposition cl = cl_basic + CL cl_additional.
+ */
+public final class StallAnalysis {
+
+    private StallAnalysis() {
+    }
+
+    /**
+     * Estimates stall onset.
+     *
+     * @param deflections     control deflections, rad, control order
+     * @param limits          cl_max per strip
+     * @param reynoldsPerMetre rho V / mu at the flight condition (true speed), or 0 when unknown (tables are
+     *                        then read at their lowest Reynolds number)
+     */
+    public static StallEstimate estimate(WingAnalysis analysis, double[] deflections, StripLimits limits,
+            double reynoldsPerMetre) {
+        Lattice lattice = analysis.lattice();
+        BasisSolutions basis = analysis.basis();
+        WingAnalysis.LiftLine line = analysis.liftLine(deflections);
+        Wing wing = analysis.wing();
+        double semi = wing.main().mirrored() ? wing.main().planform().yEnd()
+                : 0.5 * (wing.main().planform().yEnd() - wing.main().planform().yStart());
+        List<Integer> ids = limits.strips();
+        int n = ids.size();
+        double[] a = new double[n];
+        double[] b = new double[n];
+        double[] clMax = new double[n];
+        double[] re = new double[n];
+        double[] alphaReach = new double[n];
+        for (int i = 0; i < n; i++) {
+            Strip st = lattice.strips().get(ids.get(i));
+            double gx = 0;
+            double gz = 0;
+            for (int r = 0; r < st.rows(); r++) {
+                int p = st.firstPanel() + r;
+                double x = basis.alongX(p);
+                for (int c = 0; c < deflections.length; c++) {
+                    x += deflections[c] * basis.control(c, p);
+                }
+                gx += x;
+                gz += basis.alongZ(p);
+            }
+            a[i] = 2 * gx / st.chord();
+            b[i] = 2 * gz / st.chord();
+            re[i] = reynoldsPerMetre * st.chord();
+            clMax[i] = limits.clMax(i, re[i]);
+            double amplitude = Math.hypot(a[i], b[i]);
+            double phase = Math.atan2(b[i], a[i]);
+            alphaReach[i] = Math.abs(clMax[i]) <= amplitude ? phase - Math.acos(clMax[i] / amplitude)
+                    : Double.POSITIVE_INFINITY;
+        }
+        int first = 0;
+        for (int i = 1; i < n; i++) {
+            if (alphaReach[i] < alphaReach[first] - 1e-12
+                    || (Math.abs(alphaReach[i] - alphaReach[first]) <= 1e-12 && lattice.strips().get(ids.get(i)).y() > 0
+                            && lattice.strips().get(ids.get(first)).y() < 0)) {
+                first = i;
+            }
+        }
+        if (!Double.isFinite(alphaReach[first])) {
+            throw new IllegalArgumentException("no station reaches its cl_max in linear theory; check the section data");
+        }
+        double alpha = alphaReach[first];
+        double alpha0 = line.zeroLiftAngle();
+        double slope = line.slope();
+        List<StallEstimate.StripStall> strips = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            Strip st = lattice.strips().get(ids.get(i));
+            double clOnset = a[i] * Math.cos(alpha) + b[i] * Math.sin(alpha);
+            double clBasic = a[i] * Math.cos(alpha0) + b[i] * Math.sin(alpha0);
+            double clAdd = (-a[i] * Math.sin(alpha0) + b[i] * Math.cos(alpha0)) / slope;
+            OptionalDouble reach = Double.isFinite(alphaReach[i]) ? OptionalDouble.of(line.lift(alphaReach[i]))
+                    : OptionalDouble.empty();
+            strips.add(new StallEstimate.StripStall(st.y(), Math.abs(st.y()) / semi, st.chord(), limits.section(i),
+                    re[i], clMax[i], clOnset, clBasic, clAdd, reach));
+        }
+        Strip onset = lattice.strips().get(ids.get(first));
+        Optional<StallEstimate.AileronMargin> margin = aileronMargin(wing, strips);
+        OptionalDouble half = halfSpan(lattice, ids, strips);
+        List<StallEstimate.StripStall> sorted = new ArrayList<>(strips);
+        sorted.sort(Comparator.comparingDouble(StallEstimate.StripStall::y));
+        return new StallEstimate(line.lift(alpha), alpha, Math.abs(onset.y()), Math.abs(onset.y()) / semi,
+                limits.section(first), margin, half, List.copyOf(sorted), limits.assumed(),
+                limits.defaultFlapIncrement());
+    }
+
+    private static Optional<StallEstimate.AileronMargin> aileronMargin(Wing wing, List<StallEstimate.StripStall> strips) {
+        StallEstimate.AileronMargin best = null;
+        for (ControlSurface c : wing.main().controls()) {
+            if (c.kind() != ControlKind.AILERON) {
+                continue;
+            }
+            for (StallEstimate.StripStall s : strips) {
+                double y = Math.abs(s.y());
+                if (y > c.from() && y < c.to()) {
+                    double dcl = s.clMax() - s.clAtOnset();
+                    if (best == null || dcl < best.dcl()) {
+                        best = new StallEstimate.AileronMargin(dcl, s.y());
+                    }
+                }
+            }
+        }
+        return Optional.ofNullable(best);
+    }
+
+    private static OptionalDouble halfSpan(Lattice lattice, List<Integer> ids, List<StallEstimate.StripStall> strips) {
+        double total = 0;
+        List<double[]> reach = new ArrayList<>();
+        for (int i = 0; i < strips.size(); i++) {
+            double w = lattice.strips().get(ids.get(i)).width();
+            total += w;
+            if (strips.get(i).liftToReach().isPresent()) {
+                reach.add(new double[] {strips.get(i).liftToReach().getAsDouble(), w});
+            }
+        }
+        reach.sort(Comparator.comparingDouble(r -> r[0]));
+        double covered = 0;
+        for (double[] r : reach) {
+            covered += r[1];
+            if (covered >= 0.5 * total - 1e-12 * total) {
+                return OptionalDouble.of(r[0]);
+            }
+        }
+        return OptionalDouble.empty();
+    }
+}

@@ -1,0 +1,42 @@
+package org.spanlift.stall;
+
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+
+/**
+ * Stall onset of the wing by the critical-section method in linear theory: the lowest wing CL at which
+ * some strip's section cl reaches its cl_max. Angles in radians, lengths in metres.
+ *
+ * @param lift                 wing CL at stall onset
+ * @param alpha                angle of attack at stall onset
+ * @param y                    spanwise station where stall starts (the right-hand one of a symmetric pair)
+ * @param eta                  that station over the semi-span
+ * @param section              the section nearest to it
+ * @param aileronMargin        the least cl_max - cl over the aileron span at onset, and where; absent
+ *                             without ailerons
+ * @param halfSpanLift         the wing CL at which half the span has reached cl_max (linear theory, an
+ *                             indication of how the stall spreads); absent if it never does
+ * @param strips               every strip of the wing, y ascending
+ * @param assumedClMax         true when some section's cl_max was assumed rather than given
+ * @param defaultFlapIncrement true when a flapped strip used the handbook default cl_max increment
+ */
+public record StallEstimate(double lift, double alpha, double y, double eta, String section,
+        Optional<AileronMargin> aileronMargin, OptionalDouble halfSpanLift, List<StripStall> strips,
+        boolean assumedClMax, boolean defaultFlapIncrement) {
+
+    /** The smallest margin to cl_max over the aileron span. */
+    public record AileronMargin(double dcl, double y) {
+    }
+
+    /**
+     * One strip at stall onset.
+     *
+     * @param clBasic       section cl at zero wing lift (the basic load)
+     * @param clAdditional  section cl per unit wing CL (the additional load), at zero lift
+     * @param liftToReach   the wing CL at which this strip reaches cl_max (linear theory); absent if never
+     */
+    public record StripStall(double y, double eta, double chord, String section, double reynolds, double clMax,
+            double clAtOnset, double clBasic, double clAdditional, OptionalDouble liftToReach) {
+    }
+}

@@ -1,0 +1,157 @@
+package org.spanlift.stall;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.OptionalDouble;
+
+import org.spanlift.geometry.ControlKind;
+import org.spanlift.geometry.ControlSurface;
+import org.spanlift.geometry.Section;
+import org.spanlift.geometry.SectionBlend;
+import org.spanlift.geometry.Surface;
+import org.spanlift.geometry.Wing;
+import org.spanlift.lattice.Lattice;
+import org.spanlift.lattice.Strip;
+import org.spanlift.section.Table;
+
+/**
+ * Section cl_max of every strip of the wing (the first surface), from the section data interpolated
+ * linearly between stations, at the strip's Reynolds number, raised on flapped strips by the flap's
+ * cl_max increment.
+ *
+ * <p>Without an increment table, a deflected plain flap raises cl_max by the handbook value for plain flaps,
+ * 0.9 at full deflection (Raymer, Aircraft Design: A Conceptual Approach, table of section maximum-lift
+ * increments for high-lift devices; value recalled from memory), taken at 60 degrees and scaled linearly
+ * below it, and by the flap chord over 25% of the chord where the flap is smaller. That is a conservative
+ * reading (real increments rise faster at small deflections), and far below the inviscid lift increment.
+ */
+public final class StripLimits {
+
+    /** Plain-flap cl_max increment at full deflection (handbook value, see the class notes). */
+    public static final double PLAIN_FLAP_INCREMENT = 0.9;
+    /** The deflection taken as full for {@link #PLAIN_FLAP_INCREMENT}, degrees. */
+    public static final double PLAIN_FLAP_FULL_DEFLECTION_DEG = 60;
+    /** The flap chord fraction the handbook value refers to. */
+    public static final double PLAIN_FLAP_REFERENCE_CHORD = 0.25;
+
+    private final List<Integer> strips;
+    private final Table[] innerClMax;
+    private final Table[] outerClMax;
+    private final double[] weight;
+    private final double[] increment;
+    private final String[] section;
+    private final boolean assumed;
+    private final boolean defaultFlapIncrement;
+
+    private StripLimits(List<Integer> strips, Table[] inner, Table[] outer, double[] weight, double[] increment,
+            String[] section, boolean assumed, boolean defaultFlapIncrement) {
+        this.strips = strips;
+        this.innerClMax = inner;
+        this.outerClMax = outer;
+        this.weight = weight;
+        this.increment = increment;
+        this.section = section;
+        this.assumed = assumed;
+        this.defaultFlapIncrement = defaultFlapIncrement;
+    }
+
+    /**
+     * The limits of the wing's strips at the given deflections (rad, control order).
+     *
+     * @param assumedClMax a cl_max for sections that give none, or empty to refuse them
+     * @throws MissingSectionDataException when a section has no cl_max and none is assumed
+     */
+    public static StripLimits of(Wing wing, Lattice lattice, double[] deflections, OptionalDouble assumedClMax) {
+        Surface main = wing.main();
+        List<ControlSurface> controls = wing.controls();
+        List<Integer> ids = new ArrayList<>();
+        for (int k = 0; k < lattice.strips().size(); k++) {
+            if (lattice.strips().get(k).surface() == 0) {
+                ids.add(k);
+            }
+        }
+        int n = ids.size();
+        Table[] inner = new Table[n];
+        Table[] outer = new Table[n];
+        double[] w = new double[n];
+        double[] inc = new double[n];
+        String[] names = new String[n];
+        boolean assumed = false;
+        boolean defaultIncrement = false;
+        List<String> missing = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            Strip st = lattice.strips().get(ids.get(i));
+            double y = Math.abs(st.y());
+            SectionBlend blend = main.planform().section(main.mirrored() ? y : st.y());
+            Section a = wing.sections().get(blend.inner());
+            Section b = wing.sections().get(blend.outer());
+            for (Section s : List.of(a, b)) {
+                if (s.clMax().isEmpty() && assumedClMax.isEmpty() && !missing.contains(s.name())) {
+                    missing.add(s.name());
+                }
+            }
+            assumed |= a.clMax().isEmpty() || b.clMax().isEmpty();
+            Table fallback = assumedClMax.isPresent() ? Table.constant(assumedClMax.getAsDouble()) : null;
+            inner[i] = a.clMax().orElse(fallback);
+            outer[i] = b.clMax().orElse(fallback);
+            w[i] = blend.weight();
+            names[i] = blend.weight() < 0.5 ? blend.inner() : blend.outer();
+            int c = flapAt(main, controls, y);
+            if (c >= 0 && deflections[c] > 0) {
+                double deg = Math.toDegrees(deflections[c]);
+                Section near = blend.weight() < 0.5 ? a : b;
+                if (near.flapClMaxIncrement().isPresent()) {
+                    inc[i] = near.flapClMaxIncrement().get().at(deg);
+                } else {
+                    defaultIncrement = true;
+                    double chordScale = Math.min(1, controls.get(c).chordFraction() / PLAIN_FLAP_REFERENCE_CHORD);
+                    inc[i] = PLAIN_FLAP_INCREMENT * Math.min(1, deg / PLAIN_FLAP_FULL_DEFLECTION_DEG) * chordScale;
+                }
+            }
+        }
+        if (!missing.isEmpty()) {
+            throw new MissingSectionDataException(missing);
+        }
+        return new StripLimits(List.copyOf(ids), inner, outer, w, inc, names, assumed, defaultIncrement);
+    }
+
+    private static int flapAt(Surface main, List<ControlSurface> controls, double y) {
+        for (int c = 0; c < controls.size(); c++) {
+            ControlSurface cs = controls.get(c);
+            if (cs.kind() == ControlKind.FLAP && main.controls().contains(cs) && y > cs.from() && y < cs.to()) {
+                return c;
+            }
+        }
+        return -1;
+    }
+
+    /** The lattice strip indices of the wing, in lattice order. */
+    public List<Integer> strips() {
+        return strips;
+    }
+
+    /** cl_max of wing strip i (index into {@link #strips()}) at Reynolds number re. */
+    public double clMax(int i, double re) {
+        return (1 - weight[i]) * innerClMax[i].at(re) + weight[i] * outerClMax[i].at(re) + increment[i];
+    }
+
+    /** The flap's cl_max increment on wing strip i. */
+    public double flapIncrement(int i) {
+        return increment[i];
+    }
+
+    /** The name of the section nearest to wing strip i. */
+    public String section(int i) {
+        return section[i];
+    }
+
+    /** True when some strip uses an assumed cl_max rather than section data. */
+    public boolean assumed() {
+        return assumed;
+    }
+
+    /** True when some flapped strip uses the handbook default increment. */
+    public boolean defaultFlapIncrement() {
+        return defaultFlapIncrement;
+    }
+}
