@@ -26,7 +26,6 @@ import org.spanlift.geometry.StationPlanform;
 import org.spanlift.geometry.Surface;
 import org.spanlift.geometry.Vec3;
 import org.spanlift.geometry.Wing;
-import org.spanlift.section.CamberLine;
 import org.spanlift.section.CamberLines;
 
 /**
@@ -50,7 +49,7 @@ public final class WingFileReader {
     public static final Set<String> CONTROL_KEYS = Set.of("name", "kind", "from", "to", "chord-fraction",
             "deflection");
     public static final Set<String> LATTICE_KEYS = Set.of("strips", "rows", "strip-spacing", "row-spacing");
-    public static final Set<String> SECTION_KEYS = Set.of("camber");
+    public static final Set<String> SECTION_KEYS = SectionReader.KEYS;
 
     /** Largest lattice accepted: strips per surface, rows, and panels over the whole wing. */
     public static final int MAX_STRIPS = 400;
@@ -93,7 +92,7 @@ public final class WingFileReader {
         sections.put(FLAT_SECTION, Section.of(FLAT_SECTION, CamberLines.parse("flat")));
         root.optional("sections").ifPresent(s -> {
             for (Field entry : s.entries()) {
-                sections.put(entry.key(), readSection(entry));
+                sections.put(entry.key(), SectionReader.read(entry, Path.of(file)));
             }
         });
 
@@ -126,18 +125,6 @@ public final class WingFileReader {
     private static LengthUnit readUnit(Field f) {
         String t = f.choice(List.of("m", "ft", "in"));
         return LengthUnit.parse(t);
-    }
-
-    private static Section readSection(Field f) {
-        f.allowOnly(SECTION_KEYS);
-        CamberLine camber = f.optional("camber").map(c -> {
-            try {
-                return CamberLines.parse(c.text());
-            } catch (IllegalArgumentException e) {
-                throw c.error(e.getMessage());
-            }
-        }).orElseGet(() -> CamberLines.parse("flat"));
-        return Section.of(f.key(), camber);
     }
 
     private static Reference readReference(Field f, double k, Reference defaults) {

@@ -3,19 +3,64 @@ package org.spanlift.cli.options;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
 
+import org.spanlift.atmosphere.Airspeed;
+import org.spanlift.atmosphere.AtmosphereState;
+import org.spanlift.atmosphere.StandardAtmosphere;
+import org.spanlift.flight.FlightCondition;
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Wing;
 import org.spanlift.io.InputException;
+import org.spanlift.io.quantity.Quantity;
+import org.spanlift.io.quantity.QuantityFormatException;
+import org.spanlift.io.quantity.QuantityKind;
 
+import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Option;
 
 /**
- * The flight-condition options shared by the commands that solve a condition. Deflections are in
- * degrees, trailing edge down; an aileron's is the right one's.
+ * The flight-condition options shared by the commands that solve a condition. Dimensional values carry
+ * a unit suffix ({@code 1100kg}, {@code 2400lb}, {@code 9800ft}, {@code 90kt}); deflections are in degrees,
+ * trailing edge down, an aileron's being the right one's.
  */
 public final class FlightOptions {
+
+    /** Standard gravity, m/s^2 (exact by definition), for a weight typed as a mass. */
+    public static final double STANDARD_GRAVITY = 9.80665;
+
+    @Option(names = "--weight", paramLabel = "W",
+            description = "Aircraft weight with a unit: a force (N, kN, kgf, lbf, lb) or a mass (kg), "
+                    + "such as 1100kg or 2400lb.")
+    String weight;
+
+    @Option(names = "--altitude", paramLabel = "H", defaultValue = "0m",
+            description = "Pressure altitude with a unit (m, ft), standard atmosphere. Default: ${DEFAULT-VALUE}.")
+    String altitude;
+
+    @Option(names = "--isa-offset", paramLabel = "DT", defaultValue = "0K",
+            description = "Temperature offset from the standard atmosphere, kelvin (15K). Default: ${DEFAULT-VALUE}.")
+    String isaOffset;
+
+    @ArgGroup(exclusive = true, multiplicity = "0..1")
+    Speed speed;
+
+    /** The airspeed: equivalent (the default) or true. */
+    static final class Speed {
+        @Option(names = "--speed", paramLabel = "V", required = true,
+                description = "Equivalent airspeed with a unit (m/s, km/h, kt, mph), such as 90kt.")
+        String equivalent;
+
+        @Option(names = "--true-speed", paramLabel = "V", required = true,
+                description = "True airspeed with a unit, instead of --speed.")
+        String trueSpeed;
+    }
+
+    @Option(names = "--load-factor", paramLabel = "N", defaultValue = "1",
+            description = "Load factor n (lift over weight). Default: ${DEFAULT-VALUE}.")
+    double loadFactor;
 
     @Option(names = "--deflect", paramLabel = "NAME=DEG",
             description = "Deflect one control by DEG degrees (trailing edge down; an aileron's is the right "
@@ -64,6 +109,78 @@ public final class FlightOptions {
             out.put(name, Math.toRadians(deg));
         }
         return out;
+    }
+
+    /** The atmosphere at the given pressure altitude and offset. */
+    public AtmosphereState atmosphere() {
+        double h = quantity("--altitude", altitude, QuantityKind.LENGTH);
+        double dt = quantity("--isa-offset", isaOffset, QuantityKind.TEMPERATURE_DIFFERENCE);
+        try {
+            return StandardAtmosphere.at(h, dt);
+        } catch (IllegalArgumentException e) {
+            throw new InputException("--altitude", 0, "", e.getMessage());
+        }
+    }
+
+    /** The weight in newtons, if given. */
+    public OptionalDouble weightNewtons() {
+        if (weight == null) {
+            return OptionalDouble.empty();
+        }
+        double w;
+        try {
+            w = Quantity.parse(weight, QuantityKind.FORCE).value();
+        } catch (QuantityFormatException force) {
+            try {
+                w = Quantity.parse(weight, QuantityKind.MASS).value() * STANDARD_GRAVITY;
+            } catch (QuantityFormatException mass) {
+                throw new InputException("--weight", 0, "", force.getMessage() + ", or a mass in kg");
+            }
+        }
+        if (!(w > 0)) {
+            throw new InputException("--weight", 0, "", "must be positive, got " + weight);
+        }
+        return OptionalDouble.of(w);
+    }
+
+    /** The equivalent airspeed in m/s, if a speed was given (a true speed is converted). */
+    public OptionalDouble equivalentSpeed(AtmosphereState atmosphere) {
+        if (speed == null) {
+            return OptionalDouble.empty();
+        }
+        double v = speed.equivalent != null ? quantity("--speed", speed.equivalent, QuantityKind.SPEED)
+                : Airspeed.equivalentFromTrue(quantity("--true-speed", speed.trueSpeed, QuantityKind.SPEED), atmosphere);
+        if (!(v > 0)) {
+            throw new InputException(speed.equivalent != null ? "--speed" : "--true-speed", 0, "", "must be positive");
+        }
+        return OptionalDouble.of(v);
+    }
+
+    /** The load factor, checked. */
+    public double loadFactor() {
+        if (!Double.isFinite(loadFactor) || loadFactor <= 0 || loadFactor > 15) {
+            throw new InputException("--load-factor", 0, "", "expected a load factor above 0 and up to 15, got "
+                    + loadFactor);
+        }
+        return loadFactor;
+    }
+
+    /** The flight condition when a weight is given. */
+    public Optional<FlightCondition> condition() {
+        OptionalDouble w = weightNewtons();
+        if (w.isEmpty()) {
+            return Optional.empty();
+        }
+        AtmosphereState atm = atmosphere();
+        return Optional.of(new FlightCondition(w.getAsDouble(), loadFactor(), atm, equivalentSpeed(atm)));
+    }
+
+    private static double quantity(String option, String text, QuantityKind kind) {
+        try {
+            return Quantity.parse(text, kind).value();
+        } catch (QuantityFormatException e) {
+            throw new InputException(option, 0, "", e.getMessage());
+        }
     }
 
     private static void checkAngle(String option, double deg) {

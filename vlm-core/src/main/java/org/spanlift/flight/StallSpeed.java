@@ -1,0 +1,41 @@
+package org.spanlift.flight;
+
+import org.spanlift.atmosphere.Airspeed;
+import org.spanlift.solve.WingAnalysis;
+import org.spanlift.stall.StallAnalysis;
+import org.spanlift.stall.StallEstimate;
+import org.spanlift.stall.StripLimits;
+
+/**
+ * The stall speed of a flight condition from the critical-section estimate of stall-onset CL, with the
+ * strips' Reynolds numbers iterated together with the speed until both agree.
+ *
+ * @param equivalent equivalent airspeed, m/s
+ * @param trueSpeed  true airspeed, m/s
+ * @param estimate   the stall-onset estimate at that speed's Reynolds numbers
+ * @param iterations how many speed updates were needed
+ */
+public record StallSpeed(double equivalent, double trueSpeed, StallEstimate estimate, int iterations) {
+
+    /** Relative change of speed below which the iteration stops. */
+    public static final double TOLERANCE = 1e-9;
+    private static final int MAX_ITERATIONS = 100;
+
+    public static StallSpeed of(WingAnalysis analysis, double[] deflections, StripLimits limits,
+            FlightCondition condition) {
+        double nu = condition.atmosphere().kinematicViscosity();
+        double vt = 30;
+        for (int k = 1; k <= MAX_ITERATIONS; k++) {
+            StallEstimate e = StallAnalysis.estimate(analysis, deflections, limits, vt / nu);
+            double ve = condition.equivalentSpeedFor(e.lift(), analysis.wing().reference());
+            double next = Airspeed.trueFromEquivalent(ve, condition.atmosphere());
+            if (Math.abs(next - vt) <= TOLERANCE * next) {
+                StallEstimate settled = StallAnalysis.estimate(analysis, deflections, limits, next / nu);
+                return new StallSpeed(ve, next, settled, k);
+            }
+            vt = next;
+        }
+        throw new IllegalArgumentException("the stall speed and the Reynolds numbers did not settle; "
+                + "check the cl-max table against Reynolds number");
+    }
+}
