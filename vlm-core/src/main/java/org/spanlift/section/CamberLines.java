@@ -1,44 +1,89 @@
 package org.spanlift.section;
 
+import java.nio.file.Path;
 import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
-/** Temporary: replaced by the section library. */
+/** Factory for camber lines: designations and coordinate files. */
 public final class CamberLines {
+
+    /** What {@link #parse(String)} accepts, as stated in its error messages. */
+    public static final String ACCEPTED = "flat, NACA MPTT (four-digit, e.g. NACA 2412 or NACA 0012) or "
+            + "NACA 2P0TT with P 1 to 5 (230-series family, e.g. NACA 23012); case and the space after NACA are free";
+
+    private static final Pattern NACA = Pattern.compile("naca\\s*(\\S*)", Pattern.CASE_INSENSITIVE);
+
     private CamberLines() {
     }
 
+    /**
+     * Parses a camber-line designation: {@code flat}, {@code NACA 2412}, {@code NACA2412}, {@code naca 23012}.
+     *
+     * @throws IllegalArgumentException with a one-line message saying what is accepted
+     */
     public static CamberLine parse(String spec) {
-        String s = spec.trim().toUpperCase(Locale.ROOT).replace(" ", "");
-        if (s.equals("FLAT")) {
-            return naca4(0, 0, "flat");
+        if (spec == null || spec.isBlank()) {
+            throw new IllegalArgumentException("camber line missing; accepted: " + ACCEPTED);
         }
-        if (s.matches("NACA\\d{4}")) {
-            double m = (s.charAt(4) - '0') / 100.0;
-            double p = (s.charAt(5) - '0') / 10.0;
-            return naca4(m, p, spec);
+        String s = spec.strip();
+        if (s.equalsIgnoreCase("flat")) {
+            return FlatPlate.INSTANCE;
         }
-        throw new IllegalArgumentException("expected flat or NACA followed by 4 digits");
+        Matcher m = NACA.matcher(s);
+        if (!m.matches()) {
+            throw refuse(s, "unknown camber line");
+        }
+        String digits = m.group(1);
+        if (!digits.matches("\\d+")) {
+            throw refuse(s, "NACA must be followed by four or five digits");
+        }
+        int[] d = digits.chars().map(c -> c - '0').toArray();
+        try {
+            if (d.length == 4) {
+                return new NacaFourDigit(d[0], d[1], 10 * d[2] + d[3]);
+            }
+            if (d.length == 5) {
+                if (d[0] != 2) {
+                    throw refuse(s, "design lift digit " + d[0] + " (cl " + String.format(Locale.ROOT, "%.2f", 0.15 * d[0])
+                            + ") is not provided, only 2 (cl 0.3)");
+                }
+                if (d[2] != 0) {
+                    throw refuse(s, "reflexed mean lines (third digit 1) are not provided");
+                }
+                return new NacaFiveDigit(d[1], 10 * d[3] + d[4]);
+            }
+        } catch (IllegalArgumentException e) {
+            if (e.getMessage() != null && e.getMessage().contains("accepted: ")) {
+                throw e;
+            }
+            throw refuse(s, e.getMessage());
+        }
+        throw refuse(s, "NACA must be followed by four or five digits, found " + d.length);
     }
 
-    private static CamberLine naca4(double m, double p, String name) {
-        return new CamberLine() {
-            public double z(double x) {
-                if (m == 0) {
-                    return 0;
-                }
-                return x < p ? m / (p * p) * (2 * p * x - x * x) : m / ((1 - p) * (1 - p)) * (1 - 2 * p + 2 * p * x - x * x);
-            }
+    /**
+     * Reads a plain two-column x/y airfoil coordinate file and extracts its mean line.
+     *
+     * <p>Format: one point per line, x and y separated by spaces, tabs or a comma, in chords. An optional
+     * first line gives the section's name (used as its designation; the file name otherwise). Blank lines and
+     * comments from {@code #} to the end of a line are ignored. The points either run as one contour (from the
+     * trailing edge over one surface round the leading edge and back along the other), or as two blocks, one
+     * per surface, each in either direction; a jump of x by more than half a chord separates the blocks.
+     *
+     * <p>Extraction: the leading edge is the point of minimum x, refined to the point farthest forward along
+     * the chord line it defines (the same point unless the section is inclined); the trailing edge is the
+     * midpoint of the two surfaces' ends. The coordinates are translated, derotated and scaled to unit chord,
+     * split there into the two surfaces, and the mean line is their midpoint at the same x. See
+     * {@link CoordinateMeanLine} for the interpolation and for its accuracy near the nose.
+     *
+     * @throws SectionFileException with a one-line message naming the file, the line and what is expected
+     */
+    public static CoordinateMeanLine fromCoordinateFile(Path file) {
+        return CoordinateFileReader.read(file);
+    }
 
-            public double slope(double x) {
-                if (m == 0) {
-                    return 0;
-                }
-                return x < p ? 2 * m / (p * p) * (p - x) : 2 * m / ((1 - p) * (1 - p)) * (p - x);
-            }
-
-            public String designation() {
-                return name;
-            }
-        };
+    private static IllegalArgumentException refuse(String spec, String problem) {
+        return new IllegalArgumentException("camber line '" + spec + "': " + problem + "; accepted: " + ACCEPTED);
     }
 }
