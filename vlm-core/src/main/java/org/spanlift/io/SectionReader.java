@@ -44,7 +44,7 @@ final class SectionReader {
             } catch (IllegalArgumentException e) {
                 throw c.error(e.getMessage());
             }
-        }).orElseGet(() -> f.optional("camber-file").map(c -> {
+        }).orElseGet(() -> f.optional("camber-file").<CamberLine>map(c -> {
             Path folder = wingFile.toAbsolutePath().getParent();
             Path coordinates = folder == null ? Path.of(c.text()) : folder.resolve(c.text());
             try {
