@@ -89,8 +89,14 @@ public final class StallCommand implements Callable<Integer> {
             }
         }
         OptionalDouble assumed = assumeClMax == null ? OptionalDouble.empty() : OptionalDouble.of(assumeClMax);
-        Config cleanResult = evaluate("clean", analysis, clean, assumed, condition);
-        Config flapResult = anyFlap ? evaluate("flaps", analysis, flapped, assumed, condition) : null;
+        Config cleanResult;
+        Config flapResult;
+        try {
+            cleanResult = evaluate("clean", analysis, clean, assumed, condition);
+            flapResult = anyFlap ? evaluate("flaps", analysis, flapped, assumed, condition) : null;
+        } catch (MissingSectionDataException e) {
+            throw new InputException(file.toString(), 0, "sections", e.getMessage());
+        }
         String text = format == Format.JSON
                 ? Json.write(json(wing, cleanResult, flapResult, condition, atmosphere))
                 : table(wing, cleanResult, flapResult, condition, atmosphere);
@@ -104,12 +110,7 @@ public final class StallCommand implements Callable<Integer> {
 
     private static Config evaluate(String label, WingAnalysis analysis, double[] deflections, OptionalDouble assumed,
             Optional<FlightCondition> condition) {
-        StripLimits limits;
-        try {
-            limits = StripLimits.of(analysis.wing(), analysis.lattice(), deflections, assumed);
-        } catch (MissingSectionDataException e) {
-            throw new InputException(analysis.wing().name(), 0, "sections", e.getMessage());
-        }
+        StripLimits limits = StripLimits.of(analysis.wing(), analysis.lattice(), deflections, assumed);
         if (condition.isPresent()) {
             StallSpeed s = StallSpeed.of(analysis, deflections, limits, condition.get());
             return new Config(label, deflections, s.estimate(), Optional.of(s));
@@ -282,6 +283,6 @@ public final class StallCommand implements Callable<Integer> {
             out.append(word).append(' ');
             col += word.length() + 1;
         }
-        return out.toString().stripTrailing();
+        return out.toString().replace(" \n", "\n").stripTrailing();
     }
 }

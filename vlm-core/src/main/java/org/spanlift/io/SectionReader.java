@@ -19,13 +19,13 @@ import org.spanlift.section.ThinAirfoil;
  * {@code camber-file}) and the measured data ({@code zero-lift-angle}, {@code lift-slope}, {@code cl-max},
  * {@code flap-cl-max}, {@code drag-polar}).
  */
-final class SectionReader {
+public final class SectionReader {
 
-    static final Set<String> KEYS = Set.of("camber", "camber-file", "zero-lift-angle", "lift-slope", "cl-max",
+    public static final Set<String> KEYS = Set.of("camber", "camber-file", "zero-lift-angle", "lift-slope", "cl-max",
             "flap-cl-max", "drag-polar");
-    static final Set<String> CL_MAX_TABLE_KEYS = Set.of("reynolds", "values");
-    static final Set<String> FLAP_KEYS = Set.of("deflection", "increment");
-    static final Set<String> POLAR_KEYS = Set.of("reynolds", "cl", "cd");
+    public static final Set<String> CL_MAX_TABLE_KEYS = Set.of("reynolds", "values");
+    public static final Set<String> FLAP_KEYS = Set.of("deflection", "increment");
+    public static final Set<String> POLAR_KEYS = Set.of("reynolds", "cl", "cd");
 
     private SectionReader() {
     }
