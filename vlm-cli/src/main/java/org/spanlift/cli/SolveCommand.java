@@ -1,13 +1,19 @@
 package org.spanlift.cli;
 
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 
+import org.spanlift.atmosphere.Airspeed;
+import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.AlphaList;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
@@ -15,11 +21,14 @@ import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.output.Csv;
 import org.spanlift.cli.output.Json;
 import org.spanlift.cli.output.TextTable;
+import org.spanlift.flight.FlightCondition;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Reference;
 import org.spanlift.geometry.Wing;
+import org.spanlift.io.InputException;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.results.Coefficients;
+import org.spanlift.results.ProfileDrag;
 import org.spanlift.results.Solution;
 import org.spanlift.results.SpanLoad;
 import org.spanlift.solve.WingAnalysis;
@@ -31,7 +40,7 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
-/** {@code spanlift solve}: coefficients and span loads of one wing over a list of angles of attack. */
+/** {@code spanlift solve}: coefficients and span loads of one wing over angles of attack or target CLs. */
 @Command(name = "solve", mixinStandardHelpOptions = true,
         description = "Solve a wing over angles of attack: CL, induced drag, span efficiency, moments, span load.")
 public final class SolveCommand implements Callable<Integer> {
@@ -43,8 +52,13 @@ public final class SolveCommand implements Callable<Integer> {
             description = "Angles of attack in degrees: a list 0,2,4 or a range from:to:step. Default: ${DEFAULT-VALUE}.")
     String alpha;
 
+    @Option(names = "--cl", paramLabel = "LIST", split = ",",
+            description = "Solve at these wing lift coefficients (alpha from the lift line), such as 0.3,0.5. "
+                    + "Without --alpha, only these.")
+    List<Double> targetLift = List.of();
+
     @Option(names = "--span-load", paramLabel = "FILE.csv",
-            description = "Also write the per-strip span load of every angle to this CSV file (SI units).")
+            description = "Also write the per-strip span load of every point to this CSV file (SI units).")
     Path spanLoadFile;
 
     @Mixin
@@ -56,43 +70,100 @@ public final class SolveCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    private static final String UNITS_NOTE = "circulation is Gamma/V in m";
+    /** The level-flight (or load-factor n) point of a weight and speed. */
+    record Level(FlightCondition condition, Solution solution) {
+    }
+
+    /** What the flight options add to the coefficients: profile drag and dimensional circulation. */
+    record Dimensions(Wing wing, AtmosphereState atmosphere, OptionalDouble equivalentSpeed,
+            Optional<FlightCondition> condition) {
+
+        /** The circulation scale: the true speed in m/s when given (circulation in m^2/s), else 1 (Gamma/V in m). */
+        double circulationScale() {
+            return equivalentSpeed.isPresent()
+                    ? Airspeed.trueFromEquivalent(equivalentSpeed.getAsDouble(), atmosphere) : 1;
+        }
+
+        /**
+         * Profile drag at the speed given, else at the level-flight speed of the point's CL for the weight
+         * given, else with every polar read at its lowest Reynolds number.
+         */
+        OptionalDouble profileDrag(Solution s, double cl) {
+            double nu = atmosphere.kinematicViscosity();
+            double reynoldsPerMetre = 0;
+            if (equivalentSpeed.isPresent()) {
+                reynoldsPerMetre = circulationScale() / nu;
+            } else if (condition.isPresent() && cl > 0) {
+                double ve = condition.get().equivalentSpeedFor(cl, wing.reference());
+                reynoldsPerMetre = Airspeed.trueFromEquivalent(ve, atmosphere) / nu;
+            }
+            return ProfileDrag.coefficient(s, wing, reynoldsPerMetre);
+        }
+    }
 
     @Override
     public Integer call() {
         Format format = output.format(EnumSet.of(Format.TABLE, Format.JSON, Format.CSV));
-        List<Double> alphas = AlphaList.parse(alpha);
+        boolean alphaGiven = spec.commandLine().getParseResult().hasMatchedOption("--alpha");
+        List<Double> alphas = targetLift.isEmpty() || alphaGiven ? AlphaList.parse(alpha) : List.of();
         Wing wing = WingFileReader.read(file);
         Map<String, Double> overrides = flight.deflections(wing);
+        AtmosphereState atmosphere = flight.atmosphere();
+        OptionalDouble eas = flight.equivalentSpeed(atmosphere);
+        Optional<FlightCondition> condition = flight.condition();
         WingAnalysis analysis = WingAnalysis.of(wing);
         double[] deflections = analysis.deflections(overrides);
+        WingAnalysis.LiftLine line = analysis.liftLine(deflections);
         List<Solution> points = new ArrayList<>();
         for (double a : alphas) {
             points.add(analysis.solve(Math.toRadians(a), deflections));
         }
-        WingAnalysis.LiftLine line = analysis.liftLine(deflections);
+        for (double cl : targetLift) {
+            points.add(analysis.solve(alphaFor(line, cl, "--cl"), deflections));
+        }
+        Optional<Level> level = Optional.empty();
+        if (condition.isPresent() && eas.isPresent()) {
+            double cl = condition.get().requiredLift(wing.reference());
+            level = Optional.of(new Level(condition.get(),
+                    analysis.solve(alphaFor(line, cl, "--weight with --speed"), deflections)));
+        }
+        Dimensions dims = new Dimensions(wing, atmosphere, eas, condition);
         String text = switch (format) {
-            case JSON -> Json.write(json(wing, analysis, line, points));
-            case CSV -> csv(points);
-            default -> table(wing, analysis, line, points);
+            case JSON -> Json.write(json(wing, analysis, line, points, level, dims));
+            case CSV -> csv(points, dims);
+            default -> table(wing, analysis, line, points, level, dims);
         };
-        String loads = spanLoadFile == null ? null : spanLoadCsv(wing, points);
+        String loads = spanLoadFile == null ? null : spanLoadCsv(wing, points, dims);
         output.write(text, spec.commandLine().getOut());
         if (loads != null) {
-            OutputOptions.writeAtomically(spanLoadFile, loads.getBytes(java.nio.charset.StandardCharsets.UTF_8));
+            OutputOptions.writeAtomically(spanLoadFile, loads.getBytes(StandardCharsets.UTF_8));
         }
         return 0;
     }
 
+    private static double alphaFor(WingAnalysis.LiftLine line, double cl, String option) {
+        if (!Double.isFinite(cl) || Math.abs(cl) > 3) {
+            throw new InputException(option, 0, "", "expected a lift coefficient from -3 to 3, got " + cl);
+        }
+        double a = line.zeroLiftAngle() + Math.asin(Math.max(-1, Math.min(1, cl / line.slope())));
+        if (Math.abs(cl) >= line.slope() || Math.abs(Math.toDegrees(a)) > 30) {
+            throw new InputException(option, 0, "", String.format(Locale.ROOT,
+                    "CL %.3f needs an angle of attack beyond 30 degrees, outside linear theory", cl));
+        }
+        return a;
+    }
+
     private static Map<String, Object> json(Wing wing, WingAnalysis analysis, WingAnalysis.LiftLine line,
-            List<Solution> points) {
+            List<Solution> points, Optional<Level> level, Dimensions dims) {
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("name", wing.name());
         Map<String, Object> units = new LinkedHashMap<>();
         units.put("length", "m");
         units.put("area", "m^2");
         units.put("angle", "deg unless the key says rad");
-        units.put("circulation", "m (Gamma/V)");
+        units.put("circulation", dims.equivalentSpeed().isPresent() ? "m^2/s (at the true speed)" : "m (Gamma/V)");
+        units.put("speed", "m/s");
+        units.put("altitude", "m, pressure altitude (geopotential, standard atmosphere)");
         root.put("units", units);
         Reference r = wing.reference();
         Map<String, Object> ref = new LinkedHashMap<>();
@@ -106,33 +177,57 @@ public final class SolveCommand implements Callable<Integer> {
         root.put("lift_slope_per_rad", line.slope());
         root.put("lift_slope_per_deg", line.slope() * Math.PI / 180);
         root.put("zero_lift_angle_deg", Math.toDegrees(line.zeroLiftAngle()));
-        root.put("deflections_deg", deflectionsJson(wing, points.isEmpty() ? null : points.get(0)));
+        root.put("deflections_deg", deflectionsJson(wing, analysis.deflections(Map.of()), points));
+        level.ifPresent(l -> {
+            Map<String, Object> f = new LinkedHashMap<>();
+            f.put("weight", l.condition().weight());
+            f.put("load_factor", l.condition().loadFactor());
+            f.put("pressure_altitude", dims.atmosphere().pressureAltitude());
+            f.put("density", dims.atmosphere().density());
+            f.put("speed_eas", dims.equivalentSpeed().getAsDouble());
+            f.put("speed_tas", dims.circulationScale());
+            f.put("CL_required", l.solution().coefficients().lift());
+            f.put("alpha_required_deg", Math.toDegrees(l.solution().alpha()));
+            f.put("point", pointJson(wing, l.solution(), dims));
+            root.put("flight", f);
+        });
         List<Object> list = new ArrayList<>();
         for (Solution s : points) {
-            Coefficients c = s.coefficients();
-            Map<String, Object> p = new LinkedHashMap<>();
-            p.put("alpha_deg", Math.toDegrees(s.alpha()));
-            p.put("CL", c.lift());
-            p.put("CDi", c.inducedDrag());
-            p.put("e", c.spanEfficiency());
-            p.put("Cm", c.pitchingMoment());
-            p.put("C_roll", c.rollingMoment());
-            p.put("span_load", spanLoadJson(s.spanLoad(0)));
-            if (wing.surfaces().size() > 1) {
-                List<Object> surfaces = new ArrayList<>();
-                for (int k = 0; k < wing.surfaces().size(); k++) {
-                    Map<String, Object> one = new LinkedHashMap<>();
-                    one.put("name", wing.surfaces().get(k).name());
-                    one.put("CL", s.coefficients(k).lift());
-                    one.put("span_load", spanLoadJson(s.spanLoad(k)));
-                    surfaces.add(one);
-                }
-                p.put("surfaces", surfaces);
-            }
-            list.add(p);
+            list.add(pointJson(wing, s, dims));
         }
         root.put("points", list);
         return root;
+    }
+
+    private static Map<String, Object> pointJson(Wing wing, Solution s, Dimensions dims) {
+        Coefficients c = s.coefficients();
+        Map<String, Object> p = new LinkedHashMap<>();
+        p.put("alpha_deg", Math.toDegrees(s.alpha()));
+        p.put("CL", c.lift());
+        p.put("CDi", c.inducedDrag());
+        p.put("e", c.spanEfficiency());
+        p.put("Cm", c.pitchingMoment());
+        p.put("C_roll", c.rollingMoment());
+        OptionalDouble cdp = dims.profileDrag(s, c.lift());
+        if (cdp.isPresent()) {
+            double cd = c.inducedDrag() + cdp.getAsDouble();
+            p.put("CDp", cdp.getAsDouble());
+            p.put("CD", cd);
+            p.put("L_D", c.lift() / cd);
+        }
+        p.put("span_load", spanLoadJson(s.spanLoad(0), dims.circulationScale()));
+        if (wing.surfaces().size() > 1) {
+            List<Object> surfaces = new ArrayList<>();
+            for (int k = 0; k < wing.surfaces().size(); k++) {
+                Map<String, Object> one = new LinkedHashMap<>();
+                one.put("name", wing.surfaces().get(k).name());
+                one.put("CL", s.coefficients(k).lift());
+                one.put("span_load", spanLoadJson(s.spanLoad(k), dims.circulationScale()));
+                surfaces.add(one);
+            }
+            p.put("surfaces", surfaces);
+        }
+        return p;
     }
 
     static Map<String, Object> latticeJson(WingAnalysis analysis) {
@@ -145,86 +240,111 @@ public final class SolveCommand implements Callable<Integer> {
         return lat;
     }
 
-    private static Map<String, Object> deflectionsJson(Wing wing, Solution s) {
+    private static Map<String, Object> deflectionsJson(Wing wing, double[] fileDeflections, List<Solution> points) {
         Map<String, Object> d = new LinkedHashMap<>();
         List<ControlSurface> controls = wing.controls();
         for (int i = 0; i < controls.size(); i++) {
-            d.put(controls.get(i).name(), s == null ? Math.toDegrees(controls.get(i).deflection())
-                    : Math.toDegrees(s.deflection(i)));
+            d.put(controls.get(i).name(), Math.toDegrees(points.isEmpty() ? fileDeflections[i] : points.get(0).deflection(i)));
         }
         return d;
     }
 
-    private static Map<String, Object> spanLoadJson(SpanLoad l) {
+    private static Map<String, Object> spanLoadJson(SpanLoad l, double circulationScale) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("y", l.y());
         m.put("chord", l.chord());
         m.put("cl", l.cl());
         m.put("cl_c", l.clc());
-        m.put("circulation", l.circulation());
+        double[] gamma = new double[l.size()];
         double[] deg = new double[l.size()];
         for (int i = 0; i < deg.length; i++) {
+            gamma[i] = l.circulation()[i] * circulationScale;
             deg[i] = Math.toDegrees(l.inducedAngle()[i]);
         }
+        m.put("circulation", gamma);
         m.put("induced_angle_deg", deg);
         return m;
     }
 
-    private static String csv(List<Solution> points) {
-        Csv csv = new Csv(List.of("alpha_deg", "CL", "CDi", "e", "Cm", "C_roll"));
+    private static String csv(List<Solution> points, Dimensions dims) {
+        boolean drag = ProfileDrag.available(dims.wing());
+        List<String> header = new ArrayList<>(List.of("alpha_deg", "CL", "CDi", "e", "Cm", "C_roll"));
+        if (drag) {
+            header.addAll(List.of("CDp", "CD", "L_D"));
+        }
+        Csv csv = new Csv(header);
         for (Solution s : points) {
             Coefficients c = s.coefficients();
-            csv.row(Math.toDegrees(s.alpha()), c.lift(), c.inducedDrag(),
-                    c.spanEfficiency().isPresent() ? c.spanEfficiency().getAsDouble() : null, c.pitchingMoment(),
-                    c.rollingMoment());
+            List<Object> row = new ArrayList<>(List.of(Math.toDegrees(s.alpha()), c.lift(), c.inducedDrag()));
+            row.add(c.spanEfficiency().isPresent() ? c.spanEfficiency().getAsDouble() : null);
+            row.add(c.pitchingMoment());
+            row.add(c.rollingMoment());
+            if (drag) {
+                double cdp = dims.profileDrag(s, c.lift()).getAsDouble();
+                row.addAll(List.of(cdp, c.inducedDrag() + cdp, c.lift() / (c.inducedDrag() + cdp)));
+            }
+            csv.row(row.toArray());
         }
         return csv.toString();
     }
 
-    private static String spanLoadCsv(Wing wing, List<Solution> points) {
-        Csv csv = new Csv(List.of("alpha_deg", "surface", "y_m", "chord_m", "cl", "cl_c_m", "circulation_m",
+    private static String spanLoadCsv(Wing wing, List<Solution> points, Dimensions dims) {
+        String gammaColumn = dims.equivalentSpeed().isPresent() ? "circulation_m2_s" : "circulation_m";
+        Csv csv = new Csv(List.of("alpha_deg", "surface", "y_m", "chord_m", "cl", "cl_c_m", gammaColumn,
                 "induced_angle_deg"));
         for (Solution s : points) {
             for (int k = 0; k < wing.surfaces().size(); k++) {
                 SpanLoad l = s.spanLoad(k);
                 for (int i = 0; i < l.size(); i++) {
                     csv.row(Math.toDegrees(s.alpha()), wing.surfaces().get(k).name(), l.y()[i], l.chord()[i], l.cl()[i],
-                            l.clc()[i], l.circulation()[i], Math.toDegrees(l.inducedAngle()[i]));
+                            l.clc()[i], l.circulation()[i] * dims.circulationScale(), Math.toDegrees(l.inducedAngle()[i]));
                 }
             }
         }
         return csv.toString();
     }
 
-    private static String table(Wing wing, WingAnalysis analysis, WingAnalysis.LiftLine line, List<Solution> points) {
+    private static String table(Wing wing, WingAnalysis analysis, WingAnalysis.LiftLine line, List<Solution> points,
+            Optional<Level> level, Dimensions dims) {
         String u = wing.displayUnit().symbol();
         double k = wing.displayUnit().metres();
         Reference r = wing.reference();
         StringBuilder b = new StringBuilder();
         b.append(wing.name()).append('\n');
-        b.append(String.format(java.util.Locale.ROOT,
-                "  reference    area %.3f %s^2, span %.3f %s, chord %.3f %s, aspect ratio %.3f%n", r.area() / (k * k), u,
-                r.span() / k, u, r.chord() / k, u, r.aspectRatio()));
-        b.append(String.format(java.util.Locale.ROOT, "  moments about (%.3f, %.3f, %.3f) %s%n",
+        b.append(String.format(Locale.ROOT, "  reference    area %.3f %s^2, span %.3f %s, chord %.3f %s, aspect ratio %.3f%n",
+                r.area() / (k * k), u, r.span() / k, u, r.chord() / k, u, r.aspectRatio()));
+        b.append(String.format(Locale.ROOT, "  moments about (%.3f, %.3f, %.3f) %s%n",
                 r.momentPoint().x() / k, r.momentPoint().y() / k, r.momentPoint().z() / k, u));
         int panels = analysis.lattice().panelCount();
-        b.append(String.format(java.util.Locale.ROOT, "  lattice      %d panels in %d strips, %d unknowns (%s)%n", panels,
-                analysis.lattice().strips().size(), analysis.lattice().mirrored() ? analysis.lattice().halfCount() : panels,
-                analysis.lattice().mirrored() ? "half-span symmetric solve" : "full-span solve"));
-        b.append(String.format(java.util.Locale.ROOT,
+        boolean mirrored = analysis.lattice().mirrored();
+        b.append(String.format(Locale.ROOT, "  lattice      %d panels in %d strips, %d unknowns (%s)%n", panels,
+                analysis.lattice().strips().size(), mirrored ? analysis.lattice().halfCount() : panels,
+                mirrored ? "half-span symmetric solve" : "full-span solve"));
+        b.append(String.format(Locale.ROOT,
                 "  lift slope   %.4f per rad (%.5f per deg) at zero lift; zero-lift angle %.3f deg%n", line.slope(),
                 line.slope() * Math.PI / 180, Math.toDegrees(line.zeroLiftAngle())));
         if (!wing.controls().isEmpty()) {
             List<String> d = new ArrayList<>();
+            double[] shown = points.isEmpty() ? analysis.fileDeflections() : null;
             List<ControlSurface> controls = wing.controls();
             for (int i = 0; i < controls.size(); i++) {
-                double deg = points.isEmpty() ? 0 : Math.toDegrees(points.get(0).deflection(i));
+                double deg = Math.toDegrees(shown != null ? shown[i] : points.get(0).deflection(i));
                 d.add(controls.get(i).name() + " " + TextTable.fixed(deg, 1) + " deg");
             }
             b.append("  controls     ").append(String.join(", ", d)).append(" (trailing edge down; aileron: right side)\n");
         }
+        level.ifPresent(l -> b.append(String.format(Locale.ROOT,
+                "  flight       weight %.0f N, n = %.2f, %.1f m/s EAS (%.1f m/s TAS) at %.0f m pressure altitude:%n"
+                        + "               CL required %.4f at alpha %.2f deg%n",
+                l.condition().weight(), l.condition().loadFactor(), dims.equivalentSpeed().getAsDouble(),
+                dims.circulationScale(), dims.atmosphere().pressureAltitude(), l.solution().coefficients().lift(),
+                Math.toDegrees(l.solution().alpha()))));
         b.append('\n');
+        boolean drag = ProfileDrag.available(wing);
         List<String> headers = new ArrayList<>(List.of("alpha [deg]", "CL", "CDi", "e", "Cm", "C_roll"));
+        if (drag) {
+            headers.addAll(List.of("CD", "L/D"));
+        }
         boolean several = wing.surfaces().size() > 1;
         if (several) {
             wing.surfaces().forEach(s -> headers.add("CL " + s.name()));
@@ -236,6 +356,11 @@ public final class SolveCommand implements Callable<Integer> {
                     TextTable.fixed(c.lift(), 4), TextTable.fixed(c.inducedDrag(), 5),
                     c.spanEfficiency().isPresent() ? TextTable.fixed(c.spanEfficiency().getAsDouble(), 4) : "-",
                     TextTable.fixed(c.pitchingMoment(), 4), TextTable.fixed(c.rollingMoment(), 5)));
+            if (drag) {
+                double cd = c.inducedDrag() + dims.profileDrag(s, c.lift()).getAsDouble();
+                row.add(TextTable.fixed(cd, 5));
+                row.add(TextTable.fixed(c.lift() / cd, 1));
+            }
             if (several) {
                 for (int k2 = 0; k2 < wing.surfaces().size(); k2++) {
                     row.add(TextTable.fixed(s.coefficients(k2).lift(), 4));
@@ -246,6 +371,9 @@ public final class SolveCommand implements Callable<Integer> {
         b.append(t.render());
         b.append("\n  e is shown only where |CL| >= 0.05. CDi from the Trefftz plane. Cm positive nose-up; C_roll\n"
                 + "  positive right wing down, on the reference span. Use --format json for span loads.\n");
+        if (drag) {
+            b.append("  CD adds the sections' profile drag (strip integration of their polars) to CDi.\n");
+        }
         return b.toString();
     }
 }
