@@ -48,11 +48,49 @@ class SolveCommandTest {
 
     @Test
     void csvHasOneRowPerAngleWithSiHeaders() {
-        CliRun r = CliRun.of("solve", CliRun.demo("trainer.wing.yaml"), "-a", "0,2,4", "-f", "csv");
+        CliRun r = CliRun.of("solve", CliRun.demo("tourer.wing.yaml"), "-a", "0,2,4", "-f", "csv");
         assertEquals(0, r.exitCode(), r.err());
         List<String> lines = r.out().lines().toList();
         assertEquals("alpha_deg,CL,CDi,e,Cm,C_roll", lines.get(0));
         assertEquals(4, lines.size());
+    }
+
+    @Test
+    void sectionPolarsAddProfileDragAboveTheInducedDrag() {
+        CliRun r = CliRun.of("solve", CliRun.demo("trainer.wing.yaml"), "-a", "4", "-f", "csv", "--weight", "750kg");
+        assertEquals(0, r.exitCode(), r.err());
+        List<String> lines = r.out().lines().toList();
+        assertEquals("alpha_deg,CL,CDi,e,Cm,C_roll,CDp,CD,L_D", lines.get(0));
+        String[] v = lines.get(1).split(",");
+        double cdi = Double.parseDouble(v[2]);
+        double cdp = Double.parseDouble(v[6]);
+        double cd = Double.parseDouble(v[7]);
+        assertTrue(cdp > 0.004 && cdp < 0.012, "profile drag of the demo polars, got " + cdp);
+        assertEquals(cdi + cdp, cd, 1e-9);
+    }
+
+    @Test
+    void targetLiftPointsLandOnTheirCl() {
+        CliRun r = CliRun.of("solve", CliRun.demo("trainer.wing.yaml"), "--cl", "0.3,0.8", "-f", "csv");
+        assertEquals(0, r.exitCode(), r.err());
+        List<String> lines = r.out().lines().toList();
+        assertEquals(3, lines.size(), "only the --cl points without --alpha");
+        assertEquals(0.3, Double.parseDouble(lines.get(1).split(",")[1]), 1e-9);
+        assertEquals(0.8, Double.parseDouble(lines.get(2).split(",")[1]), 1e-9);
+    }
+
+    @Test
+    void weightAndSpeedGiveTheRequiredLiftAndDimensionalCirculation() {
+        CliRun r = CliRun.of("solve", CliRun.demo("trainer.wing.yaml"), "-a", "2", "-f", "json", "--weight", "7355N",
+                "--speed", "40m/s");
+        assertEquals(0, r.exitCode(), r.err());
+        // CL = W / (0.5 rho0 V^2 S) with rho0 = 1.225 kg/m^3 and S = 12.1 m^2 (the trainer's projected area)
+        double expected = 7355 / (0.5 * 1.225 * 40 * 40 * 12.1);
+        String out = r.out();
+        int at = out.indexOf("\"CL_required\": ");
+        double cl = Double.parseDouble(out.substring(at + 15, out.indexOf(',', at)));
+        assertEquals(expected, cl, 2e-4 * expected);
+        assertTrue(out.contains("m^2/s"), "circulation is dimensional when a speed is given");
     }
 
     @Test
