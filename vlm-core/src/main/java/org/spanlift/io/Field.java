@@ -15,15 +15,24 @@ public final class Field {
 
     private static final Pattern NON_FINITE = Pattern.compile("[-+]?(\\.?nan|\\.?inf|infinity)",
             Pattern.CASE_INSENSITIVE);
+    /** A decimal number as written in a file: no hexadecimal, no type suffix, no digit separators. */
+    private static final Pattern DECIMAL = Pattern.compile("[-+]?([0-9]+(\\.[0-9]*)?|\\.[0-9]+)([eE][-+]?[0-9]+)?");
 
     private final String file;
     private final String path;
     private final YamlValue value;
+    /** The line of the key this value belongs to, 0 when it has none (the document, a list item). */
+    private final int keyLine;
 
     public Field(String file, String path, YamlValue value) {
+        this(file, path, value, 0);
+    }
+
+    private Field(String file, String path, YamlValue value, int keyLine) {
         this.file = file;
         this.path = path;
         this.value = value;
+        this.keyLine = keyLine;
     }
 
     public String file() {
@@ -34,8 +43,12 @@ public final class Field {
         return path;
     }
 
+    /**
+     * The line messages about this field name: a scalar's own line; for a list or mapping given under a key,
+     * the key's line (a block list or mapping starts on the line after its key).
+     */
     public int line() {
-        return value.line();
+        return value instanceof YamlValue.Scalar || keyLine <= 0 ? value.line() : keyLine;
     }
 
     public YamlValue value() {
@@ -44,7 +57,7 @@ public final class Field {
 
     /** An error at this field. */
     public InputException error(String problem) {
-        return new InputException(file, value.line(), path, problem);
+        return new InputException(file, line(), path, problem);
     }
 
     private String child(String key) {
@@ -69,17 +82,42 @@ public final class Field {
         return this;
     }
 
+    /** Whether the mapping has the key (with a value or, wrongly, without one). */
     public boolean has(String key) {
-        return mapping().get(key).filter(v -> !(v instanceof YamlValue.Scalar s && s.isNull())).isPresent();
+        return mapping().entry(key).isPresent();
     }
 
+    private static boolean isNull(YamlValue v) {
+        return v instanceof YamlValue.Scalar s && s.isNull();
+    }
+
+    /**
+     * The key's field when the key is given. A key written without a value is refused: leaving a value out
+     * by mistake must not silently select the default.
+     */
     public Optional<Field> optional(String key) {
-        return has(key) ? Optional.of(new Field(file, child(key), mapping().get(key).orElseThrow()))
-                : Optional.empty();
+        Optional<YamlValue.Entry> e = mapping().entry(key);
+        if (e.isEmpty()) {
+            return Optional.empty();
+        }
+        if (isNull(e.get().value())) {
+            throw new InputException(file, e.get().keyLine(), child(key),
+                    "the key has no value; expected a value, or leave the key out for the default");
+        }
+        return Optional.of(new Field(file, child(key), e.get().value(), e.get().keyLine()));
     }
 
+    /** The key's field; a missing key, or one without a value, is refused with what is expected. */
     public Field required(String key, String expected) {
-        return optional(key).orElseThrow(() -> error("missing key '" + key + "'; expected " + expected));
+        Optional<YamlValue.Entry> e = mapping().entry(key);
+        if (e.isEmpty()) {
+            throw new InputException(file, line(), child(key), "missing key; expected " + expected);
+        }
+        if (isNull(e.get().value())) {
+            throw new InputException(file, e.get().keyLine(), child(key), "the key has no value; expected "
+                    + expected);
+        }
+        return new Field(file, child(key), e.get().value(), e.get().keyLine());
     }
 
     public List<Field> items() {
@@ -97,12 +135,15 @@ public final class Field {
     public List<Field> entries() {
         List<Field> out = new ArrayList<>();
         for (YamlValue.Entry e : mapping().entries()) {
-            out.add(new Field(file, child(e.key()), e.value()));
+            out.add(new Field(file, child(e.key()), e.value(), e.keyLine()));
         }
         return out;
     }
 
-    /** The last key of the path (for entries of a mapping). */
+    /**
+     * The last key of the path (for entries of a mapping). A key holding a dot is ambiguous here; read the
+     * keys from {@link #mapping()} when they may hold one.
+     */
     public String key() {
         int dot = path.lastIndexOf('.');
         return dot < 0 ? path : path.substring(dot + 1);
@@ -125,17 +166,17 @@ public final class Field {
             throw error("expected a finite number, got " + t);
         }
         if (!s.plain()) {
-            throw error("expected a number, got " + s.describe());
+            throw error("expected a number, got " + s.describe()
+                    + (DECIMAL.matcher(t).matches() ? "; write numbers without quotes" : ""));
         }
-        try {
-            double d = Double.parseDouble(t.replace("_", ""));
-            if (!Double.isFinite(d)) {
-                throw error("expected a finite number, got " + t);
-            }
-            return d;
-        } catch (NumberFormatException e) {
-            throw error("expected a number, got " + s.describe());
+        if (!DECIMAL.matcher(t).matches()) {
+            throw error("expected a decimal number (such as 1.25 or 3e-2), got " + s.describe());
         }
+        double d = Double.parseDouble(t);
+        if (!Double.isFinite(d)) {
+            throw error("expected a finite number, got " + t);
+        }
+        return d;
     }
 
     public double positive() {

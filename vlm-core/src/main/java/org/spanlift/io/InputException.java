@@ -2,7 +2,9 @@ package org.spanlift.io;
 
 /**
  * Bad input in a file the user wrote: carries the file, the 1-based line (0 when unknown), the field path
- * and what was expected, and prints as one line {@code file:line: field: message}.
+ * and what was expected, and prints as one line {@code file:line: field: message}. Line breaks and other
+ * control characters in any part (text echoed from the file, say) are shown escaped, so the message stays
+ * one line.
  */
 public class InputException extends RuntimeException {
 
@@ -30,7 +32,28 @@ public class InputException extends RuntimeException {
         if (field != null && !field.isEmpty()) {
             b.append(field).append(": ");
         }
-        return b.append(problem).toString();
+        return oneLine(b.append(problem).toString());
+    }
+
+    /** The text with line breaks, tabs and other control characters written as backslash escapes. */
+    static String oneLine(String s) {
+        StringBuilder b = new StringBuilder(s.length());
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            switch (c) {
+                case '\n' -> b.append("\\n");
+                case '\r' -> b.append("\\r");
+                case '\t' -> b.append("\\t");
+                default -> {
+                    if (Character.isISOControl(c) || c == '\u2028' || c == '\u2029' || c == '\u0085') {
+                        b.append(String.format("\\u%04x", (int) c));
+                    } else {
+                        b.append(c);
+                    }
+                }
+            }
+        }
+        return b.toString();
     }
 
     public String file() {

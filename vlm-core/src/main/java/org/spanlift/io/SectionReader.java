@@ -3,6 +3,7 @@ package org.spanlift.io;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
@@ -33,18 +34,12 @@ public final class SectionReader {
     /**
      * @param wingFile the wing file, against whose folder a {@code camber-file} path is resolved
      */
-    static Section read(Field f, Path wingFile) {
+    static Section read(Field f, String name, Path wingFile) {
         f.allowOnly(KEYS);
         if (f.has("camber") && f.has("camber-file")) {
             throw f.error("give either camber or camber-file, not both");
         }
-        CamberLine camber = f.optional("camber").map(c -> {
-            try {
-                return CamberLines.parse(c.text());
-            } catch (IllegalArgumentException e) {
-                throw c.error(e.getMessage());
-            }
-        }).orElseGet(() -> f.optional("camber-file").<CamberLine>map(c -> {
+        CamberLine camber = f.optional("camber").map(SectionReader::camber).orElseGet(() -> f.optional("camber-file").<CamberLine>map(c -> {
             Path folder = wingFile.toAbsolutePath().getParent();
             Path coordinates = folder == null ? Path.of(c.text()) : folder.resolve(c.text());
             try {
@@ -63,7 +58,23 @@ public final class SectionReader {
         Optional<Table> clMax = f.optional("cl-max").map(SectionReader::clMax);
         Optional<Table> flap = f.optional("flap-cl-max").map(SectionReader::flapIncrement);
         Optional<ProfileDragPolar> polar = f.optional("drag-polar").map(SectionReader::polar);
-        return new Section(f.key(), camber, correction, liftSlope, clMax, flap, polar, measuredZeroLift);
+        return new Section(name, camber, correction, liftSlope, clMax, flap, polar, measuredZeroLift);
+    }
+
+    private static CamberLine camber(Field c) {
+        String text = c.text();
+        String compact = text.trim().toUpperCase(Locale.ROOT).replace(" ", "");
+        // A four-digit designation with camber but with its position digit 0 puts the highest camber at the
+        // leading edge: not a defined mean line of that family.
+        if (compact.matches("NACA[1-9]0\\d\\d")) {
+            throw c.error("the camber designation '" + text + "' has camber but no camber position (its second "
+                    + "digit is 0); expected a position digit from 1 to 9, or 00 for a symmetric section");
+        }
+        try {
+            return CamberLines.parse(text);
+        } catch (IllegalArgumentException e) {
+            throw c.error("unknown camber designation '" + text + "'; expected " + CamberLines.ACCEPTED);
+        }
     }
 
     private static Table clMax(Field f) {

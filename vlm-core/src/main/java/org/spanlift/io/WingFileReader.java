@@ -1,6 +1,9 @@
 package org.spanlift.io;
 
 import java.io.IOException;
+import java.nio.charset.CharacterCodingException;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.NoSuchFileException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -8,6 +11,7 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
@@ -56,6 +60,12 @@ public final class WingFileReader {
     public static final int MAX_ROWS = 64;
     public static final int MAX_PANELS = 12_000;
 
+    /**
+     * Largest length accepted anywhere in a file, metres (10 km): far beyond any wing, small enough that
+     * areas and integrals of the geometry stay finite.
+     */
+    public static final double MAX_LENGTH_M = 10_000;
+
     /** Name of the section a station gets when neither it nor its surface names one: a flat plate. */
     public static final String FLAT_SECTION = "flat";
 
@@ -68,8 +78,15 @@ public final class WingFileReader {
         String text;
         try {
             text = Files.readString(path, StandardCharsets.UTF_8);
+        } catch (CharacterCodingException e) {
+            throw new InputException(file, 0, "", "the file is not UTF-8 text; expected a wing file saved as UTF-8");
+        } catch (NoSuchFileException e) {
+            throw new InputException(file, 0, "", "no such file; expected the path of a wing file");
+        } catch (AccessDeniedException e) {
+            throw new InputException(file, 0, "", "permission denied; expected a readable wing file");
         } catch (IOException e) {
-            throw new InputException(file, 0, "", "cannot read the file (" + e.getClass().getSimpleName() + ")");
+            throw new InputException(file, 0, "", "cannot read the file (" + e.getClass().getSimpleName()
+                    + (e.getMessage() == null ? "" : ": " + e.getMessage()) + "); expected a readable wing file");
         }
         return parse(text, file);
     }
@@ -84,15 +101,23 @@ public final class WingFileReader {
         Field root = new Field(file, "", tree);
         root.mapping();
         root.allowOnly(TOP_KEYS);
-        String name = root.optional("name").map(Field::text).orElse(Path.of(file).getFileName().toString());
-        LengthUnit unit = readUnit(root.required("units", "m, ft or in"));
+        String name = root.optional("name").map(Field::text).orElse(String.valueOf(Path.of(file).getFileName()));
+        LengthUnit unit = readUnit(root.required("units", "the length unit of the file: m, ft or in"));
         double k = unit.metres();
 
         Map<String, Section> sections = new LinkedHashMap<>();
         sections.put(FLAT_SECTION, Section.of(FLAT_SECTION, CamberLines.parse("flat")));
         root.optional("sections").ifPresent(s -> {
-            for (Field entry : s.entries()) {
-                sections.put(entry.key(), SectionReader.read(entry, Path.of(file)));
+            List<Field> entries = s.entries();
+            for (int i = 0; i < entries.size(); i++) {
+                Field entry = entries.get(i);
+                // The key itself, not the last part of the path: a section name may hold a dot.
+                String sectionName = s.mapping().entries().get(i).key();
+                if (sectionName.equals(FLAT_SECTION)) {
+                    throw entry.error("the section name '" + FLAT_SECTION + "' is built in (a flat plate, the "
+                            + "default of every surface); expected another name for this section");
+                }
+                sections.put(sectionName, SectionReader.read(entry, sectionName, Path.of(file)));
             }
         });
 
@@ -108,12 +133,16 @@ public final class WingFileReader {
         for (Field sf : surfaceFields) {
             Surface surface = readSurface(sf, k, sections, controlNames);
             if (!surfaceNames.add(surface.name())) {
-                throw sf.required("name", "a name").error("another surface has the name '" + surface.name() + "'");
+                throw sf.required("name", "a name").error("another surface has the name '" + surface.name()
+                        + "'; expected a name no other surface has");
             }
-            panels += (surface.mirrored() ? 2 : 1) * surface.lattice().strips() * surface.lattice().rows();
+            int own = (surface.mirrored() ? 2 : 1) * surface.lattice().strips() * surface.lattice().rows();
+            panels += own;
             if (panels > MAX_PANELS) {
-                throw sf.error("the lattice has more than " + MAX_PANELS + " panels over the whole wing; "
-                        + "lower strips or rows");
+                Field at = sf.optional("lattice").orElse(sf);
+                throw at.error("the lattice would have " + panels + " panels over the whole wing"
+                        + (panels == own ? "" : " (" + own + " on this surface)") + "; expected at most "
+                        + MAX_PANELS + ": lower strips or rows");
             }
             surfaces.add(surface);
         }
@@ -127,37 +156,72 @@ public final class WingFileReader {
         return LengthUnit.parse(t);
     }
 
+    /** A length from the file: its number times the unit's metres, within {@link #MAX_LENGTH_M}. */
+    private static double length(Field f, double value, double k) {
+        double m = value * k;
+        if (!(Math.abs(m) <= MAX_LENGTH_M)) {
+            throw f.error("is " + Field.format(value) + ", beyond any wing; expected a length within "
+                    + Field.format(MAX_LENGTH_M / k) + " " + unitName(k));
+        }
+        return m;
+    }
+
+    private static String unitName(double k) {
+        for (LengthUnit u : LengthUnit.values()) {
+            if (u.metres() == k) {
+                return u.symbol();
+            }
+        }
+        return "m";
+    }
+
+    private static String name(Field f, String what) {
+        String name = f.text().trim();
+        if (name.isEmpty() || name.contains("=") || name.contains(",")) {
+            throw f.error("'" + f.text() + "' cannot name " + what + "; expected a name that is not blank and "
+                    + "holds neither '=' nor ','");
+        }
+        return name;
+    }
+
     private static Reference readReference(Field f, double k, Reference defaults) {
         f.allowOnly(REFERENCE_KEYS);
-        double area = f.optional("area").map(a -> a.positive() * k * k).orElse(defaults.area());
-        double span = f.optional("span").map(a -> a.positive() * k).orElse(defaults.span());
-        double chord = f.optional("chord").map(a -> a.positive() * k).orElse(defaults.chord());
+        double area = f.optional("area").map(a -> {
+            double v = a.positive();
+            length(a, Math.sqrt(v), k);
+            return v * k * k;
+        }).orElse(defaults.area());
+        double span = f.optional("span").map(a -> length(a, a.positive(), k)).orElse(defaults.span());
+        double chord = f.optional("chord").map(a -> length(a, a.positive(), k)).orElse(defaults.chord());
         Vec3 point = f.optional("moment-point").map(p -> {
             double[] v = p.numbers(3);
-            return new Vec3(v[0] * k, v[1] * k, v[2] * k);
+            return new Vec3(length(p, v[0], k), length(p, v[1], k), length(p, v[2], k));
         }).orElse(defaults.momentPoint());
         return new Reference(area, span, chord, point);
     }
 
     private static Surface readSurface(Field f, double k, Map<String, Section> sections, Set<String> controlNames) {
         f.allowOnly(SURFACE_KEYS);
-        String name = f.required("name", "a name for the surface").text();
+        String name = name(f.required("name", "a name for the surface"), "a surface");
         boolean mirrored = f.optional("mirror").map(Field::bool).orElse(true);
         Optional<Field> sectionField = f.optional("section");
         String surfaceSection = sectionField.map(s -> sectionName(s, sections)).orElse(FLAT_SECTION);
 
-        List<String> shapes = new ArrayList<>();
-        for (String key : List.of("stations", "trapezoid", "elliptic")) {
-            if (f.has(key)) {
-                shapes.add(key);
-            }
+        List<YamlValue.Entry> shapes = f.mapping().entries().stream()
+                .filter(e -> List.of("stations", "trapezoid", "elliptic").contains(e.key())).toList();
+        if (shapes.isEmpty()) {
+            throw f.error("missing the planform; expected one of the keys stations, trapezoid or elliptic");
         }
-        if (shapes.size() != 1) {
-            throw f.error(shapes.isEmpty() ? "missing the planform; give one of stations, trapezoid or elliptic"
-                    : "give only one of stations, trapezoid or elliptic, not " + String.join(" and ", shapes));
+        if (shapes.size() > 1) {
+            YamlValue.Entry second = shapes.get(1);
+            throw new InputException(f.file(), second.keyLine(), f.path() + "." + second.key(), "the surface "
+                    + "already has '" + shapes.get(0).key() + "' (line " + shapes.get(0).keyLine()
+                    + "); expected only one of stations, trapezoid or elliptic");
         }
-        Field shapeField = f.required(shapes.get(0), "");
-        Planform planform = switch (shapes.get(0)) {
+        String shape = shapes.get(0).key();
+        Field shapeField = f.required(shape, shape.equals("stations") ? "a list of stations from root to tip"
+                : "a mapping of the " + shape + "'s dimensions");
+        Planform planform = switch (shape) {
             case "stations" -> readStations(shapeField, k, mirrored, surfaceSection, sections);
             case "trapezoid" -> readTrapezoid(shapeField, k, mirrored, surfaceSection);
             default -> readElliptic(shapeField, k, mirrored, surfaceSection);
@@ -168,8 +232,8 @@ public final class WingFileReader {
         for (Field cf : controlFields) {
             ControlSurface c = readControl(cf, k, mirrored, planform, controls);
             if (!controlNames.add(c.name())) {
-                throw cf.required("name", "").error("another control has the name '" + c.name()
-                        + "'; control names are unique in the file");
+                throw cf.required("name", "a name for the control").error("another control has the name '"
+                        + c.name() + "'; expected a name no other control in the file has");
             }
             controls.add(c);
         }
@@ -178,8 +242,8 @@ public final class WingFileReader {
         int cuts = countInteriorCuts(planform, controls, lattice);
         if (cuts > lattice.strips() - 1) {
             Field at = f.optional("lattice").map(l -> l.optional("strips").orElse(l)).orElse(f);
-            throw at.error("needs at least " + (cuts + 1) + " strips to place a strip edge on each of its " + cuts
-                    + " control ends and stations");
+            throw at.error(lattice.strips() + " strips cannot place a strip edge on each of the surface's " + cuts
+                    + " control ends and stations; expected at least " + (cuts + 1) + " strips");
         }
         return new Surface(name, mirrored, planform, controls, lattice);
     }
@@ -207,8 +271,9 @@ public final class WingFileReader {
         String name = f.text();
         if (!sections.containsKey(name)) {
             List<String> known = sections.keySet().stream().filter(s -> !s.equals(FLAT_SECTION)).toList();
-            throw f.error("unknown section '" + name + "'; the file's sections are "
-                    + (known.isEmpty() ? "none (add a 'sections' mapping)" : String.join(", ", known)));
+            throw f.error("unknown section '" + name + "'; expected " + (known.isEmpty()
+                    ? "flat, or a section defined under 'sections' (the file defines none)"
+                    : "flat or one of the file's sections: " + String.join(", ", known)));
         }
         return name;
     }
@@ -224,24 +289,27 @@ public final class WingFileReader {
             Field s = items.get(i);
             s.allowOnly(STATION_KEYS);
             Field yField = s.required("y", "the station's spanwise position");
-            double y = yField.number() * k;
+            double y = length(yField, yField.number(), k);
             if (mirrored && i == 0 && y < 0) {
-                throw yField.error("a mirrored surface is described on its right half: the root y must be 0 or "
-                        + "more, got " + Field.format(y / k));
+                throw yField.error("the root is at " + Field.format(y / k) + ", but a mirrored surface is "
+                        + "described on its right half; expected a root y of 0 or more");
             }
             if (i > 0 && !(y > stations.get(i - 1).y())) {
-                throw yField.error("stations must be in increasing y from root to tip; this one is at "
-                        + Field.format(y / k) + " after " + Field.format(stations.get(i - 1).y() / k));
+                throw yField.error("is " + Field.format(y / k) + ", after a station at "
+                        + Field.format(stations.get(i - 1).y() / k) + "; expected stations in increasing y from root "
+                        + "to tip");
             }
             Field chordField = s.required("chord", "the local chord");
-            double chord = chordField.number() * k;
+            double chord = length(chordField, chordField.number(), k);
             boolean tip = i == items.size() - 1;
             if (tip ? chord < 0 : !(chord > 0)) {
                 throw chordField.error(tip ? "must not be negative, got " + Field.format(chord / k)
-                        : "must be positive (only the tip station may have zero chord), got " + Field.format(chord / k));
+                        + "; expected a tip chord of 0 or more"
+                        : "must be positive, got " + Field.format(chord / k) + "; expected a chord above 0 (only "
+                        + "the tip station may have zero chord)");
             }
-            double noseX = s.optional("nose-x").map(Field::number).orElse(0.0) * k;
-            double noseZ = s.optional("nose-z").map(Field::number).orElse(0.0) * k;
+            double noseX = s.optional("nose-x").map(n -> length(n, n.number(), k)).orElse(0.0);
+            double noseZ = s.optional("nose-z").map(n -> length(n, n.number(), k)).orElse(0.0);
             double twist = Math.toRadians(s.optional("twist").map(t -> t.inRange(-45, 45)).orElse(0.0));
             String section = s.optional("section").map(x -> sectionName(x, sections)).orElse(surfaceSection);
             stations.add(new Station(y, chord, noseX, noseZ, twist, section));
@@ -252,16 +320,18 @@ public final class WingFileReader {
     private static Planform readTrapezoid(Field f, double k, boolean mirrored, String section) {
         f.allowOnly(TRAPEZOID_KEYS);
         requireMirrored(f, mirrored);
-        double semi = f.required("span", "the tip-to-tip span").positive() * k / 2;
-        double rootChord = f.required("root-chord", "the root chord").positive() * k;
+        Field spanField = f.required("span", "the tip-to-tip span");
+        double semi = length(spanField, spanField.positive(), k) / 2;
+        Field rootField = f.required("root-chord", "the root chord");
+        double rootChord = length(rootField, rootField.positive(), k);
         double taper = f.optional("taper").map(t -> t.inRange(0, 10)).orElse(1.0);
         double sweep = Math.toRadians(f.optional("sweep").map(t -> t.inRange(-60, 60)).orElse(0.0));
         double dihedral = Math.toRadians(f.optional("dihedral").map(t -> t.inRange(-30, 30)).orElse(0.0));
         double washout = Math.toRadians(f.optional("washout").map(t -> t.inRange(-20, 20)).orElse(0.0));
         double rootTwist = Math.toRadians(f.optional("root-twist").map(t -> t.inRange(-45, 45)).orElse(0.0));
-        double[] nose = f.optional("root-nose").map(n -> n.numbers(2)).orElse(new double[2]);
-        double x0 = nose[0] * k;
-        double z0 = nose[1] * k;
+        double[] nose = rootNose(f, k);
+        double x0 = nose[0];
+        double z0 = nose[1];
         double tipChord = taper * rootChord;
         double xQuarter = x0 + 0.25 * rootChord + semi * Math.tan(sweep);
         Station root = new Station(0, rootChord, x0, z0, rootTwist, section);
@@ -273,57 +343,72 @@ public final class WingFileReader {
     private static Planform readElliptic(Field f, double k, boolean mirrored, String section) {
         f.allowOnly(ELLIPTIC_KEYS);
         requireMirrored(f, mirrored);
-        double semi = f.required("span", "the tip-to-tip span").positive() * k / 2;
-        double rootChord = f.required("root-chord", "the root chord").positive() * k;
+        Field spanField = f.required("span", "the tip-to-tip span");
+        double semi = length(spanField, spanField.positive(), k) / 2;
+        Field rootField = f.required("root-chord", "the root chord");
+        double rootChord = length(rootField, rootField.positive(), k);
         double dihedral = Math.toRadians(f.optional("dihedral").map(t -> t.inRange(-30, 30)).orElse(0.0));
         double washout = Math.toRadians(f.optional("washout").map(t -> t.inRange(-20, 20)).orElse(0.0));
         double rootTwist = Math.toRadians(f.optional("root-twist").map(t -> t.inRange(-45, 45)).orElse(0.0));
-        double[] nose = f.optional("root-nose").map(n -> n.numbers(2)).orElse(new double[2]);
-        return new EllipticPlanform(semi, rootChord, nose[0] * k, nose[1] * k, dihedral, rootTwist, washout, section);
+        double[] nose = rootNose(f, k);
+        return new EllipticPlanform(semi, rootChord, nose[0], nose[1], dihedral, rootTwist, washout, section);
+    }
+
+    /** The root leading edge [x, z] in metres; the origin when not given. */
+    private static double[] rootNose(Field f, double k) {
+        return f.optional("root-nose").map(n -> {
+            double[] v = n.numbers(2);
+            return new double[] {length(n, v[0], k), length(n, v[1], k)};
+        }).orElse(new double[2]);
     }
 
     private static void requireMirrored(Field f, boolean mirrored) {
         if (!mirrored) {
-            throw f.error("describes a mirrored surface (right half from y = 0); set mirror: true or give stations");
+            throw f.error("describes a mirrored surface (right half from y = 0) but the surface has mirror: false; "
+                    + "expected mirror: true, or stations for an unmirrored surface");
         }
     }
 
     private static ControlSurface readControl(Field f, double k, boolean mirrored, Planform planform,
             List<ControlSurface> earlier) {
         f.allowOnly(CONTROL_KEYS);
-        String name = f.required("name", "a name for the control").text();
+        String name = name(f.required("name", "a name for the control"), "a control");
         Field kindField = f.required("kind", "flap or aileron");
         ControlKind kind = kindField.choice(List.of("flap", "aileron")).equals("flap") ? ControlKind.FLAP
                 : ControlKind.AILERON;
         if (kind == ControlKind.AILERON && !mirrored) {
-            throw kindField.error("an aileron deflects antisymmetrically and needs a mirrored surface");
+            throw kindField.error("an aileron deflects antisymmetrically and needs a mirrored surface; "
+                    + "expected kind flap here, or mirror: true on the surface");
         }
         Field fromField = f.required("from", "the y of the control's inner end");
         Field toField = f.required("to", "the y of the control's outer end");
-        double from = fromField.number() * k;
-        double to = toField.number() * k;
+        double from = length(fromField, fromField.number(), k);
+        double to = length(toField, toField.number(), k);
         double tol = 1e-9 * (planform.yEnd() - planform.yStart());
+        String span = "expected a y from " + Field.format(planform.yStart() / k) + " to "
+                + Field.format(planform.yEnd() / k) + " (the surface's " + (mirrored ? "right half" : "span") + ")";
         if (from < planform.yStart() - tol || from > planform.yEnd() + tol) {
-            throw fromField.error("lies outside the surface's span (y from " + Field.format(planform.yStart() / k)
-                    + " to " + Field.format(planform.yEnd() / k) + ")");
+            throw fromField.error(Field.format(from / k) + " lies outside the surface; " + span);
         }
         if (to < planform.yStart() - tol || to > planform.yEnd() + tol) {
-            throw toField.error("lies outside the surface's span (y from " + Field.format(planform.yStart() / k)
-                    + " to " + Field.format(planform.yEnd() / k) + ")");
+            throw toField.error(Field.format(to / k) + " lies outside the surface; " + span);
         }
         if (!(to > from)) {
-            throw toField.error("must be greater than 'from' (" + Field.format(from / k) + ")");
+            throw toField.error("is " + Field.format(to / k) + ", not beyond 'from' (" + Field.format(from / k)
+                    + "); expected the outer end, greater than 'from'");
         }
         for (ControlSurface c : earlier) {
             if (from < c.to() - tol && to > c.from() + tol) {
-                throw fromField.error("overlaps control '" + c.name() + "' (y from " + Field.format(c.from() / k)
-                        + " to " + Field.format(c.to() / k) + ")");
+                throw fromField.error("the span from " + Field.format(from / k) + " to " + Field.format(to / k)
+                        + " overlaps control '" + c.name() + "' (y from " + Field.format(c.from() / k) + " to "
+                        + Field.format(c.to() / k) + "); expected controls that do not overlap");
             }
         }
         Field cfField = f.required("chord-fraction", "the control's chord over the local chord, between 0 and 1");
         double cf = cfField.number();
         if (!(cf > 0 && cf < 1)) {
-            throw cfField.error("must lie between 0 and 1 (exclusive), got " + Field.format(cf));
+            throw cfField.error("is " + Field.format(cf) + "; expected a fraction of the local chord between 0 and 1, "
+                    + "both excluded");
         }
         double deflection = Math.toRadians(f.optional("deflection").map(d -> d.inRange(-45, 45)).orElse(0.0));
         return new ControlSurface(name, kind, from, to, cf, deflection);
@@ -333,7 +418,14 @@ public final class WingFileReader {
         f.allowOnly(LATTICE_KEYS);
         LatticeSpec d = LatticeSpec.DEFAULT;
         int strips = f.optional("strips").map(s -> s.integer(1, MAX_STRIPS)).orElse(d.strips());
-        int rows = f.optional("rows").map(s -> s.integer(noControls ? 1 : 2, MAX_ROWS)).orElse(d.rows());
+        int rows = f.optional("rows").map(r -> {
+            int n = r.integer(1, MAX_ROWS);
+            if (n < 2 && !noControls) {
+                throw r.error("is 1, but the surface has controls; expected at least 2 rows, so that a row edge "
+                        + "can lie on the hinge line");
+            }
+            return n;
+        }).orElse(d.rows());
         Spacing ss = f.optional("strip-spacing").map(WingFileReader::spacing).orElse(d.stripSpacing());
         Spacing rs = f.optional("row-spacing").map(WingFileReader::spacing).orElse(d.rowSpacing());
         return new LatticeSpec(strips, rows, ss, rs);

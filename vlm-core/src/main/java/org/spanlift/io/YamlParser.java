@@ -1,13 +1,21 @@
 package org.spanlift.io;
 
+import java.util.ArrayDeque;
 import java.util.ArrayList;
-import java.util.HashSet;
+import java.util.Deque;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
 import org.snakeyaml.engine.v2.api.LoadSettings;
 import org.snakeyaml.engine.v2.api.lowlevel.Compose;
+import org.snakeyaml.engine.v2.api.lowlevel.Parse;
+import org.snakeyaml.engine.v2.common.Anchor;
+import org.snakeyaml.engine.v2.events.AliasEvent;
+import org.snakeyaml.engine.v2.events.Event;
+import org.snakeyaml.engine.v2.events.NodeEvent;
 import org.snakeyaml.engine.v2.exceptions.Mark;
 import org.snakeyaml.engine.v2.exceptions.MarkedYamlEngineException;
 import org.snakeyaml.engine.v2.exceptions.YamlEngineException;
@@ -21,13 +29,17 @@ import org.snakeyaml.engine.v2.nodes.Tag;
 /**
  * Reads YAML text into a {@link YamlValue} tree with line marks. Safe: only the node graph is composed (no
  * object construction); explicit tags other than the standard scalar, list and mapping ones are refused;
- * duplicate keys are refused.
+ * duplicate keys are refused; nesting deeper than {@link #MAX_DEPTH} and aliases that refer to a list or
+ * mapping from inside it are refused before the node graph is built.
  */
 public final class YamlParser {
 
     private static final Set<Tag> STANDARD_TAGS = Set.of(Tag.STR, Tag.INT, Tag.FLOAT, Tag.BOOL, Tag.NULL, Tag.MAP,
             Tag.SEQ);
     private static final int MAX_CODE_POINTS = 8 * 1024 * 1024;
+
+    /** Deepest nesting of lists and mappings accepted (a wing file needs five levels). */
+    public static final int MAX_DEPTH = 32;
 
     private YamlParser() {
     }
@@ -36,24 +48,87 @@ public final class YamlParser {
      * Parses one YAML document.
      *
      * @param file the file name for messages
-     * @throws InputException for a syntax error, an empty document, a tag or a duplicate key
+     * @throws InputException for a syntax error, an empty document, a tag, a duplicate key, too deep a
+     *         nesting or a self-referring alias
      */
     public static YamlValue parse(String text, String file) {
         LoadSettings settings = LoadSettings.builder().setLabel(file).setCodePointLimit(MAX_CODE_POINTS)
                 .setMaxAliasesForCollections(50).build();
         Optional<Node> root;
         try {
+            checkStructure(new Parse(settings).parseString(text), file);
             root = new Compose(settings).composeString(text);
         } catch (MarkedYamlEngineException e) {
-            int line = e.getProblemMark().map(m -> m.getLine() + 1).orElse(0);
-            throw new InputException(file, line, "", "not valid YAML: " + firstLine(e.getProblem()));
+            throw syntaxError(e, text, file);
         } catch (YamlEngineException e) {
-            throw new InputException(file, 0, "", "not valid YAML: " + firstLine(e.getMessage()));
+            throw new InputException(file, 0, "", "not valid YAML: " + firstLine(e.getMessage())
+                    + "; expected a YAML mapping of wing keys");
         }
         if (root.isEmpty()) {
-            throw new InputException(file, 1, "", "the file is empty; expected a YAML mapping");
+            throw new InputException(file, 1, "", (text.isBlank() ? "the file is empty" : "the file holds only comments")
+                    + "; expected a wing description (a mapping with at least 'units' and 'surfaces')");
         }
-        return convert(root.get(), file);
+        return convert(root.get(), file, "");
+    }
+
+    /**
+     * Walks the event stream (no recursion, so any depth is safe) and refuses too deep a nesting and an
+     * alias to a list or mapping that is still open (which would make the tree contain itself).
+     */
+    private static void checkStructure(Iterable<Event> events, String file) {
+        Deque<Optional<Anchor>> open = new ArrayDeque<>();
+        for (Event e : events) {
+            switch (e.getEventId()) {
+                case SequenceStart, MappingStart -> {
+                    open.push(((NodeEvent) e).getAnchor());
+                    if (open.size() > MAX_DEPTH) {
+                        throw new InputException(file, line(e.getStartMark()), "", "lists and mappings nested "
+                                + open.size() + " deep; expected at most " + MAX_DEPTH + " levels");
+                    }
+                }
+                case SequenceEnd, MappingEnd -> open.pop();
+                case Alias -> {
+                    Anchor a = ((AliasEvent) e).getAlias();
+                    if (open.stream().anyMatch(o -> o.isPresent() && o.get().equals(a))) {
+                        throw new InputException(file, line(e.getStartMark()), "", "the alias *" + a.getValue()
+                                + " refers to the list or mapping that contains it; expected a value that does "
+                                + "not contain itself");
+                    }
+                }
+                default -> {
+                }
+            }
+        }
+    }
+
+    private static InputException syntaxError(MarkedYamlEngineException e, String text, String file) {
+        String problem = firstLine(e.getProblem());
+        int line = e.getProblemMark().map(m -> m.getLine() + 1).orElse(0);
+        int last = lastContentLine(text);
+        if (problem.contains("(TAB)")) {
+            return new InputException(file, line, "", "a tab character where YAML expects indentation or a value; "
+                    + "expected spaces (YAML is indented with spaces, never tabs)");
+        }
+        if (line > last && e.getContextMark().isPresent()) {
+            // The file ended inside something left open: point at where that began.
+            int start = e.getContextMark().get().getLine() + 1;
+            String what = firstLine(e.getContext()).replaceFirst("^while (parsing|scanning) (an? )?", "");
+            return new InputException(file, start, "", "not valid YAML: the file ends inside the " + what
+                    + " that starts on this line; " + problem.replace("<stream end>", "the end of the file"));
+        }
+        return new InputException(file, Math.min(line, last), "", "not valid YAML: "
+                + problem.replace("<stream end>", "the end of the file"));
+    }
+
+    /** The last line (1-based) holding anything but white space; at least 1. */
+    private static int lastContentLine(String text) {
+        String[] lines = text.split("\r\n|\r|\n", -1);
+        for (int i = lines.length - 1; i >= 0; i--) {
+            if (!lines[i].isBlank()) {
+                return i + 1;
+            }
+        }
+        return 1;
     }
 
     private static String firstLine(String s) {
@@ -64,14 +139,24 @@ public final class YamlParser {
         return (nl < 0 ? s : s.substring(0, nl)).trim();
     }
 
-    private static int line(Node node) {
-        return node.getStartMark().map(Mark::getLine).orElse(-1) + 1;
+    private static int line(Optional<Mark> mark) {
+        return mark.map(Mark::getLine).orElse(-1) + 1;
     }
 
-    private static YamlValue convert(Node node, String file) {
+    private static int line(Node node) {
+        return line(node.getStartMark());
+    }
+
+    private static String child(String path, String key) {
+        return path.isEmpty() ? key : path + "." + key;
+    }
+
+    private static YamlValue convert(Node node, String file, String path) {
         if (!STANDARD_TAGS.contains(node.getTag())) {
-            throw new InputException(file, line(node), "",
-                    "type tags are not allowed (found " + node.getTag().getValue() + ")");
+            String tag = node.getTag().getValue();
+            tag = tag.startsWith(Tag.PREFIX) ? "!!" + tag.substring(Tag.PREFIX.length()) : tag;
+            throw new InputException(file, line(node), path, "type tags such as " + tag
+                    + " are not accepted; expected a plain value without a tag");
         }
         if (node instanceof ScalarNode s) {
             return new YamlValue.Scalar(s.getValue(), s.isPlain(), line(node));
@@ -79,26 +164,31 @@ public final class YamlParser {
         if (node instanceof SequenceNode seq) {
             List<YamlValue> items = new ArrayList<>();
             for (Node item : seq.getValue()) {
-                items.add(convert(item, file));
+                items.add(convert(item, file, path + "[" + items.size() + "]"));
             }
             return new YamlValue.Sequence(items, line(node));
         }
         MappingNode map = (MappingNode) node;
         List<YamlValue.Entry> entries = new ArrayList<>();
-        Set<String> seen = new HashSet<>();
+        Map<String, Integer> seen = new HashMap<>();
         for (NodeTuple t : map.getValue()) {
             Node k = t.getKeyNode();
             if (!(k instanceof ScalarNode ks) || !STANDARD_TAGS.contains(k.getTag())) {
-                throw new InputException(file, line(k), "", "keys must be plain names");
+                throw new InputException(file, line(k), path, "a key that is a list, a mapping or tagged; "
+                        + "expected plain names as keys");
             }
             String key = ks.getValue();
+            String keyPath = child(path, key);
             if (key.equals("<<")) {
-                throw new InputException(file, line(k), key, "merge keys are not supported; write the keys out");
+                throw new InputException(file, line(k), keyPath, "merge keys are not supported; "
+                        + "expected the keys written out");
             }
-            if (!seen.add(key)) {
-                throw new InputException(file, line(k), key, "duplicate key; each key may appear once");
+            Integer first = seen.putIfAbsent(key, line(k));
+            if (first != null) {
+                throw new InputException(file, line(k), keyPath, "duplicate key (first given on line " + first
+                        + "); expected each key once");
             }
-            entries.add(new YamlValue.Entry(key, line(k), convert(t.getValueNode(), file)));
+            entries.add(new YamlValue.Entry(key, line(k), convert(t.getValueNode(), file, keyPath)));
         }
         return new YamlValue.Mapping(entries, line(node));
     }

@@ -22,7 +22,8 @@ public sealed interface YamlValue permits YamlValue.Scalar, YamlValue.Mapping, Y
     record Scalar(String text, boolean plain, int line) implements YamlValue {
         @Override
         public String describe() {
-            return plain ? "'" + text + "'" : "the text \"" + text + "\"";
+            String shown = text.length() > 40 ? text.substring(0, 37) + "..." : text;
+            return plain ? "'" + shown + "'" : "the quoted text \"" + shown + "\"";
         }
 
         public boolean isNull() {

@@ -1,0 +1,152 @@
+package org.spanlift.io;
+
+import static org.junit.jupiter.api.Assertions.assertAll;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.stream.Collectors;
+import java.util.stream.Stream;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+/**
+ * Every malformed wing file under {@code bad-wings/} is refused with one line of the form
+ * {@code FILE:LINE: FIELD: what is wrong; what is expected}, naming the right line and field.
+ */
+class BadWingFileTest {
+
+    private static final Path BAD = Path.of("src", "test", "resources", "bad-wings");
+
+    /** file | line | field path (empty: the fault is in the YAML itself) | fragment of the message. */
+    private static final String TABLE = """
+            missing-units               | 2  | units                                   | missing key; expected the length unit of the file: m, ft or in
+            missing-surfaces            | 1  | surfaces                                | missing key; expected a list of surfaces
+            missing-station-y           | 6  | surfaces[0].stations[1].y               | missing key; expected the station's spanwise position
+            missing-station-chord       | 7  | surfaces[0].stations[1].chord           | missing key; expected the local chord
+            missing-control-kind        | 6  | surfaces[0].controls[0].kind            | missing key; expected flap or aileron
+            empty-required-value        | 6  | surfaces[0].stations[0].chord           | the key has no value; expected the local chord
+            empty-optional-value        | 7  | surfaces[0].trapezoid.washout           | the key has no value; expected a value, or leave the key out
+            unknown-top-key             | 2  | colour                                  | unknown key; expected one of name, reference, sections, surfaces, units
+            unknown-surface-key         | 4  | surfaces[0].mirrored                    | unknown key; expected one of controls, elliptic, lattice, mirror,
+            unknown-station-key         | 6  | surfaces[0].stations[1].incidence       | unknown key; expected one of chord, nose-x, nose-z, section, twist, y
+            unknown-trapezoid-key       | 7  | surfaces[0].trapezoid.tip-chord         | unknown key; expected one of dihedral, root-chord, root-nose,
+            unknown-control-key         | 11 | surfaces[0].controls[0].hinge           | unknown key; expected one of chord-fraction, deflection, from, kind,
+            unknown-lattice-key         | 5  | surfaces[0].lattice.columns             | unknown key; expected one of row-spacing, rows, strip-spacing, strips
+            unknown-section-key         | 9  | sections.main.thickness                 | unknown key; expected one of camber
+            unknown-reference-key       | 2  | reference.mac                           | unknown key; expected one of area, chord, moment-point, span
+            chord-is-list               | 5  | surfaces[0].stations[0].chord           | expected a number, got a list
+            span-is-text                | 4  | surfaces[0].trapezoid.span              | expected a decimal number (such as 1.25 or 3e-2), got 'wide'
+            quoted-number               | 4  | surfaces[0].trapezoid.root-chord        | expected a number, got the quoted text "1.2"; write numbers without quotes
+            number-with-suffix          | 4  | surfaces[0].trapezoid.root-chord        | expected a decimal number (such as 1.25 or 3e-2), got '1.2f'
+            mirror-not-boolean          | 4  | surfaces[0].mirror                      | expected true or false, got 'yes'
+            negative-chord              | 6  | surfaces[0].stations[1].chord           | must not be negative, got -0.2; expected a tip chord of 0 or more
+            zero-chord-inner-station    | 6  | surfaces[0].stations[1].chord           | must be positive, got 0; expected a chord above 0 (only the tip station may have zero chord)
+            stations-not-increasing     | 7  | surfaces[0].stations[2].y               | is 2.5, after a station at 3; expected stations in increasing y
+            mirrored-root-below-zero    | 6  | surfaces[0].stations[0].y               | the root is at -0.5, but a mirrored surface is described on its right half; expected a root y of 0 or more
+            absurd-length               | 4  | surfaces[0].trapezoid.span              | beyond any wing; expected a length within 10000 m
+            control-outside-span        | 6  | surfaces[0].controls[0].to              | 6 lies outside the surface; expected a y from 0 to 4.5
+            control-from-not-below-to   | 6  | surfaces[0].controls[0].to              | is 2.5, not beyond 'from' (2.5); expected the outer end, greater than 'from'
+            controls-overlap            | 7  | surfaces[0].controls[1].from            | overlaps control 'flap' (y from 0.5 to 2.5); expected controls that do not overlap
+            duplicate-control-name      | 7  | surfaces[0].controls[1].name            | another control has the name 'flap'; expected a name no other control
+            duplicate-surface-name      | 5  | surfaces[1].name                        | another surface has the name 'wing'; expected a name no other surface has
+            chord-fraction-zero         | 6  | surfaces[0].controls[0].chord-fraction  | is 0; expected a fraction of the local chord between 0 and 1, both excluded
+            chord-fraction-one          | 6  | surfaces[0].controls[0].chord-fraction  | is 1; expected a fraction of the local chord between 0 and 1, both excluded
+            chord-fraction-above-one    | 6  | surfaces[0].controls[0].chord-fraction  | is 1.3; expected a fraction of the local chord between 0 and 1, both excluded
+            aileron-unmirrored          | 9  | surfaces[0].controls[0].kind            | an aileron deflects antisymmetrically and needs a mirrored surface; expected kind flap
+            unknown-section-name        | 4  | surfaces[0].section                     | unknown section 'main'; expected flat or one of the file's sections: inner
+            flat-section-redefined      | 6  | sections.flat                           | the section name 'flat' is built in
+            unknown-units               | 1  | units                                   | expected one of m, ft, in, got 'furlong'
+            newline-in-text             | 1  | units                                   | expected one of m, ft, in, got 'm\\nft'
+            unknown-camber              | 7  | sections.main.camber                    | unknown camber designation 'NACA 24x2'; expected flat, NACA MPTT (four-digit
+            camber-without-position     | 7  | sections.main.camber                    | the camber designation 'NACA 4012' has camber but no camber position (its second digit is 0)
+            strips-zero                 | 5  | surfaces[0].lattice.strips              | must be from 1 to 400, got 0
+            strips-huge                 | 5  | surfaces[0].lattice.strips              | must be from 1 to 400, got 100000
+            rows-huge                   | 5  | surfaces[0].lattice.rows                | must be from 1 to 64, got 500
+            strips-fractional           | 5  | surfaces[0].lattice.strips              | expected a whole number, got 12.5
+            too-few-strips-for-cuts     | 8  | surfaces[0].lattice.strips              | 3 strips cannot place a strip edge on each of the surface's 4 control ends and stations; expected at least 5 strips
+            one-row-with-controls       | 7  | surfaces[0].lattice.rows                | is 1, but the surface has controls; expected at least 2 rows
+            too-many-panels             | 5  | surfaces[0].lattice                     | the lattice would have 51200 panels over the whole wing; expected at most 12000
+            stations-and-trapezoid      | 7  | surfaces[0].trapezoid                   | the surface already has 'stations' (line 4); expected only one of stations, trapezoid or elliptic
+            no-planform                 | 3  | surfaces[0]                             | missing the planform; expected one of the keys stations, trapezoid or elliptic
+            no-surfaces-listed          | 2  | surfaces                                | expected at least one surface
+            nan-dot                     | 4  | surfaces[0].trapezoid.span              | expected a finite number, got .nan
+            nan-word                    | 4  | surfaces[0].trapezoid.root-chord        | expected a finite number, got NaN
+            infinity                    | 6  | surfaces[0].stations[1].y               | expected a finite number, got .inf
+            duplicate-key               | 7  | surfaces[0].trapezoid.span              | duplicate key (first given on line 5); expected each key once
+            type-tag                    | 3  | surfaces[0].name                        | type tags such as !!python/object:os.system are not accepted; expected a plain value
+            not-a-mapping               | 1  |                                         | expected a mapping of keys, got a list
+            empty                       | 1  |                                         | the file is empty; expected a wing description
+            comment-only                | 1  |                                         | the file holds only comments; expected a wing description
+            unbalanced-brackets         | 4  |                                         | not valid YAML: the file ends inside the flow sequence that starts on this line; expected ',' or ']'
+            tab-indented                | 5  |                                         | a tab character where YAML expects indentation or a value; expected spaces
+            recursive-alias             | 5  |                                         | the alias *loop refers to the list or mapping that contains it
+            deep-nesting                | 2  |                                         | lists and mappings nested 33 deep; expected at most 32 levels
+            """;
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = '|', quoteCharacter = '`', textBlock = TABLE)
+    void malformedFileIsRefusedWithOneLineNamingLineFieldAndExpectation(String name, int line, String field,
+            String fragment) {
+        Path path = BAD.resolve(name + ".wing.yaml");
+        String fieldPath = field == null ? "" : field;
+        InputException e = assertThrows(InputException.class, () -> WingFileReader.read(path));
+        String message = e.getMessage();
+        String prefix = path + ":" + line + ": " + (fieldPath.isEmpty() ? "" : fieldPath + ": ");
+        assertAll(
+                () -> assertFalse(message.contains("\n") || message.contains("\r"), "one line: " + message),
+                () -> assertTrue(message.startsWith(prefix), "expected to start with [" + prefix + "]: " + message),
+                () -> assertEquals(line, e.line(), message),
+                () -> assertEquals(fieldPath, e.field(), message),
+                () -> assertTrue(message.contains(fragment), "expected [" + fragment + "] in: " + message),
+                () -> assertTrue(e.problem().contains("expected") || e.problem().contains("must"),
+                        "says what is expected: " + message));
+    }
+
+    @Test
+    void everyBadFileHasARowInTheTable() throws IOException {
+        Set<String> listed = Arrays.stream(TABLE.strip().split("\n")).map(r -> r.split("\\|")[0].trim())
+                .collect(Collectors.toCollection(TreeSet::new));
+        Set<String> files;
+        try (Stream<Path> s = Files.list(BAD)) {
+            files = s.map(p -> p.getFileName().toString()).filter(n -> n.endsWith(".wing.yaml"))
+                    .map(n -> n.substring(0, n.length() - ".wing.yaml".length()))
+                    .collect(Collectors.toCollection(TreeSet::new));
+        }
+        assertEquals(files, listed);
+        assertTrue(files.size() >= 30, "at least 30 bad files, found " + files.size());
+    }
+
+    @Test
+    void missingFileIsOneLineNamingThePath(@TempDir Path dir) {
+        Path path = dir.resolve("absent.wing.yaml");
+        InputException e = assertThrows(InputException.class, () -> WingFileReader.read(path));
+        assertEquals(path + ": no such file; expected the path of a wing file", e.getMessage());
+    }
+
+    @Test
+    void fileThatIsNotUtf8IsRefusedAsSuch(@TempDir Path dir) throws IOException {
+        Path path = dir.resolve("latin1.wing.yaml");
+        Files.write(path, new byte[] {'n', 'a', 'm', 'e', ':', ' ', (byte) 0xE9, '\n'});
+        InputException e = assertThrows(InputException.class, () -> WingFileReader.read(path));
+        assertEquals(path + ": the file is not UTF-8 text; expected a wing file saved as UTF-8", e.getMessage());
+    }
+
+    @Test
+    void controlCharactersInEchoedTextStayOnOneLine() {
+        InputException e = new InputException("f.wing.yaml", 3, "name", List.of("a\r\nb", "c\u0007d")
+                .toString());
+        assertEquals("f.wing.yaml:3: name: [a\\r\\nb, c\\u0007d]", e.getMessage());
+    }
+}
