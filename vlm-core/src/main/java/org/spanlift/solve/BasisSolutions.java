@@ -48,9 +48,16 @@ public final class BasisSolutions {
         }
         double[][] controlSolutions = new double[controlList.size()][];
         if (useSymmetry && lattice.mirrored()) {
-            InfluenceSystem symmetric = InfluenceSystem.of(lattice, Symmetry.SYMMETRIC);
             boolean anyAileron = controlList.stream().anyMatch(c -> c.kind() == ControlKind.AILERON);
-            InfluenceSystem antisymmetric = anyAileron ? InfluenceSystem.of(lattice, Symmetry.ANTISYMMETRIC) : null;
+            InfluenceSystem symmetric;
+            InfluenceSystem antisymmetric = null;
+            if (anyAileron) {
+                InfluenceSystem.Pair pair = InfluenceSystem.pair(lattice);
+                symmetric = pair.symmetric();
+                antisymmetric = pair.antisymmetric();
+            } else {
+                symmetric = InfluenceSystem.of(lattice, Symmetry.SYMMETRIC);
+            }
             double[] x = expand(lattice, symmetric, rhsX, 1);
             double[] z = expand(lattice, symmetric, rhsZ, 1);
             for (int c = 0; c < controlList.size(); c++) {

@@ -53,6 +53,41 @@ public final class InfluenceSystem {
         return new InfluenceSystem(symmetry, assemble(lattice, symmetry));
     }
 
+    /** The symmetric and antisymmetric systems of a mirrored lattice. */
+    public record Pair(InfluenceSystem symmetric, InfluenceSystem antisymmetric) {
+    }
+
+    /**
+     * Both half-span systems from one pass over the influences: each direct term D and image term M is
+     * evaluated once, and A_sym = D + M, A_anti = D - M.
+     */
+    public static Pair pair(Lattice lattice) {
+        if (!lattice.mirrored()) {
+            throw new IllegalArgumentException("a symmetric pair of systems needs a mirrored lattice");
+        }
+        int n = lattice.halfCount();
+        DMatrixRMaj sym = new DMatrixRMaj(n, n);
+        DMatrixRMaj anti = new DMatrixRMaj(n, n);
+        double[] v = new double[3];
+        for (int i = 0; i < n; i++) {
+            double px = lattice.cx(i);
+            double py = lattice.cy(i);
+            double pz = lattice.cz(i);
+            double nx = lattice.nx(i);
+            double ny = lattice.ny(i);
+            double nz = lattice.nz(i);
+            for (int j = 0; j < n; j++) {
+                HorseshoeKernel.velocity(lattice, j, px, py, pz, v);
+                double direct = v[0] * nx + v[1] * ny + v[2] * nz;
+                HorseshoeKernel.velocity(lattice, j + n, px, py, pz, v);
+                double image = v[0] * nx + v[1] * ny + v[2] * nz;
+                sym.data[i * n + j] = direct + image;
+                anti.data[i * n + j] = direct - image;
+            }
+        }
+        return new Pair(new InfluenceSystem(Symmetry.SYMMETRIC, sym), new InfluenceSystem(Symmetry.ANTISYMMETRIC, anti));
+    }
+
     /** The influence matrix alone (for tests and benchmarks). */
     public static DMatrixRMaj assemble(Lattice lattice, Symmetry symmetry) {
         if (symmetry != Symmetry.FULL && !lattice.mirrored()) {
