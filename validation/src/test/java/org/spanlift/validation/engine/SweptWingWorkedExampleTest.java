@@ -50,7 +50,8 @@ class SweptWingWorkedExampleTest {
 
     @Test
     void circulationsToThePrintedThreeFigures() {
-        // The engine's values rounded to the three significant figures the example prints must equal them.
+        // As recalled from memory, the example prints three significant figures (and sums them to its
+        // 3.443). The engine's values rounded to that precision must equal them exactly.
         double[] g = circulations(example());
         double[] rounded = new double[4];
         for (int i = 0; i < 4; i++) {
