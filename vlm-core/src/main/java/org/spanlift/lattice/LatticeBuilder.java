@@ -84,7 +84,7 @@ public final class LatticeBuilder {
             int hingeRow = rows;
             if (control != null) {
                 hingeRow = nearestInterior(rowEdges, control.hingeFraction());
-                rowEdges[hingeRow] = control.hingeFraction();
+                rowEdges[hingeRow] = hingeEdge(control.hingeFraction(), rowEdges[hingeRow - 1], rowEdges[hingeRow + 1]);
             }
             int controlIndex = control == null ? -1 : allControls.indexOf(control);
             out.addStrip(surfaceIndex, shape, wing, y0, y1, yc, rowEdges, hingeRow, controlIndex);
@@ -98,6 +98,18 @@ public final class LatticeBuilder {
             }
         }
         return null;
+    }
+
+    /**
+     * The row edge for a hinge at chord fraction h, between the edges before and after it: placed so that the
+     * bound leg of the first deflected row (a quarter of that row aft of its leading edge) lies on the hinge
+     * line, where the deflected vorticity of a plain flap begins. Putting the row edge on the hinge itself
+     * would leave the discrete hinge a quarter row aft and the flap's effectiveness short at first order in
+     * the row count. Falls back to h when the row ahead would vanish.
+     */
+    static double hingeEdge(double h, double before, double after) {
+        double edge = (h - 0.25 * after) / 0.75;
+        return edge > before + 1e-9 ? edge : h;
     }
 
     private static int nearestInterior(double[] edges, double x) {

@@ -1,10 +1,10 @@
 package org.spanlift.validation.engine;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
@@ -65,8 +65,9 @@ class CamberAndFlapTest {
         // three lattices are one family refined by halving, which Richardson extrapolation needs. (Cosine
         // rows move the nearest edge onto the hinge by a different fraction of a row each time, and the
         // sequence does not converge smoothly: -0.5673, -0.5847, -0.5988, -0.6027 at 8, 16, 32, 64 rows.)
-        // Measured: -0.57649, -0.59254, -0.60089; observed order 0.94, extrapolated -0.6100 against
-        // Glauert's -0.6090.
+        // Measured with the hinge-consistent row edge (LatticeBuilder.hingeEdge): -0.61858, -0.61308,
+        // -0.61099; observed order 1.40, extrapolated -0.6097 against Glauert's -0.6090. (With the row edge on
+        // the hinge itself: -0.57649, -0.59254, -0.60089, order 0.94.)
         double[] f = new double[3];
         int[] rows = {8, 16, 32};
         for (int i = 0; i < 3; i++) {
@@ -75,22 +76,19 @@ class CamberAndFlapTest {
         double ratio = (f[1] - f[0]) / (f[2] - f[1]);
         double order = Math.log(ratio) / Math.log(2);
         double extrapolated = f[2] + (f[2] - f[1]) / (ratio - 1);
-        // First order is expected: the slope of the deflected mean line jumps at the hinge. A quarter either
-        // way allows for the second error term at 8 rows; the extrapolation means nothing outside that.
-        assertEquals(1, order, 0.25, "observed order");
+        // At least first order is expected: the slope of the deflected mean line jumps at the hinge, and the
+        // row edge placed so that the first deflected bound leg lies on the hinge removes only the leading
+        // part of that error. Below first order the extrapolation would mean nothing.
+        assertTrue(order > 0.75 && order < 2.5, "observed order " + order);
         double tau = ThinAirfoil.flapEffectiveness(FLAP_CHORD);
         assertEquals(-tau, extrapolated, 0.03 * tau);
     }
 
     @Test
-    @Disabled("Engine accuracy defect: at the default lattice (24 x 6 cosine) d alpha0/d delta is -0.557,"
-            + " 8.5% short of Glauert's -0.609. LatticeBuilder puts the hinge on a row edge; with the 1/4-3/4"
-            + " rule the discrete hinge sits between the control points either side of it, on the bound leg of"
-            + " the first deflected row, i.e. a quarter row aft of the true hinge, so the flap is too short by"
-            + " a quarter row (first-order error). Proposed fix: put the row edge a quarter of the first"
-            + " deflected row's chord ahead of the hinge, so that row's bound leg lies on the hinge line.")
     void flapEffectivenessAtTheDefaultLattice() {
         // Same 3% as the extrapolated check: what a designer gets without refining should be as good.
+        // Measured: -0.6221 at 24 x 6 cosine (2.2% above), against -0.557 (8.5% short) before the
+        // hinge-consistent row edge.
         double tau = ThinAirfoil.flapEffectiveness(FLAP_CHORD);
         assertEquals(-tau, zeroLiftAnglePerDeflection(LatticeSpec.DEFAULT), 0.03 * tau);
     }
