@@ -59,8 +59,6 @@ class SweptWingWorkedExampleTest {
         assertArrayEquals(new double[] {0.0273, 0.0287, 0.0286, 0.0250}, rounded, 1e-12);
     }
 
-    }
-
     @Test
     void engineMatchesAnIndependentHorseshoeSolveOfTheSameLattice() {
         // The same four-by-four system written out from the Biot-Savart law with image horseshoes, solved
