@@ -31,6 +31,10 @@ public final class Lattice {
     private final int half;
     private final boolean mirrored;
     private final int rowsMax;
+    private final double[] trailing;   // unique trailing-leg start points, xyz
+    private final double[] trailingCutoff;
+    private final int[] aPoint;        // index of panel's A among the trailing points
+    private final int[] bPoint;
 
     Lattice(double[] a, double[] b, double[] control, double[] normal, double[] incidence, double[] cutoff,
             int[] stripOf, int[] controlOf, double[] controlSign, List<Strip> strips, int half,
@@ -48,6 +52,77 @@ public final class Lattice {
         this.half = half;
         this.mirrored = mirrored;
         this.rowsMax = rowsMax;
+        int n = stripOf.length;
+        this.aPoint = new int[n];
+        this.bPoint = new int[n];
+        java.util.Map<Vec, Integer> index = new java.util.HashMap<>();
+        java.util.List<Vec> points = new java.util.ArrayList<>();
+        java.util.List<Double> cut = new java.util.ArrayList<>();
+        for (int p = 0; p < n; p++) {
+            aPoint[p] = pointIndex(new Vec(a[3 * p], a[3 * p + 1], a[3 * p + 2]), cutoff[p], index, points, cut);
+            bPoint[p] = pointIndex(new Vec(b[3 * p], b[3 * p + 1], b[3 * p + 2]), cutoff[p], index, points, cut);
+        }
+        this.trailing = new double[3 * points.size()];
+        this.trailingCutoff = new double[points.size()];
+        for (int k = 0; k < points.size(); k++) {
+            trailing[3 * k] = points.get(k).x();
+            trailing[3 * k + 1] = points.get(k).y();
+            trailing[3 * k + 2] = points.get(k).z();
+            trailingCutoff[k] = cut.get(k);
+        }
+    }
+
+    /** A point compared by exact coordinates. */
+    private record Vec(double x, double y, double z) {
+    }
+
+    private static int pointIndex(Vec v, double cutoff, java.util.Map<Vec, Integer> index, java.util.List<Vec> points,
+            java.util.List<Double> cut) {
+        Integer k = index.get(v);
+        if (k == null) {
+            k = points.size();
+            index.put(v, k);
+            points.add(v);
+            cut.add(cutoff);
+        } else {
+            cut.set(k, Math.min(cut.get(k), cutoff));
+        }
+        return k;
+    }
+
+    /**
+     * Number of distinct trailing-leg start points: adjacent panels of a row share the point where one's
+     * bound leg ends and the next one's begins, and so share that trailing leg.
+     */
+    public int trailingPointCount() {
+        return trailingCutoff.length;
+    }
+
+    /** Index of the trailing point at the start A of panel p's bound leg. */
+    public int trailingPointA(int p) {
+        return aPoint[p];
+    }
+
+    /** Index of the trailing point at the end B of panel p's bound leg. */
+    public int trailingPointB(int p) {
+        return bPoint[p];
+    }
+
+    public double trailingX(int k) {
+        return trailing[3 * k];
+    }
+
+    public double trailingY(int k) {
+        return trailing[3 * k + 1];
+    }
+
+    public double trailingZ(int k) {
+        return trailing[3 * k + 2];
+    }
+
+    /** The cut-off of a trailing point: the smallest of those of the panels sharing it. */
+    public double trailingCutoff(int k) {
+        return trailingCutoff[k];
     }
 
     /** Number of panels on the whole surface, both halves. */

@@ -68,21 +68,13 @@ public final class InfluenceSystem {
         int n = lattice.halfCount();
         DMatrixRMaj sym = new DMatrixRMaj(n, n);
         DMatrixRMaj anti = new DMatrixRMaj(n, n);
-        double[] v = new double[3];
+        double[] row = new double[lattice.panelCount()];
+        double[] trailing = new double[lattice.trailingPointCount()];
         for (int i = 0; i < n; i++) {
-            double px = lattice.cx(i);
-            double py = lattice.cy(i);
-            double pz = lattice.cz(i);
-            double nx = lattice.nx(i);
-            double ny = lattice.ny(i);
-            double nz = lattice.nz(i);
+            influenceRow(lattice, i, row, trailing);
             for (int j = 0; j < n; j++) {
-                HorseshoeKernel.velocity(lattice, j, px, py, pz, v);
-                double direct = v[0] * nx + v[1] * ny + v[2] * nz;
-                HorseshoeKernel.velocity(lattice, j + n, px, py, pz, v);
-                double image = v[0] * nx + v[1] * ny + v[2] * nz;
-                sym.data[i * n + j] = direct + image;
-                anti.data[i * n + j] = direct - image;
+                sym.data[i * n + j] = row[j] + row[j + n];
+                anti.data[i * n + j] = row[j] - row[j + n];
             }
         }
         return new Pair(new InfluenceSystem(Symmetry.SYMMETRIC, sym), new InfluenceSystem(Symmetry.ANTISYMMETRIC, anti));
@@ -97,26 +89,47 @@ public final class InfluenceSystem {
         int half = lattice.halfCount();
         double sign = symmetry == Symmetry.ANTISYMMETRIC ? -1 : 1;
         DMatrixRMaj a = new DMatrixRMaj(n, n);
-        double[] data = a.data;
-        double[] v = new double[3];
+        double[] row = new double[lattice.panelCount()];
+        double[] trailing = new double[lattice.trailingPointCount()];
         for (int i = 0; i < n; i++) {
-            double px = lattice.cx(i);
-            double py = lattice.cy(i);
-            double pz = lattice.cz(i);
-            double nx = lattice.nx(i);
-            double ny = lattice.ny(i);
-            double nz = lattice.nz(i);
+            influenceRow(lattice, i, row, trailing);
             for (int j = 0; j < n; j++) {
-                HorseshoeKernel.velocity(lattice, j, px, py, pz, v);
-                double w = v[0] * nx + v[1] * ny + v[2] * nz;
-                if (symmetry != Symmetry.FULL) {
-                    HorseshoeKernel.velocity(lattice, j + half, px, py, pz, v);
-                    w += sign * (v[0] * nx + v[1] * ny + v[2] * nz);
-                }
-                data[i * n + j] = w;
+                a.data[i * n + j] = symmetry == Symmetry.FULL ? row[j] : row[j] + sign * row[j + half];
             }
         }
         return a;
+    }
+
+    /**
+     * Writes into {@code row} (length panel count, overwritten) the normalwash at control point i of every
+     * horseshoe at unit circulation; {@code trailing} (length trailing-point count) is work space. Each
+     * shared trailing leg is evaluated once.
+     */
+    static void influenceRow(Lattice lattice, int i, double[] row, double[] trailing) {
+        double px = lattice.cx(i);
+        double py = lattice.cy(i);
+        double pz = lattice.cz(i);
+        double nx = lattice.nx(i);
+        double ny = lattice.ny(i);
+        double nz = lattice.nz(i);
+        double[] v = new double[3];
+        for (int k = 0; k < trailing.length; k++) {
+            v[0] = 0;
+            v[1] = 0;
+            v[2] = 0;
+            HorseshoeKernel.trailing(lattice.trailingX(k), lattice.trailingY(k), lattice.trailingZ(k), px, py, pz,
+                    lattice.trailingCutoff(k), 1, v);
+            trailing[k] = v[1] * ny + v[2] * nz;
+        }
+        for (int j = 0; j < row.length; j++) {
+            v[0] = 0;
+            v[1] = 0;
+            v[2] = 0;
+            HorseshoeKernel.segment(lattice.ax(j), lattice.ay(j), lattice.az(j), lattice.bx(j), lattice.by(j),
+                    lattice.bz(j), px, py, pz, lattice.cutoff(j), v);
+            row[j] = v[0] * nx + v[1] * ny + v[2] * nz + trailing[lattice.trailingPointB(j)]
+                    - trailing[lattice.trailingPointA(j)];
+        }
     }
 
     public Symmetry symmetry() {
