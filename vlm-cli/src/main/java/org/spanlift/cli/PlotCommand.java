@@ -1,0 +1,95 @@
+package org.spanlift.cli;
+
+import java.nio.file.Path;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.concurrent.Callable;
+
+import org.spanlift.cli.options.AlphaList;
+import org.spanlift.cli.options.FlightOptions;
+import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.OutputOptions;
+import org.spanlift.cli.plot.Figure;
+import org.spanlift.cli.plot.FigureOutput;
+import org.spanlift.cli.plot.PlotKind;
+import org.spanlift.cli.plot.Plots;
+import org.spanlift.geometry.Wing;
+import org.spanlift.io.InputException;
+import org.spanlift.io.WingFileReader;
+import org.spanlift.solve.WingAnalysis;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code spanlift plot}: one figure of one wing, as SVG or PNG. */
+@Command(name = "plot", mixinStandardHelpOptions = true,
+        description = "Draw one figure of a wing as SVG or PNG: its planform and lattice, its span load, its lift "
+                + "curve or its induced-drag polar.")
+public final class PlotCommand implements Callable<Integer> {
+
+    /** The lift coefficient of the span load when no angle is given. */
+    static final double DEFAULT_CL = 0.5;
+    static final String DEFAULT_RANGE = "-4:14:1";
+
+    @Parameters(index = "0", paramLabel = "FILE", description = "The wing file (.wing.yaml).")
+    Path file;
+
+    @Option(names = {"-w", "--what"}, paramLabel = "KIND", required = true,
+            description = "What to draw: planform, span-load, lift or polar.")
+    String what;
+
+    @Option(names = {"-a", "--alpha"}, paramLabel = "DEG",
+            description = "span-load: the angle of attack in degrees (default: the angle where CL = 0.5). lift and "
+                    + "polar: the angles, a list 0,2,4 or a range from:to:step (default " + DEFAULT_RANGE + ").")
+    String alpha;
+
+    @Mixin
+    OutputOptions output;
+
+    @Mixin
+    FlightOptions flight;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PlotKind kind = PlotKind.parse(what);
+        Format format = FigureOutput.format(output, EnumSet.of(Format.SVG, Format.PNG));
+        Wing wing = WingFileReader.read(file);
+        WingAnalysis analysis = WingAnalysis.of(wing);
+        double[] deflections = analysis.deflections(flight.deflections(wing));
+        Figure figure = switch (kind) {
+            case PLANFORM -> Plots.planform(analysis);
+            case SPAN_LOAD -> Plots.spanLoad(analysis, analysis.solve(spanLoadAlpha(analysis, deflections),
+                    deflections));
+            case LIFT -> Plots.liftCurve(analysis, deflections, range());
+            case POLAR -> Plots.polar(analysis, deflections, range());
+        };
+        FigureOutput.write(figure, format, output, spec.commandLine().getOut());
+        return 0;
+    }
+
+    private double spanLoadAlpha(WingAnalysis analysis, double[] deflections) {
+        if (alpha == null) {
+            return analysis.liftLine(deflections).alphaFor(DEFAULT_CL);
+        }
+        List<Double> one = AlphaList.parse(alpha);
+        if (one.size() != 1) {
+            throw new InputException("--alpha", 0, "", "the span load takes one angle of attack, got " + one.size());
+        }
+        return Math.toRadians(one.get(0));
+    }
+
+    private List<Double> range() {
+        List<Double> list = AlphaList.parse(alpha == null ? DEFAULT_RANGE : alpha);
+        if (list.size() < 2) {
+            throw new InputException("--alpha", 0, "", "a curve needs at least two angles of attack");
+        }
+        return list;
+    }
+}

@@ -1,0 +1,350 @@
+package org.spanlift.cli.plot;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.XYSeries.XYSeriesRenderStyle;
+import org.knowm.xchart.style.Styler.LegendLayout;
+import org.knowm.xchart.style.Styler.LegendPosition;
+import org.knowm.xchart.style.XYStyler;
+import org.knowm.xchart.style.markers.SeriesMarkers;
+import org.spanlift.geometry.ControlSurface;
+import org.spanlift.geometry.LengthUnit;
+import org.spanlift.geometry.Reference;
+import org.spanlift.geometry.Surface;
+import org.spanlift.geometry.Wing;
+import org.spanlift.results.Solution;
+import org.spanlift.results.SpanLoad;
+import org.spanlift.solve.WingAnalysis;
+
+/**
+ * The figures Spanlift draws, built from engine results: the planform, the span load, the lift curve and
+ * the induced-drag polar of one wing, and the overlays that compare several. A stall map will join these
+ * once the engine estimates stall onset; until then there is none, rather than a guess.
+ */
+public final class Plots {
+
+    static final int CHART_WIDTH = 880;
+    static final int CHART_HEIGHT = 500;
+    /**
+     * Points on a theory curve. The charts stroke each segment on its own, so the dash pattern restarts at
+     * every point: segments must be long enough for the dashes to show.
+     */
+    static final int REFERENCE_POINTS = 29;
+
+    private Plots() {
+    }
+
+    // ---------------------------------------------------------------- one wing
+
+    public static PlanformFigure planform(WingAnalysis analysis) {
+        Wing wing = analysis.wing();
+        Map<Integer, String> names = new LinkedHashMap<>();
+        List<ControlSurface> controls = wing.controls();
+        for (int i = 0; i < controls.size(); i++) {
+            names.put(i, controls.get(i).name());
+        }
+        PlanformFigure.Layer layer = new PlanformFigure.Layer(wing.name(), WingGeometry.outlines(wing),
+                WingGeometry.panels(wing, analysis.lattice()), names, Palette.INK, new BasicStroke(1.6f));
+        LengthUnit u = wing.displayUnit();
+        Reference r = wing.reference();
+        int panels = analysis.lattice().panelCount();
+        String subtitle = String.format(Locale.ROOT, "span %s %s  \u00b7  area %s %s\u00b2  \u00b7  aspect ratio %.2f  "
+                + "\u00b7  mean aerodynamic chord %s %s  \u00b7  %d panels", length(r.span(), u), u.symbol(),
+                area(r.area(), u), u.symbol(), r.aspectRatio(), length(r.chord(), u), u.symbol(), panels);
+        String desc = "Top view of " + wing.name() + " to scale, leading edge up: the outline of both halves, the "
+                + panels + " lattice panels, and the control surfaces shaded by kind (flaps hatched one way, "
+                + "ailerons the other).";
+        return new PlanformFigure("planform", "Planform: " + wing.name(), subtitle, desc, List.of(layer), u);
+    }
+
+    /** The span load of the first surface (the wing) at one solved condition. */
+    public static ChartFigure spanLoad(WingAnalysis analysis, Solution s) {
+        Wing wing = analysis.wing();
+        LengthUnit u = wing.displayUnit();
+        Reference r = wing.reference();
+        SpanLoad load = s.spanLoad(0);
+        int n = load.size();
+        double[] y = new double[n];
+        double[] clc = new double[n];
+        double[] cl = new double[n];
+        for (int i = 0; i < n; i++) {
+            y[i] = load.y()[i] / u.metres();
+            clc[i] = load.clc()[i] / r.chord();
+            cl[i] = load.cl()[i];
+        }
+        double wingLift = s.coefficients(0).lift();
+        double[][] ell = ellipticLoad(wing.main(), wingLift * r.area(), r.chord(), u, REFERENCE_POINTS);
+        String title = String.format(Locale.ROOT, "Span load at \u03b1 = %.2f\u00b0 (CL = %.3f)",
+                Math.toDegrees(s.alpha()), s.coefficients().lift());
+        XYChart c = chart(title, "spanwise station y [" + u.symbol() + "], right tip positive",
+                "c\u00b7cl / c_ref  and  cl");
+        XYSeries a = c.addSeries("c\u00b7cl / c_ref, lattice strips", y, clc);
+        style(a, Palette.BLUE, Palette.line(0, 2.2f), SeriesMarkers.CIRCLE);
+        XYSeries b = c.addSeries("elliptic load of the same lift", ell[0], ell[1]);
+        style(b, Palette.INK, Palette.referenceLine(), SeriesMarkers.NONE);
+        XYSeries d = c.addSeries("section cl", y, cl);
+        style(d, Palette.VERMILLION, Palette.line(2, 1.8f), SeriesMarkers.DIAMOND);
+        c.getStyler().setYAxisMin(0.0);
+        String desc = String.format(Locale.ROOT, "Spanwise load of %s at %.2f degrees angle of attack: c times cl "
+                + "over the reference chord %s %s for each lattice strip, the elliptic load carrying the same lift, "
+                + "and the section lift coefficient cl.", surfaceLabel(wing), Math.toDegrees(s.alpha()),
+                length(r.chord(), u), u.symbol());
+        return new ChartFigure("span-load", desc, c);
+    }
+
+    /** CL against alpha at the given deflections. */
+    public static ChartFigure liftCurve(WingAnalysis analysis, double[] deflections, List<Double> alphasDeg) {
+        WingAnalysis.LiftLine line = analysis.liftLine(deflections);
+        double[] a = toArray(alphasDeg);
+        double[] cl = new double[a.length];
+        for (int i = 0; i < a.length; i++) {
+            cl[i] = analysis.solve(Math.toRadians(a[i]), deflections).coefficients().lift();
+        }
+        String title = String.format(Locale.ROOT, "Lift curve: slope %.3f per rad (%.4f per deg), zero lift at %.2f\u00b0",
+                line.slope(), line.slope() * Math.PI / 180, Math.toDegrees(line.zeroLiftAngle()));
+        XYChart c = chart(title, "angle of attack \u03b1 [deg]", "CL  (inviscid linear theory: no stall)");
+        XYSeries s = c.addSeries("CL, " + analysis.wing().name(), a, cl);
+        style(s, Palette.BLUE, Palette.line(0, 2.2f), SeriesMarkers.CIRCLE);
+        XYSeries z = c.addSeries(String.format(Locale.ROOT, "zero-lift angle %.2f\u00b0",
+                Math.toDegrees(line.zeroLiftAngle())), new double[] {Math.toDegrees(line.zeroLiftAngle())},
+                new double[] {0});
+        z.setXYSeriesRenderStyle(XYSeriesRenderStyle.Scatter);
+        z.setMarker(SeriesMarkers.DIAMOND);
+        z.setMarkerColor(Palette.VERMILLION);
+        String desc = String.format(Locale.ROOT, "Lift coefficient against angle of attack from %.1f to %.1f "
+                + "degrees by linear vortex-lattice theory, which does not stall; the lift slope at zero lift is "
+                + "%.3f per radian.", a[0], a[a.length - 1], line.slope());
+        return new ChartFigure("lift-curve", desc, c);
+    }
+
+    /** CL against induced drag at the given deflections, with the elliptic-loading bound. */
+    public static ChartFigure polar(WingAnalysis analysis, double[] deflections, List<Double> alphasDeg) {
+        Wing wing = analysis.wing();
+        double[] a = toArray(alphasDeg);
+        double[] cl = new double[a.length];
+        double[] cd = new double[a.length];
+        for (int i = 0; i < a.length; i++) {
+            var co = analysis.solve(Math.toRadians(a[i]), deflections).coefficients();
+            cl[i] = co.lift();
+            cd[i] = co.inducedDrag();
+        }
+        double ar = wing.reference().aspectRatio();
+        double lo = Math.min(0, min(cl));
+        double hi = Math.max(0, max(cl));
+        int m = REFERENCE_POINTS;
+        double[] rcl = new double[m];
+        double[] rcd = new double[m];
+        for (int i = 0; i < m; i++) {
+            rcl[i] = lo + (hi - lo) * i / (m - 1);
+            rcd[i] = rcl[i] * rcl[i] / (Math.PI * ar);
+        }
+        String eText = "";
+        WingAnalysis.LiftLine line = analysis.liftLine(deflections);
+        if (0.5 < line.slope()) {
+            var at = analysis.solve(line.alphaFor(0.5), deflections).coefficients();
+            if (at.spanEfficiency().isPresent()) {
+                eText = String.format(Locale.ROOT, ": e = %.3f at CL 0.5", at.spanEfficiency().getAsDouble());
+            }
+        }
+        XYChart c = chart("Induced-drag polar" + eText, "CDi  (induced drag only, Trefftz plane; no profile drag)", "CL");
+        XYSeries s = c.addSeries("CL against CDi, " + wing.name(), cd, cl);
+        style(s, Palette.BLUE, Palette.line(0, 2.2f), SeriesMarkers.CIRCLE);
+        XYSeries e = c.addSeries(String.format(Locale.ROOT, "elliptic loading, e = 1 (aspect ratio %.2f)", ar), rcd, rcl);
+        style(e, Palette.INK, Palette.referenceLine(), SeriesMarkers.NONE);
+        c.getStyler().setXAxisMin(0.0);
+        c.getStyler().setXAxisDecimalPattern("0.000");
+        String desc = String.format(Locale.ROOT, "Lift coefficient against induced drag coefficient from %.1f to %.1f "
+                + "degrees angle of attack, beside the parabola of elliptic loading at the same aspect ratio. Profile "
+                + "drag is not included.", a[0], a[a.length - 1]);
+        return new ChartFigure("polar", desc, c);
+    }
+
+    // ---------------------------------------------------------------- several wings
+
+    /** Outlines of several wings overlaid to scale, each in its own file's axes. */
+    public static PlanformFigure planformOverlay(List<Wing> wings, List<String> labels, LengthUnit unit) {
+        List<PlanformFigure.Layer> layers = new ArrayList<>();
+        for (int i = 0; i < wings.size(); i++) {
+            layers.add(new PlanformFigure.Layer(legendLabel(labels.get(i), wings.size()), WingGeometry.outlines(wings.get(i)), List.of(), Map.of(),
+                    Palette.series(i), Palette.line(i, 2f)));
+        }
+        String desc = "Top views of " + wings.size() + " wings overlaid to scale, each in its own file's axes "
+                + "(leading edge up, centreline dash-dotted); outlines only.";
+        return new PlanformFigure("compare-planform", "Planforms overlaid", "outlines to scale, each wing in its "
+                + "own file's axes", desc, layers, unit);
+    }
+
+    /**
+     * Span-load shapes of several wings at the same CL: c cl / (CL S / b) against 2y / b, so every curve
+     * encloses the same area and the elliptic load is 4 / pi sqrt(1 - eta^2).
+     */
+    public static ChartFigure spanLoadOverlay(List<Wing> wings, List<Solution> solutions, List<String> labels,
+            double commonCl) {
+        XYChart c = chart(String.format(Locale.ROOT, "Span-load shapes at CL = %.2f", commonCl),
+                "2y / b  (fraction of the semi-span, right tip at 1)", "c\u00b7cl / (CL \u00b7 S / b)");
+        for (int i = 0; i < wings.size(); i++) {
+            Surface main = wings.get(i).main();
+            Solution s = solutions.get(i);
+            SpanLoad load = s.spanLoad(0);
+            double b = main.span();
+            double mid = main.mirrored() ? 0 : 0.5 * (main.planform().yStart() + main.planform().yEnd());
+            double mean = s.coefficients(0).lift() * wings.get(i).reference().area() / b;
+            double[] eta = new double[load.size()];
+            double[] v = new double[load.size()];
+            for (int k = 0; k < load.size(); k++) {
+                eta[k] = 2 * (load.y()[k] - mid) / b;
+                v[k] = load.clc()[k] / mean;
+            }
+            XYSeries series = c.addSeries(legendLabel(labels.get(i), wings.size()), eta, v);
+            style(series, Palette.series(i), Palette.line(i, 2f), Palette.marker(i));
+        }
+        int m = REFERENCE_POINTS;
+        double[] eta = new double[m];
+        double[] v = new double[m];
+        for (int k = 0; k < m; k++) {
+            double t = Math.PI * k / (m - 1);
+            eta[k] = -Math.cos(t);
+            v[k] = 4 / Math.PI * Math.sin(t);
+        }
+        XYSeries e = c.addSeries("elliptic", eta, v);
+        style(e, Palette.MUTED, Palette.referenceLine(), SeriesMarkers.NONE);
+        c.getStyler().setYAxisMin(0.0);
+        c.getStyler().setXAxisMin(-1.0);
+        c.getStyler().setXAxisMax(1.0);
+        c.getStyler().setMarkerSize(5);
+        String desc = String.format(Locale.ROOT, "Span-load shapes of %d wings at CL %.2f, each normalized by its own "
+                + "mean load CL S / b and plotted against the fraction of its semi-span, with the elliptic shape.",
+                wings.size(), commonCl);
+        return new ChartFigure("compare-span-load", desc, c);
+    }
+
+    /** Lift curves of several wings on common axes. */
+    public static ChartFigure liftOverlay(List<WingAnalysis> analyses, List<String> labels, List<Double> alphasDeg) {
+        XYChart c = chart("Lift curves", "angle of attack \u03b1 [deg]", "CL  (inviscid linear theory: no stall)");
+        double[] a = toArray(alphasDeg);
+        for (int i = 0; i < analyses.size(); i++) {
+            WingAnalysis an = analyses.get(i);
+            double[] d = an.fileDeflections();
+            double[] cl = new double[a.length];
+            for (int k = 0; k < a.length; k++) {
+                cl[k] = an.solve(Math.toRadians(a[k]), d).coefficients().lift();
+            }
+            XYSeries s = c.addSeries(legendLabel(labels.get(i), analyses.size()), a, cl);
+            style(s, Palette.series(i), Palette.line(i, 2f), Palette.marker(i));
+        }
+        String desc = "Lift coefficient against angle of attack for " + analyses.size()
+                + " wings, each on its own reference area, with the deflections of its file.";
+        return new ChartFigure("compare-lift", desc, c);
+    }
+
+    // ---------------------------------------------------------------- helpers
+
+    /** A chart in Spanlift's style: white, light grid, outline text, legend under the plot. */
+    static XYChart chart(String title, String xTitle, String yTitle) {
+        XYChart c = new XYChart(CHART_WIDTH, CHART_HEIGHT);
+        c.setTitle(title);
+        c.setXAxisTitle(xTitle);
+        c.setYAxisTitle(yTitle);
+        XYStyler st = c.getStyler();
+        st.setLocale(Locale.ROOT);
+        st.setChartBackgroundColor(Palette.PAPER);
+        st.setPlotBackgroundColor(Palette.PAPER);
+        st.setChartFontColor(Palette.INK);
+        st.setPlotBorderVisible(true);
+        st.setPlotBorderColor(Palette.MUTED);
+        st.setPlotGridLinesColor(Palette.GRID);
+        st.setPlotGridLinesStroke(new BasicStroke(0.8f));
+        st.setChartTitleFont(Palette.font(Font.BOLD, 16f));
+        st.setChartTitleBoxVisible(false);
+        st.setAxisTitleFont(Palette.font(Font.PLAIN, 13f));
+        st.setAxisTickLabelsFont(Palette.font(Font.PLAIN, 12f));
+        st.setAxisTickLabelsColor(Palette.INK);
+        st.setAxisTickMarksColor(Palette.MUTED);
+        st.setLegendFont(Palette.font(Font.PLAIN, 12f));
+        st.setLegendPosition(LegendPosition.OutsideS);
+        st.setLegendLayout(LegendLayout.Horizontal);
+        st.setLegendBorderColor(Palette.PAPER);
+        st.setLegendBackgroundColor(Palette.PAPER);
+        st.setLegendSeriesLineLength(34);
+        st.setMarkerSize(6);
+        st.setChartPadding(14);
+        st.setPlotContentSize(0.94);
+        st.setAntiAlias(true);
+        st.setToolTipsEnabled(false);
+        st.setDefaultSeriesRenderStyle(XYSeriesRenderStyle.Line);
+        return c;
+    }
+
+    private static void style(XYSeries s, Color colour, BasicStroke stroke, org.knowm.xchart.style.markers.Marker marker) {
+        s.setLineColor(colour);
+        s.setLineStyle(stroke);
+        s.setMarker(marker);
+        s.setMarkerColor(colour);
+    }
+
+    /** The elliptic load c cl / c_ref of a surface carrying lift {@code liftArea} (CL S, m^2). */
+    static double[][] ellipticLoad(Surface surface, double liftArea, double refChord, LengthUnit u, int points) {
+        double b = surface.span();
+        double mid = surface.mirrored() ? 0 : 0.5 * (surface.planform().yStart() + surface.planform().yEnd());
+        double peak = 4 * liftArea / (Math.PI * b);
+        double[] y = new double[points];
+        double[] v = new double[points];
+        for (int k = 0; k < points; k++) {
+            double t = Math.PI * k / (points - 1);
+            y[k] = (mid - 0.5 * b * Math.cos(t)) / u.metres();
+            v[k] = peak * Math.sin(t) / refChord;
+        }
+        return new double[][] {y, v};
+    }
+
+    /** A legend entry short enough that the legends of {@code count} series fit on one line. */
+    static String legendLabel(String label, int count) {
+        int max = Math.max(8, 96 / Math.max(1, count) - 4);
+        return label.length() <= max ? label : label.substring(0, max - 1).stripTrailing() + "\u2026";
+    }
+
+    private static String surfaceLabel(Wing wing) {
+        return wing.surfaces().size() > 1 ? "the surface '" + wing.main().name() + "' of " + wing.name() : wing.name();
+    }
+
+    static String length(double metres, LengthUnit u) {
+        return String.format(Locale.ROOT, "%.3f", metres / u.metres());
+    }
+
+    static String area(double squareMetres, LengthUnit u) {
+        return String.format(Locale.ROOT, "%.3f", squareMetres / (u.metres() * u.metres()));
+    }
+
+    static double[] toArray(List<Double> list) {
+        double[] a = new double[list.size()];
+        for (int i = 0; i < a.length; i++) {
+            a[i] = list.get(i);
+        }
+        return a;
+    }
+
+    private static double min(double[] a) {
+        double m = Double.POSITIVE_INFINITY;
+        for (double v : a) {
+            m = Math.min(m, v);
+        }
+        return m;
+    }
+
+    private static double max(double[] a) {
+        double m = Double.NEGATIVE_INFINITY;
+        for (double v : a) {
+            m = Math.max(m, v);
+        }
+        return m;
+    }
+}

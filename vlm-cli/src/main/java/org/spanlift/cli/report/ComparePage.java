@@ -1,0 +1,98 @@
+package org.spanlift.cli.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.OptionalDouble;
+
+import org.spanlift.cli.plot.Figure;
+import org.spanlift.cli.plot.Plots;
+import org.spanlift.cli.plot.SvgWriter;
+import org.spanlift.geometry.LengthUnit;
+import org.spanlift.geometry.Wing;
+import org.spanlift.results.Solution;
+import org.spanlift.solve.WingAnalysis;
+
+/** The side-by-side comparison page: planforms and span loads overlaid, and the table of differences. */
+public final class ComparePage {
+
+    private ComparePage() {
+    }
+
+    public static String build(Comparison cmp, List<Double> rangeDeg, String version) {
+        List<WingSummary> wings = cmp.wings();
+        List<String> labels = cmp.labels();
+        LengthUnit u = wings.get(0).wing().displayUnit();
+        Html h = Html.page("Spanlift comparison of " + wings.size() + " wings");
+        h.line("<header class=\"title\">");
+        h.el("p", "class=\"kicker\"", "Spanlift wing comparison");
+        h.el("h1", wings.size() + " wings side by side");
+        h.el("p", "class=\"meta\"", "Lengths in " + u.symbol() + " (the first wing's unit), angles in degrees; "
+                + "conditions at the common CL " + Html.fixed(cmp.cl(), 2) + "; differences are from wing "
+                + labels.get(0) + ".");
+        h.line("</header>");
+        h.line("<ul class=\"wings\">");
+        for (int i = 0; i < wings.size(); i++) {
+            Wing w = wings.get(i).wing();
+            h.raw("<li><span class=\"legend-key\">").text(labels.get(i)).raw("</span> ").text(w.name())
+                    .raw(" <span class=\"meta\">(").text(wings.get(i).file().getFileName().toString() + "; "
+                            + ReportPage.deflectionText(w, wings.get(i).deflections())).line(")</span></li>");
+        }
+        h.line("</ul>");
+        h.caution();
+        h.el("h2", "Table");
+        List<String> header = new ArrayList<>(List.of("quantity", "unit"));
+        header.addAll(labels);
+        for (int i = 1; i < labels.size(); i++) {
+            header.add(labels.get(i) + " \u2212 " + labels.get(0));
+        }
+        List<List<String>> rows = new ArrayList<>();
+        for (Comparison.Row r : Comparison.rows()) {
+            List<String> row = new ArrayList<>(List.of(r.label(), r.unit(u).replace("^2", "\u00b2")));
+            for (int i = 0; i < wings.size(); i++) {
+                row.add(cell(cmp.value(r, i), r, u, false));
+            }
+            for (int i = 1; i < wings.size(); i++) {
+                OptionalDouble d = cmp.difference(r, i);
+                OptionalDouble base = cmp.value(r, 0);
+                String text = cell(d, r, u, true);
+                if (d.isPresent() && base.isPresent() && base.getAsDouble() != 0) {
+                    text += " (" + Html.signed(100 * d.getAsDouble() / Math.abs(base.getAsDouble()), 1) + " %)";
+                }
+                row.add(text);
+            }
+            rows.add(row);
+        }
+        h.table("wide compare", null, header, rows);
+        h.el("h2", "Figures");
+        List<Wing> ws = wings.stream().map(WingSummary::wing).toList();
+        List<String> keyed = new ArrayList<>();
+        for (int i = 0; i < wings.size(); i++) {
+            keyed.add(labels.get(i) + ": " + ws.get(i).name());
+        }
+        List<Solution> atCl = wings.stream().map(WingSummary::spanLoadAtCl).toList();
+        List<WingAnalysis> analyses = wings.stream().map(WingSummary::analysis).toList();
+        figure(h, Plots.planformOverlay(ws, keyed, u));
+        figure(h, Plots.spanLoadOverlay(ws, atCl, keyed, cmp.cl()));
+        figure(h, Plots.liftOverlay(analyses, keyed, rangeDeg));
+        h.line("<footer>");
+        h.text("Made by " + version + ". Every wing on its own reference values; the same files and options give "
+                + "the same page.");
+        h.line("</footer>");
+        return h.close();
+    }
+
+    private static void figure(Html h, Figure f) {
+        h.raw("<figure id=\"figure-").raw(f.id()).line("\">");
+        h.line(SvgWriter.element(f));
+        h.raw("<figcaption><b>").text(f.title()).raw(".</b> ").text(f.description()).line("</figcaption>");
+        h.line("</figure>");
+    }
+
+    private static String cell(OptionalDouble v, Comparison.Row r, LengthUnit u, boolean signed) {
+        if (v.isEmpty()) {
+            return "\u2013";
+        }
+        double d = r.display(v.getAsDouble(), u);
+        return signed ? Html.signed(d, r.decimals()) : Html.fixed(d, r.decimals());
+    }
+}

@@ -1,0 +1,216 @@
+package org.spanlift.cli.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import org.spanlift.cli.plot.Figure;
+import org.spanlift.cli.plot.PlotKind;
+import org.spanlift.cli.plot.Plots;
+import org.spanlift.cli.plot.SvgWriter;
+import org.spanlift.geometry.ControlSurface;
+import org.spanlift.geometry.LengthUnit;
+import org.spanlift.geometry.Planform;
+import org.spanlift.geometry.Reference;
+import org.spanlift.geometry.Surface;
+import org.spanlift.geometry.Wing;
+import org.spanlift.lattice.Lattice;
+import org.spanlift.results.Coefficients;
+import org.spanlift.solve.WingAnalysis;
+
+/**
+ * The single-wing report: one self-contained HTML page (style sheet and figures inline, no scripts, no
+ * fetches) with the wing's description, its key results, every plot, the lattice and a convergence check.
+ */
+public final class ReportPage {
+
+    /**
+     * @param summary   the wing at its file lattice, with the condition at the chosen CL
+     * @param fine      the same at twice as many strips, for the convergence note
+     * @param alphasDeg the angles of the results table
+     * @param rangeDeg  the angles of the lift curve and polar
+     * @param version   the program version for the footer
+     */
+    public static String build(WingSummary summary, WingSummary fine, List<Double> alphasDeg, List<Double> rangeDeg,
+            String version) {
+        Wing wing = summary.wing();
+        WingAnalysis analysis = summary.analysis();
+        LengthUnit u = wing.displayUnit();
+        Html h = Html.page("Spanlift report: " + wing.name());
+        h.line("<header class=\"title\">");
+        h.el("p", "class=\"kicker\"", "Spanlift wing report");
+        h.el("h1", wing.name());
+        h.el("p", "class=\"meta\"", "Wing file " + summary.file().getFileName() + "; lengths in " + u.symbol()
+                + ", angles in degrees; " + deflectionText(wing, summary.deflections()) + ".");
+        h.line("</header>");
+        h.caution();
+
+        keyResults(h, summary, alphasDeg);
+        description(h, wing);
+        h.el("h2", "Figures");
+        for (PlotKind kind : PlotKind.values()) {
+            Figure f = figure(kind, summary, rangeDeg);
+            h.raw("<figure id=\"figure-").raw(kind.figureId()).line("\">");
+            h.line(SvgWriter.element(f));
+            h.raw("<figcaption><b>").text(f.title()).raw(".</b> ").text(f.description()).line("</figcaption>");
+            h.line("</figure>");
+        }
+        lattice(h, summary, fine);
+        h.el("h2", "Method and limits");
+        h.el("p", "Vortex-lattice method: a horseshoe vortex on every panel, bound leg on the panel's quarter-chord "
+                + "line, flow tangency at three-quarter chord; twist, camber and control deflections enter the "
+                + "boundary condition linearly. Lift from Kutta-Joukowski on the bound legs, induced drag in the "
+                + "Trefftz plane. The span efficiency e is CL\u00b2 / (\u03c0 A CDi) and is shown only where "
+                + "|CL| \u2265 0.05. Pitching moment positive nose-up about the moment point; rolling moment positive "
+                + "right wing down. The theory is linear and inviscid: it has no stall and no profile drag.");
+        h.line("<footer>");
+        h.text("Made by " + version + " from " + summary.file().getFileName() + ". The same wing file and options "
+                + "give the same page.");
+        h.line("</footer>");
+        return h.close();
+    }
+
+    /** The figure of a kind, as the report shows it. Every kind has one: the switch is exhaustive. */
+    static Figure figure(PlotKind kind, WingSummary s, List<Double> rangeDeg) {
+        return switch (kind) {
+            case PLANFORM -> Plots.planform(s.analysis());
+            case SPAN_LOAD -> Plots.spanLoad(s.analysis(), s.spanLoadAtCl());
+            case LIFT -> Plots.liftCurve(s.analysis(), s.deflections(), rangeDeg);
+            case POLAR -> Plots.polar(s.analysis(), s.deflections(), rangeDeg);
+        };
+    }
+
+    private static void keyResults(Html h, WingSummary s, List<Double> alphasDeg) {
+        h.el("h2", "Key results");
+        h.line("<ul class=\"keys\">");
+        key(h, "lift slope", Html.fixed(s.liftSlope(), 3) + " /rad", Html.fixed(s.liftSlope() * Math.PI / 180, 4)
+                + " per degree, at zero lift");
+        key(h, "zero-lift angle", Html.fixed(Math.toDegrees(s.zeroLiftAngle()), 2) + "\u00b0", "angle of attack of "
+                + "zero wing lift");
+        String cl = Html.fixed(s.cl(), 2);
+        key(h, "span efficiency e at CL " + cl, s.spanEfficiency().isPresent()
+                ? Html.fixed(s.spanEfficiency().getAsDouble(), 4) : "\u2013", "CL\u00b2 / (\u03c0 A CDi)");
+        key(h, "induced drag CDi at CL " + cl, Html.fixed(s.inducedDrag(), 5), "at \u03b1 = "
+                + Html.fixed(Math.toDegrees(s.alphaAtCl()), 2) + "\u00b0");
+        h.line("</ul>");
+        List<List<String>> rows = new ArrayList<>();
+        for (double a : alphasDeg) {
+            Coefficients c = s.analysis().solve(Math.toRadians(a), s.deflections()).coefficients();
+            rows.add(List.of(Html.fixed(a, 1), Html.fixed(c.lift(), 4), Html.fixed(c.inducedDrag(), 5),
+                    c.spanEfficiency().isPresent() ? Html.fixed(c.spanEfficiency().getAsDouble(), 4) : "\u2013",
+                    Html.fixed(c.pitchingMoment(), 4), Html.fixed(c.rollingMoment(), 5)));
+        }
+        h.table("results", "Coefficients by angle of attack", List.of("\u03b1 [deg]", "CL", "CDi", "e", "Cm", "C_roll"),
+                rows);
+    }
+
+    private static void key(Html h, String label, String value, String note) {
+        h.raw("<li><span class=\"label\">").text(label).raw("</span><span class=\"value\">").text(value)
+                .raw("</span><span class=\"note\">").text(note).line("</span></li>");
+    }
+
+    private static void description(Html h, Wing wing) {
+        LengthUnit u = wing.displayUnit();
+        String l = u.symbol();
+        Reference r = wing.reference();
+        h.el("h2", "The wing");
+        h.table("reference", "Reference values (coefficients are based on these)", List.of("quantity", "value"),
+                List.of(List.of("area [" + l + "\u00b2]", Html.fixed(r.area() / (u.metres() * u.metres()), 3)),
+                        List.of("span [" + l + "]", Html.fixed(r.span() / u.metres(), 3)),
+                        List.of("chord [" + l + "]", Html.fixed(r.chord() / u.metres(), 3)),
+                        List.of("aspect ratio", Html.fixed(r.aspectRatio(), 3)),
+                        List.of("moment point x, y, z [" + l + "]", Html.fixed(r.momentPoint().x() / u.metres(), 3)
+                                + ", " + Html.fixed(r.momentPoint().y() / u.metres(), 3) + ", "
+                                + Html.fixed(r.momentPoint().z() / u.metres(), 3))));
+        List<List<String>> rows = new ArrayList<>();
+        for (Surface s : wing.surfaces()) {
+            Planform p = s.planform();
+            double y0 = p.yStart();
+            double y1 = p.yEnd();
+            double c0 = p.chord(y0);
+            double c1 = p.chord(y1);
+            rows.add(List.of(s.name() + (s.mirrored() ? " (mirrored)" : ""), Html.fixed(s.span() / u.metres(), 3),
+                    Html.fixed(s.area() / (u.metres() * u.metres()), 3), Html.fixed(c0 / u.metres(), 3),
+                    Html.fixed(c1 / u.metres(), 3), Html.fixed(c0 > 0 ? c1 / c0 : 0, 3),
+                    Html.fixed(s.meanAerodynamicChord() / u.metres(), 3),
+                    Html.fixed(Math.toDegrees(Math.atan2(p.noseX(y1) - p.noseX(y0), y1 - y0)), 2),
+                    Html.fixed(Math.toDegrees(Math.atan2(p.noseZ(y1) - p.noseZ(y0), y1 - y0)), 2),
+                    Html.fixed(Math.toDegrees(p.twist(y0)), 2) + " / " + Html.fixed(Math.toDegrees(p.twist(y1)), 2)));
+        }
+        h.table("wide", "Surfaces", List.of("surface", "span [" + l + "]", "area [" + l + "\u00b2]",
+                "root chord [" + l + "]", "tip chord [" + l + "]", "taper", "MAC [" + l + "]", "LE sweep [deg]",
+                "dihedral [deg]", "twist root / tip [deg]"), rows);
+        h.el("p", "class=\"meta\"", "Sweep and dihedral are those of the straight line from the root leading edge to "
+                + "the tip leading edge; twist is positive nose-up.");
+        if (!wing.controls().isEmpty()) {
+            List<List<String>> cr = new ArrayList<>();
+            for (ControlSurface c : wing.controls()) {
+                cr.add(List.of(c.name(), c.kind().name().toLowerCase(Locale.ROOT), Html.fixed(c.from() / u.metres(), 3),
+                        Html.fixed(c.to() / u.metres(), 3), Html.fixed(c.chordFraction(), 3),
+                        Html.fixed(Math.toDegrees(c.deflection()), 1)));
+            }
+            h.table("controls", "Control surfaces (as in the file)", List.of("control", "kind", "from y [" + l + "]",
+                    "to y [" + l + "]", "chord fraction", "deflection [deg]"), cr);
+        }
+    }
+
+    private static void lattice(Html h, WingSummary s, WingSummary fine) {
+        Wing wing = s.wing();
+        Lattice lat = s.analysis().lattice();
+        h.el("h2", "Lattice and convergence");
+        List<List<String>> rows = new ArrayList<>();
+        for (Surface sf : wing.surfaces()) {
+            rows.add(List.of(sf.name(), Integer.toString(sf.lattice().strips()) + (sf.mirrored() ? " per half" : ""),
+                    Integer.toString(sf.lattice().rows()), sf.lattice().stripSpacing().name().toLowerCase(Locale.ROOT),
+                    sf.lattice().rowSpacing().name().toLowerCase(Locale.ROOT)));
+        }
+        h.table("lattice", "Lattice of the file", List.of("surface", "strips", "rows per strip", "strip spacing",
+                "row spacing"), rows);
+        int unknowns = lat.mirrored() ? lat.halfCount() : lat.panelCount();
+        h.el("p", lat.panelCount() + " panels in " + lat.strips().size() + " strips over both halves; " + unknowns
+                + " unknowns per system (" + (lat.mirrored() ? "half span, solved with mirror images" : "full span")
+                + ").");
+        double slopeChange = relative(fine.liftSlope(), s.liftSlope());
+        List<List<String>> conv = new ArrayList<>();
+        conv.add(List.of("lift slope [per rad]", Html.fixed(s.liftSlope(), 4), Html.fixed(fine.liftSlope(), 4),
+                Html.signed(100 * slopeChange, 2) + " %"));
+        double eChange = Double.NaN;
+        if (s.spanEfficiency().isPresent() && fine.spanEfficiency().isPresent()) {
+            eChange = relative(fine.spanEfficiency().getAsDouble(), s.spanEfficiency().getAsDouble());
+            conv.add(List.of("e at CL " + Html.fixed(s.cl(), 2), Html.fixed(s.spanEfficiency().getAsDouble(), 4),
+                    Html.fixed(fine.spanEfficiency().getAsDouble(), 4), Html.signed(100 * eChange, 2) + " %"));
+        }
+        conv.add(List.of("CDi at CL " + Html.fixed(s.cl(), 2), Html.fixed(s.inducedDrag(), 5),
+                Html.fixed(fine.inducedDrag(), 5), Html.signed(100 * relative(fine.inducedDrag(), s.inducedDrag()), 2)
+                + " %"));
+        int strips = wing.main().lattice().strips();
+        h.table("convergence", "Convergence: the file lattice against twice as many strips",
+                List.of("quantity", strips + " strips", 2 * strips + " strips", "change"), conv);
+        double worst = Math.max(Math.abs(slopeChange), Double.isNaN(eChange) ? 0 : Math.abs(eChange));
+        String verdict = worst < 0.005
+                ? String.format(Locale.ROOT, "Doubling the strips moves the lift slope and e by at most %.2f %%: the "
+                        + "file lattice is fine enough for these quantities.", 100 * worst)
+                : String.format(Locale.ROOT, "Doubling the strips moves the lift slope or e by %.2f %%: refine the "
+                        + "lattice (more strips) before relying on them.", 100 * worst);
+        h.el("p", verdict);
+    }
+
+    private static double relative(double fine, double coarse) {
+        return (fine - coarse) / coarse;
+    }
+
+    static String deflectionText(Wing wing, double[] deflections) {
+        List<ControlSurface> controls = wing.controls();
+        if (controls.isEmpty()) {
+            return "no control surfaces";
+        }
+        List<String> parts = new ArrayList<>();
+        for (int i = 0; i < controls.size(); i++) {
+            parts.add(controls.get(i).name() + " " + Html.fixed(Math.toDegrees(deflections[i]), 1) + "\u00b0");
+        }
+        return "deflections " + String.join(", ", parts) + " (trailing edge down; aileron: the right one)";
+    }
+
+    private ReportPage() {
+    }
+}
