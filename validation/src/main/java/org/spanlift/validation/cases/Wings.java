@@ -44,7 +44,7 @@ public final class Wings {
         return wing("trapezoid A=" + aspectRatio + " taper=" + taper, p, camber, controls, lattice);
     }
 
-    /** An untreated, flat straight-tapered wing. */
+    /** A flat straight-tapered wing without controls. */
     public static Wing trapezoid(double aspectRatio, double taper, double sweepQuarter, LatticeSpec lattice) {
         return trapezoid(aspectRatio, taper, sweepQuarter, "flat", List.of(), lattice);
     }
