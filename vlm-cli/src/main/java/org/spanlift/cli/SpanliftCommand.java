@@ -12,7 +12,7 @@ import picocli.CommandLine.Command;
 @Command(name = "spanlift", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Vortex-lattice wing analysis: span load, lift slope, induced drag and span efficiency.",
         subcommands = {SolveCommand.class, StallCommand.class, PlotCommand.class, ReportCommand.class,
-                CompareCommand.class},
+                CompareCommand.class, ValidateCommand.class},
         footer = {"", "Exit codes: 0 success; 1 the run finished but some case failed; 2 bad input or usage;"
                 + " 3 internal error."})
 public final class SpanliftCommand implements Runnable {
