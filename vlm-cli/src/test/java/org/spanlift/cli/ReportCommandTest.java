@@ -75,7 +75,7 @@ class ReportCommandTest {
     void reportHasKeyResultsLatticeAndConvergence() throws Exception {
         String html = report("trainer.wing.yaml");
         for (String s : List.of("Key results", "lift slope", "zero-lift angle", "span efficiency e at CL 0.50",
-                "Coefficients by angle of attack", "Lattice of the file", "24 strips", "48 strips", "288 panels",
+                "Coefficients by angle of attack", "Lattice of the file", "32 strips", "64 strips", "512 panels",
                 "cosine", "Convergence")) {
             assertTrue(html.contains(s), s);
         }

@@ -24,7 +24,7 @@ class SolveCommandTest {
                 "\"cl_c\"", "\"circulation\"", "\"induced_angle_deg\"")) {
             assertTrue(r.out().contains(key), "missing " + key);
         }
-        assertTrue(r.out().contains("\"panels\": 288"), "2 halves x 24 strips x 6 rows");
+        assertTrue(r.out().contains("\"panels\": 512"), "2 halves x 32 strips x 8 rows (the default lattice)");
         assertFalse(r.out().contains("NaN"));
     }
 
@@ -41,7 +41,7 @@ class SolveCommandTest {
         CliRun r = CliRun.of("solve", CliRun.demo("tourer.wing.yaml"), "--alpha", "-4:12:2");
         assertEquals(0, r.exitCode(), r.err());
         assertTrue(r.out().contains("ft^2"), "tables use the file's length unit");
-        assertTrue(r.out().contains("288 panels"));
+        assertTrue(r.out().contains("512 panels"));
         long rows = r.out().lines().filter(l -> l.matches("^-?\\d+\\.\\d\\d\\s+.*")).count();
         assertEquals(9, rows);
     }
@@ -122,7 +122,7 @@ class SolveCommandTest {
         assertTrue(Files.readString(out).startsWith("{"), "format from the .json extension");
         List<String> rows = Files.readAllLines(loads);
         assertEquals("alpha_deg,surface,y_m,chord_m,cl,cl_c_m,circulation_m,induced_angle_deg", rows.get(0));
-        assertEquals(1 + 2 * 48, rows.size(), "two angles x 48 strips");
+        assertEquals(1 + 2 * 64, rows.size(), "two angles x 64 strips");
     }
 
     @Test

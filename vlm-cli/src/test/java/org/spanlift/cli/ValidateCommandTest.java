@@ -33,7 +33,7 @@ class ValidateCommandTest {
         CliRun r = CliRun.of("validate", "--case", "elliptic-e-A8");
         assertEquals(0, r.exitCode(), r.err());
         assertTrue(r.out().contains("elliptic-e-A8"));
-        assertTrue(r.out().contains("24x6 cos/cos"));
+        assertTrue(r.out().contains("32x8 cos/cos"), "the case runs on the default lattice");
         assertTrue(r.out().contains("Prandtl"));
         assertTrue(r.out().contains("pass"));
     }

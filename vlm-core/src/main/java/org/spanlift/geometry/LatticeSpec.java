@@ -7,7 +7,7 @@ package org.spanlift.geometry;
 public record LatticeSpec(int strips, int rows, Spacing stripSpacing, Spacing rowSpacing) {
 
     /** What a surface gets when its file gives no lattice. */
-    public static final LatticeSpec DEFAULT = new LatticeSpec(24, 6, Spacing.COSINE, Spacing.COSINE);
+    public static final LatticeSpec DEFAULT = new LatticeSpec(32, 8, Spacing.COSINE, Spacing.COSINE);
 
     public LatticeSpec {
         if (strips < 1 || rows < 1) {

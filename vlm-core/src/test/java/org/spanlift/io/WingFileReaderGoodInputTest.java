@@ -107,14 +107,14 @@ class WingFileReaderGoodInputTest {
     }
 
     @Test
-    void surfaceWithoutLatticeGetsTwentyFourStripsBySixRowsCosineBothWays() {
+    void surfaceWithoutLatticeGetsThirtyTwoStripsByEightRowsCosineBothWays() {
         Wing wing = read("""
                 units: m
                 surfaces:
                   - name: wing
                     trapezoid: {span: 9, root-chord: 1.25}
                 """);
-        assertEquals(new LatticeSpec(24, 6, Spacing.COSINE, Spacing.COSINE), wing.main().lattice());
+        assertEquals(new LatticeSpec(32, 8, Spacing.COSINE, Spacing.COSINE), wing.main().lattice());
     }
 
     @Test
