@@ -14,11 +14,36 @@ import org.junit.jupiter.api.io.TempDir;
 
 class LoadsCommandTest {
 
-    private static final String TRAINER = CliRun.demo("trainer.wing.yaml");
+    /** The demo trainer's structure: invented masses. */
+    static final String STRUCTURE = """
+            structure:
+              spar: 0.30
+              mass: 96kg
+              mass-centre: 0.40
+              point-masses:
+                - {name: fuel tank, mass: 38kg, y: 1.3, x: 0.55}
+                - {name: nav light, mass: 0.4kg, y: 4.9, chord-fraction: 0.3}
+            """;
+
+    @TempDir
+    static Path folder;
+
+    private static String trainer;
+
+    /** The demo trainer wing with the structure section, written to a temporary folder. */
+    private static synchronized String trainerWithStructure() throws IOException {
+        if (trainer == null) {
+            Path p = folder.resolve("trainer.wing.yaml");
+            Files.writeString(p, Files.readString(Path.of(CliRun.demo("trainer.wing.yaml"))) + STRUCTURE);
+            trainer = p.toString();
+        }
+        return trainer;
+    }
 
     @Test
-    void singleCaseJsonCarriesTheContractKeysAndTheCaution() {
-        CliRun r = CliRun.of("loads", TRAINER, "--weight", "750kg", "--load-factor", "3.8", "--speed", "102kt",
+    void singleCaseJsonCarriesTheContractKeysAndTheCaution() throws IOException {
+        String wing = trainerWithStructure();
+        CliRun r = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "102kt",
                 "--format", "json");
         assertEquals(0, r.exitCode(), r.err());
         for (String key : List.of("\"cases\"", "\"load_factor\"", "\"speed\"", "\"y\"", "\"shear\"", "\"bending\"",
@@ -28,12 +53,14 @@ class LoadsCommandTest {
         }
         assertTrue(r.out().contains("preliminary sizing only"));
         assertTrue(r.out().contains("no safety factor applied"));
+        assertTrue(r.out().contains("\"half_wing_mass\": 86.4"), "48 kg spread + 38.4 kg of point masses");
         assertFalse(r.out().contains("NaN"));
     }
 
     @Test
-    void casesFileGivesOneCaseEachAndTheGoverningTable() {
-        CliRun r = CliRun.of("loads", TRAINER, "--cases", CliRun.demo("trainer.cases.yaml"));
+    void casesFileGivesOneCaseEachAndTheGoverningTable() throws IOException {
+        String wing = trainerWithStructure();
+        CliRun r = CliRun.of("loads", wing, "--cases", CliRun.demo("trainer.cases.yaml"));
         assertEquals(0, r.exitCode(), r.err());
         assertTrue(r.out().contains("push-over at cruise speed"));
         assertTrue(r.out().contains("governing case at each station"));
@@ -41,8 +68,9 @@ class LoadsCommandTest {
     }
 
     @Test
-    void envelopeNamesTheGustFormulaAndSaysItIsNoCompliance() {
-        CliRun r = CliRun.of("loads", TRAINER, "--envelope", CliRun.demo("trainer.envelope.yaml"), "-f", "json");
+    void envelopeNamesTheGustFormulaAndSaysItIsNoCompliance() throws IOException {
+        String wing = trainerWithStructure();
+        CliRun r = CliRun.of("loads", wing, "--envelope", CliRun.demo("trainer.envelope.yaml"), "-f", "json");
         assertEquals(0, r.exitCode(), r.err());
         assertTrue(r.out().contains("23.341"));
         assertTrue(r.out().contains("not a statement of compliance"));
@@ -50,9 +78,10 @@ class LoadsCommandTest {
     }
 
     @Test
-    void safetyFactorMultipliesAndSaysSo() {
-        CliRun limit = CliRun.of("loads", TRAINER, "--weight", "750kg", "--load-factor", "3.8", "--speed", "102kt", "-f", "csv");
-        CliRun ult = CliRun.of("loads", TRAINER, "--weight", "750kg", "--load-factor", "3.8", "--speed", "102kt", "-f", "csv",
+    void safetyFactorMultipliesAndSaysSo() throws IOException {
+        String wing = trainerWithStructure();
+        CliRun limit = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "102kt", "-f", "csv");
+        CliRun ult = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "102kt", "-f", "csv",
                 "--safety-factor", "1.5");
         assertEquals(0, ult.exitCode(), ult.err());
         assertTrue(ult.out().startsWith("# Caution"));
@@ -63,8 +92,9 @@ class LoadsCommandTest {
     }
 
     @Test
-    void wingMassOptionReplacesTheFilesMass() {
-        CliRun r = CliRun.of("loads", TRAINER, "--weight", "750kg", "--load-factor", "1", "--speed", "80kt", "-f", "json",
+    void wingMassOptionReplacesTheFilesMass() throws IOException {
+        String wing = trainerWithStructure();
+        CliRun r = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "1", "--speed", "80kt", "-f", "json",
                 "--wing-mass", "0kg");
         assertEquals(0, r.exitCode(), r.err());
         assertTrue(r.out().contains("\"distributed_mass_per_half\": 0"), r.out().lines().filter(l -> l.contains("distributed"))
@@ -73,25 +103,26 @@ class LoadsCommandTest {
 
     @Test
     void badInputGetsOneLineAndExitCodeTwo(@TempDir Path dir) throws IOException {
+        String wing = trainerWithStructure();
         Path cases = dir.resolve("bad.cases.yaml");
         Files.writeString(cases, "cases:\n  - {load-factor: 3.8, speed: 100kt}\n");
-        CliRun r = CliRun.of("loads", TRAINER, "--cases", cases.toString());
+        CliRun r = CliRun.of("loads", wing, "--cases", cases.toString());
         assertEquals(2, r.exitCode());
         assertEquals(1, r.err().lines().count(), r.err());
         assertTrue(r.err().contains("bad.cases.yaml:2: cases[0]: missing key 'weight'"), r.err());
 
-        Path wing = dir.resolve("bad.wing.yaml");
-        Files.writeString(wing, Files.readString(Path.of(TRAINER)).replace("y: 1.3, x: 0.55", "y: 6.3, x: 0.55"));
-        CliRun w = CliRun.of("loads", wing.toString(), "--weight", "750kg", "--speed", "100kt");
+        Path badWing = dir.resolve("bad.wing.yaml");
+        Files.writeString(badWing, Files.readString(Path.of(wing)).replace("y: 1.3, x: 0.55", "y: 6.3, x: 0.55"));
+        CliRun w = CliRun.of("loads", badWing.toString(), "--weight", "750kg", "--speed", "100kt");
         assertEquals(2, w.exitCode());
         assertEquals(1, w.err().lines().count(), w.err());
         assertTrue(w.err().contains("structure.point-masses[0].y"), w.err());
 
-        CliRun none = CliRun.of("loads", TRAINER);
+        CliRun none = CliRun.of("loads", wing);
         assertEquals(2, none.exitCode());
-        CliRun both = CliRun.of("loads", TRAINER, "--weight", "750kg", "--speed", "100kt", "--cases", cases.toString());
+        CliRun both = CliRun.of("loads", wing, "--weight", "750kg", "--speed", "100kt", "--cases", cases.toString());
         assertEquals(2, both.exitCode());
-        CliRun noSpeed = CliRun.of("loads", TRAINER, "--weight", "750kg");
+        CliRun noSpeed = CliRun.of("loads", wing, "--weight", "750kg");
         assertEquals(2, noSpeed.exitCode());
         assertTrue(noSpeed.err().contains("--speed"), noSpeed.err());
     }
