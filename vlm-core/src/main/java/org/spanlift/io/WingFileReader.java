@@ -30,6 +30,7 @@ import org.spanlift.geometry.StationPlanform;
 import org.spanlift.geometry.Surface;
 import org.spanlift.geometry.Vec3;
 import org.spanlift.geometry.Wing;
+import org.spanlift.loads.StructureReader;
 import org.spanlift.section.CamberLines;
 
 /**
@@ -41,7 +42,8 @@ import org.spanlift.section.CamberLines;
 public final class WingFileReader {
 
     /** Keys accepted at each level of a wing file (the schema sweeps check their paths against). */
-    public static final Set<String> TOP_KEYS = Set.of("name", "units", "reference", "surfaces", "sections");
+    public static final Set<String> TOP_KEYS = Set.of("name", "units", "reference", "surfaces", "sections",
+            "structure");
     public static final Set<String> REFERENCE_KEYS = Set.of("area", "span", "chord", "moment-point");
     public static final Set<String> SURFACE_KEYS = Set.of("name", "mirror", "section", "stations", "trapezoid",
             "elliptic", "controls", "lattice");
@@ -146,6 +148,7 @@ public final class WingFileReader {
             }
             surfaces.add(surface);
         }
+        root.optional("structure").ifPresent(st -> StructureReader.read(st, k, surfaces.get(0)));
         Reference defaults = Wing.defaultReference(surfaces.get(0));
         Reference reference = root.optional("reference").map(r -> readReference(r, k, defaults)).orElse(defaults);
         return new Wing(name, unit, reference, surfaces, sections);

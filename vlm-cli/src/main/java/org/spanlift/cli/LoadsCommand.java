@@ -1,0 +1,358 @@
+package org.spanlift.cli;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.OptionalDouble;
+import java.util.concurrent.Callable;
+
+import org.spanlift.atmosphere.AtmosphereState;
+import org.spanlift.cli.options.FlightOptions;
+import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.OutputOptions;
+import org.spanlift.cli.output.Csv;
+import org.spanlift.cli.output.Json;
+import org.spanlift.cli.output.TextTable;
+import org.spanlift.geometry.Wing;
+import org.spanlift.io.InputException;
+import org.spanlift.io.WingFileReader;
+import org.spanlift.io.quantity.Quantity;
+import org.spanlift.io.quantity.QuantityFormatException;
+import org.spanlift.io.quantity.QuantityKind;
+import org.spanlift.loads.CasesReader;
+import org.spanlift.loads.Envelope;
+import org.spanlift.loads.EnvelopeReader;
+import org.spanlift.loads.EnvelopeSpec;
+import org.spanlift.loads.Governing;
+import org.spanlift.loads.LoadCase;
+import org.spanlift.loads.LoadsAnalysis;
+import org.spanlift.loads.PointMass;
+import org.spanlift.loads.SpanwiseLoads;
+import org.spanlift.loads.StructureReader;
+import org.spanlift.loads.WingStructure;
+import org.spanlift.solve.WingAnalysis;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code spanlift loads}: spanwise shear, bending and torsion of the half-wing for spar sizing. */
+@Command(name = "loads", mixinStandardHelpOptions = true,
+        description = "Spanwise shear, bending and torsion of the half-wing (air load less inertia relief) for one "
+                + "load case, a cases file or the corner points of a manoeuvre and gust envelope; the governing "
+                + "case at each station.")
+public final class LoadsCommand implements Callable<Integer> {
+
+    static final String CAUTION = "Caution: loads for preliminary sizing only. Structural design and substantiation "
+            + "follow the applicable airworthiness standards and licensed engineering practice, with the required "
+            + "safety factors, which this tool does not apply unless told to (--safety-factor).";
+
+    static final String ENVELOPE_NOTE = "The envelope's corner points are an aid to exploring loads, not a statement "
+            + "of compliance with any airworthiness standard.";
+
+    static final String GUST_FORMULA = "n = 1 +/- K_g rho0 U_de V a / (2 W/S), K_g = 0.88 mu_g / (5.3 + mu_g), "
+            + "mu_g = 2 (W/S) / (rho c a g): the gust load factor formula of 14 CFR Part 23, 23.341(c) (pre-2017 "
+            + "text) and EASA CS-23.341 (after Pratt, NACA TN 2964)";
+
+    static final Map<String, String> SIGNS = signs();
+
+    @Parameters(index = "0", paramLabel = "FILE", description = "The wing file (.wing.yaml), with its structure section.")
+    Path file;
+
+    @Option(names = "--cases", paramLabel = "FILE", description = "A cases file (.cases.yaml): load cases, each with "
+            + "weight, load-factor and speed (equivalent airspeed), altitude optional.")
+    Path casesFile;
+
+    @Option(names = "--envelope", paramLabel = "FILE", description = "An envelope file (.envelope.yaml): limit load "
+            + "factors, design speeds and gust velocities; its corner points become the load cases.")
+    Path envelopeFile;
+
+    @Option(names = "--wing-mass", paramLabel = "M", description = "The whole wing's mass (both halves) with a unit "
+            + "(95kg, 210lb), spread over each half in proportion to local chord; replaces the file's mass or "
+            + "mass-table.")
+    String wingMass;
+
+    @Option(names = "--safety-factor", paramLabel = "F", description = "Multiply the limit loads by F (such as 1.5) "
+            + "to give ultimate loads, and say so. Default: none (limit loads).")
+    Double safetyFactor;
+
+    @Mixin
+    OutputOptions output;
+
+    @Mixin
+    FlightOptions flight;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        Format format = output.format(EnumSet.of(Format.TABLE, Format.JSON, Format.CSV));
+        if (safetyFactor != null && !(safetyFactor >= 1 && safetyFactor <= 3)) {
+            throw new InputException("--safety-factor", 0, "", "expected a factor from 1 to 3, got " + safetyFactor);
+        }
+        Wing wing = WingFileReader.read(file);
+        if (!wing.main().mirrored()) {
+            throw new InputException(file.toString(), 0, "surfaces[0].mirror",
+                    "loads are computed per half-wing: the first surface must be mirrored");
+        }
+        WingStructure structure = StructureReader.read(file, wing);
+        if (wingMass != null) {
+            double m;
+            try {
+                m = Quantity.parse(wingMass, QuantityKind.MASS).value();
+            } catch (QuantityFormatException e) {
+                throw new InputException("--wing-mass", 0, "", e.getMessage());
+            }
+            if (m < 0) {
+                throw new InputException("--wing-mass", 0, "", "a mass must not be negative, got " + wingMass);
+            }
+            structure = structure.withWingMass(m);
+        }
+        WingAnalysis analysis = WingAnalysis.of(wing);
+        double[] deflections = analysis.deflections(flight.deflections(wing));
+        LoadsAnalysis loads = LoadsAnalysis.of(analysis, structure, deflections);
+
+        List<Envelope.Point> envelope = null;
+        List<LoadCase> cases;
+        AtmosphereState atmosphere = flight.atmosphere();
+        OptionalDouble weight = flight.weightNewtons();
+        OptionalDouble speed = flight.equivalentSpeed(atmosphere);
+        int sources = (weight.isPresent() || speed.isPresent() ? 1 : 0) + (casesFile != null ? 1 : 0)
+                + (envelopeFile != null ? 1 : 0);
+        if (sources != 1) {
+            throw new InputException("loads", 0, "", sources == 0
+                    ? "give the load cases: --weight W --load-factor N --speed V, or --cases FILE, or --envelope FILE"
+                    : "give only one of: --weight/--speed, --cases FILE, --envelope FILE");
+        }
+        if (casesFile != null) {
+            cases = CasesReader.read(casesFile);
+        } else if (envelopeFile != null) {
+            EnvelopeSpec es = EnvelopeReader.read(envelopeFile);
+            double area = wing.reference().area();
+            envelope = Envelope.points(es, area, area / wing.reference().span(), loads.liftLine().slope());
+            cases = envelope.stream().map(Envelope.Point::loadCase).toList();
+        } else {
+            if (weight.isEmpty()) {
+                throw new InputException("--weight", 0, "", "a load case needs the weight (such as 1100kg)");
+            }
+            if (speed.isEmpty()) {
+                throw new InputException("--speed", 0, "", "a load case needs the equivalent airspeed (such as 105kt)");
+            }
+            double n = flight.loadFactor();
+            cases = List.of(new LoadCase(String.format(Locale.ROOT, "n %.2f at %.1f m/s EAS", n, speed.getAsDouble()),
+                    weight.getAsDouble(), n, speed.getAsDouble(), atmosphere.pressureAltitude(), "given"));
+        }
+        List<SpanwiseLoads> results = new ArrayList<>();
+        double f = safetyFactor == null ? 1 : safetyFactor;
+        for (SpanwiseLoads l : loads.loads(cases)) {
+            results.add(f == 1 ? l : l.scaled(f));
+        }
+        Governing governing = Governing.of(results);
+        String text = switch (format) {
+            case JSON -> Json.write(json(wing, loads, results, governing, envelope));
+            case CSV -> csv(results);
+            default -> table(wing, loads, results, governing, envelope);
+        };
+        output.write(text, spec.commandLine().getOut());
+        return 0;
+    }
+
+    private String factorNote() {
+        return safetyFactor == null ? "limit loads: no safety factor applied"
+                : String.format(Locale.ROOT, "ultimate loads: limit loads times the safety factor %.2f (--safety-factor)",
+                        safetyFactor);
+    }
+
+    private static Map<String, String> signs() {
+        Map<String, String> m = new LinkedHashMap<>();
+        m.put("station", "values at y are the resultant of everything outboard of y (air load and inertia), on the "
+                + "right half; the left half is its mirror image");
+        m.put("axes", "e_s along the spar line, outboard; n normal to the wing plane, up; e_t = e_s x n, in the wing "
+                + "plane, aft");
+        m.put("shear", "force along n, positive up");
+        m.put("bending", "moment about the spar point along e_t, positive up-bending (outboard load up)");
+        m.put("torsion", "moment along e_s, positive nose-up");
+        m.put("chord_shear", "force along e_t, positive aft");
+        m.put("chord_bending", "in-plane moment, positive for an aft load outboard");
+        return m;
+    }
+
+    private Map<String, Object> json(Wing wing, LoadsAnalysis loads, List<SpanwiseLoads> results, Governing g,
+            List<Envelope.Point> envelope) {
+        Map<String, Object> root = new LinkedHashMap<>();
+        root.put("name", wing.name());
+        Map<String, Object> units = new LinkedHashMap<>();
+        units.put("length", "m");
+        units.put("force", "N");
+        units.put("moment", "N m");
+        units.put("mass", "kg");
+        units.put("speed", "m/s, equivalent airspeed");
+        units.put("pressure", "Pa");
+        units.put("altitude", "m, pressure altitude (geopotential, standard atmosphere)");
+        root.put("units", units);
+        root.put("caution", CAUTION);
+        root.put("safety_factor", safetyFactor);
+        root.put("loads_are", factorNote());
+        root.put("sign_conventions", SIGNS);
+        WingStructure st = loads.structure();
+        Map<String, Object> s = new LinkedHashMap<>();
+        s.put("spar_chord_fraction", st.sparFraction());
+        s.put("mass_centre_chord_fraction", st.massCentreFraction());
+        s.put("distributed_mass_per_half", loads.distributedHalfMass());
+        s.put("distribution", st.table().isPresent() ? "mass table" : "in proportion to chord");
+        List<Object> pm = new ArrayList<>();
+        for (PointMass p : st.pointMasses()) {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("name", p.name());
+            m.put("mass_per_side", p.mass());
+            m.put("x", p.x());
+            m.put("y", p.y());
+            pm.add(m);
+        }
+        s.put("point_masses", pm);
+        s.put("half_wing_mass", loads.halfWingMass());
+        root.put("structure", s);
+        root.put("reference", Map.of("area", wing.reference().area(), "span", wing.reference().span()));
+        List<Object> cs = new ArrayList<>();
+        for (SpanwiseLoads l : results) {
+            LoadCase c = l.loadCase();
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("name", c.name());
+            m.put("origin", c.origin());
+            m.put("weight", c.weight());
+            m.put("load_factor", c.loadFactor());
+            m.put("speed", c.equivalentSpeed());
+            m.put("altitude", c.altitude());
+            m.put("dynamic_pressure", l.dynamicPressure());
+            m.put("CL", l.liftCoefficient());
+            m.put("alpha_deg", Math.toDegrees(l.alpha()));
+            m.put("y", l.y());
+            m.put("shear", l.shear());
+            m.put("bending", l.bending());
+            m.put("torsion", l.torsion());
+            m.put("chord_shear", l.chordShear());
+            m.put("chord_bending", l.chordBending());
+            Map<String, Object> r = new LinkedHashMap<>();
+            r.put("shear", l.rootShear());
+            r.put("bending", l.rootBending());
+            r.put("torsion", l.rootTorsion());
+            r.put("chord_shear", l.chordShear()[0]);
+            r.put("chord_bending", l.chordBending()[0]);
+            r.put("load_along_lift", l.loadAlongLift());
+            m.put("root", r);
+            cs.add(m);
+        }
+        root.put("cases", cs);
+        Map<String, Object> gov = new LinkedHashMap<>();
+        gov.put("y", g.y());
+        gov.put("shear", extremes(g.shear()));
+        gov.put("bending", extremes(g.bending()));
+        gov.put("torsion", extremes(g.torsion()));
+        root.put("governing", gov);
+        if (envelope != null) {
+            Map<String, Object> e = new LinkedHashMap<>();
+            e.put("note", ENVELOPE_NOTE);
+            e.put("gust_formula", GUST_FORMULA);
+            e.put("lift_slope_per_rad_of_wing", loads.liftLine().slope());
+            List<Object> pts = new ArrayList<>();
+            for (Envelope.Point p : envelope) {
+                Map<String, Object> m = new LinkedHashMap<>();
+                m.put("name", p.loadCase().name());
+                m.put("kind", p.kind());
+                m.put("speed", p.loadCase().equivalentSpeed());
+                m.put("load_factor", p.loadCase().loadFactor());
+                m.put("mass_ratio", Double.isNaN(p.massRatio()) ? null : p.massRatio());
+                m.put("gust_alleviation_factor", Double.isNaN(p.alleviation()) ? null : p.alleviation());
+                pts.add(m);
+            }
+            e.put("points", pts);
+            root.put("envelope", e);
+        }
+        return root;
+    }
+
+    private static Map<String, Object> extremes(Governing.Extremes e) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("max", e.max());
+        m.put("max_case", java.util.Arrays.stream(e.maxCase()).boxed().toList());
+        m.put("min", e.min());
+        m.put("min_case", java.util.Arrays.stream(e.minCase()).boxed().toList());
+        return m;
+    }
+
+    private String csv(List<SpanwiseLoads> results) {
+        Csv c = new Csv(List.of("case", "name", "load_factor", "speed_eas_m_s", "y_m", "shear_N", "bending_N_m",
+                "torsion_N_m", "chord_shear_N", "chord_bending_N_m"));
+        for (int i = 0; i < results.size(); i++) {
+            SpanwiseLoads l = results.get(i);
+            for (int k = 0; k < l.stations(); k++) {
+                c.row(i, l.loadCase().name(), l.loadCase().loadFactor(), l.loadCase().equivalentSpeed(), l.y()[k],
+                        l.shear()[k], l.bending()[k], l.torsion()[k], l.chordShear()[k], l.chordBending()[k]);
+            }
+        }
+        return "# " + CAUTION + " " + capitalized(factorNote()) + ".\n" + c;
+    }
+
+    private static String capitalized(String s) {
+        return Character.toUpperCase(s.charAt(0)) + s.substring(1);
+    }
+
+    private String table(Wing wing, LoadsAnalysis loads, List<SpanwiseLoads> results, Governing g,
+            List<Envelope.Point> envelope) {
+        String u = wing.displayUnit().symbol();
+        double k = wing.displayUnit().metres();
+        WingStructure st = loads.structure();
+        StringBuilder b = new StringBuilder(wing.name()).append('\n');
+        b.append("  spanwise loads of the right half-wing; ").append(factorNote()).append('\n');
+        b.append(String.format(Locale.ROOT, "  spar line at %.0f%% chord; half-wing mass %.2f kg (distributed %.2f kg, %s, "
+                + "centre at %.0f%% chord", 100 * st.sparFraction(), loads.halfWingMass(), loads.distributedHalfMass(),
+                st.table().isPresent() ? "mass table" : "by chord", 100 * st.massCentreFraction()));
+        for (PointMass p : st.pointMasses()) {
+            b.append(String.format(Locale.ROOT, "; %s %.2f kg at y %.3f %s", p.name(), p.mass(), p.y() / k, u));
+        }
+        b.append(")\n");
+        if (!st.hasMass()) {
+            b.append("  NOTE: no wing mass given: no inertia relief (larger loads in magnitude).\n");
+        }
+        b.append("  signs: shear up +, bending up-bending +, torsion nose-up + (about the spar line; see the README)\n\n");
+        TextTable cases = new TextTable(List.of("#", "case", "n", "EAS [kt]", "CL", "alpha [deg]", "root shear [N]",
+                "root bending [N m]", "root torsion [N m]"));
+        for (int i = 0; i < results.size(); i++) {
+            SpanwiseLoads l = results.get(i);
+            cases.row(List.of(String.valueOf(i), l.loadCase().name(), TextTable.fixed(l.loadCase().loadFactor(), 2),
+                    TextTable.fixed(l.loadCase().equivalentSpeed() * 3600 / 1852, 1), TextTable.fixed(l.liftCoefficient(), 3),
+                    TextTable.fixed(Math.toDegrees(l.alpha()), 2), TextTable.fixed(l.rootShear(), 0),
+                    TextTable.fixed(l.rootBending(), 0), TextTable.fixed(l.rootTorsion(), 0)));
+        }
+        b.append(cases.render()).append('\n');
+        b.append("  governing case at each station: value (case #)\n");
+        TextTable t = new TextTable(List.of("y [" + u + "]", "shear max [N]", "shear min [N]", "bending max [N m]",
+                "bending min [N m]", "torsion max [N m]", "torsion min [N m]"));
+        for (int s = 0; s < g.y().length; s++) {
+            t.row(List.of(TextTable.fixed(g.y()[s] / k, 3), cell(g.shear().max()[s], g.shear().maxCase()[s]),
+                    cell(g.shear().min()[s], g.shear().minCase()[s]), cell(g.bending().max()[s], g.bending().maxCase()[s]),
+                    cell(g.bending().min()[s], g.bending().minCase()[s]), cell(g.torsion().max()[s], g.torsion().maxCase()[s]),
+                    cell(g.torsion().min()[s], g.torsion().minCase()[s])));
+        }
+        b.append(t.render());
+        if (envelope != null) {
+            b.append('\n').append(StallCommand.wrap("Gust load factors: " + GUST_FORMULA + "; a = "
+                    + String.format(Locale.ROOT, "%.3f", loads.liftLine().slope()) + " per rad (the wing's own unless the "
+                    + "envelope file gives lift-slope), c = S/b. " + ENVELOPE_NOTE)).append('\n');
+        }
+        b.append('\n').append(StallCommand.wrap(CAUTION)).append('\n');
+        return b.toString();
+    }
+
+    private static String cell(double v, int c) {
+        return TextTable.fixed(v, 0) + " (" + c + ")";
+    }
+}

@@ -1,0 +1,129 @@
+package org.spanlift.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class LoadsCommandTest {
+
+    /** The demo trainer's structure: invented masses. */
+    static final String STRUCTURE = """
+            structure:
+              spar: 0.30
+              mass: 96kg
+              mass-centre: 0.40
+              point-masses:
+                - {name: fuel tank, mass: 38kg, y: 1.3, x: 0.55}
+                - {name: nav light, mass: 0.4kg, y: 4.9, chord-fraction: 0.3}
+            """;
+
+    @TempDir
+    static Path folder;
+
+    private static String trainer;
+
+    /** The demo trainer wing with the structure section, written to a temporary folder. */
+    private static synchronized String trainerWithStructure() throws IOException {
+        if (trainer == null) {
+            Path p = folder.resolve("trainer.wing.yaml");
+            Files.writeString(p, Files.readString(Path.of(CliRun.demo("trainer.wing.yaml"))) + STRUCTURE);
+            trainer = p.toString();
+        }
+        return trainer;
+    }
+
+    @Test
+    void singleCaseJsonCarriesTheContractKeysAndTheCaution() throws IOException {
+        String wing = trainerWithStructure();
+        CliRun r = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "102kt",
+                "--format", "json");
+        assertEquals(0, r.exitCode(), r.err());
+        for (String key : List.of("\"cases\"", "\"load_factor\"", "\"speed\"", "\"y\"", "\"shear\"", "\"bending\"",
+                "\"torsion\"", "\"root\"", "\"governing\"", "\"max_case\"", "\"min_case\"", "\"units\"", "\"caution\"",
+                "\"sign_conventions\"", "\"half_wing_mass\"")) {
+            assertTrue(r.out().contains(key), "missing " + key);
+        }
+        assertTrue(r.out().contains("preliminary sizing only"));
+        assertTrue(r.out().contains("no safety factor applied"));
+        assertTrue(r.out().contains("\"half_wing_mass\": 86.4"), "48 kg spread + 38.4 kg of point masses");
+        assertFalse(r.out().contains("NaN"));
+    }
+
+    @Test
+    void casesFileGivesOneCaseEachAndTheGoverningTable() throws IOException {
+        String wing = trainerWithStructure();
+        CliRun r = CliRun.of("loads", wing, "--cases", CliRun.demo("trainer.cases.yaml"));
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("push-over at cruise speed"));
+        assertTrue(r.out().contains("governing case at each station"));
+        assertTrue(r.out().contains("Caution: loads for preliminary sizing only"));
+    }
+
+    @Test
+    void envelopeNamesTheGustFormulaAndSaysItIsNoCompliance() throws IOException {
+        String wing = trainerWithStructure();
+        CliRun r = CliRun.of("loads", wing, "--envelope", CliRun.demo("trainer.envelope.yaml"), "-f", "json");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("23.341"));
+        assertTrue(r.out().contains("not a statement of compliance"));
+        assertTrue(r.out().contains("\"gust_alleviation_factor\""));
+    }
+
+    @Test
+    void safetyFactorMultipliesAndSaysSo() throws IOException {
+        String wing = trainerWithStructure();
+        CliRun limit = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "102kt", "-f", "csv");
+        CliRun ult = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "102kt", "-f", "csv",
+                "--safety-factor", "1.5");
+        assertEquals(0, ult.exitCode(), ult.err());
+        assertTrue(ult.out().startsWith("# Caution"));
+        assertTrue(ult.out().contains("safety factor 1.50"));
+        double m0 = Double.parseDouble(limit.out().lines().toList().get(2).split(",")[6]);
+        double m1 = Double.parseDouble(ult.out().lines().toList().get(2).split(",")[6]);
+        assertEquals(1.5 * m0, m1, 1e-6 * m1);
+    }
+
+    @Test
+    void wingMassOptionReplacesTheFilesMass() throws IOException {
+        String wing = trainerWithStructure();
+        CliRun r = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "1", "--speed", "80kt", "-f", "json",
+                "--wing-mass", "0kg");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("\"distributed_mass_per_half\": 0"), r.out().lines().filter(l -> l.contains("distributed"))
+                .findFirst().orElse(""));
+    }
+
+    @Test
+    void badInputGetsOneLineAndExitCodeTwo(@TempDir Path dir) throws IOException {
+        String wing = trainerWithStructure();
+        Path cases = dir.resolve("bad.cases.yaml");
+        Files.writeString(cases, "cases:\n  - {load-factor: 3.8, speed: 100kt}\n");
+        CliRun r = CliRun.of("loads", wing, "--cases", cases.toString());
+        assertEquals(2, r.exitCode());
+        assertEquals(1, r.err().lines().count(), r.err());
+        assertTrue(r.err().contains("bad.cases.yaml:2: cases[0]: missing key 'weight'"), r.err());
+
+        Path badWing = dir.resolve("bad.wing.yaml");
+        Files.writeString(badWing, Files.readString(Path.of(wing)).replace("y: 1.3, x: 0.55", "y: 6.3, x: 0.55"));
+        CliRun w = CliRun.of("loads", badWing.toString(), "--weight", "750kg", "--speed", "100kt");
+        assertEquals(2, w.exitCode());
+        assertEquals(1, w.err().lines().count(), w.err());
+        assertTrue(w.err().contains("structure.point-masses[0].y"), w.err());
+
+        CliRun none = CliRun.of("loads", wing);
+        assertEquals(2, none.exitCode());
+        CliRun both = CliRun.of("loads", wing, "--weight", "750kg", "--speed", "100kt", "--cases", cases.toString());
+        assertEquals(2, both.exitCode());
+        CliRun noSpeed = CliRun.of("loads", wing, "--weight", "750kg");
+        assertEquals(2, noSpeed.exitCode());
+        assertTrue(noSpeed.err().contains("--speed"), noSpeed.err());
+    }
+}

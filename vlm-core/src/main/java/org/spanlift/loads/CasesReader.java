@@ -1,0 +1,83 @@
+package org.spanlift.loads;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+
+import org.spanlift.atmosphere.StandardAtmosphere;
+import org.spanlift.io.Field;
+import org.spanlift.io.InputException;
+import org.spanlift.io.YamlParser;
+import org.spanlift.io.YamlValue;
+import org.spanlift.io.quantity.QuantityKind;
+
+/**
+ * Reads a cases file ({@code .cases.yaml}): a list of load cases, each with its weight, load factor and
+ * equivalent airspeed, altitude optional.
+ *
+ * <pre>
+ * cases:
+ *   - {name: pull-up at VA, weight: 1100kg, load-factor: 3.8, speed: 105kt}
+ *   - {name: push-over at VC, weight: 1100kg, load-factor: -1.5, speed: 125kt, altitude: 2000ft}
+ * </pre>
+ */
+public final class CasesReader {
+
+    public static final Set<String> TOP_KEYS = Set.of("cases");
+    public static final Set<String> CASE_KEYS = Set.of("name", "weight", "load-factor", "speed", "altitude");
+    /** Load factors accepted, both signs. */
+    public static final double MAX_LOAD_FACTOR = 15;
+    /** Most cases in one file. */
+    public static final int MAX_CASES = 500;
+
+    private CasesReader() {
+    }
+
+    public static List<LoadCase> read(Path path) {
+        String file = path.toString();
+        try {
+            return parse(Files.readString(path, StandardCharsets.UTF_8), file);
+        } catch (IOException e) {
+            throw new InputException(file, 0, "", "cannot read the file (" + e.getClass().getSimpleName() + ")");
+        }
+    }
+
+    public static List<LoadCase> parse(String text, String file) {
+        YamlValue tree = YamlParser.parse(text, file);
+        Field root = new Field(file, "", tree);
+        root.mapping();
+        root.allowOnly(TOP_KEYS);
+        Field list = root.required("cases", "a list of load cases {name, weight, load-factor, speed, altitude}");
+        List<Field> items = list.items();
+        if (items.isEmpty() || items.size() > MAX_CASES) {
+            throw list.error("expected from 1 to " + MAX_CASES + " cases, got " + items.size());
+        }
+        List<LoadCase> out = new ArrayList<>();
+        for (int i = 0; i < items.size(); i++) {
+            Field c = items.get(i);
+            c.allowOnly(CASE_KEYS);
+            String name = c.optional("name").map(Field::text).orElse("case " + (i + 1));
+            double w = Quantities.weight(c.required("weight", "the aircraft weight with a unit, such as 1100kg"));
+            double n = c.required("load-factor", "the load factor n (a plain number, negative for down loads)")
+                    .inRange(-MAX_LOAD_FACTOR, MAX_LOAD_FACTOR);
+            double v = Quantities.speed(c.required("speed", "the equivalent airspeed with a unit, such as 105kt"));
+            double h = c.optional("altitude").map(a -> altitude(a)).orElse(0.0);
+            out.add(new LoadCase(name, w, n, v, h, "given"));
+        }
+        return out;
+    }
+
+    /** A pressure altitude with its unit, within the standard atmosphere's range. */
+    static double altitude(Field f) {
+        double h = Quantities.of(f, QuantityKind.LENGTH);
+        if (h < StandardAtmosphere.MIN_ALTITUDE || h > StandardAtmosphere.MAX_ALTITUDE) {
+            throw f.error("a pressure altitude must be from " + Field.format(StandardAtmosphere.MIN_ALTITUDE)
+                    + " m to " + Field.format(StandardAtmosphere.MAX_ALTITUDE) + " m, got " + f.text());
+        }
+        return h;
+    }
+}

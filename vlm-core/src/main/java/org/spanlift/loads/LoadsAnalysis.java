@@ -1,0 +1,326 @@
+package org.spanlift.loads;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.TreeSet;
+
+import org.spanlift.atmosphere.StandardAtmosphere;
+import org.spanlift.geometry.Planform;
+import org.spanlift.geometry.Surface;
+import org.spanlift.lattice.Lattice;
+import org.spanlift.lattice.Strip;
+import org.spanlift.results.PanelForces;
+import org.spanlift.results.Solution;
+import org.spanlift.solve.BasisSolutions;
+import org.spanlift.solve.WingAnalysis;
+
+/**
+ * Spanwise shear, bending and torsion of the wing (the first surface) for symmetric load cases, at the
+ * strip edges of its right half. The air load is the Kutta-Joukowski force of every panel (so twist, camber
+ * and flap loads are in it) at the panel's bound-leg midpoint; the inertia relief is n g m along minus the
+ * lift direction for the wing's distributed mass (lumped per strip at its centroid) and its point masses.
+ * Moments are taken about the spar point of each station and resolved on axes along and normal to the
+ * spar line in the wing plane (see the package description for the signs).
+ *
+ * <p>Each case's angle of attack makes the wing alone carry n W: CL_wing = n W / (q S) on the lift line of
+ * the wing's own panels at the given deflections. With an aileron deflected the halves differ; the right
+ * half is reported, and the left half with deflection d is the right half with -d.
+ */
+public final class LoadsAnalysis {
+
+    private static final double[] GAUSS_X = {-0.9061798459386640, -0.5384693101056831, 0.0, 0.5384693101056831,
+        0.9061798459386640};
+    private static final double[] GAUSS_W = {0.2369268850561891, 0.4786286704993665, 0.5688888888888889,
+        0.4786286704993665, 0.2369268850561891};
+
+    private final WingAnalysis analysis;
+    private final WingStructure structure;
+    private final double[] deflections;
+    private final List<Strip> strips;
+    private final double[] edges;
+    private final double[] stripMass;
+    private final double[][] massPoint;
+    private final double[][] spar;
+    private final double[][] sparAxis;
+    private final double distributedHalfMass;
+    private final WingAnalysis.LiftLine wingLine;
+
+    private LoadsAnalysis(WingAnalysis analysis, WingStructure structure, double[] deflections) {
+        this.analysis = analysis;
+        this.structure = structure;
+        this.deflections = deflections.clone();
+        Surface wing = analysis.wing().main();
+        if (!wing.mirrored()) {
+            throw new IllegalArgumentException("loads are computed per half-wing: the first surface must be mirrored");
+        }
+        Lattice lattice = analysis.lattice();
+        List<Strip> right = new ArrayList<>();
+        for (Strip s : lattice.strips()) {
+            if (s.surface() == 0 && s.right()) {
+                right.add(s);
+            }
+        }
+        right.sort(Comparator.comparingDouble(Strip::yLeft));
+        this.strips = List.copyOf(right);
+        int n = strips.size();
+        this.edges = new double[n + 1];
+        for (int j = 0; j < n; j++) {
+            edges[j] = strips.get(j).yLeft();
+            if (j > 0 && Math.abs(strips.get(j - 1).yRight() - edges[j]) > 1e-12 * (1 + Math.abs(edges[j]))) {
+                throw new IllegalStateException("the wing's strips do not join edge to edge");
+            }
+        }
+        edges[n] = strips.get(n - 1).yRight();
+        Planform p = wing.planform();
+
+        // distributed mass per strip and its centroid
+        this.stripMass = new double[n];
+        this.massPoint = new double[n][];
+        double[] weight = new double[n];
+        double fm = structure.massCentreFraction();
+        double total = 0;
+        for (int j = 0; j < n; j++) {
+            double[] moments = massMoments(p, edges[j], edges[j + 1], fm);
+            weight[j] = moments[0];
+            total += moments[0];
+            massPoint[j] = moments[0] > 0
+                    ? new double[] {moments[1] / moments[0], moments[2] / moments[0], moments[3] / moments[0]}
+                    : new double[] {p.noseX(strips.get(j).y()) + fm * p.chord(strips.get(j).y()), strips.get(j).y(),
+                        p.noseZ(strips.get(j).y())};
+        }
+        if (structure.table().isPresent()) {
+            System.arraycopy(weight, 0, stripMass, 0, n);
+            this.distributedHalfMass = total;
+        } else {
+            double half = structure.wingMass().orElse(0.0) / 2;
+            for (int j = 0; j < n; j++) {
+                stripMass[j] = total > 0 ? half * weight[j] / total : 0;
+            }
+            this.distributedHalfMass = half;
+        }
+
+        // spar points and axes at each station
+        double fs = structure.sparFraction();
+        this.spar = new double[n + 1][];
+        for (int k = 0; k <= n; k++) {
+            double y = edges[k];
+            spar[k] = new double[] {p.noseX(y) + fs * p.chord(y), y, p.noseZ(y)};
+        }
+        this.sparAxis = new double[n + 1][];
+        for (int k = 0; k <= n; k++) {
+            int a = Math.min(k, n - 1);
+            double[] es = unit(minus(spar[a + 1], spar[a]));
+            double[] nw = unit(cross(new double[] {1, 0, 0}, es));
+            double[] et = cross(es, nw);
+            sparAxis[k] = new double[] {es[0], es[1], es[2], nw[0], nw[1], nw[2], et[0], et[1], et[2]};
+        }
+        this.wingLine = wingLiftLine();
+    }
+
+    /** The loads of {@code analysis}'s wing with the given structure, at deflections in rad (control order). */
+    public static LoadsAnalysis of(WingAnalysis analysis, WingStructure structure, double[] deflections) {
+        return new LoadsAnalysis(analysis, structure, deflections);
+    }
+
+    public WingStructure structure() {
+        return structure;
+    }
+
+    /** The stations: the right half's strip edges, root to tip, m (a copy). */
+    public double[] stations() {
+        return edges.clone();
+    }
+
+    /** The spar point at each station (x, y, z), m (copies). */
+    public double[][] sparPoints() {
+        double[][] out = new double[spar.length][];
+        for (int k = 0; k < spar.length; k++) {
+            out[k] = spar[k].clone();
+        }
+        return out;
+    }
+
+    /** One half's distributed mass, kg. */
+    public double distributedHalfMass() {
+        return distributedHalfMass;
+    }
+
+    /** The mass of one half-wing with its point masses, kg. */
+    public double halfWingMass() {
+        return distributedHalfMass + structure.pointMassPerSide();
+    }
+
+    /** The lift line of the wing's own panels (the first surface) at this analysis's deflections. */
+    public WingAnalysis.LiftLine liftLine() {
+        return wingLine;
+    }
+
+    /** The loads of one case (limit loads: no safety factor). */
+    public SpanwiseLoads loads(LoadCase c) {
+        double area = analysis.wing().reference().area();
+        double q = c.dynamicPressure();
+        double cl = c.liftCoefficient(area);
+        double alpha;
+        try {
+            alpha = wingLine.alphaFor(cl);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("load case '" + c.name() + "' needs CL " + String.format(java.util.Locale.ROOT,
+                    "%.3f", cl) + ", beyond the wing's linear range; check its weight, load factor and speed");
+        }
+        Solution s = analysis.solve(alpha, deflections);
+        PanelForces pf = s.panelForces();
+        double[] lift = {-Math.sin(alpha), 0, Math.cos(alpha)};
+        double ng = c.loadFactor() * StandardAtmosphere.G0;
+        int n = strips.size();
+        double[][] force = new double[n + 1][3];
+        double[][] moment = new double[n + 1][3];
+        for (int j = n - 1; j >= 0; j--) {
+            Strip st = strips.get(j);
+            double[] f = force[j];
+            double[] g = moment[j];
+            for (int r = 0; r < st.rows(); r++) {
+                int i = st.firstPanel() + r;
+                double[] fi = {q * pf.fx()[i], q * pf.fy()[i], q * pf.fz()[i]};
+                add(f, g, new double[] {pf.x()[i], pf.y()[i], pf.z()[i]}, fi);
+            }
+            double w = -ng * stripMass[j];
+            add(f, g, massPoint[j], new double[] {w * lift[0], w * lift[1], w * lift[2]});
+            for (int a = 0; a < 3; a++) {
+                f[a] += force[j + 1][a];
+                g[a] += moment[j + 1][a];
+            }
+        }
+        double[] shear = new double[n + 1];
+        double[] bending = new double[n + 1];
+        double[] torsion = new double[n + 1];
+        double[] chordShear = new double[n + 1];
+        double[] chordBending = new double[n + 1];
+        double loadAlongLift = 0;
+        for (int k = 0; k <= n; k++) {
+            double[] f = force[k].clone();
+            double[] g = moment[k].clone();
+            for (PointMass pm : structure.pointMasses()) {
+                if (pm.y() > edges[k]) {
+                    double w = -ng * pm.mass();
+                    Planform p = analysis.wing().main().planform();
+                    add(f, g, new double[] {pm.x(), pm.y(), p.noseZ(pm.y())},
+                            new double[] {w * lift[0], w * lift[1], w * lift[2]});
+                }
+            }
+            double[] m = minus(g, cross(spar[k], f));
+            double[] ax = sparAxis[k];
+            double[] es = {ax[0], ax[1], ax[2]};
+            double[] nw = {ax[3], ax[4], ax[5]};
+            double[] et = {ax[6], ax[7], ax[8]};
+            shear[k] = dot(f, nw);
+            chordShear[k] = dot(f, et);
+            bending[k] = dot(m, et);
+            torsion[k] = dot(m, es);
+            chordBending[k] = -dot(m, nw);
+            if (k == 0) {
+                loadAlongLift = dot(f, lift);
+            }
+        }
+        return new SpanwiseLoads(c, alpha, cl, q, edges.clone(), shear, bending, torsion, chordShear, chordBending,
+                loadAlongLift, 1);
+    }
+
+    /** The loads of every case, in order. */
+    public List<SpanwiseLoads> loads(List<LoadCase> cases) {
+        List<SpanwiseLoads> out = new ArrayList<>();
+        cases.forEach(c -> out.add(loads(c)));
+        return out;
+    }
+
+    private WingAnalysis.LiftLine wingLiftLine() {
+        Lattice lattice = analysis.lattice();
+        BasisSolutions basis = analysis.basis();
+        double x = 0;
+        double z = 0;
+        for (int i = 0; i < lattice.panelCount(); i++) {
+            if (lattice.strips().get(lattice.stripOf(i)).surface() != 0) {
+                continue;
+            }
+            double ly = lattice.by(i) - lattice.ay(i);
+            double gx = basis.alongX(i);
+            for (int c = 0; c < deflections.length; c++) {
+                gx += deflections[c] * basis.control(c, i);
+            }
+            x += 2 * gx * ly;
+            z += 2 * basis.alongZ(i) * ly;
+        }
+        double area = analysis.wing().reference().area();
+        return new WingAnalysis.LiftLine(Math.hypot(x, z) / area, Math.atan2(-x, z));
+    }
+
+    /**
+     * The integrals over [a, b] of the mass density w(y) (chord, or the table's mass per span), and of
+     * w times the mass centre's x, times y, times z: {int w, int w x, int w y, int w z}. Five-point
+     * Gauss-Legendre on each piece between the planform's stations and the table's rows, exact for the
+     * piecewise-polynomial planforms of degree up to nine.
+     */
+    private double[] massMoments(Planform p, double a, double b, double fm) {
+        TreeSet<Double> cuts = new TreeSet<>();
+        cuts.add(a);
+        cuts.add(b);
+        for (double y : p.stationYs()) {
+            if (y > a && y < b) {
+                cuts.add(y);
+            }
+        }
+        structure.table().ifPresent(t -> {
+            for (double y : t.y()) {
+                if (y > a && y < b) {
+                    cuts.add(y);
+                }
+            }
+        });
+        double[] out = new double[4];
+        Double lo = null;
+        for (double hi : cuts) {
+            if (lo != null) {
+                double mid = 0.5 * (lo + hi);
+                double half = 0.5 * (hi - lo);
+                for (int g = 0; g < GAUSS_X.length; g++) {
+                    double y = mid + half * GAUSS_X[g];
+                    double c = p.chord(y);
+                    double w = structure.table().map(t -> t.at(y)).orElse(c) * GAUSS_W[g] * half;
+                    out[0] += w;
+                    out[1] += w * (p.noseX(y) + fm * c);
+                    out[2] += w * y;
+                    out[3] += w * p.noseZ(y);
+                }
+            }
+            lo = hi;
+        }
+        return out;
+    }
+
+    private static void add(double[] f, double[] g, double[] r, double[] fi) {
+        for (int a = 0; a < 3; a++) {
+            f[a] += fi[a];
+        }
+        double[] rxf = cross(r, fi);
+        for (int a = 0; a < 3; a++) {
+            g[a] += rxf[a];
+        }
+    }
+
+    private static double[] cross(double[] a, double[] b) {
+        return new double[] {a[1] * b[2] - a[2] * b[1], a[2] * b[0] - a[0] * b[2], a[0] * b[1] - a[1] * b[0]};
+    }
+
+    private static double[] minus(double[] a, double[] b) {
+        return new double[] {a[0] - b[0], a[1] - b[1], a[2] - b[2]};
+    }
+
+    private static double dot(double[] a, double[] b) {
+        return a[0] * b[0] + a[1] * b[1] + a[2] * b[2];
+    }
+
+    private static double[] unit(double[] a) {
+        double l = Math.sqrt(dot(a, a));
+        return new double[] {a[0] / l, a[1] / l, a[2] / l};
+    }
+}

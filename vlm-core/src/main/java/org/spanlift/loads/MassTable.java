@@ -1,0 +1,49 @@
+package org.spanlift.loads;
+
+/**
+ * Mass per unit span of one half-wing, linear between rows, zero outside the first and last row.
+ *
+ * @param y        spanwise positions, m, strictly increasing (copied)
+ * @param perSpan  mass per unit span there, kg/m, not negative (copied)
+ */
+public record MassTable(double[] y, double[] perSpan) {
+
+    public MassTable {
+        if (y.length < 2 || y.length != perSpan.length) {
+            throw new IllegalArgumentException("a mass table needs at least two rows of y and mass per span");
+        }
+        y = y.clone();
+        perSpan = perSpan.clone();
+        for (int i = 0; i < y.length; i++) {
+            if (!(perSpan[i] >= 0) || !Double.isFinite(perSpan[i])) {
+                throw new IllegalArgumentException("a mass per span must not be negative");
+            }
+            if (i > 0 && !(y[i] > y[i - 1])) {
+                throw new IllegalArgumentException("mass-table rows must be in increasing y");
+            }
+        }
+    }
+
+    /** Mass per unit span at y, kg/m. */
+    public double at(double yy) {
+        if (yy < y[0] || yy > y[y.length - 1]) {
+            return 0;
+        }
+        for (int i = 1; i < y.length; i++) {
+            if (yy <= y[i]) {
+                double w = (yy - y[i - 1]) / (y[i] - y[i - 1]);
+                return (1 - w) * perSpan[i - 1] + w * perSpan[i];
+            }
+        }
+        return perSpan[y.length - 1];
+    }
+
+    /** The table's mass (one half), kg: the exact integral of the piecewise-linear table. */
+    public double total() {
+        double m = 0;
+        for (int i = 1; i < y.length; i++) {
+            m += 0.5 * (perSpan[i - 1] + perSpan[i]) * (y[i] - y[i - 1]);
+        }
+        return m;
+    }
+}

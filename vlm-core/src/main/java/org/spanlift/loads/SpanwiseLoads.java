@@ -1,0 +1,56 @@
+package org.spanlift.loads;
+
+/**
+ * The loads of one case on the right half-wing at its stations (the strip edges, root to tip), SI. Signs as
+ * in the package description: shear positive up, bending positive for up-bending, torsion positive
+ * nose-up, chord shear and chord bending positive for an aft load outboard.
+ *
+ * @param loadCase       the case
+ * @param alpha          angle of attack, rad
+ * @param liftCoefficient the wing's CL, n W / (q S)
+ * @param dynamicPressure q, Pa
+ * @param y              stations, m
+ * @param shear          N
+ * @param bending        N m
+ * @param torsion        N m
+ * @param chordShear     N
+ * @param chordBending   N m
+ * @param loadAlongLift  the root's outboard resultant along the lift direction, N: the half-wing's lift less
+ *                       n g times its mass
+ * @param factor         the factor the loads carry: 1 for limit loads, the safety factor for ultimate
+ */
+public record SpanwiseLoads(LoadCase loadCase, double alpha, double liftCoefficient, double dynamicPressure,
+        double[] y, double[] shear, double[] bending, double[] torsion, double[] chordShear, double[] chordBending,
+        double loadAlongLift, double factor) {
+
+    public int stations() {
+        return y.length;
+    }
+
+    public double rootShear() {
+        return shear[0];
+    }
+
+    public double rootBending() {
+        return bending[0];
+    }
+
+    public double rootTorsion() {
+        return torsion[0];
+    }
+
+    /** Every load times {@code f} (limit to ultimate with a safety factor); stations and case unchanged. */
+    public SpanwiseLoads scaled(double f) {
+        return new SpanwiseLoads(loadCase, alpha, liftCoefficient, dynamicPressure, y, times(shear, f),
+                times(bending, f), times(torsion, f), times(chordShear, f), times(chordBending, f), loadAlongLift * f,
+                factor * f);
+    }
+
+    private static double[] times(double[] v, double f) {
+        double[] out = new double[v.length];
+        for (int i = 0; i < v.length; i++) {
+            out[i] = v[i] * f;
+        }
+        return out;
+    }
+}
