@@ -38,7 +38,7 @@ class BadWingFileTest {
             missing-control-kind        | 6  | surfaces[0].controls[0].kind            | missing key; expected flap or aileron
             empty-required-value        | 6  | surfaces[0].stations[0].chord           | the key has no value; expected the local chord
             empty-optional-value        | 7  | surfaces[0].trapezoid.washout           | the key has no value; expected a value, or leave the key out
-            unknown-top-key             | 2  | colour                                  | unknown key; expected one of name, reference, sections, surfaces, units
+            unknown-top-key             | 2  | colour                                  | unknown key; expected one of name, reference, sections, structure, surfaces, units
             unknown-surface-key         | 4  | surfaces[0].mirrored                    | unknown key; expected one of controls, elliptic, lattice, mirror,
             unknown-station-key         | 6  | surfaces[0].stations[1].incidence       | unknown key; expected one of chord, nose-x, nose-z, section, twist, y
             unknown-trapezoid-key       | 7  | surfaces[0].trapezoid.tip-chord         | unknown key; expected one of dihedral, root-chord, root-nose,

@@ -110,8 +110,8 @@ class LoadsInputTest {
                 "cases:\n  - {weight: 1100kg, load-factor: 3.8, speed: 105kt}\n  - {load-factor: 3.8, speed: 105kt}\n",
                 "c.cases.yaml"));
         assertEquals(3, e.line());
-        assertEquals("cases[1]", e.field());
-        assertTrue(e.problem().contains("missing key 'weight'"), e.problem());
+        assertEquals("cases[1].weight", e.field());
+        assertTrue(e.problem().startsWith("missing key; expected"), e.problem());
     }
 
     @Test
