@@ -91,8 +91,8 @@ public final class SweepCommand implements Callable<Integer> {
             out.flush();
             Progress progress = new Progress(err, terminal, end - first, 0, System::nanoTime);
             RowFormat f = format;
-            SweepRunner.Outcome o = SweepRunner.run(sweep, first, end, threads, r -> {
-                out.print(f.row(names, sweep, r));
+            SweepRunner.Outcome o = SweepRunner.run(sweep, first, end, threads, r -> f.row(names, sweep, r), (r, row) -> {
+                out.print(row);
                 out.flush();
                 progress.step(r.failed());
             });
@@ -105,8 +105,8 @@ public final class SweepCommand implements Callable<Integer> {
         RowFormat f = format;
         SweepRunner.Outcome o;
         try {
-            o = SweepRunner.run(sweep, results.next(), end, threads, r -> {
-                results.write(f.row(names, sweep, r));
+            o = SweepRunner.run(sweep, results.next(), end, threads, r -> f.row(names, sweep, r), (r, row) -> {
+                results.write(row);
                 progress.step(r.failed());
             });
         } finally {

@@ -8,7 +8,8 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
-import java.util.function.Consumer;
+import java.util.function.BiConsumer;
+import java.util.function.Function;
 
 import org.spanlift.sweep.CaseEvaluator;
 import org.spanlift.sweep.CaseResult;
@@ -30,10 +31,18 @@ public final class SweepRunner {
     public record Outcome(long cases, long failed, long factorizations, long reuses) {
     }
 
+    private record Done(CaseResult result, String row) {
+    }
+
     private SweepRunner() {
     }
 
-    public static Outcome run(SweepFile sweep, long first, long end, int jobs, Consumer<CaseResult> sink) {
+    /**
+     * @param format turns a result into its row; runs on the worker threads, so it must be thread-safe
+     * @param sink   receives each result with its row, in case order, on the calling thread
+     */
+    public static Outcome run(SweepFile sweep, long first, long end, int jobs, Function<CaseResult, String> format,
+            BiConsumer<CaseResult, String> sink) {
         List<CaseEvaluator> evaluators = new CopyOnWriteArrayList<>();
         ThreadLocal<CaseEvaluator> local = ThreadLocal.withInitial(() -> {
             CaseEvaluator e = new CaseEvaluator(sweep);
@@ -49,16 +58,20 @@ public final class SweepRunner {
         long failed = 0;
         long done = 0;
         try {
-            ArrayDeque<Future<CaseResult>> window = new ArrayDeque<>();
+            ArrayDeque<Future<Done>> window = new ArrayDeque<>();
             int limit = WINDOW_PER_JOB * jobs;
             long next = first;
             while (next < end || !window.isEmpty()) {
                 while (next < end && window.size() < limit) {
                     long index = next++;
-                    window.add(pool.submit(() -> local.get().evaluate(index)));
+                    window.add(pool.submit(() -> {
+                        CaseResult r = local.get().evaluate(index);
+                        return new Done(r, format.apply(r));
+                    }));
                 }
-                CaseResult r = take(window.poll());
-                sink.accept(r);
+                Done d = take(window.poll());
+                CaseResult r = d.result();
+                sink.accept(r, d.row());
                 done++;
                 if (r.failed()) {
                     failed++;
@@ -76,7 +89,7 @@ public final class SweepRunner {
         return new Outcome(done, failed, f, u);
     }
 
-    private static CaseResult take(Future<CaseResult> future) {
+    private static Done take(Future<Done> future) {
         try {
             return future.get();
         } catch (InterruptedException e) {
