@@ -11,8 +11,9 @@ import picocli.CommandLine.Command;
 /** The {@code spanlift} command: vortex-lattice analysis of light-aircraft wings. */
 @Command(name = "spanlift", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Vortex-lattice wing analysis: span load, lift slope, induced drag and span efficiency.",
-        subcommands = {SolveCommand.class, StallCommand.class, LoadsCommand.class, PlotCommand.class,
-                ReportCommand.class, CompareCommand.class, ValidateCommand.class},
+        subcommands = {SolveCommand.class, StallCommand.class, LoadsCommand.class, SweepCommand.class,
+                MergeCommand.class, PlotCommand.class, ReportCommand.class, CompareCommand.class,
+                ValidateCommand.class},
         footer = {"", "Exit codes: 0 success; 1 the run finished but some case failed; 2 bad input or usage;"
                 + " 3 internal error."})
 public final class SpanliftCommand implements Runnable {

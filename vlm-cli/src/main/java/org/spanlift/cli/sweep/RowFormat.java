@@ -1,0 +1,246 @@
+package org.spanlift.cli.sweep;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.regex.Pattern;
+
+import org.spanlift.sweep.CaseResult;
+import org.spanlift.sweep.ResultColumn;
+import org.spanlift.sweep.SweepFile;
+
+/**
+ * How sweep rows are written and read back: CSV (a header line, then one line per case) or JSON Lines (one
+ * flat object per case). Columns: {@code case} (index from 0 in the whole design), {@code id}, the parameter
+ * paths, the result columns, {@code feasible} (with constraints) and {@code error}. Numbers are written in
+ * full precision (Java's shortest round-trip form); an absent value is an empty cell or null. Every row is
+ * one line, so a row is complete exactly when its newline is there.
+ */
+public enum RowFormat {
+    CSV, JSONL;
+
+    private static final Pattern JSON_NUMBER = Pattern.compile("-?(?:0|[1-9]\\d*)(?:\\.\\d+)?(?:[eE][-+]?\\d+)?");
+
+    /** The format of an output file by its extension, or null. */
+    public static RowFormat of(String fileName) {
+        String lower = fileName.toLowerCase(Locale.ROOT);
+        if (lower.endsWith(".csv")) {
+            return CSV;
+        }
+        if (lower.endsWith(".jsonl")) {
+            return JSONL;
+        }
+        return null;
+    }
+
+    public String extension() {
+        return this == CSV ? ".csv" : ".jsonl";
+    }
+
+    /** The column names of a sweep's rows. */
+    public static List<String> columnNames(SweepFile sweep) {
+        List<String> names = new ArrayList<>();
+        names.add("case");
+        names.add("id");
+        sweep.parameters().forEach(p -> names.add(p.path().text()));
+        sweep.columns().forEach(c -> names.add(c.name()));
+        if (!sweep.constraints().isEmpty()) {
+            names.add("feasible");
+        }
+        names.add("error");
+        return names;
+    }
+
+    /** The header line with its newline (CSV), or null (JSON Lines has none). */
+    public String header(List<String> names) {
+        if (this == JSONL) {
+            return null;
+        }
+        StringBuilder b = new StringBuilder();
+        for (int i = 0; i < names.size(); i++) {
+            b.append(i == 0 ? "" : ",").append(csvText(names.get(i)));
+        }
+        return b.append('\n').toString();
+    }
+
+    /** One row with its newline. */
+    public String row(List<String> names, SweepFile sweep, CaseResult r) {
+        List<Object> cells = new ArrayList<>();
+        cells.add(r.index());
+        cells.add(r.id());
+        for (String v : r.values()) {
+            cells.add(new ParameterValue(v));
+        }
+        List<ResultColumn> columns = sweep.columns();
+        for (int i = 0; i < columns.size(); i++) {
+            cells.add(r.results()[i]);
+        }
+        if (!sweep.constraints().isEmpty()) {
+            cells.add(r.feasible());
+        }
+        cells.add(r.error());
+        StringBuilder b = new StringBuilder();
+        if (this == CSV) {
+            for (int i = 0; i < cells.size(); i++) {
+                b.append(i == 0 ? "" : ",").append(csvCell(cells.get(i)));
+            }
+        } else {
+            b.append('{');
+            for (int i = 0; i < cells.size(); i++) {
+                b.append(i == 0 ? "" : ",");
+                jsonString(names.get(i), b);
+                b.append(':');
+                jsonCell(cells.get(i), b);
+            }
+            b.append('}');
+        }
+        return b.append('\n').toString();
+    }
+
+    /** A parameter value as written in the sweep (a number stays a number in JSON Lines). */
+    private record ParameterValue(String text) {
+    }
+
+    static String number(double d) {
+        if (!Double.isFinite(d)) {
+            throw new IllegalStateException("a result is not a finite number");
+        }
+        if (d == Math.rint(d) && Math.abs(d) < 1e15) {
+            return Long.toString((long) d);
+        }
+        return Double.toString(d);
+    }
+
+    private static String csvCell(Object v) {
+        if (v == null) {
+            return "";
+        }
+        if (v instanceof Double d) {
+            return number(d);
+        }
+        if (v instanceof ParameterValue p) {
+            return csvText(p.text());
+        }
+        return csvText(String.valueOf(v));
+    }
+
+    private static String csvText(String s) {
+        if (s.contains(",") || s.contains("\"") || s.contains("\n") || s.contains("\r")) {
+            return '"' + s.replace("\"", "\"\"").replace('\n', ' ').replace('\r', ' ') + '"';
+        }
+        return s;
+    }
+
+    private static void jsonCell(Object v, StringBuilder b) {
+        if (v == null) {
+            b.append("null");
+        } else if (v instanceof Double d) {
+            b.append(number(d));
+        } else if (v instanceof Long || v instanceof Boolean) {
+            b.append(v);
+        } else if (v instanceof ParameterValue p) {
+            if (JSON_NUMBER.matcher(p.text()).matches()) {
+                b.append(p.text());
+            } else {
+                jsonString(p.text(), b);
+            }
+        } else {
+            jsonString(String.valueOf(v), b);
+        }
+    }
+
+    static void jsonString(String s, StringBuilder b) {
+        b.append('"');
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            switch (c) {
+                case '"' -> b.append("\\\"");
+                case '\\' -> b.append("\\\\");
+                case '\n' -> b.append("\\n");
+                case '\r' -> b.append("\\r");
+                case '\t' -> b.append("\\t");
+                default -> {
+                    if (c < 0x20) {
+                        b.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
+                    } else {
+                        b.append(c);
+                    }
+                }
+            }
+        }
+        b.append('"');
+    }
+
+    /**
+     * The cells of a row written by {@link #row}, by column name; absent values are null, and everything
+     * else is the cell's text (a JSON string unescaped, a number or boolean as written).
+     */
+    public Map<String, String> parse(List<String> names, String line) {
+        List<String> cells = this == CSV ? splitCsv(line) : null;
+        Map<String, String> out = new LinkedHashMap<>();
+        if (this == CSV) {
+            if (cells.size() != names.size()) {
+                throw new IllegalArgumentException("a row has " + cells.size() + " cells, the header " + names.size());
+            }
+            for (int i = 0; i < names.size(); i++) {
+                out.put(names.get(i), cells.get(i).isEmpty() ? null : cells.get(i));
+            }
+            return out;
+        }
+        return FlatJson.parse(line);
+    }
+
+    /** The case index at the start of a row, read without parsing the rest. */
+    public long caseIndex(String line) {
+        int start;
+        if (this == CSV) {
+            start = 0;
+        } else {
+            String prefix = "{\"case\":";
+            if (!line.startsWith(prefix)) {
+                throw new IllegalArgumentException("a row does not start with its case");
+            }
+            start = prefix.length();
+        }
+        int end = start;
+        while (end < line.length() && Character.isDigit(line.charAt(end))) {
+            end++;
+        }
+        if (end == start) {
+            throw new IllegalArgumentException("a row does not start with its case");
+        }
+        return Long.parseLong(line.substring(start, end));
+    }
+
+    private static List<String> splitCsv(String line) {
+        List<String> out = new ArrayList<>();
+        StringBuilder cell = new StringBuilder();
+        boolean quoted = false;
+        for (int i = 0; i < line.length(); i++) {
+            char c = line.charAt(i);
+            if (quoted) {
+                if (c == '"') {
+                    if (i + 1 < line.length() && line.charAt(i + 1) == '"') {
+                        cell.append('"');
+                        i++;
+                    } else {
+                        quoted = false;
+                    }
+                } else {
+                    cell.append(c);
+                }
+            } else if (c == '"') {
+                quoted = true;
+            } else if (c == ',') {
+                out.add(cell.toString());
+                cell.setLength(0);
+            } else {
+                cell.append(c);
+            }
+        }
+        out.add(cell.toString());
+        return out;
+    }
+}

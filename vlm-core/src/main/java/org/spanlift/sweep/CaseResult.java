@@ -1,0 +1,40 @@
+package org.spanlift.sweep;
+
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+import java.util.List;
+
+/**
+ * The outcome of one case: its index in the design, its stable id, its parameter values, and either its
+ * results (aligned with the sweep's columns; a {@code Double}, a {@code Boolean} flag, or null where a value
+ * does not exist, such as e near zero lift) or the error that stopped it.
+ *
+ * @param feasible whether the case meets every constraint; null without constraints or when it failed
+ */
+public record CaseResult(long index, String id, String[] values, Object[] results, Boolean feasible, String error) {
+
+    /** Hex digits of a case id (64 bits of SHA-256). */
+    public static final int ID_LENGTH = 16;
+
+    public boolean failed() {
+        return error != null;
+    }
+
+    /**
+     * The stable id of a case: the first 64 bits of SHA-256 over {@code path=value} lines, one per parameter,
+     * so it depends on the parameter values alone (not on the case's index or the design).
+     */
+    public static String id(List<Parameter> parameters, String[] values) {
+        try {
+            MessageDigest md = MessageDigest.getInstance("SHA-256");
+            for (int p = 0; p < parameters.size(); p++) {
+                md.update((parameters.get(p).path().text() + "=" + values[p] + "\n").getBytes(StandardCharsets.UTF_8));
+            }
+            return HexFormat.of().formatHex(md.digest()).substring(0, ID_LENGTH);
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is missing from this Java runtime", e);
+        }
+    }
+}

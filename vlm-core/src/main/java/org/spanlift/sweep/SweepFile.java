@@ -1,0 +1,543 @@
+package org.spanlift.sweep;
+
+import java.io.IOException;
+import java.math.BigDecimal;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.HexFormat;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.Set;
+
+import org.spanlift.atmosphere.AtmosphereState;
+import org.spanlift.atmosphere.StandardAtmosphere;
+import org.spanlift.flight.FlightCondition;
+import org.spanlift.geometry.ControlKind;
+import org.spanlift.geometry.ControlSurface;
+import org.spanlift.geometry.Wing;
+import org.spanlift.io.Field;
+import org.spanlift.io.InputException;
+import org.spanlift.io.WingFileReader;
+import org.spanlift.io.YamlParser;
+import org.spanlift.io.YamlValue;
+import org.spanlift.io.quantity.Quantity;
+import org.spanlift.io.quantity.QuantityFormatException;
+import org.spanlift.io.quantity.QuantityKind;
+import org.spanlift.lattice.LatticeBuilder;
+import org.spanlift.stall.MissingSectionDataException;
+import org.spanlift.stall.StripLimits;
+
+/**
+ * A sweep file ({@code .sweep.yaml}), read and checked: the base wing file, the swept parameters, the
+ * design (full grid or Latin hypercube), the flight condition and points, the result columns, constraints
+ * and ranking. Every problem is an {@link InputException} naming the file, line and field.
+ */
+public final class SweepFile {
+
+    /** The largest design run without {@code --force}. */
+    public static final long MAX_CASES_WITHOUT_FORCE = 10_000_000L;
+    /** The conservative cl_max of {@code assume-cl-max: true}, the same as the stall command's default. */
+    public static final double CONSERVATIVE_CL_MAX = 1.2;
+    /** Standard gravity, m/s^2, for a weight given as a mass. */
+    public static final double STANDARD_GRAVITY = 9.80665;
+
+    static final Set<String> TOP_KEYS = Set.of("base", "parameters", "design", "flight", "points", "columns",
+            "constraints", "rank", "assume-cl-max");
+    static final Set<String> RANGE_KEYS = Set.of("from", "to", "step");
+    static final Set<String> DESIGN_KEYS = Set.of("kind", "cases", "seed");
+    static final Set<String> FLIGHT_KEYS = Set.of("weight", "altitude", "isa-offset", "load-factor", "flaps");
+    static final Set<String> POINT_KEYS = Set.of("alpha", "CL");
+    static final Set<String> RANK_KEYS = Set.of("by", "order", "keep");
+
+    private final String file;
+    private final String baseName;
+    private final Path basePath;
+    private final YamlValue baseTree;
+    private final Wing baseWing;
+    private final List<Parameter> parameters;
+    private final Design design;
+    private final List<ResultColumn> columns;
+    private final List<Constraint> constraints;
+    private final Ranking ranking;
+    private final Optional<FlightCondition> condition;
+    private final OptionalDouble flapsDeg;
+    private final OptionalDouble assumeClMax;
+    private final String fingerprint;
+
+    private SweepFile(String file, String baseName, Path basePath, YamlValue baseTree, Wing baseWing,
+            List<Parameter> parameters, Design design, List<ResultColumn> columns, List<Constraint> constraints,
+            Ranking ranking, Optional<FlightCondition> condition, OptionalDouble flapsDeg, OptionalDouble assumeClMax,
+            String fingerprint) {
+        this.file = file;
+        this.baseName = baseName;
+        this.basePath = basePath;
+        this.baseTree = baseTree;
+        this.baseWing = baseWing;
+        this.parameters = List.copyOf(parameters);
+        this.design = design;
+        this.columns = List.copyOf(columns);
+        this.constraints = List.copyOf(constraints);
+        this.ranking = ranking;
+        this.condition = condition;
+        this.flapsDeg = flapsDeg;
+        this.assumeClMax = assumeClMax;
+        this.fingerprint = fingerprint;
+    }
+
+    /**
+     * Reads and checks a sweep file and its base wing file.
+     *
+     * @param force allow designs of more than {@link #MAX_CASES_WITHOUT_FORCE} cases
+     */
+    public static SweepFile read(Path path, boolean force) {
+        String file = path.toString();
+        String text = readText(path, file);
+        Field root = new Field(file, "", YamlParser.parse(text, file));
+        root.mapping();
+        root.allowOnly(TOP_KEYS);
+
+        Field baseField = root.required("base", "the base wing file, relative to the sweep file");
+        String baseName = baseField.text();
+        Path folder = path.toAbsolutePath().getParent();
+        Path basePath = path.getParent() == null ? Path.of(baseName) : path.getParent().resolve(baseName);
+        if (!Files.isRegularFile(basePath)) {
+            throw baseField.error("no wing file '" + baseName + "' beside the sweep file (in " + folder + ")");
+        }
+        String baseText = readText(basePath, basePath.toString());
+        YamlValue baseTree = YamlParser.parse(baseText, basePath.toString());
+        Wing baseWing = WingFileReader.fromTree(baseTree, basePath.toString());
+        List<String> controls = baseWing.controls().stream().map(ControlSurface::name).toList();
+
+        Field paramsField = root.required("parameters", "a mapping from wing-file paths to values or ranges");
+        List<Parameter> parameters = new ArrayList<>();
+        for (Field p : paramsField.entries()) {
+            parameters.add(parameter(p, baseTree));
+        }
+        if (parameters.isEmpty()) {
+            throw paramsField.error("expected at least one parameter");
+        }
+
+        Design design = design(root, paramsField, parameters, force);
+
+        Optional<Field> flight = root.optional("flight");
+        flight.ifPresent(f -> f.allowOnly(FLIGHT_KEYS));
+        OptionalDouble weight = flight.flatMap(f -> f.optional("weight")).map(SweepFile::weight)
+                .map(OptionalDouble::of).orElse(OptionalDouble.empty());
+        double altitude = flight.flatMap(f -> f.optional("altitude")).map(f -> quantity(f, QuantityKind.LENGTH))
+                .orElse(0.0);
+        double isaOffset = flight.flatMap(f -> f.optional("isa-offset"))
+                .map(f -> quantity(f, QuantityKind.TEMPERATURE_DIFFERENCE)).orElse(0.0);
+        double loadFactor = flight.flatMap(f -> f.optional("load-factor")).map(f -> f.inRange(0.1, 15)).orElse(1.0);
+        OptionalDouble flaps = flight.flatMap(f -> f.optional("flaps")).map(f -> OptionalDouble.of(f.inRange(-45, 45)))
+                .orElse(OptionalDouble.empty());
+        Optional<FlightCondition> condition = Optional.empty();
+        if (weight.isPresent()) {
+            Field at = flight.orElseThrow();
+            AtmosphereState atm;
+            try {
+                atm = StandardAtmosphere.at(altitude, isaOffset);
+            } catch (IllegalArgumentException e) {
+                throw at.optional("altitude").orElse(at).error(e.getMessage());
+            }
+            condition = Optional.of(new FlightCondition(weight.getAsDouble(), loadFactor, atm, OptionalDouble.empty()));
+        }
+        if (flaps.isPresent() && baseWing.controls().stream().noneMatch(c -> c.kind() == ControlKind.FLAP)) {
+            throw flight.orElseThrow().required("flaps", "").error("the base wing has no control of kind flap");
+        }
+
+        List<Double> alphas = new ArrayList<>();
+        List<Double> lifts = new ArrayList<>();
+        root.optional("points").ifPresent(p -> {
+            p.allowOnly(POINT_KEYS);
+            p.optional("alpha").ifPresent(a -> alphas.addAll(numbers(a, -30, 30)));
+            p.optional("CL").ifPresent(c -> lifts.addAll(numbers(c, -4, 4)));
+        });
+
+        Field columnsField = root.required("columns", "a list of result names, such as lift_slope_per_rad, "
+                + "e@CL=0.5, stall.eta");
+        Set<String> names = new LinkedHashSet<>();
+        for (Field c : columnsField.items()) {
+            String name = c.text().trim();
+            List<String> expanded = new ArrayList<>();
+            if (ResultColumn.POINT_KEYS.contains(name) && (!alphas.isEmpty() || !lifts.isEmpty())) {
+                alphas.forEach(a -> expanded.add(name + "@alpha=" + Field.format(a)));
+                lifts.forEach(l -> expanded.add(name + "@CL=" + Field.format(l)));
+            } else {
+                expanded.add(name);
+            }
+            for (String e : expanded) {
+                column(c, e, controls);
+                if (!names.add(e)) {
+                    throw c.error("the column " + e + " is listed twice");
+                }
+            }
+        }
+        if (names.isEmpty()) {
+            throw columnsField.error("expected at least one result column");
+        }
+
+        List<Constraint> constraints = new ArrayList<>();
+        root.optional("constraints").ifPresent(cs -> {
+            for (Field c : cs.items()) {
+                Constraint k;
+                try {
+                    k = Constraint.parse(c.text(), controls);
+                } catch (Constraint.ConstraintException | ResultColumn.ColumnException e) {
+                    throw c.error(e.getMessage());
+                }
+                constraints.add(k);
+                names.addAll(k.columns());
+            }
+        });
+
+        Ranking ranking = root.optional("rank").map(r -> {
+            r.allowOnly(RANK_KEYS);
+            Field by = r.required("by", "the column to rank by");
+            column(by, by.text().trim(), controls);
+            String order = r.optional("order").map(o -> o.choice(List.of("max", "min"))).orElse("max");
+            int keep = r.optional("keep").map(k -> k.integer(1, Ranking.MAX_KEEP)).orElse(Ranking.DEFAULT_KEEP);
+            return new Ranking(by.text().trim(), order.equals("max"), keep);
+        }).orElse(null);
+        if (ranking != null) {
+            names.add(ranking.by());
+        }
+
+        OptionalDouble assume = root.optional("assume-cl-max").map(a -> {
+            if (a.value() instanceof YamlValue.Scalar s && s.plain()
+                    && (s.text().equalsIgnoreCase("true") || s.text().equalsIgnoreCase("false"))) {
+                return a.bool() ? OptionalDouble.of(CONSERVATIVE_CL_MAX) : OptionalDouble.empty();
+            }
+            return OptionalDouble.of(a.inRange(0.3, 3));
+        }).orElse(OptionalDouble.empty());
+
+        List<ResultColumn> columns = new ArrayList<>();
+        for (String n : names) {
+            columns.add(ResultColumn.parse(n, controls));
+        }
+        boolean stall = columns.stream().anyMatch(ResultColumn::needsClMax);
+        if (stall && condition.isEmpty() && columns.stream().anyMatch(c -> c.group() == ResultColumn.Group.STALL_SPEED)) {
+            throw columnsField.error("stall_speed columns need a weight: add flight: {weight: ...} (such as 1100kg)");
+        }
+        if (columns.stream().anyMatch(c -> c.group() == ResultColumn.Group.STALL_FLAPS)
+                && baseWing.controls().stream().noneMatch(c -> c.kind() == ControlKind.FLAP)) {
+            throw columnsField.error("stall_flaps columns need a control of kind flap; the base wing has none");
+        }
+        if (stall && assume.isEmpty()) {
+            requireClMax(columnsField, baseName, basePath, baseWing, baseTree, parameters, design);
+        }
+        if (stall && assume.isPresent()) {
+            columns.add(ResultColumn.parse(ResultColumn.ASSUMED_CL_MAX, controls));
+        }
+        return new SweepFile(file, baseName, basePath, baseTree, baseWing, parameters, design, columns, constraints,
+                ranking, condition, flaps, assume, fingerprint(text, baseText));
+    }
+
+    private static String readText(Path path, String file) {
+        try {
+            return Files.readString(path, StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            throw new InputException(file, 0, "", "cannot read the file (" + e.getClass().getSimpleName() + ")");
+        }
+    }
+
+    private static Parameter parameter(Field p, YamlValue baseTree) {
+        String pathText = p.path().substring("parameters.".length());
+        ParameterPath path;
+        try {
+            path = ParameterPath.parse(pathText);
+        } catch (ParameterPath.PathException e) {
+            throw p.error(e.getMessage());
+        }
+        Parameter parameter;
+        if (p.value() instanceof YamlValue.Sequence) {
+            List<String> values = new ArrayList<>();
+            Set<String> seen = new HashSet<>();
+            for (Field item : p.items()) {
+                if (!(item.value() instanceof YamlValue.Scalar)) {
+                    throw item.error("expected a plain value (a number or a word), got " + item.value().describe());
+                }
+                String v = item.text().trim();
+                if (!seen.add(v)) {
+                    throw item.error("the value " + v + " is listed twice");
+                }
+                values.add(v);
+            }
+            if (values.isEmpty()) {
+                throw p.error("expected at least one value");
+            }
+            parameter = Parameter.ofList(path, p.line(), values);
+        } else if (p.value() instanceof YamlValue.Mapping) {
+            p.allowOnly(RANGE_KEYS);
+            Field fromField = p.required("from", "the first value of the range");
+            Field toField = p.required("to", "the last value of the range");
+            BigDecimal from = decimal(fromField);
+            BigDecimal to = decimal(toField);
+            BigDecimal step = p.optional("step").map(SweepFile::decimal).orElse(null);
+            if (step != null) {
+                Field stepField = p.required("step", "");
+                if (step.signum() == 0) {
+                    throw stepField.error("the step must not be zero");
+                }
+                if (to.compareTo(from) != 0 && to.subtract(from).signum() != step.signum()) {
+                    throw stepField.error("the step must lead from " + fromField.text() + " to " + toField.text()
+                            + ": expected a " + (to.compareTo(from) > 0 ? "positive" : "negative") + " step, got "
+                            + stepField.text());
+                }
+            } else if (to.compareTo(from) < 0) {
+                throw toField.error("must not be below 'from' (" + fromField.text() + ") in a range without a step");
+            }
+            parameter = Parameter.ofRange(path, p.line(), from, to, step);
+        } else {
+            throw p.error("expected a list of values or a range {from: ..., to: ..., step: ...}, got "
+                    + p.value().describe());
+        }
+        String first = parameter.hasStep() || !parameter.isRange() ? parameter.gridValue(0) : parameter.sample(0);
+        try {
+            path.apply(baseTree, first);
+        } catch (ParameterPath.PathException e) {
+            throw p.error(e.getMessage());
+        }
+        return parameter;
+    }
+
+    private static BigDecimal decimal(Field f) {
+        f.number();
+        return new BigDecimal(f.text().trim().replace("_", ""));
+    }
+
+    private static Design design(Field root, Field paramsField, List<Parameter> parameters, boolean force) {
+        Optional<Field> d = root.optional("design");
+        String kind = "grid";
+        if (d.isPresent() && d.get().value() instanceof YamlValue.Scalar) {
+            kind = d.get().choice(List.of("grid", "latin-hypercube"));
+        } else if (d.isPresent()) {
+            d.get().allowOnly(DESIGN_KEYS);
+            kind = d.get().optional("kind").map(k -> k.choice(List.of("grid", "latin-hypercube"))).orElse("grid");
+        }
+        Field at = d.orElse(paramsField);
+        if (kind.equals("grid")) {
+            if (d.isPresent() && d.get().value() instanceof YamlValue.Mapping) {
+                for (String k : List.of("cases", "seed")) {
+                    if (d.get().has(k)) {
+                        throw d.get().required(k, "").error("a full grid takes no " + k + "; use kind: latin-hypercube");
+                    }
+                }
+            }
+            for (Parameter p : parameters) {
+                if (p.isRange() && !p.hasStep()) {
+                    throw new InputException(at.file(), p.line(), "parameters." + p.path().text(),
+                            "a range in a full grid needs a step");
+                }
+            }
+            long n = Design.gridCount(parameters);
+            if (n > MAX_CASES_WITHOUT_FORCE && !force) {
+                throw at.error("the full grid has " + (n == Long.MAX_VALUE ? "too many" : String.valueOf(n))
+                        + " cases, more than " + MAX_CASES_WITHOUT_FORCE + "; use --force to run it anyway, or a "
+                        + "latin-hypercube design");
+            }
+            if (n == Long.MAX_VALUE) {
+                throw at.error("the full grid has too many cases to count");
+            }
+            return Design.grid(parameters);
+        }
+        Field lhs = d.orElseThrow();
+        if (!(lhs.value() instanceof YamlValue.Mapping)) {
+            throw lhs.error("a Latin hypercube needs its cases and a seed: design: {kind: latin-hypercube, cases: 200, "
+                    + "seed: 1}");
+        }
+        Field casesField = lhs.required("cases", "the number of cases");
+        long cases = wholeNumber(casesField, 1, force ? Long.MAX_VALUE / 4 : Long.MAX_VALUE / 4);
+        if (cases > MAX_CASES_WITHOUT_FORCE && !force) {
+            throw casesField.error("more than " + MAX_CASES_WITHOUT_FORCE + " cases; use --force to run them anyway");
+        }
+        Field seedField = lhs.required("seed", "a whole number, so that the same cases come out on every run");
+        long seed = wholeNumber(seedField, Long.MIN_VALUE / 2, Long.MAX_VALUE / 2);
+        return Design.latinHypercube(parameters, cases, seed);
+    }
+
+    private static long wholeNumber(Field f, long lo, long hi) {
+        f.number();
+        try {
+            BigDecimal d = new BigDecimal(f.text().trim().replace("_", ""));
+            long v = d.longValueExact();
+            if (v < lo || v > hi) {
+                throw f.error("must be from " + lo + " to " + hi + ", got " + v);
+            }
+            return v;
+        } catch (ArithmeticException | NumberFormatException e) {
+            throw f.error("expected a whole number, got " + f.text());
+        }
+    }
+
+    private static double weight(Field f) {
+        String t = f.text();
+        double w;
+        try {
+            w = Quantity.parse(t, QuantityKind.FORCE).value();
+        } catch (QuantityFormatException force) {
+            try {
+                w = Quantity.parse(t, QuantityKind.MASS).value() * STANDARD_GRAVITY;
+            } catch (QuantityFormatException mass) {
+                throw f.error(force.getMessage() + ", or a mass in kg");
+            }
+        }
+        if (!(w > 0)) {
+            throw f.error("must be positive, got " + t);
+        }
+        return w;
+    }
+
+    private static double quantity(Field f, QuantityKind kind) {
+        try {
+            return Quantity.parse(f.text(), kind).value();
+        } catch (QuantityFormatException e) {
+            throw f.error(e.getMessage());
+        }
+    }
+
+    private static List<Double> numbers(Field f, double lo, double hi) {
+        List<Double> out = new ArrayList<>();
+        if (f.value() instanceof YamlValue.Mapping) {
+            f.allowOnly(RANGE_KEYS);
+            Field fromField = f.required("from", "the first value");
+            Field toField = f.required("to", "the last value");
+            Field stepField = f.required("step", "the step");
+            BigDecimal from = decimal(fromField);
+            BigDecimal to = decimal(toField);
+            BigDecimal step = decimal(stepField);
+            if (step.signum() == 0 || (to.compareTo(from) != 0 && to.subtract(from).signum() != step.signum())) {
+                throw stepField.error("the step must be non-zero and lead from " + fromField.text() + " to "
+                        + toField.text());
+            }
+            long n = Parameter.rangeCount(from, to, step);
+            if (n > 100) {
+                throw f.error("at most 100 points, got " + n);
+            }
+            for (long i = 0; i < n; i++) {
+                out.add(from.add(step.multiply(BigDecimal.valueOf(i))).doubleValue());
+            }
+        } else {
+            for (Field item : f.items()) {
+                out.add(item.inRange(lo, hi));
+            }
+        }
+        for (double v : out) {
+            if (v < lo || v > hi) {
+                throw f.error("must lie from " + Field.format(lo) + " to " + Field.format(hi) + ", got " + v);
+            }
+        }
+        return out;
+    }
+
+    private static void column(Field at, String name, List<String> controls) {
+        try {
+            ResultColumn.parse(name, controls);
+        } catch (ResultColumn.ColumnException e) {
+            throw at.error(e.getMessage());
+        }
+    }
+
+    private static void requireClMax(Field at, String baseName, Path basePath, Wing baseWing, YamlValue baseTree,
+            List<Parameter> parameters, Design design) {
+        Wing wing = baseWing;
+        try {
+            String[] first = design.values(0);
+            YamlValue tree = baseTree;
+            for (int p = 0; p < parameters.size(); p++) {
+                tree = parameters.get(p).path().apply(tree, first[p]);
+            }
+            wing = WingFileReader.fromTree(tree, basePath.toString());
+        } catch (RuntimeException e) {
+            wing = baseWing;
+        }
+        try {
+            StripLimits.of(wing, LatticeBuilder.build(wing), new double[wing.controls().size()], OptionalDouble.empty());
+        } catch (MissingSectionDataException e) {
+            throw at.error("stall columns need section cl-max data, and " + baseName + " gives none for section"
+                    + (e.sections().size() > 1 ? "s " : " ") + String.join(", ", e.sections())
+                    + "; add cl-max to the section, or set assume-cl-max in the sweep file (flagged in the output)");
+        }
+    }
+
+    private static String fingerprint(String sweepText, String baseText) {
+        try {
+            MessageDigest md = MessageDigest.getInstance("SHA-256");
+            md.update(sweepText.getBytes(StandardCharsets.UTF_8));
+            md.update((byte) 0);
+            md.update(baseText.getBytes(StandardCharsets.UTF_8));
+            return HexFormat.of().formatHex(md.digest());
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is missing from this Java runtime", e);
+        }
+    }
+
+    /** The sweep file as given. */
+    public String file() {
+        return file;
+    }
+
+    /** The base wing file's name as written in the sweep file. */
+    public String baseName() {
+        return baseName;
+    }
+
+    /** The base wing file, resolved against the sweep file's folder. */
+    public Path basePath() {
+        return basePath;
+    }
+
+    public YamlValue baseTree() {
+        return baseTree;
+    }
+
+    public Wing baseWing() {
+        return baseWing;
+    }
+
+    public List<Parameter> parameters() {
+        return parameters;
+    }
+
+    public Design design() {
+        return design;
+    }
+
+    /** Every output column: those listed, those the constraints and ranking read, and the flag column. */
+    public List<ResultColumn> columns() {
+        return columns;
+    }
+
+    public List<Constraint> constraints() {
+        return constraints;
+    }
+
+    public Optional<Ranking> ranking() {
+        return Optional.ofNullable(ranking);
+    }
+
+    /** The flight condition, when a weight is given. */
+    public Optional<FlightCondition> condition() {
+        return condition;
+    }
+
+    /** The flap deflection for the flapped configuration, degrees (else the base file's). */
+    public OptionalDouble flapsDeg() {
+        return flapsDeg;
+    }
+
+    public OptionalDouble assumeClMax() {
+        return assumeClMax;
+    }
+
+    /** SHA-256 of the sweep file and the base wing file: a run's output belongs to this fingerprint. */
+    public String fingerprint() {
+        return fingerprint;
+    }
+}
