@@ -24,13 +24,14 @@ public record StallSpeed(double equivalent, double trueSpeed, StallEstimate esti
     public static StallSpeed of(WingAnalysis analysis, double[] deflections, StripLimits limits,
             FlightCondition condition) {
         double nu = condition.atmosphere().kinematicViscosity();
+        StallAnalysis stall = StallAnalysis.of(analysis, deflections, limits);
         double vt = 30;
         for (int k = 1; k <= MAX_ITERATIONS; k++) {
-            StallEstimate e = StallAnalysis.estimate(analysis, deflections, limits, vt / nu);
+            StallEstimate e = stall.estimate(vt / nu);
             double ve = condition.equivalentSpeedFor(e.lift(), analysis.wing().reference());
             double next = Airspeed.trueFromEquivalent(ve, condition.atmosphere());
             if (Math.abs(next - vt) <= TOLERANCE * next) {
-                StallEstimate settled = StallAnalysis.estimate(analysis, deflections, limits, next / nu);
+                StallEstimate settled = stall.estimate(next / nu);
                 return new StallSpeed(ve, next, settled, k);
             }
             vt = next;

@@ -125,6 +125,18 @@ public final class Lattice {
         return trailingCutoff[k];
     }
 
+    /**
+     * True when the other lattice has the same panels, control points, normals, cut-offs and symmetry, so
+     * that its influence systems are this one's (incidence and control membership may differ: they enter
+     * the right-hand sides only).
+     */
+    public boolean sameGeometry(Lattice other) {
+        return other == this || (half == other.half && mirrored == other.mirrored
+                && java.util.Arrays.equals(a, other.a) && java.util.Arrays.equals(b, other.b)
+                && java.util.Arrays.equals(control, other.control) && java.util.Arrays.equals(normal, other.normal)
+                && java.util.Arrays.equals(cutoff, other.cutoff));
+    }
+
     /** Number of panels on the whole surface, both halves. */
     public int panelCount() {
         return stripOf.length;

@@ -34,53 +34,63 @@ public final class BasisSolutions {
      * mirrored and {@code useSymmetry} is set, otherwise with the full system.
      */
     public static BasisSolutions solve(Lattice lattice, List<ControlSurface> controlList, boolean useSymmetry) {
+        boolean[] all = new boolean[controlList.size()];
+        java.util.Arrays.fill(all, true);
+        return solve(lattice, controlList, InfluenceCache.single().systems(lattice), useSymmetry, all);
+    }
+
+    /**
+     * Solves the basis conditions with the given (possibly cached) systems, for the controls marked
+     * {@code needed} only; the others have no basis and must stay at zero deflection.
+     */
+    public static BasisSolutions solve(Lattice lattice, List<ControlSurface> controlList,
+            InfluenceCache.Systems systems, boolean useSymmetry, boolean[] needed) {
         int n = lattice.panelCount();
-        double[][] controlRhs = new double[controlList.size()][n];
         double[] rhsX = new double[n];
         double[] rhsZ = new double[n];
         for (int i = 0; i < n; i++) {
             rhsX[i] = -lattice.nx(i) - lattice.incidence(i);
             rhsZ[i] = -lattice.nz(i);
-            int c = lattice.controlOf(i);
-            if (c >= 0) {
-                controlRhs[c][i] = -lattice.controlSign(i);
-            }
         }
-        double[][] controlSolutions = new double[controlList.size()][];
-        if (useSymmetry && lattice.mirrored()) {
-            boolean anyAileron = controlList.stream().anyMatch(c -> c.kind() == ControlKind.AILERON);
-            InfluenceSystem symmetric;
-            InfluenceSystem antisymmetric = null;
-            if (anyAileron) {
-                InfluenceSystem.Pair pair = InfluenceSystem.pair(lattice);
-                symmetric = pair.symmetric();
-                antisymmetric = pair.antisymmetric();
-            } else {
-                symmetric = InfluenceSystem.of(lattice, Symmetry.SYMMETRIC);
-            }
-            double[] x = expand(lattice, symmetric, rhsX, 1);
-            double[] z = expand(lattice, symmetric, rhsZ, 1);
-            for (int c = 0; c < controlList.size(); c++) {
-                boolean aileron = controlList.get(c).kind() == ControlKind.AILERON;
-                controlSolutions[c] = aileron ? expand(lattice, antisymmetric, controlRhs[c], -1)
-                        : expand(lattice, symmetric, controlRhs[c], 1);
-            }
-            return new BasisSolutions(x, z, controlSolutions);
-        }
-        InfluenceSystem full = InfluenceSystem.of(lattice, Symmetry.FULL);
-        double[] x = new double[n];
-        double[] z = new double[n];
-        full.solve(rhsX, x);
-        full.solve(rhsZ, z);
+        boolean halves = useSymmetry && lattice.mirrored();
+        boolean aileronNeeded = false;
         for (int c = 0; c < controlList.size(); c++) {
-            controlSolutions[c] = new double[n];
-            full.solve(controlRhs[c], controlSolutions[c]);
+            aileronNeeded |= needed[c] && controlList.get(c).kind() == ControlKind.AILERON;
+        }
+        if (halves && aileronNeeded) {
+            systems.antisymmetric(); // builds both half-span systems in one assembly pass
+        }
+        InfluenceSystem main = halves ? systems.symmetric() : systems.full();
+        double[] x = expand(lattice, main, rhsX, 1);
+        double[] z = expand(lattice, main, rhsZ, 1);
+        double[][] controlSolutions = new double[controlList.size()][];
+        for (int c = 0; c < controlList.size(); c++) {
+            if (!needed[c]) {
+                continue;
+            }
+            double[] rhs = new double[n];
+            for (int i = 0; i < n; i++) {
+                if (lattice.controlOf(i) == c) {
+                    rhs[i] = -lattice.controlSign(i);
+                }
+            }
+            boolean aileron = controlList.get(c).kind() == ControlKind.AILERON;
+            controlSolutions[c] = halves && aileron ? expand(lattice, systems.antisymmetric(), rhs, -1)
+                    : expand(lattice, main, rhs, 1);
         }
         return new BasisSolutions(x, z, controlSolutions);
     }
 
-    /** Solves on the right half and fills the left half as its mirror, with the given sign. */
+    /**
+     * Solves one right-hand side; on a half-span system fills the left half as the mirror of the right,
+     * with the given sign.
+     */
     private static double[] expand(Lattice lattice, InfluenceSystem system, double[] rhs, double sign) {
+        if (system.symmetry() == Symmetry.FULL) {
+            double[] all = new double[lattice.panelCount()];
+            system.solve(rhs, all);
+            return all;
+        }
         int half = lattice.halfCount();
         double[] right = new double[half];
         system.solve(rhs, right);
@@ -97,14 +107,37 @@ public final class BasisSolutions {
      * attack {@code alpha} (rad) and control deflections {@code deflections} (rad, in control order).
      */
     public void combine(double alpha, double[] deflections, double[] out) {
+        checkDeflections(deflections);
         double c = Math.cos(alpha);
         double s = Math.sin(alpha);
         for (int i = 0; i < out.length; i++) {
-            double g = alongX[i];
-            for (int k = 0; k < controls.length; k++) {
-                g += deflections[k] * controls[k][i];
+            out[i] = c * alongX(i, deflections) + s * alongZ[i];
+        }
+    }
+
+    /**
+     * The circulation per unit speed for unit freestream along +x with the given deflections (rad): the x
+     * basis plus each deflected control's.
+     */
+    public double alongX(int panel, double[] deflections) {
+        double g = alongX[panel];
+        for (int k = 0; k < controls.length; k++) {
+            if (deflections[k] != 0) {
+                g += deflections[k] * controls[k][panel];
             }
-            out[i] = c * g + s * alongZ[i];
+        }
+        return g;
+    }
+
+    /** Refuses a deflection of a control that was solved without its basis. */
+    public void checkDeflections(double[] deflections) {
+        if (deflections.length != controls.length) {
+            throw new IllegalArgumentException("expected " + controls.length + " deflections, got " + deflections.length);
+        }
+        for (int k = 0; k < controls.length; k++) {
+            if (deflections[k] != 0 && controls[k] == null) {
+                throw new IllegalStateException("control " + k + " was solved without its basis");
+            }
         }
     }
 
@@ -118,9 +151,12 @@ public final class BasisSolutions {
         return alongZ[panel];
     }
 
-    /** The circulation per unit speed per radian of control {@code c} at unit freestream along +x. */
+    /**
+     * The circulation per unit speed per radian of control {@code c} at unit freestream along +x (zero for
+     * a control solved without its basis).
+     */
     public double control(int c, int panel) {
-        return controls[c][panel];
+        return controls[c] == null ? 0 : controls[c][panel];
     }
 
     public int controlCount() {

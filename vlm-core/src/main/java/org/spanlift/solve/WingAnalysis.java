@@ -49,6 +49,24 @@ public final class WingAnalysis {
         return new WingAnalysis(wing, lattice, BasisSolutions.solve(lattice, wing.controls(), useSymmetry));
     }
 
+    /**
+     * For many similar wings (sweeps): reuses the cache's factorization when the lattice geometry was seen
+     * before, and solves the basis only of the controls deflected in some of the given deflection sets
+     * (rad, control order); the others must stay at zero in later solves.
+     */
+    public static WingAnalysis of(Wing wing, InfluenceCache cache, double[]... deflectionSets) {
+        Lattice lattice = LatticeBuilder.build(wing);
+        int n = wing.controls().size();
+        boolean[] needed = new boolean[n];
+        for (double[] set : deflectionSets) {
+            for (int c = 0; c < n; c++) {
+                needed[c] |= set[c] != 0;
+            }
+        }
+        return new WingAnalysis(wing, lattice,
+                BasisSolutions.solve(lattice, wing.controls(), cache.systems(lattice), true, needed));
+    }
+
     public Wing wing() {
         return wing;
     }
@@ -112,13 +130,10 @@ public final class WingAnalysis {
         double z = 0;
         double s = wing.reference().area();
         int n = lattice.panelCount();
+        basis.checkDeflections(deflections);
         for (int i = 0; i < n; i++) {
             double ly = lattice.by(i) - lattice.ay(i);
-            double gx = basis.alongX(i);
-            for (int c = 0; c < deflections.length; c++) {
-                gx += deflections[c] * basis.control(c, i);
-            }
-            x += 2 * gx * ly;
+            x += 2 * basis.alongX(i, deflections) * ly;
             z += 2 * basis.alongZ(i) * ly;
         }
         return new LiftLine(Math.hypot(x, z) / s, Math.atan2(-x, z));
@@ -135,7 +150,7 @@ public final class WingAnalysis {
             return slope * Math.sin(alpha - zeroLiftAngle);
         }
 
-        /** The angle of attack (rad) for a target CL, or NaN-free failure when |CL| exceeds the slope. */
+        /** The angle of attack (rad) for a target CL; refused when |CL| is beyond the slope. */
         public double alphaFor(double cl) {
             if (Math.abs(cl) >= slope) {
                 throw new IllegalArgumentException("CL " + cl + " is beyond this wing's linear range");

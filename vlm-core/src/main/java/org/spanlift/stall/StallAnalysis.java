@@ -23,52 +23,81 @@ import org.spanlift.solve.WingAnalysis;
  */
 public final class StallAnalysis {
 
-    private StallAnalysis() {
-    }
+    private final WingAnalysis analysis;
+    private final StripLimits limits;
+    private final WingAnalysis.LiftLine line;
+    private final double semi;
+    private final double[] a;
+    private final double[] b;
+    private final double[] amplitude;
+    private final double[] phase;
 
-    /**
-     * Estimates stall onset.
-     *
-     * @param deflections     control deflections, rad, control order
-     * @param limits          cl_max per strip
-     * @param reynoldsPerMetre rho V / mu at the flight condition (true speed), or 0 when unknown (tables are
-     *                        then read at their lowest Reynolds number)
-     */
-    public static StallEstimate estimate(WingAnalysis analysis, double[] deflections, StripLimits limits,
-            double reynoldsPerMetre) {
+    private StallAnalysis(WingAnalysis analysis, double[] deflections, StripLimits limits) {
+        this.analysis = analysis;
+        this.limits = limits;
+        this.line = analysis.liftLine(deflections);
         Lattice lattice = analysis.lattice();
         BasisSolutions basis = analysis.basis();
-        WingAnalysis.LiftLine line = analysis.liftLine(deflections);
         Wing wing = analysis.wing();
-        double semi = wing.main().mirrored() ? wing.main().planform().yEnd()
+        this.semi = wing.main().mirrored() ? wing.main().planform().yEnd()
                 : 0.5 * (wing.main().planform().yEnd() - wing.main().planform().yStart());
         List<Integer> ids = limits.strips();
         int n = ids.size();
-        double[] a = new double[n];
-        double[] b = new double[n];
-        double[] clMax = new double[n];
-        double[] re = new double[n];
-        double[] alphaReach = new double[n];
+        a = new double[n];
+        b = new double[n];
+        amplitude = new double[n];
+        phase = new double[n];
         for (int i = 0; i < n; i++) {
             Strip st = lattice.strips().get(ids.get(i));
             double gx = 0;
             double gz = 0;
             for (int r = 0; r < st.rows(); r++) {
                 int p = st.firstPanel() + r;
-                double x = basis.alongX(p);
-                for (int c = 0; c < deflections.length; c++) {
-                    x += deflections[c] * basis.control(c, p);
-                }
-                gx += x;
+                gx += basis.alongX(p, deflections);
                 gz += basis.alongZ(p);
             }
             a[i] = 2 * gx / st.chord();
             b[i] = 2 * gz / st.chord();
+            amplitude[i] = Math.hypot(a[i], b[i]);
+            phase[i] = Math.atan2(b[i], a[i]);
+        }
+    }
+
+    /**
+     * The per-strip lift terms of one configuration, formed once; {@link #estimate(double)} then repeats
+     * only the cl_max lookup (as the stall speed and the Reynolds numbers settle).
+     *
+     * @param deflections control deflections, rad, control order
+     * @param limits      cl_max per strip
+     */
+    public static StallAnalysis of(WingAnalysis analysis, double[] deflections, StripLimits limits) {
+        return new StallAnalysis(analysis, deflections, limits);
+    }
+
+    /** Estimates stall onset in one call; see {@link #estimate(double)}. */
+    public static StallEstimate estimate(WingAnalysis analysis, double[] deflections, StripLimits limits,
+            double reynoldsPerMetre) {
+        return of(analysis, deflections, limits).estimate(reynoldsPerMetre);
+    }
+
+    /**
+     * Estimates stall onset.
+     *
+     * @param reynoldsPerMetre rho V / mu at the flight condition (true speed), or 0 when unknown (tables are
+     *                         then read at their lowest Reynolds number)
+     */
+    public StallEstimate estimate(double reynoldsPerMetre) {
+        Lattice lattice = analysis.lattice();
+        List<Integer> ids = limits.strips();
+        int n = ids.size();
+        double[] clMax = new double[n];
+        double[] re = new double[n];
+        double[] alphaReach = new double[n];
+        for (int i = 0; i < n; i++) {
+            Strip st = lattice.strips().get(ids.get(i));
             re[i] = reynoldsPerMetre * st.chord();
             clMax[i] = limits.clMax(i, re[i]);
-            double amplitude = Math.hypot(a[i], b[i]);
-            double phase = Math.atan2(b[i], a[i]);
-            alphaReach[i] = Math.abs(clMax[i]) <= amplitude ? phase - Math.acos(clMax[i] / amplitude)
+            alphaReach[i] = Math.abs(clMax[i]) <= amplitude[i] ? phase[i] - Math.acos(clMax[i] / amplitude[i])
                     : Double.POSITIVE_INFINITY;
         }
         int first = 0;
@@ -97,7 +126,7 @@ public final class StallAnalysis {
                     re[i], clMax[i], clOnset, clBasic, clAdd, reach));
         }
         Strip onset = lattice.strips().get(ids.get(first));
-        Optional<StallEstimate.AileronMargin> margin = aileronMargin(wing, strips);
+        Optional<StallEstimate.AileronMargin> margin = aileronMargin(analysis.wing(), strips);
         OptionalDouble half = halfSpan(lattice, ids, strips);
         List<StallEstimate.StripStall> sorted = new ArrayList<>(strips);
         sorted.sort(Comparator.comparingDouble(StallEstimate.StripStall::y));

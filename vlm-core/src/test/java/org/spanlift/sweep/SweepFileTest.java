@@ -103,8 +103,8 @@ class SweepFileTest {
                 design: {kind: latin-hypercube, cases: 50}
                 columns: [lift_slope_per_rad]
                 """);
-        assertEquals("design", e.field());
-        assertTrue(e.problem().contains("missing key 'seed'"), e.getMessage());
+        assertEquals("design.seed", e.field());
+        assertTrue(e.problem().startsWith("missing key; expected"), e.getMessage());
     }
 
     @Test

@@ -149,7 +149,7 @@ class SweepCommandTest {
                 "s.sweep.yaml:4: parameters.surfaces.wing.trapezoid.washout.step: the step must not be zero"},
             {"{from: 0, to: 3, step: 0.5}", "{from: 0, to: 3, step: -0.5}",
                 "parameters.surfaces.wing.trapezoid.washout.step: the step must lead from 0 to 3"},
-            {"flight:", "design: {kind: latin-hypercube, cases: 20}\nflight:", "s.sweep.yaml:5: design: missing key 'seed'"},
+            {"flight:", "design: {kind: latin-hypercube, cases: 20}\nflight:", "s.sweep.yaml:5: design.seed: missing key; expected a whole number"},
             {"{from: 0, to: 3, step: 0.5}", "{from: 0, to: 3, step: 0.0000001}\ndesign: grid",
                 "s.sweep.yaml:5: design: the full grid has 180000006 cases, more than 10000000; use --force"},
         };

@@ -1,0 +1,112 @@
+package org.spanlift.solve;
+
+import java.util.ArrayDeque;
+import java.util.Iterator;
+
+import org.spanlift.lattice.Lattice;
+
+/**
+ * Factorized influence systems of the last few lattice geometries, so that cases that change only the
+ * right-hand sides (twist, washout, camber, section data, deflections) reuse one factorization. Systems
+ * are built on first use: the antisymmetric one only when an aileron basis is needed. Not thread-safe:
+ * one cache per thread.
+ */
+public final class InfluenceCache {
+
+    private final int capacity;
+    private final ArrayDeque<Systems> entries = new ArrayDeque<>();
+    private long factorizations;
+    private long reuses;
+
+    /** @param capacity how many geometries to keep (at least 1) */
+    public InfluenceCache(int capacity) {
+        if (capacity < 1) {
+            throw new IllegalArgumentException("a cache keeps at least one geometry");
+        }
+        this.capacity = capacity;
+    }
+
+    /** A cache that keeps nothing between calls beyond the one lattice in use. */
+    static InfluenceCache single() {
+        return new InfluenceCache(1);
+    }
+
+    /** The systems of this lattice's geometry: cached ones when the geometry was seen, else new (empty). */
+    public Systems systems(Lattice lattice) {
+        for (Iterator<Systems> it = entries.iterator(); it.hasNext();) {
+            Systems s = it.next();
+            if (s.lattice.sameGeometry(lattice)) {
+                it.remove();
+                entries.addFirst(s);
+                reuses++;
+                return s;
+            }
+        }
+        Systems s = new Systems(lattice);
+        entries.addFirst(s);
+        while (entries.size() > capacity) {
+            entries.removeLast();
+        }
+        return s;
+    }
+
+    /** Geometries factorized so far (a measurement for sweeps). */
+    public long factorizations() {
+        return factorizations;
+    }
+
+    /** Calls that found their geometry cached. */
+    public long reuses() {
+        return reuses;
+    }
+
+    /** The systems of one geometry, each factorized on first use. */
+    public final class Systems {
+        private final Lattice lattice;
+        private InfluenceSystem symmetric;
+        private InfluenceSystem antisymmetric;
+        private InfluenceSystem full;
+        private boolean counted;
+
+        private Systems(Lattice lattice) {
+            this.lattice = lattice;
+        }
+
+        private void count() {
+            if (!counted) {
+                counted = true;
+                factorizations++;
+            }
+        }
+
+        public InfluenceSystem symmetric() {
+            if (symmetric == null) {
+                count();
+                symmetric = InfluenceSystem.of(lattice, Symmetry.SYMMETRIC);
+            }
+            return symmetric;
+        }
+
+        public InfluenceSystem antisymmetric() {
+            if (antisymmetric == null) {
+                count();
+                if (symmetric == null) {
+                    InfluenceSystem.Pair pair = InfluenceSystem.pair(lattice);
+                    symmetric = pair.symmetric();
+                    antisymmetric = pair.antisymmetric();
+                } else {
+                    antisymmetric = InfluenceSystem.of(lattice, Symmetry.ANTISYMMETRIC);
+                }
+            }
+            return antisymmetric;
+        }
+
+        public InfluenceSystem full() {
+            if (full == null) {
+                count();
+                full = InfluenceSystem.of(lattice, Symmetry.FULL);
+            }
+            return full;
+        }
+    }
+}
