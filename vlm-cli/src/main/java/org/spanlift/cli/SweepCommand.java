@@ -12,6 +12,7 @@ import org.spanlift.cli.sweep.ResultsFile;
 import org.spanlift.cli.sweep.RowFormat;
 import org.spanlift.cli.sweep.Shard;
 import org.spanlift.cli.sweep.SweepRunner;
+import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.io.InputException;
 import org.spanlift.sweep.Ranking;
 import org.spanlift.sweep.ResultColumn;
@@ -61,6 +62,7 @@ public final class SweepCommand implements Callable<Integer> {
     public Integer call() {
         RowFormat format = RowFormat.CSV;
         if (output != null) {
+            OutputOptions.requireFolder(output);
             format = RowFormat.of(output.getFileName().toString());
             if (format == null) {
                 throw new InputException("--output", 0, "", "expected a .csv or .jsonl file, got " + output);

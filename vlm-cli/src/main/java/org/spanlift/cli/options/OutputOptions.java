@@ -61,6 +61,7 @@ public final class OutputOptions {
     public static void writeAtomically(Path target, byte[] bytes) {
         Path absolute = target.toAbsolutePath();
         Path dir = absolute.getParent();
+        requireFolder(target);
         try {
             Path tmp = Files.createTempFile(dir, "." + absolute.getFileName(), ".part");
             try {
@@ -72,6 +73,15 @@ public final class OutputOptions {
         } catch (IOException e) {
             throw new InputException(target.toString(), 0, "", "cannot write the output file ("
                     + e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage()) + ")");
+        }
+    }
+
+    /** Refuses an output path whose folder does not exist, before anything is computed or written. */
+    public static void requireFolder(Path target) {
+        Path dir = target.toAbsolutePath().getParent();
+        if (dir != null && !Files.isDirectory(dir)) {
+            throw new InputException(target.toString(), 0, "", "the folder " + dir + " does not exist; expected an "
+                    + "output path in an existing folder");
         }
     }
 
