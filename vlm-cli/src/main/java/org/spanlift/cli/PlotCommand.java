@@ -6,7 +6,10 @@ import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.spanlift.cli.options.AlphaList;
+import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
+import org.spanlift.stall.MissingSectionDataException;
+import org.spanlift.stall.StallEstimate;
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.plot.Figure;
@@ -28,7 +31,7 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code spanlift plot}: one figure of one wing, as SVG or PNG. */
 @Command(name = "plot", mixinStandardHelpOptions = true,
         description = "Draw one figure of a wing as SVG or PNG: its planform and lattice, its span load, its lift "
-                + "curve or its induced-drag polar.")
+                + "curve, its induced-drag polar or its stall map.")
 public final class PlotCommand implements Callable<Integer> {
 
     /** The lift coefficient of the span load when no angle is given. */
@@ -39,7 +42,8 @@ public final class PlotCommand implements Callable<Integer> {
     Path file;
 
     @Option(names = {"-w", "--what"}, paramLabel = "KIND", required = true,
-            description = "What to draw: planform, span-load, lift or polar.")
+            description = "What to draw: planform, span-load, lift, polar or stall (the stall map: section cl and "
+                    + "cl_max along the span at stall onset).")
     String what;
 
     @Option(names = {"-a", "--alpha"}, paramLabel = "DEG",
@@ -52,6 +56,9 @@ public final class PlotCommand implements Callable<Integer> {
 
     @Mixin
     FlightOptions flight;
+
+    @Mixin
+    ClMaxOptions clMax;
 
     @Spec
     CommandSpec spec;
@@ -69,9 +76,18 @@ public final class PlotCommand implements Callable<Integer> {
                     deflections));
             case LIFT -> Plots.liftCurve(analysis, deflections, range());
             case POLAR -> Plots.polar(analysis, deflections, range());
+            case STALL -> Plots.stallMap(analysis, stall(analysis, deflections));
         };
         FigureOutput.write(figure, format, output, spec.commandLine().getOut());
         return 0;
+    }
+
+    private StallEstimate stall(WingAnalysis analysis, double[] deflections) {
+        try {
+            return StallCommand.evaluate("plot", analysis, deflections, clMax.assumed(), flight.condition()).estimate();
+        } catch (MissingSectionDataException e) {
+            throw new InputException(file.toString(), 0, "sections", e.getMessage());
+        }
     }
 
     private double spanLoadAlpha(WingAnalysis analysis, double[] deflections) {

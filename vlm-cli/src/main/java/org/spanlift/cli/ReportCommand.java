@@ -6,7 +6,10 @@ import java.util.List;
 import java.util.concurrent.Callable;
 
 import org.spanlift.cli.options.AlphaList;
+import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
+import org.spanlift.cli.report.StallSummary;
+import org.spanlift.stall.MissingSectionDataException;
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.plot.FigureOutput;
@@ -51,6 +54,9 @@ public final class ReportCommand implements Callable<Integer> {
     @Mixin
     FlightOptions flight;
 
+    @Mixin
+    ClMaxOptions clMax;
+
     @Spec
     CommandSpec spec;
 
@@ -66,7 +72,15 @@ public final class ReportCommand implements Callable<Integer> {
         WingSummary summary = WingSummary.of(file, wing, analysis, deflections, cl);
         Wing fineWing = WingSummary.doubledStrips(wing);
         WingSummary fine = WingSummary.of(file, fineWing, WingAnalysis.of(fineWing), deflections, cl);
-        String html = ReportPage.build(summary, fine, alphas, curve, new VersionProvider().getVersion()[0]);
+        StallSummary stall;
+        try {
+            StallCommand.Config c = StallCommand.evaluate("report", analysis, deflections, clMax.assumed(),
+                    flight.condition());
+            stall = StallSummary.of(c.estimate(), c.speed());
+        } catch (MissingSectionDataException e) {
+            stall = StallSummary.unavailable(e.getMessage());
+        }
+        String html = ReportPage.build(summary, fine, stall, alphas, curve, new VersionProvider().getVersion()[0]);
         assert format == Format.HTML;
         output.write(html, spec.commandLine().getOut());
         return 0;

@@ -12,6 +12,7 @@ import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
 
 import org.spanlift.atmosphere.AtmosphereState;
+import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OutputOptions;
@@ -32,7 +33,6 @@ import org.spanlift.stall.StripLimits;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
@@ -42,9 +42,6 @@ import picocli.CommandLine.Model.CommandSpec;
         description = "Stall onset by the critical-section method: station, CL, aileron margin, spread; stall speeds.")
 public final class StallCommand implements Callable<Integer> {
 
-    /** The conservative cl_max assumed by --assume-cl-max when a section gives none. */
-    public static final double CONSERVATIVE_CL_MAX = 1.2;
-
     static final String CAUTION = "Caution: an estimate from linear theory and section data for the wing alone (the "
             + "tail's download, which raises the real stall speed, is not included); not a substitute for flight "
             + "test, airworthiness standards or licensed engineering judgement.";
@@ -52,10 +49,8 @@ public final class StallCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "FILE", description = "The wing file (.wing.yaml).")
     Path file;
 
-    @Option(names = "--assume-cl-max", paramLabel = "CLMAX", arity = "0..1", fallbackValue = "" + CONSERVATIVE_CL_MAX,
-            description = "For sections without cl-max data, assume this cl_max (flagged in the output). Without a "
-                    + "value: the conservative default " + CONSERVATIVE_CL_MAX + ".")
-    Double assumeClMax;
+    @Mixin
+    ClMaxOptions clMax;
 
     @Mixin
     OutputOptions output;
@@ -70,9 +65,6 @@ public final class StallCommand implements Callable<Integer> {
     public Integer call() {
         Format format = output.format(EnumSet.of(Format.TABLE, Format.JSON));
         Wing wing = WingFileReader.read(file);
-        if (assumeClMax != null && !(assumeClMax > 0.3 && assumeClMax <= 3)) {
-            throw new InputException("--assume-cl-max", 0, "", "expected a cl_max from 0.3 to 3, got " + assumeClMax);
-        }
         Map<String, Double> overrides = flight.deflections(wing);
         Optional<FlightCondition> condition = flight.condition();
         AtmosphereState atmosphere = flight.atmosphere();
@@ -88,7 +80,7 @@ public final class StallCommand implements Callable<Integer> {
                 anyFlap |= flapped[c] != 0;
             }
         }
-        OptionalDouble assumed = assumeClMax == null ? OptionalDouble.empty() : OptionalDouble.of(assumeClMax);
+        OptionalDouble assumed = clMax.assumed();
         Config cleanResult;
         Config flapResult;
         try {
@@ -108,7 +100,13 @@ public final class StallCommand implements Callable<Integer> {
     record Config(String label, double[] deflections, StallEstimate estimate, Optional<StallSpeed> speed) {
     }
 
-    private static Config evaluate(String label, WingAnalysis analysis, double[] deflections, OptionalDouble assumed,
+    /**
+     * The stall estimate of one configuration: at the stall speed's Reynolds numbers with a flight condition,
+     * else with cl-max tables read at their lowest Reynolds number.
+     *
+     * @throws MissingSectionDataException when a section has no cl-max and none is assumed
+     */
+    static Config evaluate(String label, WingAnalysis analysis, double[] deflections, OptionalDouble assumed,
             Optional<FlightCondition> condition) {
         StripLimits limits = StripLimits.of(analysis.wing(), analysis.lattice(), deflections, assumed);
         if (condition.isPresent()) {

@@ -57,6 +57,7 @@ class PlotCommandTest {
                 // the trainer has 48 strips; the curves 19 angles (-4 to 14); legends add one marker each
                 case SPAN_LOAD -> assertTrue(markers >= 48, "span load: a marker per strip, got " + markers);
                 case LIFT, POLAR -> assertTrue(markers >= 19, kind.cliName() + ": a marker per angle, got " + markers);
+                case STALL -> assertTrue(markers >= 48, "stall map: a marker per strip, got " + markers);
             }
             if (kind != PlotKind.PLANFORM) {
                 assertFalse(SvgSupport.all(doc, "line").isEmpty(), kind.cliName() + ": grid lines");
@@ -87,8 +88,8 @@ class PlotCommandTest {
     @Test
     void svgOutputIsDeterministic() throws Exception {
         for (PlotKind kind : PlotKind.values()) {
-            byte[] a = Files.readAllBytes(plot("tourer.wing.yaml", kind, "a.svg"));
-            byte[] b = Files.readAllBytes(plot("tourer.wing.yaml", kind, "b.svg"));
+            byte[] a = Files.readAllBytes(plot("trainer.wing.yaml", kind, "a.svg"));
+            byte[] b = Files.readAllBytes(plot("trainer.wing.yaml", kind, "b.svg"));
             assertArrayEquals(a, b, kind.cliName());
         }
     }
@@ -129,7 +130,9 @@ class PlotCommandTest {
     void badInputExitsTwoWithOneLineAndWritesNothing() throws Exception {
         String wing = CliRun.demo("trainer.wing.yaml");
         Path pdf = dir.resolve("x.pdf");
-        assertBad("plot", wing, "--what", "stall", "--output", dir.resolve("x.svg").toString());
+        assertBad("plot", wing, "--what", "flutter", "--output", dir.resolve("x.svg").toString());
+        // the tourer's section gives no cl-max: no stall map unless one is assumed
+        assertBad("plot", CliRun.demo("tourer.wing.yaml"), "--what", "stall", "--output", dir.resolve("w.svg").toString());
         assertBad("plot", wing, "--what", "lift", "--output", pdf.toString());
         assertBad("plot", wing, "--what", "lift", "--format", "png", "--output", dir.resolve("x.svg").toString());
         assertBad("plot", wing, "--what", "lift", "--format", "png");

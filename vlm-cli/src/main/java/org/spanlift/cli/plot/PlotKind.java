@@ -7,13 +7,14 @@ import org.spanlift.io.InputException;
 
 /**
  * The plots of one wing, by the name {@code spanlift plot --what} takes. The id is the figure's id in SVG
- * and HTML. A stall map belongs here once the engine estimates stall onset.
+ * and HTML.
  */
 public enum PlotKind {
     PLANFORM("planform", "planform"),
     SPAN_LOAD("span-load", "span-load"),
     LIFT("lift", "lift-curve"),
-    POLAR("polar", "polar");
+    POLAR("polar", "polar"),
+    STALL("stall", "stall-map");
 
     private final String cliName;
     private final String figureId;
@@ -32,7 +33,7 @@ public enum PlotKind {
         return figureId;
     }
 
-    /** All names, for messages: {@code planform, span-load, lift, polar}. */
+    /** All names, for messages: {@code planform, span-load, lift, polar, stall}. */
     public static String names() {
         return String.join(", ", Arrays.stream(values()).map(PlotKind::cliName).toList());
     }

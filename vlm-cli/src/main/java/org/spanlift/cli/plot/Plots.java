@@ -16,6 +16,7 @@ import org.knowm.xchart.style.Styler.LegendLayout;
 import org.knowm.xchart.style.Styler.LegendPosition;
 import org.knowm.xchart.style.XYStyler;
 import org.knowm.xchart.style.markers.SeriesMarkers;
+import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.LengthUnit;
 import org.spanlift.geometry.Reference;
@@ -24,11 +25,11 @@ import org.spanlift.geometry.Wing;
 import org.spanlift.results.Solution;
 import org.spanlift.results.SpanLoad;
 import org.spanlift.solve.WingAnalysis;
+import org.spanlift.stall.StallEstimate;
 
 /**
  * The figures Spanlift draws, built from engine results: the planform, the span load, the lift curve and
- * the induced-drag polar of one wing, and the overlays that compare several. A stall map will join these
- * once the engine estimates stall onset; until then there is none, rather than a guess.
+ * the induced-drag polar and the stall map of one wing, and the overlays that compare several.
  */
 public final class Plots {
 
@@ -166,6 +167,70 @@ public final class Plots {
                 + "degrees angle of attack, beside the parabola of elliptic loading at the same aspect ratio. Profile "
                 + "drag is not included.", a[0], a[a.length - 1]);
         return new ChartFigure("polar", desc, c);
+    }
+
+    /**
+     * The stall map: section cl at stall onset and the section cl_max along the span (critical-section
+     * method, linear theory), the aileron span shaded and the onset station marked.
+     */
+    public static ChartFigure stallMap(WingAnalysis analysis, StallEstimate stall) {
+        Wing wing = analysis.wing();
+        LengthUnit u = wing.displayUnit();
+        List<StallEstimate.StripStall> strips = stall.strips();
+        int n = strips.size();
+        double[] y = new double[n];
+        double[] cl = new double[n];
+        double[] clMax = new double[n];
+        double top = 0;
+        for (int i = 0; i < n; i++) {
+            y[i] = strips.get(i).y() / u.metres();
+            cl[i] = strips.get(i).clAtOnset();
+            clMax[i] = strips.get(i).clMax();
+            top = Math.max(top, Math.max(cl[i], clMax[i]));
+        }
+        double band = 1.1 * top;
+        String title = String.format(Locale.ROOT, "Stall map: onset at CL = %.3f (\u03b1 = %.2f\u00b0), station \u03b7 = %.2f",
+                stall.lift(), Math.toDegrees(stall.alpha()), stall.eta());
+        XYChart c = chart(title, "spanwise station y [" + u.symbol() + "], right tip positive",
+                "section cl at stall onset  and  cl_max");
+        int shade = 0;
+        for (ControlSurface cs : wing.main().controls()) {
+            if (cs.kind() != ControlKind.AILERON) {
+                continue;
+            }
+            for (double side : new double[] {1, -1}) {
+                double a = side * cs.from() / u.metres();
+                double b = side * cs.to() / u.metres();
+                XYSeries area = c.addSeries(shade == 0 ? "aileron span" : "aileron span " + (shade + 1),
+                        new double[] {Math.min(a, b), Math.max(a, b)}, new double[] {band, band});
+                area.setXYSeriesRenderStyle(XYSeriesRenderStyle.Area);
+                area.setFillColor(Palette.AILERON_FILL);
+                area.setLineColor(Palette.AILERON_FILL);
+                area.setMarker(SeriesMarkers.NONE);
+                area.setShowInLegend(shade == 0);
+                shade++;
+            }
+        }
+        XYSeries max = c.addSeries("section cl_max" + (stall.assumedClMax() ? " (partly assumed)" : ""), y, clMax);
+        style(max, Palette.VERMILLION, Palette.line(1, 2.0f), SeriesMarkers.NONE);
+        XYSeries at = c.addSeries("section cl at stall onset", y, cl);
+        style(at, Palette.BLUE, Palette.line(0, 2.2f), SeriesMarkers.CIRCLE);
+        double yOnset = stall.y() / u.metres();
+        double clOnset = strips.stream().filter(st -> Math.abs(Math.abs(st.y()) - stall.y()) < 1e-12)
+                .mapToDouble(StallEstimate.StripStall::clMax).findFirst().orElse(top);
+        XYSeries mark = c.addSeries(String.format(Locale.ROOT, "stall starts: y = \u00b1%.3f %s", yOnset, u.symbol()),
+                new double[] {-yOnset, yOnset}, new double[] {clOnset, clOnset});
+        mark.setXYSeriesRenderStyle(XYSeriesRenderStyle.Scatter);
+        mark.setMarker(SeriesMarkers.DIAMOND);
+        mark.setMarkerColor(Palette.INK);
+        c.getStyler().setYAxisMin(0.0);
+        c.getStyler().setYAxisMax(band);
+        String desc = String.format(Locale.ROOT, "Section lift coefficient along the span of %s at the wing CL where "
+                + "the first station reaches its section cl_max (%.3f, at %.2f degrees), beside the cl_max of each "
+                + "station; the aileron span is shaded. Critical-section method in linear theory.%s",
+                surfaceLabel(wing), stall.lift(), Math.toDegrees(stall.alpha()),
+                stall.assumedClMax() ? " Some sections give no cl-max: an assumed value is used." : "");
+        return new ChartFigure("stall-map", desc, c);
     }
 
     // ---------------------------------------------------------------- several wings

@@ -119,8 +119,10 @@ final class Html {
         line("<aside class=\"caution\" role=\"note\">");
         el("h2", "Before you rely on these numbers");
         el("p", "These results come from inviscid, linear vortex-lattice theory: they inform design, they do not "
-                + "certify it. They leave out stall, profile drag, viscous and compressibility effects, and the "
-                + "fuselage. Check them against test data and established methods, and defer to the applicable "
+                + "certify it. They leave out viscous and compressibility effects and the fuselage; stall onset is "
+                + "a critical-section estimate from linear theory and section data, and stall speeds are for the "
+                + "wing alone (the tail's download, which raises the real stall speed, is not included). Check them "
+                + "against flight test, test data and established methods, and defer to the applicable "
                 + "airworthiness standards and to licensed engineering practice before anything is built or flown.");
         line("</aside>");
         return this;

@@ -27,12 +27,13 @@ public final class ReportPage {
     /**
      * @param summary   the wing at its file lattice, with the condition at the chosen CL
      * @param fine      the same at twice as many strips, for the convergence note
+     * @param stall     the stall-onset estimate, or why there is none
      * @param alphasDeg the angles of the results table
      * @param rangeDeg  the angles of the lift curve and polar
      * @param version   the program version for the footer
      */
-    public static String build(WingSummary summary, WingSummary fine, List<Double> alphasDeg, List<Double> rangeDeg,
-            String version) {
+    public static String build(WingSummary summary, WingSummary fine, StallSummary stall, List<Double> alphasDeg,
+            List<Double> rangeDeg, String version) {
         Wing wing = summary.wing();
         WingAnalysis analysis = summary.analysis();
         LengthUnit u = wing.displayUnit();
@@ -45,11 +46,15 @@ public final class ReportPage {
         h.line("</header>");
         h.caution();
 
-        keyResults(h, summary, alphasDeg);
+        keyResults(h, summary, stall, alphasDeg);
         description(h, wing);
         h.el("h2", "Figures");
         for (PlotKind kind : PlotKind.values()) {
-            Figure f = figure(kind, summary, rangeDeg);
+            Figure f = figure(kind, summary, stall, rangeDeg);
+            if (f == null) {
+                h.el("p", "class=\"missing\"", "No stall map: " + stall.unavailable());
+                continue;
+            }
             h.raw("<figure id=\"figure-").raw(kind.figureId()).line("\">");
             h.line(SvgWriter.element(f));
             h.raw("<figcaption><b>").text(f.title()).raw(".</b> ").text(f.description()).line("</figcaption>");
@@ -70,9 +75,13 @@ public final class ReportPage {
         return h.close();
     }
 
-    /** The figure of a kind, as the report shows it. Every kind has one: the switch is exhaustive. */
-    static Figure figure(PlotKind kind, WingSummary s, List<Double> rangeDeg) {
+    /**
+     * The figure of a kind, as the report shows it; every kind has one (the switch is exhaustive), but the stall
+     * map needs section cl-max data and is null without it.
+     */
+    static Figure figure(PlotKind kind, WingSummary s, StallSummary stall, List<Double> rangeDeg) {
         return switch (kind) {
+            case STALL -> stall.estimate().map(e -> (Figure) Plots.stallMap(s.analysis(), e)).orElse(null);
             case PLANFORM -> Plots.planform(s.analysis());
             case SPAN_LOAD -> Plots.spanLoad(s.analysis(), s.spanLoadAtCl());
             case LIFT -> Plots.liftCurve(s.analysis(), s.deflections(), rangeDeg);
@@ -80,7 +89,7 @@ public final class ReportPage {
         };
     }
 
-    private static void keyResults(Html h, WingSummary s, List<Double> alphasDeg) {
+    private static void keyResults(Html h, WingSummary s, StallSummary stall, List<Double> alphasDeg) {
         h.el("h2", "Key results");
         h.line("<ul class=\"keys\">");
         key(h, "lift slope", Html.fixed(s.liftSlope(), 3) + " /rad", Html.fixed(s.liftSlope() * Math.PI / 180, 4)
@@ -92,6 +101,18 @@ public final class ReportPage {
                 ? Html.fixed(s.spanEfficiency().getAsDouble(), 4) : "\u2013", "CL\u00b2 / (\u03c0 A CDi)");
         key(h, "induced drag CDi at CL " + cl, Html.fixed(s.inducedDrag(), 5), "at \u03b1 = "
                 + Html.fixed(Math.toDegrees(s.alphaAtCl()), 2) + "\u00b0");
+        stall.estimate().ifPresent(e -> {
+            String flag = e.assumedClMax() ? "; some cl_max assumed" : "";
+            key(h, "stall-onset CL", Html.fixed(e.lift(), 3), "critical-section method, at \u03b1 = "
+                    + Html.fixed(Math.toDegrees(e.alpha()), 2) + "\u00b0" + flag);
+            key(h, "stall starts at", "\u03b7 = " + Html.fixed(e.eta(), 3), "y = " + Html.fixed(e.y()
+                    / s.wing().displayUnit().metres(), 3) + " " + s.wing().displayUnit().symbol() + ", section "
+                    + e.section());
+            e.aileronMargin().ifPresent(m -> key(h, "aileron margin", "\u0394cl = " + Html.fixed(m.dcl(), 3),
+                    "least cl_max \u2212 cl over the aileron span at onset"));
+        });
+        stall.speed().ifPresent(v -> key(h, "stall speed", Html.fixed(v.equivalent() * 3600 / 1852, 1) + " kt EAS",
+                Html.fixed(v.trueSpeed() * 3600 / 1852, 1) + " kt TAS; wing alone, see the caution"));
         h.line("</ul>");
         List<List<String>> rows = new ArrayList<>();
         for (double a : alphasDeg) {

@@ -1,0 +1,30 @@
+package org.spanlift.cli.options;
+
+import java.util.OptionalDouble;
+
+import org.spanlift.io.InputException;
+
+import picocli.CommandLine.Option;
+
+/** The option that lets stall results use an assumed cl_max for sections that give none. */
+public final class ClMaxOptions {
+
+    /** The conservative cl_max assumed by {@code --assume-cl-max} without a value. */
+    public static final double CONSERVATIVE_CL_MAX = 1.2;
+
+    @Option(names = "--assume-cl-max", paramLabel = "CLMAX", arity = "0..1", fallbackValue = "" + CONSERVATIVE_CL_MAX,
+            description = "For sections without cl-max data, assume this cl_max (flagged in the output). Without a "
+                    + "value: the conservative default " + CONSERVATIVE_CL_MAX + ".")
+    Double assumeClMax;
+
+    /** The assumed cl_max, if asked for, checked. */
+    public OptionalDouble assumed() {
+        if (assumeClMax == null) {
+            return OptionalDouble.empty();
+        }
+        if (!(assumeClMax > 0.3 && assumeClMax <= 3)) {
+            throw new InputException("--assume-cl-max", 0, "", "expected a cl_max from 0.3 to 3, got " + assumeClMax);
+        }
+        return OptionalDouble.of(assumeClMax);
+    }
+}
