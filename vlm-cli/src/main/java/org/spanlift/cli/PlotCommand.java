@@ -71,7 +71,7 @@ public final class PlotCommand implements Callable<Integer> {
         WingAnalysis analysis = WingAnalysis.of(wing);
         double[] deflections = analysis.deflections(flight.deflections(wing));
         Figure figure = switch (kind) {
-            case PLANFORM -> Plots.planform(analysis);
+            case PLANFORM -> Plots.planform(analysis, stallStation(analysis, deflections));
             case SPAN_LOAD -> Plots.spanLoad(analysis, analysis.solve(spanLoadAlpha(analysis, deflections),
                     deflections));
             case LIFT -> Plots.liftCurve(analysis, deflections, range());
@@ -80,6 +80,16 @@ public final class PlotCommand implements Callable<Integer> {
         };
         FigureOutput.write(figure, format, output, spec.commandLine().getOut());
         return 0;
+    }
+
+    /** The stall-onset station to mark on the planform, when the sections allow an estimate. */
+    private java.util.OptionalDouble stallStation(WingAnalysis analysis, double[] deflections) {
+        try {
+            return java.util.OptionalDouble.of(StallCommand.evaluate("plot", analysis, deflections, clMax.assumed(),
+                    flight.condition()).estimate().y());
+        } catch (MissingSectionDataException e) {
+            return java.util.OptionalDouble.empty();
+        }
     }
 
     private StallEstimate stall(WingAnalysis analysis, double[] deflections) {

@@ -54,9 +54,19 @@ public final class PlanformFigure implements Figure {
     private final double xMax;
     private final double scale;
     private final int height;
+    private final java.util.OptionalDouble stallStation;
 
     public PlanformFigure(String id, String title, String subtitle, String description, List<Layer> layers,
             LengthUnit unit) {
+        this(id, title, subtitle, description, layers, unit, java.util.OptionalDouble.empty());
+    }
+
+    /**
+     * @param stallStation the spanwise station (m, right half) where stall starts, marked on both halves
+     */
+    public PlanformFigure(String id, String title, String subtitle, String description, List<Layer> layers,
+            LengthUnit unit, java.util.OptionalDouble stallStation) {
+        this.stallStation = stallStation;
         this.id = id;
         this.title = title;
         this.subtitle = subtitle;
@@ -161,6 +171,7 @@ public final class PlanformFigure implements Figure {
         for (Layer layer : layers) {
             controlLabels(g, layer);
         }
+        stallStation.ifPresent(y -> markStall(g, y));
         legend(g, single);
         scaleBar(g);
     }
@@ -179,6 +190,19 @@ public final class PlanformFigure implements Figure {
         head.closePath();
         g.fill(head);
         Text.draw(g, "direction of flight", LABEL, x - 12, 42, Text.Align.RIGHT, Palette.MUTED, null);
+    }
+
+    /** A line across the chord at the stall-onset station, both halves, labelled above the wing. */
+    private void markStall(Graphics2D g, double y) {
+        g.setColor(Palette.VERMILLION);
+        g.setStroke(new BasicStroke(2.4f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] {7f, 3f}, 0f));
+        double pad = 8;
+        for (double side : new double[] {1, -1}) {
+            double px = sx(side * y);
+            g.draw(new Line2D.Double(px, sy(xMin) - pad, px, sy(xMax) + pad));
+        }
+        Text.draw(g, String.format(Locale.ROOT, "stall starts, y = \u00b1%.3f %s", y / unit.metres(), unit.symbol()),
+                LABEL, sx(y) + 6, sy(xMin) - pad - 4, Text.Align.LEFT, Palette.VERMILLION, null);
     }
 
     private void centreline(Graphics2D g) {

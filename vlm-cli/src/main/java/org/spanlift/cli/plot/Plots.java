@@ -47,6 +47,11 @@ public final class Plots {
     // ---------------------------------------------------------------- one wing
 
     public static PlanformFigure planform(WingAnalysis analysis) {
+        return planform(analysis, java.util.OptionalDouble.empty());
+    }
+
+    /** The planform with the stall-onset station (m, right half) marked when known. */
+    public static PlanformFigure planform(WingAnalysis analysis, java.util.OptionalDouble stallStation) {
         Wing wing = analysis.wing();
         Map<Integer, String> names = new LinkedHashMap<>();
         List<ControlSurface> controls = wing.controls();
@@ -63,8 +68,10 @@ public final class Plots {
                 area(r.area(), u), u.symbol(), r.aspectRatio(), length(r.chord(), u), u.symbol(), panels);
         String desc = "Top view of " + wing.name() + " to scale, leading edge up: the outline of both halves, the "
                 + panels + " lattice panels, and the control surfaces shaded by kind (flaps hatched one way, "
-                + "ailerons the other).";
-        return new PlanformFigure("planform", "Planform: " + wing.name(), subtitle, desc, List.of(layer), u);
+                + "ailerons the other)" + (stallStation.isPresent() ? "; the dashed lines mark the stations where "
+                + "stall starts (critical-section estimate)." : ".");
+        return new PlanformFigure("planform", "Planform: " + wing.name(), subtitle, desc, List.of(layer), u,
+                stallStation);
     }
 
     /** The span load of the first surface (the wing) at one solved condition. */

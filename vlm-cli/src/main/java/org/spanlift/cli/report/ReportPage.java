@@ -82,7 +82,8 @@ public final class ReportPage {
     static Figure figure(PlotKind kind, WingSummary s, StallSummary stall, List<Double> rangeDeg) {
         return switch (kind) {
             case STALL -> stall.estimate().map(e -> (Figure) Plots.stallMap(s.analysis(), e)).orElse(null);
-            case PLANFORM -> Plots.planform(s.analysis());
+            case PLANFORM -> Plots.planform(s.analysis(), stall.estimate()
+                    .map(e -> java.util.OptionalDouble.of(e.y())).orElse(java.util.OptionalDouble.empty()));
             case SPAN_LOAD -> Plots.spanLoad(s.analysis(), s.spanLoadAtCl());
             case LIFT -> Plots.liftCurve(s.analysis(), s.deflections(), rangeDeg);
             case POLAR -> Plots.polar(s.analysis(), s.deflections(), rangeDeg);
