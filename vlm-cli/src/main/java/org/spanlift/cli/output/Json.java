@@ -98,7 +98,8 @@ public final class Json {
         }
     }
 
-    private static void string(String s, StringBuilder b) {
+    /** Appends the JSON string literal of {@code s} (quoted and escaped) to {@code b}. */
+    public static void string(String s, StringBuilder b) {
         b.append('"');
         for (int i = 0; i < s.length(); i++) {
             char c = s.charAt(i);

@@ -8,6 +8,7 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 
 import org.spanlift.cli.options.OutputOptions;
+import org.spanlift.cli.output.Json;
 import org.spanlift.io.InputException;
 import org.spanlift.sweep.SweepFile;
 
@@ -72,9 +73,9 @@ public record Manifest(Map<String, String> fields) {
         for (Map.Entry<String, String> e : fields.entrySet()) {
             b.append(first ? "" : ", ");
             first = false;
-            RowFormat.jsonString(e.getKey(), b);
+            Json.string(e.getKey(), b);
             b.append(": ");
-            RowFormat.jsonString(e.getValue(), b);
+            Json.string(e.getValue(), b);
         }
         return b.append("}\n").toString();
     }

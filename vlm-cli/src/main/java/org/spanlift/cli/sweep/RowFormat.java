@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.regex.Pattern;
 
+import org.spanlift.cli.output.Json;
 import org.spanlift.sweep.CaseResult;
 import org.spanlift.sweep.ResultColumn;
 import org.spanlift.sweep.SweepFile;
@@ -90,7 +91,7 @@ public enum RowFormat {
             b.append('{');
             for (int i = 0; i < cells.size(); i++) {
                 b.append(i == 0 ? "" : ",");
-                jsonString(names.get(i), b);
+                Json.string(names.get(i), b);
                 b.append(':');
                 jsonCell(cells.get(i), b);
             }
@@ -144,34 +145,13 @@ public enum RowFormat {
             if (JSON_NUMBER.matcher(p.text()).matches()) {
                 b.append(p.text());
             } else {
-                jsonString(p.text(), b);
+                Json.string(p.text(), b);
             }
         } else {
-            jsonString(String.valueOf(v), b);
+            Json.string(String.valueOf(v), b);
         }
     }
 
-    static void jsonString(String s, StringBuilder b) {
-        b.append('"');
-        for (int i = 0; i < s.length(); i++) {
-            char c = s.charAt(i);
-            switch (c) {
-                case '"' -> b.append("\\\"");
-                case '\\' -> b.append("\\\\");
-                case '\n' -> b.append("\\n");
-                case '\r' -> b.append("\\r");
-                case '\t' -> b.append("\\t");
-                default -> {
-                    if (c < 0x20) {
-                        b.append(String.format(Locale.ROOT, "\\u%04x", (int) c));
-                    } else {
-                        b.append(c);
-                    }
-                }
-            }
-        }
-        b.append('"');
-    }
 
     /**
      * The cells of a row written by {@link #row}, by column name; absent values are null, and everything
