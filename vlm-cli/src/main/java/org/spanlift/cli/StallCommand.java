@@ -124,6 +124,7 @@ public final class StallCommand implements Callable<Integer> {
         m.put("y", e.y());
         m.put("eta", e.eta());
         m.put("section", e.section());
+        m.put("section_alpha_deg", Math.toDegrees(onsetStrip(e).sectionAngle()));
         m.put("aileron_margin", e.aileronMargin().map(a -> {
             Map<String, Object> am = new LinkedHashMap<>();
             am.put("dcl", a.dcl());
@@ -143,6 +144,7 @@ public final class StallCommand implements Callable<Integer> {
         spread.put("cl_at_onset", right.stream().mapToDouble(StallEstimate.StripStall::clAtOnset).toArray());
         spread.put("cl_basic", right.stream().mapToDouble(StallEstimate.StripStall::clBasic).toArray());
         spread.put("cl_additional", right.stream().mapToDouble(StallEstimate.StripStall::clAdditional).toArray());
+        spread.put("section_alpha_deg", right.stream().mapToDouble(s -> Math.toDegrees(s.sectionAngle())).toArray());
         List<Object> reach = new ArrayList<>();
         right.forEach(s -> reach.add(s.liftToReach()));
         spread.put("CL_reaching_cl_max", reach);
@@ -230,6 +232,8 @@ public final class StallCommand implements Callable<Integer> {
         t.row(cells("onset station y [" + u + "]", configs, c -> TextTable.fixed(c.estimate().y() / k, 3)));
         t.row(cells("onset station eta", configs, c -> TextTable.fixed(c.estimate().eta(), 3)));
         t.row(cells("section there", configs, c -> c.estimate().section()));
+        t.row(cells("  its angle of attack [deg]", configs, c -> TextTable.fixed(Math.toDegrees(onsetStrip(c.estimate())
+                .sectionAngle()), 2)));
         t.row(cells("aileron margin dcl", configs, c -> c.estimate().aileronMargin()
                 .map(a -> TextTable.fixed(a.dcl(), 3)).orElse("-")));
         t.row(cells("  at y [" + u + "]", configs, c -> c.estimate().aileronMargin()
@@ -257,6 +261,12 @@ public final class StallCommand implements Callable<Integer> {
         }
         b.append('\n').append(wrap(CAUTION)).append('\n');
         return b.toString();
+    }
+
+    /** The strip where stall starts (its right-hand one). */
+    static StallEstimate.StripStall onsetStrip(StallEstimate e) {
+        return e.strips().stream().filter(s -> Math.abs(s.y() - e.y()) < 1e-12).findFirst()
+                .orElseThrow(() -> new IllegalStateException("the onset station is not a strip"));
     }
 
     private interface Cell {

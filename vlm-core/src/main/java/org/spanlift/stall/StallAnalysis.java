@@ -123,7 +123,7 @@ public final class StallAnalysis {
             OptionalDouble reach = Double.isFinite(alphaReach[i]) ? OptionalDouble.of(line.lift(alphaReach[i]))
                     : OptionalDouble.empty();
             strips.add(new StallEstimate.StripStall(st.y(), Math.abs(st.y()) / semi, st.chord(), limits.section(i),
-                    re[i], clMax[i], clOnset, clBasic, clAdd, reach));
+                    re[i], clMax[i], clOnset, clBasic, clAdd, limits.sectionAngle(i, clOnset), reach));
         }
         Strip onset = lattice.strips().get(ids.get(first));
         Optional<StallEstimate.AileronMargin> margin = aileronMargin(analysis.wing(), strips);

@@ -34,9 +34,11 @@ public record StallEstimate(double lift, double alpha, double y, double eta, Str
      *
      * @param clBasic       section cl at zero wing lift (the basic load)
      * @param clAdditional  section cl per unit wing CL (the additional load), at zero lift
+     * @param sectionAngle  the effective section angle of attack at onset, alpha_0 + cl / a0 with the
+     *                      section's lift slope and zero-lift angle, rad
      * @param liftToReach   the wing CL at which this strip reaches cl_max (linear theory); absent if never
      */
     public record StripStall(double y, double eta, double chord, String section, double reynolds, double clMax,
-            double clAtOnset, double clBasic, double clAdditional, OptionalDouble liftToReach) {
+            double clAtOnset, double clBasic, double clAdditional, double sectionAngle, OptionalDouble liftToReach) {
     }
 }

@@ -13,6 +13,7 @@ import org.spanlift.geometry.Wing;
 import org.spanlift.lattice.Lattice;
 import org.spanlift.lattice.Strip;
 import org.spanlift.section.Table;
+import org.spanlift.section.ThinAirfoil;
 
 /**
  * Section cl_max of every strip of the wing (the first surface), from the section data interpolated
@@ -40,11 +41,16 @@ public final class StripLimits {
     private final double[] weight;
     private final double[] increment;
     private final String[] section;
+    private final double[] liftSlope;
+    private final double[] zeroLiftAngle;
     private final boolean assumed;
     private final boolean defaultFlapIncrement;
 
     private StripLimits(List<Integer> strips, Table[] inner, Table[] outer, double[] weight, double[] increment,
-            String[] section, boolean assumed, boolean defaultFlapIncrement) {
+            String[] section, double[] liftSlope, double[] zeroLiftAngle, boolean assumed,
+            boolean defaultFlapIncrement) {
+        this.liftSlope = liftSlope;
+        this.zeroLiftAngle = zeroLiftAngle;
         this.strips = strips;
         this.innerClMax = inner;
         this.outerClMax = outer;
@@ -76,6 +82,8 @@ public final class StripLimits {
         double[] w = new double[n];
         double[] inc = new double[n];
         String[] names = new String[n];
+        double[] slope = new double[n];
+        double[] alpha0 = new double[n];
         boolean assumed = false;
         boolean defaultIncrement = false;
         List<String> missing = new ArrayList<>();
@@ -96,6 +104,8 @@ public final class StripLimits {
             outer[i] = b.clMax().orElse(fallback);
             w[i] = blend.weight();
             names[i] = blend.weight() < 0.5 ? blend.inner() : blend.outer();
+            slope[i] = (1 - w[i]) * a.liftSlope() + w[i] * b.liftSlope();
+            alpha0[i] = (1 - w[i]) * zeroLift(a) + w[i] * zeroLift(b);
             int c = flapAt(main, controls, y);
             if (c >= 0 && deflections[c] > 0) {
                 double deg = Math.toDegrees(deflections[c]);
@@ -112,7 +122,14 @@ public final class StripLimits {
         if (!missing.isEmpty()) {
             throw new MissingSectionDataException(missing);
         }
-        return new StripLimits(List.copyOf(ids), inner, outer, w, inc, names, assumed, defaultIncrement);
+        return new StripLimits(List.copyOf(ids), inner, outer, w, inc, names, slope, alpha0, assumed,
+                defaultIncrement);
+    }
+
+    /** The section's zero-lift angle: the measured one where given, else thin-airfoil theory's, rad. */
+    private static double zeroLift(Section s) {
+        return s.measuredZeroLiftAngle().isPresent() ? s.measuredZeroLiftAngle().getAsDouble()
+                : ThinAirfoil.zeroLiftAngle(s.camber());
     }
 
     private static int flapAt(Surface main, List<ControlSurface> controls, double y) {
@@ -138,6 +155,15 @@ public final class StripLimits {
     /** The flap's cl_max increment on wing strip i. */
     public double flapIncrement(int i) {
         return increment[i];
+    }
+
+    /**
+     * The effective section angle of attack (rad) at which wing strip i carries section lift cl:
+     * alpha_0 + cl / a0, with the section's lift slope a0 (measured where given, else 2 pi) and its zero-lift
+     * angle (measured, else thin-airfoil theory). On a flapped strip the flap's lift counts as angle.
+     */
+    public double sectionAngle(int i, double cl) {
+        return zeroLiftAngle[i] + cl / liftSlope[i];
     }
 
     /** The name of the section nearest to wing strip i. */

@@ -105,6 +105,24 @@ class StallTrendsTest {
     }
 
     @Test
+    void measuredLiftSlopeSetsTheSectionAngleAtOnsetButNotTheLattice() {
+        // alpha_section = alpha_0 + cl / a0 (thin-airfoil form with a measured a0; common practice)
+        Wing base = wing(0.6, 2, 0);
+        Section thin = base.sections().get("s");
+        Section measured = new Section("s", thin.camber(), 0, Math.toDegrees(0.1), thin.clMax(),
+                thin.flapClMaxIncrement(), thin.dragPolar(), thin.measuredZeroLiftAngle());
+        Wing w = new Wing(base.name(), base.displayUnit(), base.reference(), base.surfaces(), Map.of("s", measured));
+        StallEstimate a = onset(base);
+        StallEstimate b = onset(w);
+        assertEquals(a.lift(), b.lift(), 1e-12, "the lattice does not use the section lift slope");
+        double alpha0 = org.spanlift.section.ThinAirfoil.zeroLiftAngle(thin.camber());
+        StallEstimate.StripStall critical = b.strips().stream().filter(s -> s.y() == b.y()).findFirst().orElseThrow();
+        assertEquals(alpha0 + CL_MAX / Math.toDegrees(0.1), critical.sectionAngle(), 1e-12);
+        StallEstimate.StripStall thinCritical = a.strips().stream().filter(s -> s.y() == a.y()).findFirst().orElseThrow();
+        assertEquals(alpha0 + CL_MAX / (2 * Math.PI), thinCritical.sectionAngle(), 1e-12);
+    }
+
+    @Test
     void flapsLowerTheStallSpeed() {
         double clean = speed(wing(0.6, 2, 0), 8000, 0).equivalent();
         double flapped = speed(wing(0.6, 2, 20), 8000, 0).equivalent();
