@@ -75,7 +75,7 @@ public final class PlotCommand implements Callable<Integer> {
             case SPAN_LOAD -> Plots.spanLoad(analysis, analysis.solve(spanLoadAlpha(analysis, deflections),
                     deflections));
             case LIFT -> Plots.liftCurve(analysis, deflections, range());
-            case POLAR -> Plots.polar(analysis, deflections, range());
+            case POLAR -> Plots.polar(analysis, deflections, range(), flight.reynoldsPerMetre(wing));
             case STALL -> Plots.stallMap(analysis, stall(analysis, deflections));
         };
         FigureOutput.write(figure, format, output, spec.commandLine().getOut());

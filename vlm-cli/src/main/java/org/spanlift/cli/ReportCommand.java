@@ -80,7 +80,8 @@ public final class ReportCommand implements Callable<Integer> {
         } catch (MissingSectionDataException e) {
             stall = StallSummary.unavailable(e.getMessage());
         }
-        String html = ReportPage.build(summary, fine, stall, alphas, curve, new VersionProvider().getVersion()[0]);
+        String html = ReportPage.build(summary, fine, stall, alphas, curve, flight.reynoldsPerMetre(wing),
+                new VersionProvider().getVersion()[0]);
         assert format == Format.HTML;
         output.write(html, spec.commandLine().getOut());
         return 0;

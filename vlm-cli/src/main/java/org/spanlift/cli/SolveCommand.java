@@ -74,9 +74,12 @@ public final class SolveCommand implements Callable<Integer> {
     record Level(FlightCondition condition, Solution solution) {
     }
 
-    /** What the flight options add to the coefficients: profile drag and dimensional circulation. */
+    /**
+     * What the flight options add to the coefficients: profile drag (at the Reynolds number per metre the
+     * flight options give for each point's CL) and dimensional circulation.
+     */
     record Dimensions(Wing wing, AtmosphereState atmosphere, OptionalDouble equivalentSpeed,
-            Optional<FlightCondition> condition) {
+            java.util.function.DoubleUnaryOperator reynoldsPerMetre) {
 
         /** The circulation scale: the true speed in m/s when given (circulation in m^2/s), else 1 (Gamma/V in m). */
         double circulationScale() {
@@ -84,20 +87,8 @@ public final class SolveCommand implements Callable<Integer> {
                     ? Airspeed.trueFromEquivalent(equivalentSpeed.getAsDouble(), atmosphere) : 1;
         }
 
-        /**
-         * Profile drag at the speed given, else at the level-flight speed of the point's CL for the weight
-         * given, else with every polar read at its lowest Reynolds number.
-         */
         OptionalDouble profileDrag(Solution s, double cl) {
-            double nu = atmosphere.kinematicViscosity();
-            double reynoldsPerMetre = 0;
-            if (equivalentSpeed.isPresent()) {
-                reynoldsPerMetre = circulationScale() / nu;
-            } else if (condition.isPresent() && cl > 0) {
-                double ve = condition.get().equivalentSpeedFor(cl, wing.reference());
-                reynoldsPerMetre = Airspeed.trueFromEquivalent(ve, atmosphere) / nu;
-            }
-            return ProfileDrag.coefficient(s, wing, reynoldsPerMetre);
+            return ProfileDrag.coefficient(s, wing, reynoldsPerMetre.applyAsDouble(cl));
         }
     }
 
@@ -127,7 +118,7 @@ public final class SolveCommand implements Callable<Integer> {
             level = Optional.of(new Level(condition.get(),
                     analysis.solve(alphaFor(line, cl, "--weight with --speed"), deflections)));
         }
-        Dimensions dims = new Dimensions(wing, atmosphere, eas, condition);
+        Dimensions dims = new Dimensions(wing, atmosphere, eas, flight.reynoldsPerMetre(wing));
         String text = switch (format) {
             case JSON -> Json.write(json(wing, analysis, line, points, level, dims));
             case CSV -> csv(points, dims);

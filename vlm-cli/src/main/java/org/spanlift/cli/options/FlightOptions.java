@@ -175,6 +175,27 @@ public final class FlightOptions {
         return Optional.of(new FlightCondition(w.getAsDouble(), loadFactor(), atm, equivalentSpeed(atm)));
     }
 
+    /**
+     * rho V / mu (true speed) for a point of wing lift coefficient CL, for profile drag: at the speed given,
+     * else at the level-flight speed of that CL for the weight given, else 0 (polars at their lowest
+     * Reynolds number).
+     */
+    public java.util.function.DoubleUnaryOperator reynoldsPerMetre(Wing wing) {
+        AtmosphereState atm = atmosphere();
+        double nu = atm.kinematicViscosity();
+        OptionalDouble eas = equivalentSpeed(atm);
+        if (eas.isPresent()) {
+            double perMetre = Airspeed.trueFromEquivalent(eas.getAsDouble(), atm) / nu;
+            return cl -> perMetre;
+        }
+        Optional<FlightCondition> fc = condition();
+        if (fc.isPresent()) {
+            return cl -> cl > 0 ? Airspeed.trueFromEquivalent(fc.get().equivalentSpeedFor(cl, wing.reference()), atm) / nu
+                    : 0;
+        }
+        return cl -> 0;
+    }
+
     private static double quantity(String option, String text, QuantityKind kind) {
         try {
             return Quantity.parse(text, kind).value();

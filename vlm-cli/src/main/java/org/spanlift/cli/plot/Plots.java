@@ -22,6 +22,7 @@ import org.spanlift.geometry.LengthUnit;
 import org.spanlift.geometry.Reference;
 import org.spanlift.geometry.Surface;
 import org.spanlift.geometry.Wing;
+import org.spanlift.results.ProfileDrag;
 import org.spanlift.results.Solution;
 import org.spanlift.results.SpanLoad;
 import org.spanlift.solve.WingAnalysis;
@@ -134,16 +135,29 @@ public final class Plots {
         return new ChartFigure("lift-curve", desc, c);
     }
 
-    /** CL against induced drag at the given deflections, with the elliptic-loading bound. */
-    public static ChartFigure polar(WingAnalysis analysis, double[] deflections, List<Double> alphasDeg) {
+    /**
+     * CL against induced drag at the given deflections, with the elliptic-loading bound; and, where every
+     * section has a drag polar, against the total drag CDi + CDp.
+     *
+     * @param reynoldsPerMetre rho V / mu for a point of lift coefficient CL (0 reads the polars at their
+     *                         lowest Reynolds number)
+     */
+    public static ChartFigure polar(WingAnalysis analysis, double[] deflections, List<Double> alphasDeg,
+            java.util.function.DoubleUnaryOperator reynoldsPerMetre) {
         Wing wing = analysis.wing();
         double[] a = toArray(alphasDeg);
         double[] cl = new double[a.length];
         double[] cd = new double[a.length];
+        double[] total = new double[a.length];
+        boolean profile = ProfileDrag.available(wing);
         for (int i = 0; i < a.length; i++) {
-            var co = analysis.solve(Math.toRadians(a[i]), deflections).coefficients();
+            Solution sol = analysis.solve(Math.toRadians(a[i]), deflections);
+            var co = sol.coefficients();
             cl[i] = co.lift();
             cd[i] = co.inducedDrag();
+            if (profile) {
+                total[i] = cd[i] + ProfileDrag.coefficient(sol, wing, reynoldsPerMetre.applyAsDouble(cl[i])).getAsDouble();
+            }
         }
         double ar = wing.reference().aspectRatio();
         double lo = Math.min(0, min(cl));
@@ -163,16 +177,23 @@ public final class Plots {
                 eText = String.format(Locale.ROOT, ": e = %.3f at CL 0.5", at.spanEfficiency().getAsDouble());
             }
         }
-        XYChart c = chart("Induced-drag polar" + eText, "CDi  (induced drag only, Trefftz plane; no profile drag)", "CL");
+        XYChart c = chart((profile ? "Drag polar" : "Induced-drag polar") + eText, profile
+                ? "CD and CDi  (CDi from the Trefftz plane; CD adds the sections' profile drag)"
+                : "CDi  (induced drag only, Trefftz plane; the sections give no drag polar)", "CL");
         XYSeries s = c.addSeries("CL against CDi, " + wing.name(), cd, cl);
         style(s, Palette.BLUE, Palette.line(0, 2.2f), SeriesMarkers.CIRCLE);
-        XYSeries e = c.addSeries(String.format(Locale.ROOT, "elliptic loading, e = 1 (aspect ratio %.2f)", ar), rcd, rcl);
+        if (profile) {
+            XYSeries t = c.addSeries("CL against CD = CDi + CDp", total, cl);
+            style(t, Palette.GREEN, Palette.line(2, 2.2f), SeriesMarkers.SQUARE);
+        }
+        XYSeries e = c.addSeries(String.format(Locale.ROOT, "elliptic, e = 1 (A = %.2f)", ar), rcd, rcl);
         style(e, Palette.INK, Palette.referenceLine(), SeriesMarkers.NONE);
         c.getStyler().setXAxisMin(0.0);
         c.getStyler().setXAxisDecimalPattern("0.000");
         String desc = String.format(Locale.ROOT, "Lift coefficient against induced drag coefficient from %.1f to %.1f "
-                + "degrees angle of attack, beside the parabola of elliptic loading at the same aspect ratio. Profile "
-                + "drag is not included.", a[0], a[a.length - 1]);
+                + "degrees angle of attack, beside the parabola of elliptic loading at the same aspect ratio. %s",
+                a[0], a[a.length - 1], profile ? "The total drag adds the profile drag of the section polars, "
+                        + "integrated strip by strip." : "Profile drag is not included: the sections give no polar.");
         return new ChartFigure("polar", desc, c);
     }
 

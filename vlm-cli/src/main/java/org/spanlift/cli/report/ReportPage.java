@@ -28,12 +28,13 @@ public final class ReportPage {
      * @param summary   the wing at its file lattice, with the condition at the chosen CL
      * @param fine      the same at twice as many strips, for the convergence note
      * @param stall     the stall-onset estimate, or why there is none
+     * @param reynolds  rho V / mu for a point of lift coefficient CL, for the profile drag
      * @param alphasDeg the angles of the results table
      * @param rangeDeg  the angles of the lift curve and polar
      * @param version   the program version for the footer
      */
     public static String build(WingSummary summary, WingSummary fine, StallSummary stall, List<Double> alphasDeg,
-            List<Double> rangeDeg, String version) {
+            List<Double> rangeDeg, java.util.function.DoubleUnaryOperator reynolds, String version) {
         Wing wing = summary.wing();
         WingAnalysis analysis = summary.analysis();
         LengthUnit u = wing.displayUnit();
@@ -50,7 +51,7 @@ public final class ReportPage {
         description(h, wing);
         h.el("h2", "Figures");
         for (PlotKind kind : PlotKind.values()) {
-            Figure f = figure(kind, summary, stall, rangeDeg);
+            Figure f = figure(kind, summary, stall, rangeDeg, reynolds);
             if (f == null) {
                 h.el("p", "class=\"missing\"", "No stall map: " + stall.unavailable());
                 continue;
@@ -79,14 +80,15 @@ public final class ReportPage {
      * The figure of a kind, as the report shows it; every kind has one (the switch is exhaustive), but the stall
      * map needs section cl-max data and is null without it.
      */
-    static Figure figure(PlotKind kind, WingSummary s, StallSummary stall, List<Double> rangeDeg) {
+    static Figure figure(PlotKind kind, WingSummary s, StallSummary stall, List<Double> rangeDeg,
+            java.util.function.DoubleUnaryOperator reynolds) {
         return switch (kind) {
             case STALL -> stall.estimate().map(e -> (Figure) Plots.stallMap(s.analysis(), e)).orElse(null);
             case PLANFORM -> Plots.planform(s.analysis(), stall.estimate()
                     .map(e -> java.util.OptionalDouble.of(e.y())).orElse(java.util.OptionalDouble.empty()));
             case SPAN_LOAD -> Plots.spanLoad(s.analysis(), s.spanLoadAtCl());
             case LIFT -> Plots.liftCurve(s.analysis(), s.deflections(), rangeDeg);
-            case POLAR -> Plots.polar(s.analysis(), s.deflections(), rangeDeg);
+            case POLAR -> Plots.polar(s.analysis(), s.deflections(), rangeDeg, reynolds);
         };
     }
 
