@@ -50,6 +50,10 @@ import picocli.CommandLine.Model.CommandSpec;
                 + "case at each station.")
 public final class LoadsCommand implements Callable<Integer> {
 
+    /** Linear theory carries any CL: the user must check the cases against the wing's maximum lift. */
+    static final String NO_STALL = "Linear theory has no stall: check each case's CL against the wing's maximum "
+            + "(spanlift stall); a case beyond it cannot be flown at that speed.";
+
     static final String CAUTION = "Caution: loads for preliminary sizing only. Structural design and substantiation "
             + "follow the applicable airworthiness standards and licensed engineering practice, with the required "
             + "safety factors, which this tool does not apply unless told to (--safety-factor).";
@@ -199,6 +203,7 @@ public final class LoadsCommand implements Callable<Integer> {
         units.put("altitude", "m, pressure altitude (geopotential, standard atmosphere)");
         root.put("units", units);
         root.put("caution", CAUTION);
+        root.put("note", NO_STALL);
         root.put("safety_factor", safetyFactor);
         root.put("loads_are", factorNote());
         root.put("sign_conventions", SIGNS);
@@ -348,6 +353,7 @@ public final class LoadsCommand implements Callable<Integer> {
                     + String.format(Locale.ROOT, "%.3f", loads.liftLine().slope()) + " per rad (the wing's own unless the "
                     + "envelope file gives lift-slope), c = S/b. " + ENVELOPE_NOTE)).append('\n');
         }
+        b.append('\n').append(StallCommand.wrap(NO_STALL)).append('\n');
         b.append('\n').append(StallCommand.wrap(CAUTION)).append('\n');
         return b.toString();
     }
