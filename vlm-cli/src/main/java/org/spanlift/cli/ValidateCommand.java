@@ -118,17 +118,17 @@ public final class ValidateCommand implements Callable<Integer> {
     }
 
     private static String table(List<CaseResult> results) {
-        TextTable t = new TextTable(List.of("case", "quantity", "reference", "src", "result", "lattice", "converged",
-                "order", "error %", "tol %", "pass"));
+        TextTable t = new TextTable(List.of("case", "reference", "result", "lattice", "converged", "order", "error %",
+                "tol %", "pass", "src", "quantity")).leftAlign(3, 8, 9, 10);
         StringBuilder notes = new StringBuilder();
         int n = 0;
         for (CaseResult r : results) {
             ReferenceCase c = r.referenceCase();
             n++;
-            t.row(List.of(c.name(), c.quantity(), number(c.reference()), "[" + n + "]", number(r.result()),
-                    lattice(c.lattice()), r.converged() == null ? "-" : number(r.converged()),
+            t.row(List.of(c.name(), number(c.reference()), number(r.result()), lattice(c.lattice()),
+                    r.converged() == null ? "-" : number(r.converged()),
                     r.order() == null ? "-" : TextTable.fixed(r.order(), 2), TextTable.fixed(r.errorPct(), 3),
-                    TextTable.fixed(c.tolerancePct(), 2), r.pass() ? "pass" : "FAIL"));
+                    TextTable.fixed(c.tolerancePct(), 2), r.pass() ? "pass" : "FAIL", "[" + n + "]", c.quantity()));
             notes.append(String.format(Locale.ROOT, "[%d] %s%n    tolerance: %s%n", n, c.source(), c.toleranceWhy()));
         }
         long failed = results.stream().filter(r -> !r.pass()).count();

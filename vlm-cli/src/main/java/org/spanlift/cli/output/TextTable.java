@@ -3,14 +3,26 @@ package org.spanlift.cli.output;
 import java.util.ArrayList;
 import java.util.List;
 
-/** An aligned text table: a header row, then rows of cells, numbers right-aligned, two spaces apart. */
+/**
+ * An aligned text table: a header row, then rows of cells two spaces apart; the first column (and any
+ * chosen with {@link #leftAlign}) left-aligned, the others (numbers) right-aligned.
+ */
 public final class TextTable {
 
     private final List<String> headers;
     private final List<List<String>> rows = new ArrayList<>();
+    private final java.util.Set<Integer> leftAligned = new java.util.HashSet<>(List.of(0));
 
     public TextTable(List<String> headers) {
         this.headers = List.copyOf(headers);
+    }
+
+    /** Left-aligns these columns (text), besides the first. */
+    public TextTable leftAlign(int... columns) {
+        for (int c : columns) {
+            leftAligned.add(c);
+        }
+        return this;
     }
 
     public TextTable row(List<String> cells) {
@@ -31,19 +43,19 @@ public final class TextTable {
             }
         }
         StringBuilder b = new StringBuilder();
-        line(b, headers, width);
+        line(b, headers, width, leftAligned);
         StringBuilder rule = new StringBuilder();
         for (int c = 0; c < n; c++) {
             rule.append(c == 0 ? "" : "  ").append("-".repeat(width[c]));
         }
         b.append(rule).append('\n');
         for (List<String> r : rows) {
-            line(b, r, width);
+            line(b, r, width, leftAligned);
         }
         return b.toString();
     }
 
-    private static void line(StringBuilder b, List<String> cells, int[] width) {
+    private static void line(StringBuilder b, List<String> cells, int[] width, java.util.Set<Integer> left) {
         StringBuilder l = new StringBuilder();
         for (int c = 0; c < cells.size(); c++) {
             if (c > 0) {
@@ -51,7 +63,7 @@ public final class TextTable {
             }
             String s = cells.get(c);
             String pad = " ".repeat(width[c] - s.length());
-            l.append(c == 0 ? s + pad : pad + s);
+            l.append(left.contains(c) ? s + pad : pad + s);
         }
         b.append(l.toString().stripTrailing()).append('\n');
     }
