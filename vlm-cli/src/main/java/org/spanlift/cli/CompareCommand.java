@@ -6,6 +6,7 @@ import java.util.EnumSet;
 import java.util.List;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
+import java.util.Locale;
 
 import org.spanlift.cli.options.AlphaList;
 import org.spanlift.cli.options.Format;
@@ -146,7 +147,7 @@ public final class CompareCommand implements Callable<Integer> {
             t.row(row);
         }
         b.append(t.render());
-        b.append(String.format(java.util.Locale.ROOT, "%n  Common CL %.3f. Lengths in %s (the first wing's unit); each "
+        b.append(String.format(Locale.ROOT, "%n  Common CL %.3f. Lengths in %s (the first wing's unit); each "
                 + "wing on its own reference values; CDi is induced drag only.%n", cmp.cl(), u.symbol()));
         return b.toString();
     }

@@ -9,6 +9,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
+import java.util.Arrays;
 
 import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.FlightOptions;
@@ -287,9 +288,9 @@ public final class LoadsCommand implements Callable<Integer> {
     private static Map<String, Object> extremes(Governing.Extremes e) {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("max", e.max());
-        m.put("max_case", java.util.Arrays.stream(e.maxCase()).boxed().toList());
+        m.put("max_case", Arrays.stream(e.maxCase()).boxed().toList());
         m.put("min", e.min());
-        m.put("min_case", java.util.Arrays.stream(e.minCase()).boxed().toList());
+        m.put("min_case", Arrays.stream(e.minCase()).boxed().toList());
         return m;
     }
 

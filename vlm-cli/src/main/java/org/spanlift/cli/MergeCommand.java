@@ -12,6 +12,7 @@ import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
 import java.util.concurrent.Callable;
+import java.util.Locale;
 
 import org.spanlift.cli.sweep.Manifest;
 import org.spanlift.cli.sweep.Ranker;
@@ -60,7 +61,7 @@ public final class MergeCommand implements Callable<Integer> {
                         + Manifest.pathFor(f).getFileName() + "); merge joins the outputs of spanlift sweep --shard");
             }
             if (RowFormat.of(f.getFileName().toString()) != format
-                    || !m.get("format").equals(format.name().toLowerCase(java.util.Locale.ROOT))) {
+                    || !m.get("format").equals(format.name().toLowerCase(Locale.ROOT))) {
                 throw new InputException(f.toString(), 0, "", "is not in the output's format (" + format.extension() + ")");
             }
             parts.add(new Part(f, m, m.number("first_case"), m.number("end_case")));

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.concurrent.Callable;
+import java.util.OptionalDouble;
 
 import org.spanlift.cli.options.AlphaList;
 import org.spanlift.cli.options.ClMaxOptions;
@@ -83,12 +84,12 @@ public final class PlotCommand implements Callable<Integer> {
     }
 
     /** The stall-onset station to mark on the planform, when the sections allow an estimate. */
-    private java.util.OptionalDouble stallStation(WingAnalysis analysis, double[] deflections) {
+    private OptionalDouble stallStation(WingAnalysis analysis, double[] deflections) {
         try {
-            return java.util.OptionalDouble.of(StallCommand.evaluate("plot", analysis, deflections, clMax.assumed(),
+            return OptionalDouble.of(StallCommand.evaluate("plot", analysis, deflections, clMax.assumed(),
                     flight.condition()).estimate().y());
         } catch (MissingSectionDataException e) {
-            return java.util.OptionalDouble.empty();
+            return OptionalDouble.empty();
         }
     }
 

@@ -11,6 +11,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.Callable;
+import java.util.function.DoubleUnaryOperator;
 
 import org.spanlift.atmosphere.Airspeed;
 import org.spanlift.atmosphere.AtmosphereState;
@@ -79,7 +80,7 @@ public final class SolveCommand implements Callable<Integer> {
      * flight options give for each point's CL) and dimensional circulation.
      */
     record Dimensions(Wing wing, AtmosphereState atmosphere, OptionalDouble equivalentSpeed,
-            java.util.function.DoubleUnaryOperator reynoldsPerMetre) {
+            DoubleUnaryOperator reynoldsPerMetre) {
 
         /** The circulation scale: the true speed in m/s when given (circulation in m^2/s), else 1 (Gamma/V in m). */
         double circulationScale() {

@@ -1,6 +1,10 @@
 package org.spanlift.lattice;
 
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * The discretized wing: panels, each carrying a horseshoe vortex, grouped in spanwise strips. Arrays are
@@ -30,7 +34,6 @@ public final class Lattice {
     private final List<Strip> strips;
     private final int half;
     private final boolean mirrored;
-    private final int rowsMax;
     private final double[] trailing;   // unique trailing-leg start points, xyz
     private final double[] trailingCutoff;
     private final int[] aPoint;        // index of panel's A among the trailing points
@@ -38,7 +41,7 @@ public final class Lattice {
 
     Lattice(double[] a, double[] b, double[] control, double[] normal, double[] incidence, double[] cutoff,
             int[] stripOf, int[] controlOf, double[] controlSign, List<Strip> strips, int half,
-            boolean mirrored, int rowsMax) {
+            boolean mirrored) {
         this.a = a;
         this.b = b;
         this.control = control;
@@ -51,13 +54,12 @@ public final class Lattice {
         this.strips = List.copyOf(strips);
         this.half = half;
         this.mirrored = mirrored;
-        this.rowsMax = rowsMax;
         int n = stripOf.length;
         this.aPoint = new int[n];
         this.bPoint = new int[n];
-        java.util.Map<Vec, Integer> index = new java.util.HashMap<>();
-        java.util.List<Vec> points = new java.util.ArrayList<>();
-        java.util.List<Double> cut = new java.util.ArrayList<>();
+        Map<Vec, Integer> index = new HashMap<>();
+        List<Vec> points = new ArrayList<>();
+        List<Double> cut = new ArrayList<>();
         for (int p = 0; p < n; p++) {
             aPoint[p] = pointIndex(new Vec(a[3 * p], a[3 * p + 1], a[3 * p + 2]), cutoff[p], index, points, cut);
             bPoint[p] = pointIndex(new Vec(b[3 * p], b[3 * p + 1], b[3 * p + 2]), cutoff[p], index, points, cut);
@@ -76,8 +78,8 @@ public final class Lattice {
     private record Vec(double x, double y, double z) {
     }
 
-    private static int pointIndex(Vec v, double cutoff, java.util.Map<Vec, Integer> index, java.util.List<Vec> points,
-            java.util.List<Double> cut) {
+    private static int pointIndex(Vec v, double cutoff, Map<Vec, Integer> index, List<Vec> points,
+            List<Double> cut) {
         Integer k = index.get(v);
         if (k == null) {
             k = points.size();
@@ -132,9 +134,9 @@ public final class Lattice {
      */
     public boolean sameGeometry(Lattice other) {
         return other == this || (half == other.half && mirrored == other.mirrored
-                && java.util.Arrays.equals(a, other.a) && java.util.Arrays.equals(b, other.b)
-                && java.util.Arrays.equals(control, other.control) && java.util.Arrays.equals(normal, other.normal)
-                && java.util.Arrays.equals(cutoff, other.cutoff));
+                && Arrays.equals(a, other.a) && Arrays.equals(b, other.b)
+                && Arrays.equals(control, other.control) && Arrays.equals(normal, other.normal)
+                && Arrays.equals(cutoff, other.cutoff));
     }
 
     /** Number of panels on the whole surface, both halves. */
@@ -157,11 +159,6 @@ public final class Lattice {
 
     public List<Strip> strips() {
         return strips;
-    }
-
-    /** The largest number of chordwise rows on any strip. */
-    public int rowsMax() {
-        return rowsMax;
     }
 
     public int stripOf(int panel) {

@@ -128,7 +128,6 @@ public final class LatticeBuilder {
         final List<int[]> tags = new ArrayList<>();      // per panel: strip, control
         final List<Double> signs = new ArrayList<>();
         final List<Strip> strips = new ArrayList<>();
-        int rowsMax;
 
         int size() {
             return rows.size();
@@ -164,7 +163,6 @@ public final class LatticeBuilder {
             int strip = strips.size();
             int first = rows.size();
             int rowCount = rowEdges.length - 1;
-            rowsMax = Math.max(rowsMax, rowCount);
             for (int r = 0; r < rowCount; r++) {
                 double r0 = rowEdges[r];
                 double r1 = rowEdges[r + 1];
@@ -206,7 +204,6 @@ public final class LatticeBuilder {
                 strips.add(new Strip(s.surface(), s.firstPanel() + panelOffset, s.rows(), s.yLeft(), s.zLeft(),
                         s.yRight(), s.zRight(), s.y(), s.chord(), s.right()));
             }
-            rowsMax = Math.max(rowsMax, other.rowsMax);
         }
 
         /** Appends the mirror images (y -> -y) of the other panels; the bound leg keeps running toward +y. */
@@ -234,7 +231,6 @@ public final class LatticeBuilder {
                 strips.add(new Strip(s.surface(), s.firstPanel() + panelOffset, s.rows(), -s.yRight(), s.zRight(),
                         -s.yLeft(), s.zLeft(), -s.y(), s.chord(), false));
             }
-            rowsMax = Math.max(rowsMax, other.rowsMax);
         }
 
         Lattice toLattice(int half, boolean mirrored) {
@@ -260,7 +256,7 @@ public final class LatticeBuilder {
                 ctrl[i] = tags.get(i)[1];
                 sign[i] = signs.get(i);
             }
-            return new Lattice(a, b, c, nn, eps, cut, strip, ctrl, sign, strips, half, mirrored, rowsMax);
+            return new Lattice(a, b, c, nn, eps, cut, strip, ctrl, sign, strips, half, mirrored);
         }
     }
 }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.TreeSet;
+import java.util.Locale;
 
 import org.spanlift.atmosphere.StandardAtmosphere;
 import org.spanlift.geometry.Planform;
@@ -165,7 +166,7 @@ public final class LoadsAnalysis {
         try {
             alpha = wingLine.alphaFor(cl);
         } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("load case '" + c.name() + "' needs CL " + String.format(java.util.Locale.ROOT,
+            throw new IllegalArgumentException("load case '" + c.name() + "' needs CL " + String.format(Locale.ROOT,
                     "%.3f", cl) + ", beyond the wing's linear range; check its weight, load factor and speed");
         }
         Solution s = analysis.solve(alpha, deflections);

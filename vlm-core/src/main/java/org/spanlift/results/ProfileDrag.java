@@ -2,6 +2,7 @@ package org.spanlift.results;
 
 import java.util.List;
 import java.util.OptionalDouble;
+import java.util.stream.Stream;
 
 import org.spanlift.geometry.Section;
 import org.spanlift.geometry.SectionBlend;
@@ -30,7 +31,7 @@ public final class ProfileDrag {
         List<Double> ys = surface.planform().stationYs();
         return ys.stream().flatMap(y -> {
             SectionBlend b = surface.planform().section(y);
-            return java.util.stream.Stream.of(b.inner(), b.outer());
+            return Stream.of(b.inner(), b.outer());
         }).distinct().toList();
     }
 

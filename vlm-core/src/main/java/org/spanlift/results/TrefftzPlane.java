@@ -62,17 +62,4 @@ public final class TrefftzPlane {
         }
     }
 
-    /**
-     * Induced drag over dynamic pressure, D/q in m^2.
-     *
-     * @param circulation strip circulation per unit speed, m
-     * @param normalwash  from {@link #normalwash}
-     */
-    public static double dragArea(List<Strip> strips, double[] circulation, double[] normalwash) {
-        double sum = 0;
-        for (int s = 0; s < strips.size(); s++) {
-            sum += circulation[s] * normalwash[s] * strips.get(s).width();
-        }
-        return -sum;
-    }
 }

@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
 
 /** Reads a plain two-column x/y airfoil coordinate file and extracts its mean line. */
 final class CoordinateFileReader {
@@ -304,7 +305,7 @@ final class CoordinateFileReader {
         double gap = Math.hypot(x[0] - x[n - 1], y[0] - y[n - 1]);
         if (gap > MAX_TRAILING_EDGE_GAP * chord) {
             throw new SectionFileException(file, ln[n - 1],
-                    String.format(java.util.Locale.ROOT, "the two surfaces end %.3g chords apart", gap / chord),
+                    String.format(Locale.ROOT, "the two surfaces end %.3g chords apart", gap / chord),
                     "both surfaces to end at the trailing edge");
         }
         double[] xn = new double[n];
@@ -373,7 +374,7 @@ final class CoordinateFileReader {
             double s = Math.sqrt(Math.min(xn[i], 1.0));
             if (upper.value(s) - lower.value(s) < -CROSSING_TOLERANCE) {
                 throw new SectionFileException(file, ln[i],
-                        String.format(java.util.Locale.ROOT, "the upper and lower surfaces cross near x = %.4f", xFile[i]),
+                        String.format(Locale.ROOT, "the upper and lower surfaces cross near x = %.4f", xFile[i]),
                         "the upper surface above the lower surface over the whole chord");
             }
         }

@@ -50,15 +50,4 @@ public final class Table {
         return (1 - w) * y[lo] + w * y[hi];
     }
 
-    public boolean isConstant() {
-        return x.length == 1;
-    }
-
-    public double[] abscissae() {
-        return x.clone();
-    }
-
-    public double[] values() {
-        return y.clone();
-    }
 }

@@ -2,6 +2,7 @@ package org.spanlift.section;
 
 import java.util.OptionalDouble;
 import java.util.function.DoubleUnaryOperator;
+import java.util.Arrays;
 
 /**
  * Thin-airfoil theory (Glauert's form) for a camber line: zero-lift angle, quarter-chord moment, ideal angle
@@ -106,7 +107,7 @@ public final class ThinAirfoil {
                 }
             }
         }
-        double[] sorted = java.util.Arrays.copyOf(splits, n);
+        double[] sorted = Arrays.copyOf(splits, n);
         DoubleUnaryOperator f = theta -> line.slope(0.5 * (1.0 - Math.cos(theta))) * weight.applyAsDouble(theta);
         return Quadrature.integrate(f, 0.0, Math.PI, sorted, TOLERANCE);
     }

@@ -1,6 +1,7 @@
 package org.spanlift.solve;
 
 import java.util.List;
+import java.util.Arrays;
 
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
@@ -35,7 +36,7 @@ public final class BasisSolutions {
      */
     public static BasisSolutions solve(Lattice lattice, List<ControlSurface> controlList, boolean useSymmetry) {
         boolean[] all = new boolean[controlList.size()];
-        java.util.Arrays.fill(all, true);
+        Arrays.fill(all, true);
         return solve(lattice, controlList, InfluenceCache.single().systems(lattice), useSymmetry, all);
     }
 

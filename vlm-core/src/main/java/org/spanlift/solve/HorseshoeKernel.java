@@ -16,16 +16,6 @@ public final class HorseshoeKernel {
     }
 
     /**
-     * The normal component n . v at control point {@code i} of the velocity induced by horseshoe {@code j}
-     * of the lattice at unit circulation.
-     */
-    public static double normalwash(Lattice lat, int i, int j) {
-        double[] v = new double[3];
-        velocity(lat, j, lat.cx(i), lat.cy(i), lat.cz(i), v);
-        return v[0] * lat.nx(i) + v[1] * lat.ny(i) + v[2] * lat.nz(i);
-    }
-
-    /**
      * Writes into {@code out} (length 3, overwritten) the velocity at (px, py, pz) induced by horseshoe
      * {@code j} at unit circulation.
      */

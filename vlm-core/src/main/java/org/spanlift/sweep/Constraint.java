@@ -3,6 +3,8 @@ package org.spanlift.sweep;
 import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
+import java.util.Objects;
+import java.util.stream.Stream;
 
 /**
  * A condition a case must meet to be ranked, such as {@code stall.eta < controls.aileron.from_eta}: two
@@ -66,7 +68,7 @@ public record Constraint(String text, String left, double leftValue, String op, 
 
     /** The columns this constraint reads. */
     public List<String> columns() {
-        return java.util.stream.Stream.of(left, right).filter(java.util.Objects::nonNull).toList();
+        return Stream.of(left, right).filter(Objects::nonNull).toList();
     }
 
     /** Whether the values meet the constraint; a missing value (null) does not. */

@@ -3,6 +3,7 @@ package org.spanlift.validation.cases;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.ToDoubleFunction;
 
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
@@ -171,7 +172,7 @@ public final class ConvergenceStudy {
         System.out.print(b);
     }
 
-    private static double worst(List<Row> rows, java.util.function.ToDoubleFunction<Row> f) {
+    private static double worst(List<Row> rows, ToDoubleFunction<Row> f) {
         return rows.stream().mapToDouble(r -> Math.abs(f.applyAsDouble(r))).max().orElse(Double.NaN);
     }
 }

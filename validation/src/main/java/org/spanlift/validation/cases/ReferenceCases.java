@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.ToDoubleFunction;
+import java.util.Optional;
 
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
@@ -52,7 +53,7 @@ public final class ReferenceCases {
     }
 
     /** The case of that name. */
-    public static java.util.Optional<ReferenceCase> named(String name) {
+    public static Optional<ReferenceCase> named(String name) {
         return all().stream().filter(k -> k.name().equals(name)).findFirst();
     }
 

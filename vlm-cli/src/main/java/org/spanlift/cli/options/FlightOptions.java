@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.function.DoubleUnaryOperator;
 
 import org.spanlift.atmosphere.Airspeed;
 import org.spanlift.atmosphere.AtmosphereState;
@@ -180,7 +181,7 @@ public final class FlightOptions {
      * else at the level-flight speed of that CL for the weight given, else 0 (polars at their lowest
      * Reynolds number).
      */
-    public java.util.function.DoubleUnaryOperator reynoldsPerMetre(Wing wing) {
+    public DoubleUnaryOperator reynoldsPerMetre(Wing wing) {
         AtmosphereState atm = atmosphere();
         double nu = atm.kinematicViscosity();
         OptionalDouble eas = equivalentSpeed(atm);

@@ -2,6 +2,9 @@ package org.spanlift.cli.output;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.HashSet;
+import java.util.Locale;
+import java.util.Set;
 
 /**
  * An aligned text table: a header row, then rows of cells two spaces apart; the first column (and any
@@ -11,7 +14,7 @@ public final class TextTable {
 
     private final List<String> headers;
     private final List<List<String>> rows = new ArrayList<>();
-    private final java.util.Set<Integer> leftAligned = new java.util.HashSet<>(List.of(0));
+    private final Set<Integer> leftAligned = new HashSet<>(List.of(0));
 
     public TextTable(List<String> headers) {
         this.headers = List.copyOf(headers);
@@ -55,7 +58,7 @@ public final class TextTable {
         return b.toString();
     }
 
-    private static void line(StringBuilder b, List<String> cells, int[] width, java.util.Set<Integer> left) {
+    private static void line(StringBuilder b, List<String> cells, int[] width, Set<Integer> left) {
         StringBuilder l = new StringBuilder();
         for (int c = 0; c < cells.size(); c++) {
             if (c > 0) {
@@ -70,7 +73,7 @@ public final class TextTable {
 
     /** A number in fixed notation with the given decimals. */
     public static String fixed(double v, int decimals) {
-        String s = String.format(java.util.Locale.ROOT, "%." + decimals + "f", v);
+        String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
         // no "-0.000": a value that rounds to zero prints without a sign
         return s.startsWith("-") && s.chars().noneMatch(ch -> ch >= '1' && ch <= '9') ? s.substring(1) : s;
     }

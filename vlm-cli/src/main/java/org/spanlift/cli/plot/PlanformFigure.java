@@ -14,6 +14,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.OptionalDouble;
 
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.LengthUnit;
@@ -54,18 +55,18 @@ public final class PlanformFigure implements Figure {
     private final double xMax;
     private final double scale;
     private final int height;
-    private final java.util.OptionalDouble stallStation;
+    private final OptionalDouble stallStation;
 
     public PlanformFigure(String id, String title, String subtitle, String description, List<Layer> layers,
             LengthUnit unit) {
-        this(id, title, subtitle, description, layers, unit, java.util.OptionalDouble.empty());
+        this(id, title, subtitle, description, layers, unit, OptionalDouble.empty());
     }
 
     /**
      * @param stallStation the spanwise station (m, right half) where stall starts, marked on both halves
      */
     public PlanformFigure(String id, String title, String subtitle, String description, List<Layer> layers,
-            LengthUnit unit, java.util.OptionalDouble stallStation) {
+            LengthUnit unit, OptionalDouble stallStation) {
         this.stallStation = stallStation;
         this.id = id;
         this.title = title;

@@ -8,6 +8,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.OptionalDouble;
+import java.util.function.DoubleUnaryOperator;
 
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
@@ -48,11 +50,11 @@ public final class Plots {
     // ---------------------------------------------------------------- one wing
 
     public static PlanformFigure planform(WingAnalysis analysis) {
-        return planform(analysis, java.util.OptionalDouble.empty());
+        return planform(analysis, OptionalDouble.empty());
     }
 
     /** The planform with the stall-onset station (m, right half) marked when known. */
-    public static PlanformFigure planform(WingAnalysis analysis, java.util.OptionalDouble stallStation) {
+    public static PlanformFigure planform(WingAnalysis analysis, OptionalDouble stallStation) {
         Wing wing = analysis.wing();
         Map<Integer, String> names = new LinkedHashMap<>();
         List<ControlSurface> controls = wing.controls();
@@ -143,7 +145,7 @@ public final class Plots {
      *                         lowest Reynolds number)
      */
     public static ChartFigure polar(WingAnalysis analysis, double[] deflections, List<Double> alphasDeg,
-            java.util.function.DoubleUnaryOperator reynoldsPerMetre) {
+            DoubleUnaryOperator reynoldsPerMetre) {
         Wing wing = analysis.wing();
         double[] a = toArray(alphasDeg);
         double[] cl = new double[a.length];

@@ -3,6 +3,8 @@ package org.spanlift.cli.report;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.OptionalDouble;
+import java.util.function.DoubleUnaryOperator;
 
 import org.spanlift.cli.plot.Figure;
 import org.spanlift.cli.plot.PlotKind;
@@ -34,7 +36,7 @@ public final class ReportPage {
      * @param version   the program version for the footer
      */
     public static String build(WingSummary summary, WingSummary fine, StallSummary stall, List<Double> alphasDeg,
-            List<Double> rangeDeg, java.util.function.DoubleUnaryOperator reynolds, String version) {
+            List<Double> rangeDeg, DoubleUnaryOperator reynolds, String version) {
         Wing wing = summary.wing();
         WingAnalysis analysis = summary.analysis();
         LengthUnit u = wing.displayUnit();
@@ -81,11 +83,11 @@ public final class ReportPage {
      * map needs section cl-max data and is null without it.
      */
     static Figure figure(PlotKind kind, WingSummary s, StallSummary stall, List<Double> rangeDeg,
-            java.util.function.DoubleUnaryOperator reynolds) {
+            DoubleUnaryOperator reynolds) {
         return switch (kind) {
             case STALL -> stall.estimate().map(e -> (Figure) Plots.stallMap(s.analysis(), e)).orElse(null);
             case PLANFORM -> Plots.planform(s.analysis(), stall.estimate()
-                    .map(e -> java.util.OptionalDouble.of(e.y())).orElse(java.util.OptionalDouble.empty()));
+                    .map(e -> OptionalDouble.of(e.y())).orElse(OptionalDouble.empty()));
             case SPAN_LOAD -> Plots.spanLoad(s.analysis(), s.spanLoadAtCl());
             case LIFT -> Plots.liftCurve(s.analysis(), s.deflections(), rangeDeg);
             case POLAR -> Plots.polar(s.analysis(), s.deflections(), rangeDeg, reynolds);

@@ -6,6 +6,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.Locale;
 
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.output.Json;
@@ -36,7 +37,7 @@ public record Manifest(Map<String, String> fields) {
         f.put("shard", shard.toString());
         f.put("first_case", Long.toString(shard.first(n)));
         f.put("end_case", Long.toString(shard.end(n)));
-        f.put("format", format.name().toLowerCase(java.util.Locale.ROOT));
+        f.put("format", format.name().toLowerCase(Locale.ROOT));
         f.put("columns", String.join(",", RowFormat.columnNames(sweep)));
         sweep.ranking().ifPresent(r -> {
             f.put("rank_by", r.by());

@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import java.util.Arrays;
 
 import org.spanlift.sweep.SweepFile;
 
@@ -56,7 +57,7 @@ public final class SweepThroughput {
 
     public static void main(String[] args) throws IOException {
         double seconds = args.length > 0 ? Double.parseDouble(args[0]) : 10;
-        List<Integer> jobs = args.length > 1 ? java.util.Arrays.stream(args).skip(1).map(Integer::valueOf).toList()
+        List<Integer> jobs = args.length > 1 ? Arrays.stream(args).skip(1).map(Integer::valueOf).toList()
                 : List.of(1, 2);
         Path dir = Files.createTempDirectory("spanlift-throughput");
         try {
