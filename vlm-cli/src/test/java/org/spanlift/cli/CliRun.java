@@ -7,12 +7,12 @@ import java.nio.file.Path;
 import picocli.CommandLine;
 
 /** Runs the command line in-process and captures its exit code, standard output and standard error. */
-record CliRun(int exitCode, String out, String err) {
+public record CliRun(int exitCode, String out, String err) {
 
     /** The demo wings at the repository root, seen from the module folder. */
-    static final Path GEOMETRIES = Path.of("..", "geometries");
+    public static final Path GEOMETRIES = Path.of("..", "geometries");
 
-    static CliRun of(String... args) {
+    public static CliRun of(String... args) {
         CommandLine cl = SpanliftCommand.commandLine();
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
@@ -22,7 +22,7 @@ record CliRun(int exitCode, String out, String err) {
         return new CliRun(code, out.toString(), err.toString());
     }
 
-    static String demo(String name) {
+    public static String demo(String name) {
         return GEOMETRIES.resolve(name).toString();
     }
 }

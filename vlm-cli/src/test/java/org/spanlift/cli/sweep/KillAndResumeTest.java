@@ -1,5 +1,7 @@
 package org.spanlift.cli.sweep;
 
+import org.spanlift.cli.CliRun;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -69,10 +71,10 @@ class KillAndResumeTest {
         assertTrue(before >= 1, "the child wrote its header: " + Runs.read(dir.resolve("child.log")));
         Files.write(killed, "1234,0123456789ab".getBytes(StandardCharsets.UTF_8), StandardOpenOption.APPEND);
 
-        Runs.Run resumed = Runs.of("sweep", sweep.toString(), "-o", killed.toString(), "--resume", "--jobs", "1");
+        CliRun resumed = Runs.of("sweep", sweep.toString(), "-o", killed.toString(), "--resume", "--jobs", "1");
         assertEquals(0, resumed.exitCode(), resumed.err());
         Path whole = dir.resolve("whole.csv");
-        Runs.Run uninterrupted = Runs.of("sweep", sweep.toString(), "-o", whole.toString(), "--jobs", "2");
+        CliRun uninterrupted = Runs.of("sweep", sweep.toString(), "-o", whole.toString(), "--jobs", "2");
         assertEquals(0, uninterrupted.exitCode(), uninterrupted.err());
         byte[] expected = Files.readAllBytes(whole);
         byte[] actual = Files.readAllBytes(killed);

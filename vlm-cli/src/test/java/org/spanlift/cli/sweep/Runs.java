@@ -1,22 +1,15 @@
 package org.spanlift.cli.sweep;
 
 import java.io.IOException;
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
-import org.spanlift.cli.SpanliftCommand;
-
-import picocli.CommandLine;
+import org.spanlift.cli.CliRun;
 
 /** In-process runs of the command line, and the files of the test scenarios (invented wings). */
 final class Runs {
-
-    record Run(int exitCode, String out, String err) {
-    }
 
     static final String WING = """
             name: Test trapezoid
@@ -49,14 +42,8 @@ final class Runs {
     private Runs() {
     }
 
-    static Run of(String... args) {
-        CommandLine cl = SpanliftCommand.commandLine();
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        cl.setOut(new PrintWriter(out));
-        cl.setErr(new PrintWriter(err));
-        int code = cl.execute(args);
-        return new Run(code, out.toString(), err.toString());
+    static CliRun of(String... args) {
+        return CliRun.of(args);
     }
 
     static Path write(Path dir, String name, String text) {

@@ -1,5 +1,7 @@
 package org.spanlift.cli.sweep;
 
+import org.spanlift.cli.CliRun;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -19,7 +21,7 @@ class SweepCommandTest {
     @TempDir
     Path dir;
 
-    private Runs.Run sweep(String... args) {
+    private CliRun sweep(String... args) {
         return Runs.of(args);
     }
 
@@ -30,7 +32,7 @@ class SweepCommandTest {
             Path one = dir.resolve("one" + ext);
             Path three = dir.resolve("three" + ext);
             assertEquals(0, sweep("sweep", s.toString(), "-o", one.toString(), "--jobs", "1").exitCode());
-            Runs.Run r = sweep("sweep", s.toString(), "-o", three.toString(), "--jobs", "3");
+            CliRun r = sweep("sweep", s.toString(), "-o", three.toString(), "--jobs", "3");
             assertEquals(0, r.exitCode(), r.err());
             assertEquals(Runs.read(one), Runs.read(three));
             assertEquals(Runs.read(Ranker.pathFor(one, RowFormat.of(ext))), Runs.read(Ranker.pathFor(three,
@@ -83,17 +85,17 @@ class SweepCommandTest {
         for (int i = 1; i <= 3; i++) {
             Path p = dir.resolve("part" + i + ".csv");
             shards[3 - i] = p.toString();
-            Runs.Run r = sweep("sweep", s.toString(), "-o", p.toString(), "--shard", i + "/3", "--jobs", "2");
+            CliRun r = sweep("sweep", s.toString(), "-o", p.toString(), "--shard", i + "/3", "--jobs", "2");
             assertEquals(0, r.exitCode(), r.err());
         }
         Path merged = dir.resolve("merged.csv");
-        Runs.Run m = sweep("merge", shards[0], shards[1], shards[2], "--output", merged.toString());
+        CliRun m = sweep("merge", shards[0], shards[1], shards[2], "--output", merged.toString());
         assertEquals(0, m.exitCode(), m.err());
         assertEquals(Runs.read(whole), Runs.read(merged));
         assertEquals(Runs.read(dir.resolve("whole.ranked.csv")), Runs.read(dir.resolve("merged.ranked.csv")));
 
         Path incomplete = dir.resolve("two.csv");
-        Runs.Run missing = sweep("merge", shards[0], shards[2], "--output", incomplete.toString());
+        CliRun missing = sweep("merge", shards[0], shards[2], "--output", incomplete.toString());
         assertEquals(2, missing.exitCode());
         assertTrue(missing.err().contains("a shard of 3 is missing"), missing.err());
         assertFalse(Files.exists(incomplete));
@@ -111,15 +113,15 @@ class SweepCommandTest {
         try (FileChannel ch = FileChannel.open(cut, StandardOpenOption.WRITE)) {
             ch.truncate(at);
         }
-        Runs.Run r = sweep("sweep", s.toString(), "-o", cut.toString(), "--resume", "--jobs", "2");
+        CliRun r = sweep("sweep", s.toString(), "-o", cut.toString(), "--resume", "--jobs", "2");
         assertEquals(0, r.exitCode(), r.err());
         assertEquals(full, Runs.read(cut));
-        Runs.Run again = sweep("sweep", s.toString(), "-o", cut.toString(), "--resume");
+        CliRun again = sweep("sweep", s.toString(), "-o", cut.toString(), "--resume");
         assertEquals(0, again.exitCode());
         assertEquals(full, Runs.read(cut));
 
         Path changed = Runs.write(dir, "s.sweep.yaml", Runs.SWEEP.replace("keep: 4", "keep: 3"));
-        Runs.Run refused = sweep("sweep", changed.toString(), "-o", cut.toString(), "--resume");
+        CliRun refused = sweep("sweep", changed.toString(), "-o", cut.toString(), "--resume");
         assertEquals(2, refused.exitCode());
         assertTrue(refused.err().contains("manifest differs"), refused.err());
         assertEquals(full, Runs.read(cut));
@@ -129,7 +131,7 @@ class SweepCommandTest {
     void failedCasesAreRecordedAndGiveExitCodeOne() {
         Path s = Runs.scenario(dir, Runs.SWEEP.replace("{from: 0.5, to: 1.0, step: 0.1}", "[0.5, 11, 1.0]"));
         Path out = dir.resolve("f.csv");
-        Runs.Run r = sweep("sweep", s.toString(), "-o", out.toString());
+        CliRun r = sweep("sweep", s.toString(), "-o", out.toString());
         assertEquals(1, r.exitCode(), r.err());
         assertTrue(r.err().contains("21 cases") && r.err().contains("7 failed"), r.err());
         List<String> lines = Runs.read(out).lines().toList();
@@ -155,7 +157,7 @@ class SweepCommandTest {
         };
         for (String[] c : cases) {
             Path s = Runs.scenario(dir, Runs.SWEEP.replace(c[0], c[1]));
-            Runs.Run r = sweep("sweep", s.toString(), "-o", out.toString());
+            CliRun r = sweep("sweep", s.toString(), "-o", out.toString());
             assertEquals(2, r.exitCode(), r.err());
             assertEquals(1, r.err().lines().count(), r.err());
             assertTrue(r.err().contains(c[2]), r.err());
@@ -164,7 +166,7 @@ class SweepCommandTest {
         }
         Runs.scenario(dir, Runs.SWEEP);
         Runs.write(dir, "w.wing.yaml", Runs.WING.replace(", cl-max: 1.45", ""));
-        Runs.Run r = sweep("sweep", dir.resolve("s.sweep.yaml").toString(), "-o", out.toString());
+        CliRun r = sweep("sweep", dir.resolve("s.sweep.yaml").toString(), "-o", out.toString());
         assertEquals(2, r.exitCode());
         assertTrue(r.err().contains("columns: stall columns need section cl-max data")
                 && r.err().contains("assume-cl-max"), r.err());
@@ -174,7 +176,7 @@ class SweepCommandTest {
     @Test
     void withoutAnOutputTheRowsGoToStandardOutput() {
         Path s = Runs.scenario(dir, Runs.SWEEP);
-        Runs.Run r = sweep("sweep", s.toString(), "--jobs", "2");
+        CliRun r = sweep("sweep", s.toString(), "--jobs", "2");
         assertEquals(0, r.exitCode(), r.err());
         Path file = dir.resolve("f.csv");
         assertEquals(0, sweep("sweep", s.toString(), "-o", file.toString()).exitCode());
