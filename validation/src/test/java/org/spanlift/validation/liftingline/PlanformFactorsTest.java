@@ -10,12 +10,14 @@ import org.junit.jupiter.params.provider.ValueSource;
 /**
  * Glauert's induced-drag factor delta and lift-slope factor tau for straight-tapered wings (a0 = 2 pi).
  *
- * <p>Not checked here: a numerical delta from a published table or figure. The one published value found
- * while writing these tests, delta = 0.055 for A = 8 and taper 0.8 (read from Anderson's figure of delta
- * against taper ratio, Fundamentals of Aerodynamics, chapter 5, in a worked example, as transcribed in a
- * secondary source), differs from this solver's 0.0444 by 0.011, twice a plot reading's uncertainty; the
- * independent discretization in {@link IndependentDiscretizationTest} gives 0.0444 as well. It stays
- * unused until the book itself can be consulted.
+ * <p>Not checked here: a numerical delta from a published table or figure. The one published value found,
+ * delta = 0.055 for A = 8 and taper 0.8 (read from Anderson's figure of delta against taper ratio in a
+ * worked example, Fundamentals of Aerodynamics, chapter 5, as transcribed by two secondary sources),
+ * differs from this solver's 0.0444 by 0.011, twice a plot reading's uncertainty; the independent
+ * discretization in {@link IndependentDiscretizationTest} gives 0.0444 as well. Measured while looking for
+ * the cause: truncating the series does not explain it (4 terms give 0.040, 8 give 0.044), and this solver
+ * reaches 0.055 only with a section lift slope near 5.2 per radian instead of 2 pi. It stays unused until
+ * the book, or the calculation behind its figure, can be consulted.
  */
 class PlanformFactorsTest {
 
