@@ -1,6 +1,5 @@
 package org.spanlift.loads;
 
-import org.spanlift.atmosphere.StandardAtmosphere;
 import org.spanlift.io.Field;
 import org.spanlift.io.quantity.Quantity;
 import org.spanlift.io.quantity.QuantityFormatException;
@@ -56,21 +55,11 @@ final class Quantities {
      * A weight: a force (N, kN, kgf, lbf, lb) or a mass (kg, g) times standard gravity; positive. In newtons.
      */
     static double weight(Field f) {
-        String t = f.text();
-        double w;
         try {
-            w = Quantity.parse(t, QuantityKind.FORCE).value();
-        } catch (QuantityFormatException force) {
-            try {
-                w = Quantity.parse(t, QuantityKind.MASS).value() * StandardAtmosphere.G0;
-            } catch (QuantityFormatException mass) {
-                throw f.error(force.getMessage() + ", or a mass in kg");
-            }
+            return Quantity.weight(f.text());
+        } catch (QuantityFormatException e) {
+            throw f.error(e.getMessage());
         }
-        if (!(w > 0)) {
-            throw f.error("a weight must be positive, got " + t);
-        }
-        return w;
     }
 
     /** A speed (m/s, km/h, kt, mph, and for gust velocities also ft/s), positive, m/s. */

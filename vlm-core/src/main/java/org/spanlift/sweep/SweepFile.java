@@ -45,8 +45,6 @@ public final class SweepFile {
     public static final long MAX_CASES_WITHOUT_FORCE = 10_000_000L;
     /** The conservative cl_max of {@code assume-cl-max: true}, the same as the stall command's default. */
     public static final double CONSERVATIVE_CL_MAX = 1.2;
-    /** Standard gravity, m/s^2, for a weight given as a mass. */
-    public static final double STANDARD_GRAVITY = 9.80665;
 
     static final Set<String> TOP_KEYS = Set.of("base", "parameters", "design", "flight", "points", "columns",
             "constraints", "rank", "assume-cl-max");
@@ -377,21 +375,11 @@ public final class SweepFile {
     }
 
     private static double weight(Field f) {
-        String t = f.text();
-        double w;
         try {
-            w = Quantity.parse(t, QuantityKind.FORCE).value();
-        } catch (QuantityFormatException force) {
-            try {
-                w = Quantity.parse(t, QuantityKind.MASS).value() * STANDARD_GRAVITY;
-            } catch (QuantityFormatException mass) {
-                throw f.error(force.getMessage() + ", or a mass in kg");
-            }
+            return Quantity.weight(f.text());
+        } catch (QuantityFormatException e) {
+            throw f.error(e.getMessage());
         }
-        if (!(w > 0)) {
-            throw f.error("must be positive, got " + t);
-        }
-        return w;
     }
 
     private static double quantity(Field f, QuantityKind kind) {

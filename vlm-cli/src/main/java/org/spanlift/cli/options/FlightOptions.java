@@ -29,9 +29,6 @@ import picocli.CommandLine.Option;
  */
 public final class FlightOptions {
 
-    /** Standard gravity, m/s^2 (exact by definition), for a weight typed as a mass. */
-    public static final double STANDARD_GRAVITY = 9.80665;
-
     @Option(names = "--weight", paramLabel = "W",
             description = "Aircraft weight with a unit: a force (N, kN, kgf, lbf, lb) or a mass (kg), "
                     + "such as 1100kg or 2400lb.")
@@ -128,20 +125,11 @@ public final class FlightOptions {
         if (weight == null) {
             return OptionalDouble.empty();
         }
-        double w;
         try {
-            w = Quantity.parse(weight, QuantityKind.FORCE).value();
-        } catch (QuantityFormatException force) {
-            try {
-                w = Quantity.parse(weight, QuantityKind.MASS).value() * STANDARD_GRAVITY;
-            } catch (QuantityFormatException mass) {
-                throw new InputException("--weight", 0, "", force.getMessage() + ", or a mass in kg");
-            }
+            return OptionalDouble.of(Quantity.weight(weight));
+        } catch (QuantityFormatException e) {
+            throw new InputException("--weight", 0, "", e.getMessage());
         }
-        if (!(w > 0)) {
-            throw new InputException("--weight", 0, "", "must be positive, got " + weight);
-        }
-        return OptionalDouble.of(w);
     }
 
     /** The equivalent airspeed in m/s, if a speed was given (a true speed is converted). */

@@ -77,6 +77,30 @@ public record Quantity(double value, QuantityKind kind, String text) {
     }
 
     /**
+     * Reads a weight: a force ({@code N, kN, kgf, lbf, lb}) or a mass ({@code kg, g}) under standard gravity.
+     *
+     * @param text the weight as typed, such as {@code 1100kg} or {@code 2400lb}
+     * @return the weight in newtons, positive
+     * @throws QuantityFormatException with a one-line message saying what was expected
+     */
+    public static double weight(String text) {
+        double newtons;
+        try {
+            newtons = parse(text, QuantityKind.FORCE).value();
+        } catch (QuantityFormatException force) {
+            try {
+                newtons = parse(text, QuantityKind.MASS).value() * ExactFactors.KILOGRAM_FORCE;
+            } catch (QuantityFormatException mass) {
+                throw new QuantityFormatException(force.getMessage() + ", or a mass in kg");
+            }
+        }
+        if (!(newtons > 0)) {
+            throw new QuantityFormatException("a weight must be positive, got " + quote(text));
+        }
+        return newtons;
+    }
+
+    /**
      * @param unit an accepted unit symbol of this quantity's kind
      * @return the value expressed in that unit
      * @throws QuantityFormatException for a symbol the kind does not accept
