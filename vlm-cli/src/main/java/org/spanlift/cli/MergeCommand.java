@@ -14,6 +14,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import java.util.Locale;
 
+import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.sweep.Manifest;
 import org.spanlift.cli.sweep.Ranker;
 import org.spanlift.cli.sweep.RowFormat;
@@ -97,7 +98,7 @@ public final class MergeCommand implements Callable<Integer> {
         Path target = output.toAbsolutePath();
         Path tmp = null;
         try {
-            tmp = Files.createTempFile(target.getParent(), "." + target.getFileName(), ".part");
+            tmp = OutputOptions.temporarySibling(target);
             try (BufferedWriter w = Files.newBufferedWriter(tmp, StandardCharsets.UTF_8)) {
                 if (header != null) {
                     w.write(header);

@@ -3,11 +3,13 @@ package org.spanlift.cli.options;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.EnumSet;
 import java.util.Set;
+import java.util.concurrent.ThreadLocalRandom;
 
 import org.spanlift.io.InputException;
 
@@ -63,7 +65,7 @@ public final class OutputOptions {
         Path dir = absolute.getParent();
         requireFolder(target);
         try {
-            Path tmp = Files.createTempFile(dir, "." + absolute.getFileName(), ".part");
+            Path tmp = temporarySibling(absolute);
             try {
                 Files.write(tmp, bytes);
                 Files.move(tmp, absolute, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
@@ -73,6 +75,26 @@ public final class OutputOptions {
         } catch (IOException e) {
             throw new InputException(target.toString(), 0, "", "cannot write the output file ("
                     + e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage()) + ")");
+        }
+    }
+
+    /**
+     * Creates an empty temporary file beside the target, to be moved onto it when complete. Unlike a
+     * temporary file of the platform's, it gets the permissions any new file in that folder gets (the
+     * user's umask), so the output, once moved into place, is as readable as the user expects.
+     */
+    public static Path temporarySibling(Path target) throws IOException {
+        Path absolute = target.toAbsolutePath();
+        for (int attempt = 1; ; attempt++) {
+            Path tmp = absolute.resolveSibling("." + absolute.getFileName() + "."
+                    + Long.toHexString(ThreadLocalRandom.current().nextLong()) + ".part");
+            try {
+                return Files.createFile(tmp);
+            } catch (FileAlreadyExistsException e) {
+                if (attempt == 100) {
+                    throw e;
+                }
+            }
         }
     }
 
