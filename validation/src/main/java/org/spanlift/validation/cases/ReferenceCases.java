@@ -23,7 +23,7 @@ public final class ReferenceCases {
     public static final LatticeSpec DEFAULT = LatticeSpec.DEFAULT;
 
     /** The usual refinement study: half, once and twice the default density in both directions. */
-    public static final List<LatticeSpec> STUDY = List.of(cosine(12, 3), cosine(24, 6), cosine(48, 12));
+    public static final List<LatticeSpec> STUDY = List.of(cosine(16, 4), cosine(32, 8), cosine(64, 16));
 
     /** Aspect ratios of the lifting-line comparisons. */
     public static final double[] LIFTING_LINE_ASPECT_RATIOS = {8, 20, 50};
