@@ -1,17 +1,10 @@
 package org.spanlift.io;
 
-import java.io.IOException;
-import java.nio.charset.CharacterCodingException;
-import java.nio.file.AccessDeniedException;
-import java.nio.file.NoSuchFileException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
@@ -77,20 +70,7 @@ public final class WingFileReader {
     /** Reads and checks a wing file. */
     public static Wing read(Path path) {
         String file = path.toString();
-        String text;
-        try {
-            text = Files.readString(path, StandardCharsets.UTF_8);
-        } catch (CharacterCodingException e) {
-            throw new InputException(file, 0, "", "the file is not UTF-8 text; expected a wing file saved as UTF-8");
-        } catch (NoSuchFileException e) {
-            throw new InputException(file, 0, "", "no such file; expected the path of a wing file");
-        } catch (AccessDeniedException e) {
-            throw new InputException(file, 0, "", "permission denied; expected a readable wing file");
-        } catch (IOException e) {
-            throw new InputException(file, 0, "", "cannot read the file (" + e.getClass().getSimpleName()
-                    + (e.getMessage() == null ? "" : ": " + e.getMessage()) + "); expected a readable wing file");
-        }
-        return parse(text, file);
+        return parse(TextFile.read(path, "wing file"), file);
     }
 
     /** Reads a wing from YAML text; {@code file} names it in messages. */

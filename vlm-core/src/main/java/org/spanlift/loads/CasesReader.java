@@ -1,8 +1,5 @@
 package org.spanlift.loads;
 
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -10,7 +7,7 @@ import java.util.Set;
 
 import org.spanlift.atmosphere.StandardAtmosphere;
 import org.spanlift.io.Field;
-import org.spanlift.io.InputException;
+import org.spanlift.io.TextFile;
 import org.spanlift.io.YamlParser;
 import org.spanlift.io.YamlValue;
 import org.spanlift.io.quantity.QuantityKind;
@@ -39,11 +36,7 @@ public final class CasesReader {
 
     public static List<LoadCase> read(Path path) {
         String file = path.toString();
-        try {
-            return parse(Files.readString(path, StandardCharsets.UTF_8), file);
-        } catch (IOException e) {
-            throw new InputException(file, 0, "", "cannot read the file (" + e.getClass().getSimpleName() + ")");
-        }
+        return parse(TextFile.read(path, "cases file"), file);
     }
 
     public static List<LoadCase> parse(String text, String file) {

@@ -1,8 +1,5 @@
 package org.spanlift.loads;
 
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -10,7 +7,7 @@ import java.util.OptionalDouble;
 import java.util.Set;
 
 import org.spanlift.io.Field;
-import org.spanlift.io.InputException;
+import org.spanlift.io.TextFile;
 import org.spanlift.io.YamlParser;
 import org.spanlift.io.YamlValue;
 
@@ -41,11 +38,7 @@ public final class EnvelopeReader {
 
     public static EnvelopeSpec read(Path path) {
         String file = path.toString();
-        try {
-            return parse(Files.readString(path, StandardCharsets.UTF_8), file);
-        } catch (IOException e) {
-            throw new InputException(file, 0, "", "cannot read the file (" + e.getClass().getSimpleName() + ")");
-        }
+        return parse(TextFile.read(path, "envelope file"), file);
     }
 
     public static EnvelopeSpec parse(String text, String file) {

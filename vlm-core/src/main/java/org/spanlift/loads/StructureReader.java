@@ -1,8 +1,5 @@
 package org.spanlift.loads;
 
-import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -13,7 +10,7 @@ import org.spanlift.geometry.Planform;
 import org.spanlift.geometry.Surface;
 import org.spanlift.geometry.Wing;
 import org.spanlift.io.Field;
-import org.spanlift.io.InputException;
+import org.spanlift.io.TextFile;
 import org.spanlift.io.YamlParser;
 import org.spanlift.io.YamlValue;
 
@@ -49,13 +46,7 @@ public final class StructureReader {
      */
     public static WingStructure read(Path path, Wing wing) {
         String file = path.toString();
-        String text;
-        try {
-            text = Files.readString(path, StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new InputException(file, 0, "", "cannot read the file (" + e.getClass().getSimpleName() + ")");
-        }
-        return fromTree(YamlParser.parse(text, file), file, wing);
+        return fromTree(YamlParser.parse(TextFile.read(path, "wing file"), file), file, wing);
     }
 
     /** The structure from a wing file's YAML tree. */

@@ -1,6 +1,5 @@
 package org.spanlift.sweep;
 
-import java.io.IOException;
 import java.math.BigDecimal;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -24,6 +23,7 @@ import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Wing;
 import org.spanlift.io.Field;
 import org.spanlift.io.InputException;
+import org.spanlift.io.TextFile;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.io.YamlParser;
 import org.spanlift.io.YamlValue;
@@ -96,7 +96,7 @@ public final class SweepFile {
      */
     public static SweepFile read(Path path, boolean force) {
         String file = path.toString();
-        String text = readText(path, file);
+        String text = TextFile.read(path, "sweep file");
         Field root = new Field(file, "", YamlParser.parse(text, file));
         root.mapping();
         root.allowOnly(TOP_KEYS);
@@ -108,7 +108,7 @@ public final class SweepFile {
         if (!Files.isRegularFile(basePath)) {
             throw baseField.error("no wing file '" + baseName + "' beside the sweep file (in " + folder + ")");
         }
-        String baseText = readText(basePath, basePath.toString());
+        String baseText = TextFile.read(basePath, "wing file");
         YamlValue baseTree = YamlParser.parse(baseText, basePath.toString());
         Wing baseWing = WingFileReader.fromTree(baseTree, basePath.toString());
         List<String> controls = baseWing.controls().stream().map(ControlSurface::name).toList();
@@ -237,13 +237,6 @@ public final class SweepFile {
                 ranking, condition, flaps, assume, fingerprint(text, baseText));
     }
 
-    private static String readText(Path path, String file) {
-        try {
-            return Files.readString(path, StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new InputException(file, 0, "", "cannot read the file (" + e.getClass().getSimpleName() + ")");
-        }
-    }
 
     private static Parameter parameter(Field p, YamlValue baseTree) {
         String pathText = p.path().substring("parameters.".length());

@@ -136,6 +136,12 @@ class BadWingFileTest {
     }
 
     @Test
+    void folderGivenForAFileIsRefusedAsSuch(@TempDir Path dir) {
+        InputException e = assertThrows(InputException.class, () -> WingFileReader.read(dir));
+        assertEquals(dir + ": is a folder; expected the path of a wing file", e.getMessage());
+    }
+
+    @Test
     void fileThatIsNotUtf8IsRefusedAsSuch(@TempDir Path dir) throws IOException {
         Path path = dir.resolve("latin1.wing.yaml");
         Files.write(path, new byte[] {'n', 'a', 'm', 'e', ':', ' ', (byte) 0xE9, '\n'});
