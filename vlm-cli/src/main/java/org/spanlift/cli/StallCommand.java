@@ -134,6 +134,12 @@ public final class StallCommand implements Callable<Integer> {
         m.put("half_span_CL", e.halfSpanLift());
         m.put("assumed_cl_max", e.assumedClMax());
         m.put("default_flap_increment", e.defaultFlapIncrement());
+        m.put("beside_control_end", e.besideControlEnd().map(end -> {
+            Map<String, Object> em = new LinkedHashMap<>();
+            em.put("control", end.control());
+            em.put("y", end.y());
+            return (Object) em;
+        }).orElse(null));
         m.put("method", "critical section, linear theory");
         List<StallEstimate.StripStall> right = e.strips().stream().filter(s -> s.y() > 0).toList();
         Map<String, Object> spread = new LinkedHashMap<>();
@@ -249,6 +255,15 @@ public final class StallCommand implements Callable<Integer> {
         if (flaps != null) {
             b.append(String.format(Locale.ROOT, "%n  flaps raise the stall-onset CL by %.3f%n",
                     flaps.estimate().lift() - clean.estimate().lift()));
+        }
+        for (Config c : configs) {
+            c.estimate().besideControlEnd().ifPresent(end -> b.append('\n').append(wrap(String.format(Locale.ROOT,
+                    "NOTE (%s): stall starts beside the end of the %s at y = %.3f %s. Linear theory concentrates a "
+                            + "deflected control's lift in a peak at its ends, narrower than the chord, so this "
+                            + "onset falls as the lattice is refined and is pessimistic: read it as a sign that "
+                            + "the %s end may stall early. The CL at which each station reaches cl_max is in the "
+                            + "JSON output (strips).", c.label(), end.control(), end.y() / k, u, end.control())))
+                    .append('\n'));
         }
         if (clean.estimate().assumedClMax() || (flaps != null && flaps.estimate().assumedClMax())) {
             b.append("\n  NOTE: some sections give no cl-max; an assumed value was used (--assume-cl-max).\n");

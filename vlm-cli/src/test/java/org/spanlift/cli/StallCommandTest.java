@@ -39,6 +39,20 @@ class StallCommandTest {
     }
 
     @Test
+    void anOnsetBesideAFlapEndIsNamedInTheTableAndTheJson() {
+        CliRun table = CliRun.of("stall", CliRun.demo("trainer.wing.yaml"), "--flaps", "30");
+        assertEquals(0, table.exitCode(), table.err());
+        assertTrue(table.out().contains("NOTE (flaps): stall starts beside the end of the flap at y = 0.500 m"),
+                table.out());
+        assertFalse(table.out().contains("NOTE (clean)"), table.out());
+        CliRun json = CliRun.of("stall", CliRun.demo("trainer.wing.yaml"), "--flaps", "30", "--format", "json");
+        assertEquals(0, json.exitCode(), json.err());
+        assertTrue(json.out().contains("\"beside_control_end\": null"), "clean: none");
+        assertTrue(json.out().contains("\"beside_control_end\": {\n      \"control\": \"flap\",\n      \"y\": 0.5\n"),
+                json.out());
+    }
+
+    @Test
     void sectionsWithoutClMaxAreRefusedUnlessAssumedAndTheAssumptionIsFlagged() {
         CliRun refused = CliRun.of("stall", CliRun.demo("tourer.wing.yaml"));
         assertEquals(2, refused.exitCode());

@@ -5,6 +5,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.function.DoubleUnaryOperator;
 
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
@@ -24,6 +25,7 @@ import org.spanlift.solve.WingAnalysis;
 public final class StallAnalysis {
 
     private final WingAnalysis analysis;
+    private final double[] deflections;
     private final StripLimits limits;
     private final WingAnalysis.LiftLine line;
     private final double semi;
@@ -34,6 +36,7 @@ public final class StallAnalysis {
 
     private StallAnalysis(WingAnalysis analysis, double[] deflections, StripLimits limits) {
         this.analysis = analysis;
+        this.deflections = deflections.clone();
         this.limits = limits;
         this.line = analysis.liftLine(deflections);
         Lattice lattice = analysis.lattice();
@@ -132,7 +135,36 @@ public final class StallAnalysis {
         sorted.sort(Comparator.comparingDouble(StallEstimate.StripStall::y));
         return new StallEstimate(line.lift(alpha), alpha, Math.abs(onset.y()), Math.abs(onset.y()) / semi,
                 limits.section(first), margin, half, List.copyOf(sorted), limits.assumed(),
-                limits.defaultFlapIncrement());
+                limits.defaultFlapIncrement(), controlEndAt(onset));
+    }
+
+    /**
+     * The deflected control of the wing with a side edge on one of the strip's edges (the lattice cuts strips
+     * at control ends), not counting an end on the plane of symmetry of a mirrored wing or at its tip.
+     */
+    private Optional<StallEstimate.ControlEnd> controlEndAt(Strip strip) {
+        Wing wing = analysis.wing();
+        if (strip.surface() != 0) {
+            return Optional.empty();
+        }
+        double tol = 1e-9 * semi;
+        DoubleUnaryOperator side = wing.main().mirrored() ? Math::abs : y -> y;
+        List<ControlSurface> controls = wing.main().controls();
+        for (int c = 0; c < controls.size(); c++) {
+            ControlSurface control = controls.get(c);
+            if (deflections[c] == 0) {
+                continue;
+            }
+            for (double end : new double[] {control.from(), control.to()}) {
+                boolean sideEdge = end > wing.main().planform().yStart() + tol && end < wing.main().planform().yEnd() - tol;
+                boolean onStrip = Math.abs(side.applyAsDouble(strip.yLeft()) - end) <= tol
+                        || Math.abs(side.applyAsDouble(strip.yRight()) - end) <= tol;
+                if (sideEdge && onStrip) {
+                    return Optional.of(new StallEstimate.ControlEnd(control.name(), end));
+                }
+            }
+        }
+        return Optional.empty();
     }
 
     private static Optional<StallEstimate.AileronMargin> aileronMargin(Wing wing, List<StallEstimate.StripStall> strips) {

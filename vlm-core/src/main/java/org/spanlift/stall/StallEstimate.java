@@ -20,10 +20,18 @@ import java.util.OptionalDouble;
  * @param strips               every strip of the wing, y ascending
  * @param assumedClMax         true when some section's cl_max was assumed rather than given
  * @param defaultFlapIncrement true when a flapped strip used the handbook default cl_max increment
+ * @param besideControlEnd     the end of a deflected control of the wing on an edge of the onset strip, if
+ *                             any. Linear theory concentrates a deflected control's lift in a peak at
+ *                             its ends, narrower than the chord; an onset found there falls as the strips
+ *                             are refined and says more about the control's end than about the wing
  */
 public record StallEstimate(double lift, double alpha, double y, double eta, String section,
         Optional<AileronMargin> aileronMargin, OptionalDouble halfSpanLift, List<StripStall> strips,
-        boolean assumedClMax, boolean defaultFlapIncrement) {
+        boolean assumedClMax, boolean defaultFlapIncrement, Optional<ControlEnd> besideControlEnd) {
+
+    /** A side edge of a control: its name and the y of that end (as in the wing file, metres). */
+    public record ControlEnd(String control, double y) {
+    }
 
     /** The smallest margin to cl_max over the aileron span. */
     public record AileronMargin(double dcl, double y) {

@@ -107,7 +107,9 @@ public final class ReportPage {
         key(h, "induced drag CDi at CL " + cl, Html.fixed(s.inducedDrag(), 5), "at \u03b1 = "
                 + Html.fixed(Math.toDegrees(s.alphaAtCl()), 2) + "\u00b0");
         stall.estimate().ifPresent(e -> {
-            String flag = e.assumedClMax() ? "; some cl_max assumed" : "";
+            String flag = (e.assumedClMax() ? "; some cl_max assumed" : "") + e.besideControlEnd()
+                    .map(end -> "; beside the end of the " + end.control() + ", where linear theory peaks: lattice-sensitive, "
+                            + "pessimistic").orElse("");
             key(h, "stall-onset CL", Html.fixed(e.lift(), 3), "critical-section method, at \u03b1 = "
                     + Html.fixed(Math.toDegrees(e.alpha()), 2) + "\u00b0" + flag);
             key(h, "stall starts at", "\u03b7 = " + Html.fixed(e.eta(), 3), "y = " + Html.fixed(e.y()
