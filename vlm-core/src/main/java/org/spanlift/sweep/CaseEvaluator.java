@@ -215,6 +215,7 @@ public final class CaseEvaluator {
             case "eta" -> o.eta();
             case "aileron_margin.dcl" -> o.aileronMargin().map(m -> (Object) m.dcl()).orElse(null);
             case "aileron_margin.y" -> o.aileronMargin().map(m -> (Object) Math.abs(m.y())).orElse(null);
+            case "beside_control_end" -> o.besideControlEnd().map(e -> (Object) e.control()).orElse(null);
             default -> o.halfSpanLift().isPresent() ? (Object) o.halfSpanLift().getAsDouble() : null;
         };
     }

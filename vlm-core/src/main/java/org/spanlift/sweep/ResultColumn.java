@@ -45,7 +45,7 @@ public record ResultColumn(String name, String key, Group group, String control,
             "reference.area", "reference.span", "reference.chord", "reference.aspect_ratio", "lattice.panels");
     static final List<String> POINT_KEYS = List.of("CL", "CDi", "e", "Cm", "C_roll", "alpha_deg");
     static final List<String> STALL_KEYS = List.of("CL", "alpha_deg", "y", "eta", "aileron_margin.dcl",
-            "aileron_margin.y", "half_span_CL");
+            "aileron_margin.y", "half_span_CL", "beside_control_end");
     static final List<String> SPEED_KEYS = List.of("clean_eas", "clean_tas", "flaps_eas", "flaps_tas");
     static final List<String> CONTROL_KEYS = List.of("from", "to", "from_eta", "to_eta", "chord_fraction",
             "deflection_deg");

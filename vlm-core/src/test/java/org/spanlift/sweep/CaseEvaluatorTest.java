@@ -31,7 +31,7 @@ class CaseEvaluatorTest {
     private static final String COLUMNS = """
             columns: [lift_slope_per_rad, zero_lift_angle_deg, e@CL=0.5, CDi@CL=0.5, alpha_deg@CL=0.5, CL@alpha=4,
               C_roll@alpha=4, stall.CL, stall.eta, stall.alpha_deg, stall.aileron_margin.dcl, stall.half_span_CL,
-              stall_flaps.CL, flap_increment_CL, stall_speed.clean_eas, stall_speed.flaps_tas,
+              stall_flaps.CL, stall_flaps.beside_control_end, flap_increment_CL, stall_speed.clean_eas, stall_speed.flaps_tas,
               controls.aileron.from_eta]
             """;
 
@@ -51,9 +51,13 @@ class CaseEvaluatorTest {
     }
 
     private static double value(SweepFile s, CaseResult r, String column) {
+        return (Double) cell(s, r, column);
+    }
+
+    private static Object cell(SweepFile s, CaseResult r, String column) {
         for (int i = 0; i < s.columns().size(); i++) {
             if (s.columns().get(i).name().equals(column)) {
-                return (Double) r.results()[i];
+                return r.results()[i];
             }
         }
         throw new AssertionError("no column " + column);
@@ -101,6 +105,8 @@ class CaseEvaluatorTest {
             assertEquals(e.aileronMargin().orElseThrow().dcl(), value(s, r, "stall.aileron_margin.dcl"), 1e-12);
             assertEquals(e.halfSpanLift().getAsDouble(), value(s, r, "stall.half_span_CL"), 1e-12);
             assertEquals(sf.estimate().lift(), value(s, r, "stall_flaps.CL"), 1e-12);
+            assertEquals(sf.estimate().besideControlEnd().map(StallEstimate.ControlEnd::control).orElse(null),
+                    cell(s, r, "stall_flaps.beside_control_end"));
             assertEquals(sf.estimate().lift() - e.lift(), value(s, r, "flap_increment_CL"), 1e-12);
             assertEquals(sc.equivalent(), value(s, r, "stall_speed.clean_eas"), 1e-10);
             assertEquals(sf.trueSpeed(), value(s, r, "stall_speed.flaps_tas"), 1e-10);
