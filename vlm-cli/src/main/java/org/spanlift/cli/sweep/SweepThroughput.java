@@ -12,11 +12,12 @@ import java.util.Arrays;
 import org.spanlift.sweep.SweepFile;
 
 /**
- * A JMH-free measurement of sweep throughput, cases per second, on an invented trapezoid wing at the
- * default lattice of 24 x 6 per half, each case giving the lift slope, e at CL 0.5 and the stall onset:
- * (a) planform varying (taper and span: a new factorization per case), (b) only twist varying (washout:
- * one factorization, new right-hand sides), each at 1 and 2 threads. Rows are formatted as for a file and
- * dropped. Run with {@code java -cp vlm-cli/target/spanlift.jar org.spanlift.cli.sweep.SweepThroughput}
+ * A JMH-free measurement of sweep throughput, cases per second, on an invented trapezoid wing with a
+ * lattice of 24 x 6 per half, each case giving the lift slope, e at CL 0.5 and the stall onset: (a)
+ * planform varying (taper and span: a new factorization per case), (b) only twist varying (washout: one
+ * factorization, new right-hand sides), each at 1 and 2 threads. Rows are formatted as for a file and
+ * dropped. Every thread count is warmed up before any is measured (measuring one thread first, straight
+ * after a single warm-up, had credited two threads with more than twice the rate). Run with {@code java -cp vlm-cli/target/spanlift.jar org.spanlift.cli.sweep.SweepThroughput}
  * (optional arguments: seconds per measurement, thread counts). Figures are for comparison side by side in
  * one run on one machine.
  */
@@ -67,7 +68,9 @@ public final class SweepThroughput {
             System.out.printf(Locale.ROOT, "sweep throughput, lattice 24 x 6 per half, %d cores available, %.0f s per figure%n",
                     Runtime.getRuntime().availableProcessors(), seconds);
             for (SweepFile s : List.of(planform, twist)) {
-                measure(s, 1, Math.min(2, seconds));
+                for (int j : jobs) {
+                    measure(s, j, Math.min(3, seconds));
+                }
                 double base = 0;
                 for (int j : jobs) {
                     double rate = measure(s, j, seconds);
