@@ -138,7 +138,8 @@ public final class ValidateCommand implements Callable<Integer> {
         b.append(t.render());
         b.append("\n  result and error: on the case's lattice (strips per half x rows, spacing strips/rows).\n"
                 + "  converged: Richardson extrapolation of the refinement study (each lattice twice as dense),\n"
-                + "  given only where it converges monotonically; order: the observed order. Deviation cases\n"
+                + "  given only where it converges monotonically with an observed order from 0.5 to 4;\n"
+                + "  order: the observed order (shown wherever the study is monotone). Deviation cases\n"
                 + "  (reference 0) report the departure itself in percent.\n\nSources and tolerances\n");
         b.append(notes);
         return b.toString();

@@ -21,7 +21,8 @@ public final class CaseRunner {
         double[] f = study.stream().mapToDouble(CaseResult.Density::result).toArray();
         OptionalDouble order = Richardson.order(f);
         Double p = order.isPresent() ? order.getAsDouble() : null;
-        Double converged = p == null ? null : Richardson.extrapolate(f, p);
+        OptionalDouble extrapolated = Richardson.extrapolated(f);
+        Double converged = extrapolated.isPresent() ? extrapolated.getAsDouble() : null;
         double error = c.errorPct(result);
         boolean pass = Double.isFinite(result) && Math.abs(error) <= c.tolerancePct();
         return new CaseResult(c, result, error, pass, study, p, converged);

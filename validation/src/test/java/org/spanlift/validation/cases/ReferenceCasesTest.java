@@ -56,5 +56,9 @@ class ReferenceCasesTest {
         assertEquals(2.0, Richardson.order(f).getAsDouble(), 1e-12);
         assertEquals(1.0, Richardson.extrapolate(f, 2.0), 1e-12);
         assertTrue(Richardson.order(new double[] {1, 2, 1.5}).isEmpty(), "not monotone");
+        assertEquals(1.0, Richardson.extrapolated(f).getAsDouble(), 1e-12);
+        double[] slow = {1 + 1.0, 1 + 0.9, 1 + 0.81};
+        assertEquals(Math.log(1 / 0.9) / Math.log(2), Richardson.order(slow).getAsDouble(), 1e-12);
+        assertTrue(Richardson.extrapolated(slow).isEmpty(), "order 0.15: not extrapolated");
     }
 }
