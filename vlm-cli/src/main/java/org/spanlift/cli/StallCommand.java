@@ -138,6 +138,12 @@ public final class StallCommand implements Callable<Integer> {
             Map<String, Object> em = new LinkedHashMap<>();
             em.put("control", end.control());
             em.put("y", end.y());
+            em.put("first_on_control", end.firstOnControl().map(f -> {
+                Map<String, Object> fm = new LinkedHashMap<>();
+                fm.put("CL", f.lift());
+                fm.put("y", Math.abs(f.y()));
+                return (Object) fm;
+            }).orElse(null));
             return (Object) em;
         }).orElse(null));
         m.put("method", "critical section, linear theory");
@@ -261,8 +267,11 @@ public final class StallCommand implements Callable<Integer> {
                     "NOTE (%s): stall starts beside the end of the %s at y = %.3f %s. Linear theory concentrates a "
                             + "deflected control's lift in a peak at its ends, narrower than the chord, so this "
                             + "onset falls as the lattice is refined and is pessimistic: read it as a sign that "
-                            + "the %s end may stall early. The CL at which each station reaches cl_max is in the "
-                            + "JSON output (strips).", c.label(), end.control(), end.y() / k, u, end.control())))
+                            + "the %s end may stall early. %s", c.label(), end.control(), end.y() / k, u,
+                    end.control(), end.firstOnControl().map(f -> String.format(Locale.ROOT, "On the %s itself the "
+                            + "first station reaches cl_max at CL %.3f (y = %.3f %s), a value that settles as the "
+                            + "lattice is refined.", end.control(), f.lift(), Math.abs(f.y()) / k, u))
+                            .orElse("No station on the " + end.control() + " itself reaches cl_max."))))
                     .append('\n'));
         }
         if (clean.estimate().assumedClMax() || (flaps != null && flaps.estimate().assumedClMax())) {

@@ -48,8 +48,10 @@ class StallCommandTest {
         CliRun json = CliRun.of("stall", CliRun.demo("trainer.wing.yaml"), "--flaps", "30", "--format", "json");
         assertEquals(0, json.exitCode(), json.err());
         assertTrue(json.out().contains("\"beside_control_end\": null"), "clean: none");
-        assertTrue(json.out().contains("\"beside_control_end\": {\n      \"control\": \"flap\",\n      \"y\": 0.5\n"),
-                json.out());
+        assertTrue(json.out().contains("\"beside_control_end\": {\n      \"control\": \"flap\",\n      \"y\": 0.5,\n"
+                + "      \"first_on_control\": {\n        \"CL\": "), json.out());
+        assertTrue(table.out().replace("\n  ", " ").contains("On the flap itself the first station reaches cl_max at CL"),
+                table.out());
     }
 
     @Test

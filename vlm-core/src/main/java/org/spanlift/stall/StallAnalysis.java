@@ -135,14 +135,14 @@ public final class StallAnalysis {
         sorted.sort(Comparator.comparingDouble(StallEstimate.StripStall::y));
         return new StallEstimate(line.lift(alpha), alpha, Math.abs(onset.y()), Math.abs(onset.y()) / semi,
                 limits.section(first), margin, half, List.copyOf(sorted), limits.assumed(),
-                limits.defaultFlapIncrement(), controlEndAt(onset));
+                limits.defaultFlapIncrement(), controlEndAt(onset, sorted));
     }
 
     /**
      * The deflected control of the wing with a side edge on one of the strip's edges (the lattice cuts strips
      * at control ends), not counting an end on the plane of symmetry of a mirrored wing or at its tip.
      */
-    private Optional<StallEstimate.ControlEnd> controlEndAt(Strip strip) {
+    private Optional<StallEstimate.ControlEnd> controlEndAt(Strip strip, List<StallEstimate.StripStall> strips) {
         Wing wing = analysis.wing();
         if (strip.surface() != 0) {
             return Optional.empty();
@@ -160,11 +160,27 @@ public final class StallAnalysis {
                 boolean onStrip = Math.abs(side.applyAsDouble(strip.yLeft()) - end) <= tol
                         || Math.abs(side.applyAsDouble(strip.yRight()) - end) <= tol;
                 if (sideEdge && onStrip) {
-                    return Optional.of(new StallEstimate.ControlEnd(control.name(), end));
+                    return Optional.of(new StallEstimate.ControlEnd(control.name(), end,
+                            firstWithin(control, side, strips)));
                 }
             }
         }
         return Optional.empty();
+    }
+
+    /** The strip within the control's span (by its centre) that reaches cl_max at the lowest wing CL. */
+    private static Optional<StallEstimate.Reach> firstWithin(ControlSurface control, DoubleUnaryOperator side,
+            List<StallEstimate.StripStall> strips) {
+        StallEstimate.Reach best = null;
+        for (StallEstimate.StripStall s : strips) {
+            double y = side.applyAsDouble(s.y());
+            if (y > control.from() && y < control.to() && s.liftToReach().isPresent()
+                    && (best == null || s.liftToReach().getAsDouble() < best.lift() || (s.liftToReach().getAsDouble()
+                            == best.lift() && s.y() > 0))) {
+                best = new StallEstimate.Reach(s.liftToReach().getAsDouble(), s.y());
+            }
+        }
+        return Optional.ofNullable(best);
     }
 
     private static Optional<StallEstimate.AileronMargin> aileronMargin(Wing wing, List<StallEstimate.StripStall> strips) {

@@ -29,8 +29,20 @@ public record StallEstimate(double lift, double alpha, double y, double eta, Str
         Optional<AileronMargin> aileronMargin, OptionalDouble halfSpanLift, List<StripStall> strips,
         boolean assumedClMax, boolean defaultFlapIncrement, Optional<ControlEnd> besideControlEnd) {
 
-    /** A side edge of a control: its name and the y of that end (as in the wing file, metres). */
-    public record ControlEnd(String control, double y) {
+    /**
+     * A side edge of a control beside the onset strip.
+     *
+     * @param control        the control's name
+     * @param y              the y of that end (as in the wing file)
+     * @param firstOnControl the lowest wing CL at which a strip within the control's span reaches cl_max,
+     *                       and that strip's y; unlike the onset beside the end, it settles as the lattice is
+     *                       refined. Absent if none does
+     */
+    public record ControlEnd(String control, double y, Optional<Reach> firstOnControl) {
+    }
+
+    /** A wing CL at which a strip reaches its cl_max, and the strip's y (the right-hand one). */
+    public record Reach(double lift, double y) {
     }
 
     /** The smallest margin to cl_max over the aileron span. */

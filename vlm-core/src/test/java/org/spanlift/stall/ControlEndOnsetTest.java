@@ -27,7 +27,8 @@ import org.spanlift.solve.WingAnalysis;
  * A part-span flap whose inner end lies outboard of the root: in linear theory the deflected flap's lift
  * peaks at its ends in a band narrower than the chord, and the unflapped station beside the inner end is the
  * first to reach cl_max. That onset is flagged, and it is lattice-sensitive: each halving of the strip width
- * lowers it (the behaviour the stall command's note describes).
+ * lowers it (the behaviour the stall command's note describes), while the first station on the flap itself
+ * settles.
  */
 class ControlEndOnsetTest {
 
@@ -64,6 +65,21 @@ class ControlEndOnsetTest {
         assertEquals("flap", end.control());
         assertEquals(FLAP_FROM, end.y(), 1e-12);
         assertTrue(e.y() < FLAP_FROM, "the unflapped station inboard of the flap end: y = " + e.y());
+    }
+
+    @Test
+    void theFirstStationOnTheFlapItselfSettlesAsTheStripsAreRefined() {
+        double[] lift = new double[3];
+        int[] strips = {32, 64, 128};
+        for (int i = 0; i < strips.length; i++) {
+            StallEstimate.Reach first = onset(wing(30, strips[i])).besideControlEnd().orElseThrow().firstOnControl()
+                    .orElseThrow();
+            assertTrue(first.y() > FLAP_FROM && first.y() < FLAP_TO, "on the flap: y = " + first.y());
+            lift[i] = first.lift();
+        }
+        // The onset beside the end moves by about 4% per halving of the strips; here the change stays far below.
+        assertEquals(lift[1], lift[2], 0.002 * lift[2], "64 against 128 strips");
+        assertEquals(lift[0], lift[2], 0.005 * lift[2], "32 against 128 strips");
     }
 
     @Test
