@@ -168,16 +168,20 @@ public final class StallAnalysis {
         return Optional.empty();
     }
 
-    /** The strip within the control's span (by its centre) that reaches cl_max at the lowest wing CL. */
+    /**
+     * The strip within the control's span (by its centre) that reaches cl_max at the lowest wing CL; of a
+     * symmetric pair, the right-hand one (the strips come in increasing y).
+     */
     private static Optional<StallEstimate.Reach> firstWithin(ControlSurface control, DoubleUnaryOperator side,
             List<StallEstimate.StripStall> strips) {
         StallEstimate.Reach best = null;
         for (StallEstimate.StripStall s : strips) {
             double y = side.applyAsDouble(s.y());
-            if (y > control.from() && y < control.to() && s.liftToReach().isPresent()
-                    && (best == null || s.liftToReach().getAsDouble() < best.lift() || (s.liftToReach().getAsDouble()
-                            == best.lift() && s.y() > 0))) {
-                best = new StallEstimate.Reach(s.liftToReach().getAsDouble(), s.y());
+            if (y > control.from() && y < control.to() && s.liftToReach().isPresent()) {
+                double lift = s.liftToReach().getAsDouble();
+                if (best == null || lift <= best.lift()) {
+                    best = new StallEstimate.Reach(lift, s.y());
+                }
             }
         }
         return Optional.ofNullable(best);
