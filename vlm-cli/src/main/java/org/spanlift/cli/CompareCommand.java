@@ -2,14 +2,17 @@ package org.spanlift.cli;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.EnumSet;
 import java.util.List;
-import java.util.OptionalDouble;
-import java.util.concurrent.Callable;
 import java.util.Locale;
+import java.util.OptionalDouble;
+import java.util.Set;
+import java.util.concurrent.Callable;
 
 import org.spanlift.cli.options.AlphaList;
 import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.output.Csv;
 import org.spanlift.cli.output.Json;
@@ -36,7 +39,10 @@ import picocli.CommandLine.Model.CommandSpec;
         description = "Compare wings side by side: area, span, aspect ratio, MAC, lift slope, zero-lift angle, and e "
                 + "and CDi at a common CL, with the differences from the first; as a table, JSON, CSV or an HTML "
                 + "page with the planforms and span loads overlaid.")
-public final class CompareCommand implements Callable<Integer> {
+public final class CompareCommand implements Callable<Integer>, OffersFormats {
+
+    /** The formats this command writes. */
+    static final Set<Format> FORMATS = Collections.unmodifiableSet(EnumSet.of(Format.TABLE, Format.JSON, Format.CSV, Format.HTML));
 
     private static final int MAX_WINGS = 12;
 
@@ -59,7 +65,7 @@ public final class CompareCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Format format = output.format(EnumSet.of(Format.TABLE, Format.JSON, Format.CSV, Format.HTML));
+        Format format = output.format(FORMATS);
         if (files.size() > MAX_WINGS) {
             throw new InputException("compare", 0, "", "at most " + MAX_WINGS + " wings at once, got " + files.size());
         }
@@ -154,5 +160,10 @@ public final class CompareCommand implements Callable<Integer> {
 
     private static String signed(String s) {
         return s.startsWith("-") ? s : "+" + s;
+    }
+
+    @Override
+    public Set<Format> formats() {
+        return FORMATS;
     }
 }

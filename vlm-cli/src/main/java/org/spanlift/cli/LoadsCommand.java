@@ -2,18 +2,21 @@ package org.spanlift.cli;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collections;
 import java.util.EnumSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.OptionalDouble;
+import java.util.Set;
 import java.util.concurrent.Callable;
-import java.util.Arrays;
 
 import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.output.Csv;
 import org.spanlift.cli.output.Json;
@@ -49,7 +52,10 @@ import picocli.CommandLine.Model.CommandSpec;
         description = "Spanwise shear, bending and torsion of the half-wing (air load less inertia relief) for one "
                 + "load case, a cases file or the corner points of a manoeuvre and gust envelope; the governing "
                 + "case at each station.")
-public final class LoadsCommand implements Callable<Integer> {
+public final class LoadsCommand implements Callable<Integer>, OffersFormats {
+
+    /** The formats this command writes. */
+    static final Set<Format> FORMATS = Collections.unmodifiableSet(EnumSet.of(Format.TABLE, Format.JSON, Format.CSV));
 
     /** Linear theory carries any CL: the user must check the cases against the wing's maximum lift. */
     static final String NO_STALL = "Linear theory has no stall: check each case's CL against the wing's maximum "
@@ -99,7 +105,7 @@ public final class LoadsCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Format format = output.format(EnumSet.of(Format.TABLE, Format.JSON, Format.CSV));
+        Format format = output.format(FORMATS);
         if (safetyFactor != null && !(safetyFactor >= 1 && safetyFactor <= 3)) {
             throw new InputException("--safety-factor", 0, "", "expected a factor from 1 to 3, got " + safetyFactor);
         }
@@ -361,5 +367,10 @@ public final class LoadsCommand implements Callable<Integer> {
 
     private static String cell(double v, int c) {
         return TextTable.fixed(v, 0) + " (" + c + ")";
+    }
+
+    @Override
+    public Set<Format> formats() {
+        return FORMATS;
     }
 }

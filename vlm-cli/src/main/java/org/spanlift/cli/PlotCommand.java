@@ -1,17 +1,18 @@
 package org.spanlift.cli;
 
 import java.nio.file.Path;
+import java.util.Collections;
 import java.util.EnumSet;
 import java.util.List;
-import java.util.concurrent.Callable;
 import java.util.OptionalDouble;
+import java.util.Set;
+import java.util.concurrent.Callable;
 
 import org.spanlift.cli.options.AlphaList;
 import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
-import org.spanlift.stall.MissingSectionDataException;
-import org.spanlift.stall.StallEstimate;
 import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.plot.Figure;
 import org.spanlift.cli.plot.FigureOutput;
@@ -21,6 +22,8 @@ import org.spanlift.geometry.Wing;
 import org.spanlift.io.InputException;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.solve.WingAnalysis;
+import org.spanlift.stall.MissingSectionDataException;
+import org.spanlift.stall.StallEstimate;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -33,7 +36,10 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "plot", mixinStandardHelpOptions = true,
         description = "Draw one figure of a wing as SVG or PNG: its planform and lattice, its span load, its lift "
                 + "curve, its induced-drag polar or its stall map.")
-public final class PlotCommand implements Callable<Integer> {
+public final class PlotCommand implements Callable<Integer>, OffersFormats {
+
+    /** The formats this command writes. */
+    static final Set<Format> FORMATS = Collections.unmodifiableSet(EnumSet.of(Format.SVG, Format.PNG));
 
     /** The lift coefficient of the span load when no angle is given. */
     static final double DEFAULT_CL = 0.5;
@@ -67,7 +73,7 @@ public final class PlotCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PlotKind kind = PlotKind.parse(what);
-        Format format = FigureOutput.format(output, EnumSet.of(Format.SVG, Format.PNG));
+        Format format = FigureOutput.format(output, FORMATS);
         Wing wing = WingFileReader.read(file);
         WingAnalysis analysis = WingAnalysis.of(wing);
         double[] deflections = analysis.deflections(flight.deflections(wing));
@@ -118,5 +124,10 @@ public final class PlotCommand implements Callable<Integer> {
             throw new InputException("--alpha", 0, "", "a curve needs at least two angles of attack");
         }
         return list;
+    }
+
+    @Override
+    public Set<Format> formats() {
+        return FORMATS;
     }
 }

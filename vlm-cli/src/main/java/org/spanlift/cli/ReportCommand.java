@@ -1,23 +1,26 @@
 package org.spanlift.cli;
 
 import java.nio.file.Path;
+import java.util.Collections;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Set;
 import java.util.concurrent.Callable;
 
 import org.spanlift.cli.options.AlphaList;
 import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
-import org.spanlift.cli.report.StallSummary;
-import org.spanlift.stall.MissingSectionDataException;
 import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.plot.FigureOutput;
 import org.spanlift.cli.report.ReportPage;
+import org.spanlift.cli.report.StallSummary;
 import org.spanlift.cli.report.WingSummary;
 import org.spanlift.geometry.Wing;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.solve.WingAnalysis;
+import org.spanlift.stall.MissingSectionDataException;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -30,7 +33,10 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "report", mixinStandardHelpOptions = true,
         description = "Write a self-contained HTML report of a wing: description, key results, every plot, the "
                 + "lattice and a convergence check.")
-public final class ReportCommand implements Callable<Integer> {
+public final class ReportCommand implements Callable<Integer>, OffersFormats {
+
+    /** The formats this command writes. */
+    static final Set<Format> FORMATS = Collections.unmodifiableSet(EnumSet.of(Format.HTML));
 
     @Parameters(index = "0", paramLabel = "FILE", description = "The wing file (.wing.yaml).")
     Path file;
@@ -62,7 +68,7 @@ public final class ReportCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Format format = FigureOutput.format(output, EnumSet.of(Format.HTML));
+        Format format = FigureOutput.format(output, FORMATS);
         List<Double> alphas = AlphaList.parse(alpha);
         List<Double> curve = AlphaList.parse(range);
         CompareCommand.checkCl(cl);
@@ -85,5 +91,10 @@ public final class ReportCommand implements Callable<Integer> {
         assert format == Format.HTML;
         output.write(html, spec.commandLine().getOut());
         return 0;
+    }
+
+    @Override
+    public Set<Format> formats() {
+        return FORMATS;
     }
 }

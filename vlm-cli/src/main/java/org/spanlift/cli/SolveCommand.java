@@ -3,6 +3,7 @@ package org.spanlift.cli;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.EnumSet;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -10,6 +11,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.Set;
 import java.util.concurrent.Callable;
 import java.util.function.DoubleUnaryOperator;
 
@@ -18,6 +20,7 @@ import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.AlphaList;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.output.Csv;
 import org.spanlift.cli.output.Json;
@@ -44,7 +47,10 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code spanlift solve}: coefficients and span loads of one wing over angles of attack or target CLs. */
 @Command(name = "solve", mixinStandardHelpOptions = true,
         description = "Solve a wing over angles of attack: CL, induced drag, span efficiency, moments, span load.")
-public final class SolveCommand implements Callable<Integer> {
+public final class SolveCommand implements Callable<Integer>, OffersFormats {
+
+    /** The formats this command writes. */
+    static final Set<Format> FORMATS = Collections.unmodifiableSet(EnumSet.of(Format.TABLE, Format.JSON, Format.CSV));
 
     @Parameters(index = "0", paramLabel = "FILE", description = "The wing file (.wing.yaml).")
     Path file;
@@ -95,7 +101,7 @@ public final class SolveCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Format format = output.format(EnumSet.of(Format.TABLE, Format.JSON, Format.CSV));
+        Format format = output.format(FORMATS);
         boolean alphaGiven = spec.commandLine().getParseResult().hasMatchedOption("--alpha");
         List<Double> alphas = targetLift.isEmpty() || alphaGiven ? AlphaList.parse(alpha) : List.of();
         Wing wing = WingFileReader.read(file);
@@ -367,5 +373,10 @@ public final class SolveCommand implements Callable<Integer> {
             b.append("  CD adds the sections' profile drag (strip integration of their polars) to CDi.\n");
         }
         return b.toString();
+    }
+
+    @Override
+    public Set<Format> formats() {
+        return FORMATS;
     }
 }

@@ -2,6 +2,8 @@ package org.spanlift.cli;
 
 import java.io.PrintWriter;
 
+import org.spanlift.cli.options.OffersFormats;
+import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.io.InputException;
 import org.spanlift.solve.SingularSystemException;
 
@@ -36,6 +38,11 @@ public final class SpanliftCommand implements Runnable {
     /** A configured command line (used by {@link #main} and by tests). */
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new SpanliftCommand());
+        for (CommandLine sub : cl.getSubcommands().values()) {
+            if (sub.getCommand() instanceof OffersFormats command) {
+                OutputOptions.describeFormats(sub.getCommandSpec(), command.formats());
+            }
+        }
         cl.setExecutionExceptionHandler((e, line, parse) -> {
             PrintWriter err = line.getErr();
             if (e instanceof InputException) {

@@ -2,6 +2,7 @@ package org.spanlift.cli;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.EnumSet;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -9,12 +10,14 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.Set;
 import java.util.concurrent.Callable;
 
 import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.output.Json;
 import org.spanlift.cli.output.TextTable;
@@ -40,7 +43,10 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code spanlift stall}: where and at what lift the wing starts to stall, clean and with flaps, and the stall speeds. */
 @Command(name = "stall", mixinStandardHelpOptions = true,
         description = "Stall onset by the critical-section method: station, CL, aileron margin, spread; stall speeds.")
-public final class StallCommand implements Callable<Integer> {
+public final class StallCommand implements Callable<Integer>, OffersFormats {
+
+    /** The formats this command writes. */
+    static final Set<Format> FORMATS = Collections.unmodifiableSet(EnumSet.of(Format.TABLE, Format.JSON));
 
     static final String CAUTION = "Caution: an estimate from linear theory and section data for the wing alone (the "
             + "tail's download, which raises the real stall speed, is not included); not a substitute for flight "
@@ -63,7 +69,7 @@ public final class StallCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Format format = output.format(EnumSet.of(Format.TABLE, Format.JSON));
+        Format format = output.format(FORMATS);
         Wing wing = WingFileReader.read(file);
         Map<String, Double> overrides = flight.deflections(wing);
         Optional<FlightCondition> condition = flight.condition();
@@ -316,5 +322,10 @@ public final class StallCommand implements Callable<Integer> {
             col += word.length() + 1;
         }
         return out.toString().replace(" \n", "\n").stripTrailing();
+    }
+
+    @Override
+    public Set<Format> formats() {
+        return FORMATS;
     }
 }

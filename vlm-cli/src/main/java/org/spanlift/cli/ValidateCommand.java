@@ -1,14 +1,17 @@
 package org.spanlift.cli;
 
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.EnumSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.concurrent.Callable;
 
 import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.output.Json;
 import org.spanlift.cli.output.TextTable;
@@ -30,7 +33,10 @@ import picocli.CommandLine.Model.CommandSpec;
         description = {"Run the validation cases: each result against a published or textbook reference, with its "
                 + "source, tolerance and a lattice-refinement study.",
                 "Exit code 0 when every case passes, 1 when any fails."})
-public final class ValidateCommand implements Callable<Integer> {
+public final class ValidateCommand implements Callable<Integer>, OffersFormats {
+
+    /** The formats this command writes. */
+    static final Set<Format> FORMATS = Collections.unmodifiableSet(EnumSet.of(Format.TABLE, Format.JSON));
 
     @Option(names = "--case", paramLabel = "NAME", description = "Run only this case.")
     String caseName;
@@ -43,7 +49,7 @@ public final class ValidateCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Format format = output.format(EnumSet.of(Format.TABLE, Format.JSON));
+        Format format = output.format(FORMATS);
         List<ReferenceCase> cases = ReferenceCases.all();
         if (caseName != null) {
             cases = cases.stream().filter(c -> c.name().equals(caseName)).toList();
@@ -143,5 +149,10 @@ public final class ValidateCommand implements Callable<Integer> {
                 + "  (reference 0) report the departure itself in percent.\n\nSources and tolerances\n");
         b.append(notes);
         return b.toString();
+    }
+
+    @Override
+    public Set<Format> formats() {
+        return FORMATS;
     }
 }

@@ -3,7 +3,12 @@ package org.spanlift.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.ArrayList;
+import java.util.List;
+
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 
 import picocli.CommandLine;
 
@@ -25,6 +30,30 @@ class HelpTest {
         CliRun r = CliRun.of(args);
         assertEquals(0, r.exitCode(), String.join(" ", args));
         assertTrue(r.out().contains("Usage:"), r.out());
+    }
+
+    /** The help of --format lists what the command writes, and a format outside that list is refused. */
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = '|', value = {
+        "solve    | Output format: table, json, csv. Default: from the output file's extension, else table. | html  | W",
+        "stall    | Output format: table, json. Default: from the output file's extension, else table.      | csv   | W",
+        "loads    | Output format: table, json, csv. Default: from the output file's extension, else table. | svg   | W",
+        "plot     | Output format: svg, png. Default: from the output file's extension, else svg.          | table | W --what lift",
+        "report   | Output format: html only.                                                               | json  | W",
+        "compare  | Output format: table, json, csv, html. Default: from the output file's extension, else table. | png | W W",
+        "validate | Output format: table, json. Default: from the output file's extension, else table.      | csv   | --case 2d-lift-slope",
+    })
+    void formatHelpListsOnlyTheCommandsFormats(String command, String help, String refused, String rest) {
+        CommandLine.Model.OptionSpec option = SpanliftCommand.commandLine().getSubcommands().get(command)
+                .getCommandSpec().findOption("--format");
+        assertEquals(help, String.join(" ", option.description()));
+        List<String> args = new ArrayList<>(List.of(command, "--format", refused));
+        for (String word : rest.split(" ")) {
+            args.add(word.equals("W") ? CliRun.demo("trainer.wing.yaml") : word);
+        }
+        CliRun r = CliRun.of(args.toArray(String[]::new));
+        assertEquals(2, r.exitCode(), r.err());
+        assertTrue(r.err().contains("this command writes"), r.err());
     }
 
     @Test

@@ -13,6 +13,8 @@ import java.util.concurrent.ThreadLocalRandom;
 
 import org.spanlift.io.InputException;
 
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Model.OptionSpec;
 import picocli.CommandLine.Option;
 
 /**
@@ -25,10 +27,33 @@ public final class OutputOptions {
             description = "Write to FILE instead of standard output. Written whole or not at all.")
     Path output;
 
-    @Option(names = {"-f", "--format"}, paramLabel = "FORMAT",
-            description = "Output format: ${COMPLETION-CANDIDATES}. Default: from the output file's extension, "
-                    + "else table.")
+    /** The option's name, for {@link #describeFormats}. */
+    static final String FORMAT_OPTION = "--format";
+
+    @Option(names = {"-f", FORMAT_OPTION}, paramLabel = "FORMAT",
+            description = "Output format. Default: from the output file's extension, else table.")
     Format format;
+
+    /**
+     * Replaces the help text of a command's {@code --format} with one that lists the formats it writes and its
+     * default (picocli builds the help from the shared annotation, which cannot know them).
+     */
+    public static void describeFormats(CommandSpec command, Set<Format> offered) {
+        OptionSpec option = command.findOption(FORMAT_OPTION);
+        if (option == null) {
+            return;
+        }
+        Format fallback = defaultFormat(offered);
+        String text = offered.size() == 1 ? "Output format: " + fallback + " only."
+                : "Output format: " + names(offered) + ". Default: from the output file's extension, else "
+                        + fallback + ".";
+        command.remove(option);
+        command.addOption(OptionSpec.builder(option).description(text).build());
+    }
+
+    private static Format defaultFormat(Set<Format> offered) {
+        return offered.contains(Format.TABLE) ? Format.TABLE : offered.iterator().next();
+    }
 
     /** The chosen format, checked against what the command offers. */
     public Format format(Set<Format> offered) {
@@ -37,7 +62,7 @@ public final class OutputOptions {
             f = Format.fromFileName(output.getFileName().toString());
         }
         if (f == null) {
-            f = offered.contains(Format.TABLE) ? Format.TABLE : offered.iterator().next();
+            f = defaultFormat(offered);
         }
         if (!offered.contains(f)) {
             throw new InputException("--format", 0, "", "this command writes " + names(offered) + ", not " + f);
