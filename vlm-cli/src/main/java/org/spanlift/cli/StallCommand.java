@@ -194,6 +194,7 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         atm.put("temperature", atmosphere.temperature());
         atm.put("pressure", atmosphere.pressure());
         root.put("atmosphere", atm);
+        root.put("fuselage_half_width", wing.main().fuselageHalfWidth());
         root.put("stall", stallJson(clean));
         if (flaps != null) {
             Map<String, Object> f = stallJson(flaps);
@@ -231,6 +232,11 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         double k = wing.displayUnit().metres();
         StringBuilder b = new StringBuilder(wing.name()).append('\n');
         b.append("  stall onset by the critical-section method (linear theory)\n");
+        double fuselage = wing.main().fuselageHalfWidth();
+        if (fuselage > 0) {
+            b.append(String.format(Locale.ROOT, "  stations inside the fuselage (|y| < %.3f %s) are not stall candidates%n",
+                    fuselage / wing.displayUnit().metres(), wing.displayUnit().symbol()));
+        }
         if (condition.isPresent()) {
             b.append(String.format(Locale.ROOT, "  pressure altitude %.0f m (geopotential), density %.4f kg/m^3, %.2f K%n",
                     atmosphere.pressureAltitude(), atmosphere.density(), atmosphere.temperature()));
@@ -272,7 +278,8 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
             c.estimate().besideControlEnd().ifPresent(end -> b.append('\n').append(wrap(String.format(Locale.ROOT,
                     "NOTE (%s): stall starts beside the end of the %s at y = %.3f %s. Linear theory concentrates a "
                             + "deflected control's lift in a peak at its ends, narrower than the chord, so this "
-                            + "onset falls as the lattice is refined and is pessimistic: read it as a sign that "
+                            + "onset depends on the lattice (finer strips resolve more of the peak and lower it) and "
+                            + "is pessimistic: read it as a sign that "
                             + "the %s end may stall early. %s", c.label(), end.control(), end.y() / k, u,
                     end.control(), end.firstOnControl().map(f -> String.format(Locale.ROOT, "On the %s itself the "
                             + "first station reaches cl_max at CL %.3f (y = %.3f %s), a value that settles as the "

@@ -42,13 +42,13 @@ class StallCommandTest {
     void anOnsetBesideAFlapEndIsNamedInTheTableAndTheJson() {
         CliRun table = CliRun.of("stall", CliRun.demo("trainer.wing.yaml"), "--flaps", "30");
         assertEquals(0, table.exitCode(), table.err());
-        assertTrue(table.out().contains("NOTE (flaps): stall starts beside the end of the flap at y = 0.500 m"),
+        assertTrue(table.out().contains("NOTE (flaps): stall starts beside the end of the flap at y = 2.600 m"),
                 table.out());
         assertFalse(table.out().contains("NOTE (clean)"), table.out());
         CliRun json = CliRun.of("stall", CliRun.demo("trainer.wing.yaml"), "--flaps", "30", "--format", "json");
         assertEquals(0, json.exitCode(), json.err());
         assertTrue(json.out().contains("\"beside_control_end\": null"), "clean: none");
-        assertTrue(json.out().contains("\"beside_control_end\": {\n      \"control\": \"flap\",\n      \"y\": 0.5,\n"
+        assertTrue(json.out().contains("\"beside_control_end\": {\n      \"control\": \"flap\",\n      \"y\": 2.6,\n"
                 + "      \"first_on_control\": {\n        \"CL\": "), json.out());
         assertTrue(table.out().replace("\n  ", " ").contains("On the flap itself the first station reaches cl_max at CL"),
                 table.out());

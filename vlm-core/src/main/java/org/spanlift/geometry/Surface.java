@@ -5,12 +5,34 @@ import java.util.List;
 /**
  * One lifting surface. A mirrored surface is described on its right half (y from the root up) and has a
  * mirror image on the left; otherwise the description is the whole surface.
+ *
+ * @param fuselageHalfWidth y of the wing-fuselage junction of a mirrored surface, m (0: none). The lattice
+ *                          carries the surface through the fuselage; the stations inboard of the junction
+ *                          are covered by it and are not candidates for stall onset
  */
 public record Surface(String name, boolean mirrored, Planform planform, List<ControlSurface> controls,
-        LatticeSpec lattice) {
+        LatticeSpec lattice, double fuselageHalfWidth) {
 
     public Surface {
         controls = List.copyOf(controls);
+        if (!(fuselageHalfWidth >= 0) || !(fuselageHalfWidth < planform.yEnd())) {
+            throw new IllegalArgumentException("the fuselage half-width must be from 0 to less than the semi-span, got "
+                    + fuselageHalfWidth + " m");
+        }
+        if (fuselageHalfWidth > 0 && !mirrored) {
+            throw new IllegalArgumentException("a fuselage half-width needs a mirrored surface");
+        }
+    }
+
+    /** A surface without a fuselage. */
+    public Surface(String name, boolean mirrored, Planform planform, List<ControlSurface> controls,
+            LatticeSpec lattice) {
+        this(name, mirrored, planform, controls, lattice, 0);
+    }
+
+    /** True when the station at |y| lies inside the fuselage (inboard of the junction). */
+    public boolean insideFuselage(double y) {
+        return Math.abs(y) < fuselageHalfWidth;
     }
 
     /** Projected area of the whole surface, both halves when mirrored, m^2. */
@@ -41,10 +63,10 @@ public record Surface(String name, boolean mirrored, Planform planform, List<Con
     }
 
     public Surface withControls(List<ControlSurface> newControls) {
-        return new Surface(name, mirrored, planform, newControls, lattice);
+        return new Surface(name, mirrored, planform, newControls, lattice, fuselageHalfWidth);
     }
 
     public Surface withLattice(LatticeSpec spec) {
-        return new Surface(name, mirrored, planform, controls, spec);
+        return new Surface(name, mirrored, planform, controls, spec, fuselageHalfWidth);
     }
 }

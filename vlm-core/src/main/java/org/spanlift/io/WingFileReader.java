@@ -39,7 +39,7 @@ public final class WingFileReader {
             "structure");
     public static final Set<String> REFERENCE_KEYS = Set.of("area", "span", "chord", "moment-point");
     public static final Set<String> SURFACE_KEYS = Set.of("name", "mirror", "section", "stations", "trapezoid",
-            "elliptic", "controls", "lattice");
+            "elliptic", "controls", "lattice", "fuselage-half-width");
     public static final Set<String> STATION_KEYS = Set.of("y", "chord", "nose-x", "nose-z", "twist", "section");
     public static final Set<String> TRAPEZOID_KEYS = Set.of("span", "root-chord", "taper", "sweep", "dihedral",
             "washout", "root-twist", "root-nose");
@@ -228,7 +228,25 @@ public final class WingFileReader {
             throw at.error(lattice.strips() + " strips cannot place a strip edge on each of the surface's " + cuts
                     + " control ends and stations; expected at least " + (cuts + 1) + " strips");
         }
-        return new Surface(name, mirrored, planform, controls, lattice);
+        double fuselage = f.optional("fuselage-half-width").map(w -> fuselageHalfWidth(w, k, mirrored, planform))
+                .orElse(0.0);
+        return new Surface(name, mirrored, planform, controls, lattice, fuselage);
+    }
+
+    private static double fuselageHalfWidth(Field f, double k, boolean mirrored, Planform planform) {
+        if (!mirrored) {
+            throw f.error("a fuselage half-width applies to a mirrored surface only; expected mirror: true");
+        }
+        double w = f.number();
+        if (!(w >= 0)) {
+            throw f.error("must not be negative, got " + f.text());
+        }
+        double metres = length(f, w, k);
+        if (!(metres < planform.yEnd())) {
+            throw f.error("must be less than the semi-span (" + Field.format(planform.yEnd() / k) + "), got "
+                    + f.text());
+        }
+        return metres;
     }
 
     private static int countInteriorCuts(Planform p, List<ControlSurface> controls, LatticeSpec spec) {

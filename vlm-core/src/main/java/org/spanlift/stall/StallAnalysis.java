@@ -140,7 +140,8 @@ public final class StallAnalysis {
 
     /**
      * The deflected control of the wing with a side edge on one of the strip's edges (the lattice cuts strips
-     * at control ends), not counting an end on the plane of symmetry of a mirrored wing or at its tip.
+     * at control ends), not counting an end on the plane of symmetry of a mirrored wing, at or inside the
+     * fuselage, or at the tip.
      */
     private Optional<StallEstimate.ControlEnd> controlEndAt(Strip strip, List<StallEstimate.StripStall> strips) {
         Wing wing = analysis.wing();
@@ -156,7 +157,8 @@ public final class StallAnalysis {
                 continue;
             }
             for (double end : new double[] {control.from(), control.to()}) {
-                boolean sideEdge = end > wing.main().planform().yStart() + tol && end < wing.main().planform().yEnd() - tol;
+                double inner = Math.max(wing.main().planform().yStart(), wing.main().fuselageHalfWidth());
+                boolean sideEdge = end > inner + tol && end < wing.main().planform().yEnd() - tol;
                 boolean onStrip = Math.abs(side.applyAsDouble(strip.yLeft()) - end) <= tol
                         || Math.abs(side.applyAsDouble(strip.yRight()) - end) <= tol;
                 if (sideEdge && onStrip) {

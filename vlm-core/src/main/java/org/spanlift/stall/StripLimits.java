@@ -72,7 +72,8 @@ public final class StripLimits {
         List<ControlSurface> controls = wing.controls();
         List<Integer> ids = new ArrayList<>();
         for (int k = 0; k < lattice.strips().size(); k++) {
-            if (lattice.strips().get(k).surface() == 0) {
+            Strip st = lattice.strips().get(k);
+            if (st.surface() == 0 && !main.insideFuselage(st.y())) {
                 ids.add(k);
             }
         }

@@ -39,7 +39,7 @@ class BadWingFileTest {
             empty-required-value        | 6  | surfaces[0].stations[0].chord           | the key has no value; expected the local chord
             empty-optional-value        | 7  | surfaces[0].trapezoid.washout           | the key has no value; expected a value, or leave the key out
             unknown-top-key             | 2  | colour                                  | unknown key; expected one of name, reference, sections, structure, surfaces, units
-            unknown-surface-key         | 4  | surfaces[0].mirrored                    | unknown key; expected one of controls, elliptic, lattice, mirror,
+            unknown-surface-key         | 4  | surfaces[0].mirrored                    | unknown key; expected one of controls, elliptic, fuselage-half-width, lattice, mirror,
             unknown-station-key         | 6  | surfaces[0].stations[1].incidence       | unknown key; expected one of chord, nose-x, nose-z, section, twist, y
             unknown-trapezoid-key       | 7  | surfaces[0].trapezoid.tip-chord         | unknown key; expected one of dihedral, root-chord, root-nose,
             unknown-control-key         | 11 | surfaces[0].controls[0].hinge           | unknown key; expected one of chord-fraction, deflection, from, kind,
@@ -51,6 +51,9 @@ class BadWingFileTest {
             quoted-number               | 4  | surfaces[0].trapezoid.root-chord        | expected a number, got the quoted text "1.2"; write numbers without quotes
             number-with-suffix          | 4  | surfaces[0].trapezoid.root-chord        | expected a decimal number (such as 1.25 or 3e-2), got '1.2f'
             mirror-not-boolean          | 4  | surfaces[0].mirror                      | expected true or false, got 'yes'
+            fuselage-negative           | 4  | surfaces[0].fuselage-half-width         | must not be negative, got -0.3
+            fuselage-beyond-tip         | 4  | surfaces[0].fuselage-half-width         | must be less than the semi-span (4.5), got 4.5
+            fuselage-unmirrored         | 5  | surfaces[0].fuselage-half-width         | applies to a mirrored surface only; expected mirror: true
             negative-chord              | 6  | surfaces[0].stations[1].chord           | must not be negative, got -0.2; expected a tip chord of 0 or more
             zero-chord-inner-station    | 6  | surfaces[0].stations[1].chord           | must be positive, got 0; expected a chord above 0 (only the tip station may have zero chord)
             stations-not-increasing     | 7  | surfaces[0].stations[2].y               | is 2.5, after a station at 3; expected stations in increasing y

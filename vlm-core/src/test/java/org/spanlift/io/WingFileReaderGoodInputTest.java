@@ -46,6 +46,19 @@ class WingFileReaderGoodInputTest {
     }
 
     @Test
+    void fuselageHalfWidthIsALengthInTheFileUnitAndZeroWhenLeftOut() {
+        String surface = """
+                units: ft
+                surfaces:
+                  - name: wing
+                    %s
+                    trapezoid: {span: 30, root-chord: 5}
+                """;
+        assertEquals(2 * 0.3048, read(surface.formatted("fuselage-half-width: 2")).main().fuselageHalfWidth(), TIGHT);
+        assertEquals(0, read(surface.formatted("mirror: true")).main().fuselageHalfWidth(), 0.0);
+    }
+
+    @Test
     void anglesInDegreesBecomeRadians() {
         Wing wing = read("""
                 units: m

@@ -40,12 +40,16 @@ class ControlEndOnsetTest {
      * cl_max 1.3 and a flap cl_max increment of 0.72 at 30 degrees (demo values).
      */
     private static Wing wing(double flapDeg, int strips) {
+        return wing(flapDeg, strips, 0);
+    }
+
+    private static Wing wing(double flapDeg, int strips, double fuselageHalfWidth) {
         List<Station> stations = List.of(new Station(0, 1.4, 0, 0, 0, "s"), new Station(2.2, 1.4, 0, 0, 0, "s"),
                 new Station(4.9, 0.8, 0.15, 0, Math.toRadians(-3), "s"));
         ControlSurface flap = new ControlSurface("flap", ControlKind.FLAP, FLAP_FROM, FLAP_TO, 0.25,
                 Math.toRadians(flapDeg));
         Surface s = new Surface("wing", true, new StationPlanform(stations), List.of(flap),
-                new LatticeSpec(strips, 4, Spacing.COSINE, Spacing.COSINE));
+                new LatticeSpec(strips, 4, Spacing.COSINE, Spacing.COSINE), fuselageHalfWidth);
         Table increment = new Table(new double[] {0, 10, 20, 30, 40}, new double[] {0, 0.30, 0.55, 0.72, 0.80});
         Section section = new Section("s", CamberLines.parse("NACA 2412"), 0, Section.THIN_AIRFOIL_SLOPE,
                 Optional.of(Table.constant(1.3)), Optional.of(increment), Optional.empty(), OptionalDouble.empty());
@@ -80,6 +84,30 @@ class ControlEndOnsetTest {
         // The onset beside the end moves by about 4% per halving of the strips; here the change stays far below.
         assertEquals(lift[1], lift[2], 0.002 * lift[2], "64 against 128 strips");
         assertEquals(lift[0], lift[2], 0.005 * lift[2], "32 against 128 strips");
+    }
+
+    /** Inside the fuselage no station is a stall candidate, and a flap end at its side is no free end. */
+    @Test
+    void withTheFlapStartingAtTheFuselageSideNeitherTheStubNorThatEndCounts() {
+        for (int strips : new int[] {32, 128}) {
+            StallEstimate e = onset(wing(30, strips, FLAP_FROM));
+            assertTrue(e.strips().stream().allMatch(st -> Math.abs(st.y()) >= FLAP_FROM), "no strip inside the fuselage");
+            assertTrue(e.y() >= FLAP_FROM, strips + " strips: onset at y = " + e.y());
+            e.besideControlEnd().ifPresent(end -> assertEquals(FLAP_TO, end.y(), 1e-12, "only the outer end is free"));
+        }
+    }
+
+    /**
+     * Fact of the trade (common practice): flaps lower the stall speed, so the flapped stall-onset CL is the
+     * higher, also on a fine lattice, once the stub inside the fuselage is not taken for a wing section.
+     */
+    @Test
+    void withTheFuselageSideExcludedFlapsRaiseTheStallOnsetCl() {
+        for (int strips : new int[] {32, 128}) {
+            double clean = onset(wing(0, strips, FLAP_FROM)).lift();
+            double flapped = onset(wing(30, strips, FLAP_FROM)).lift();
+            assertTrue(flapped > clean + 0.1, strips + " strips: " + clean + " -> " + flapped);
+        }
     }
 
     @Test
