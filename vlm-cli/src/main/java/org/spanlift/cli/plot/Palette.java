@@ -33,6 +33,8 @@ public final class Palette {
     public static final Color FLAP_LINE = BLUE;
     /** Aileron shading: a light tint of orange with vermillion hatching. */
     public static final Color AILERON_FILL = tint(ORANGE, 0.30);
+    /** The fuselage band of the stall map: a light neutral grey. */
+    public static final Color FUSELAGE_FILL = tint(INK, 0.12);
     public static final Color AILERON_LINE = VERMILLION;
 
     private static final Color[] SERIES = {BLUE, VERMILLION, GREEN, PURPLE, ORANGE, SKY, INK};

@@ -4,6 +4,7 @@ import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -241,10 +242,36 @@ public final class Plots {
                 shade++;
             }
         }
-        XYSeries max = c.addSeries("section cl_max" + (stall.assumedClMax() ? " (partly assumed)" : ""), y, clMax);
-        style(max, Palette.VERMILLION, Palette.line(1, 2.0f), SeriesMarkers.NONE);
-        XYSeries at = c.addSeries("section cl at stall onset", y, cl);
-        style(at, Palette.BLUE, Palette.line(0, 2.2f), SeriesMarkers.CIRCLE);
+        double fuselage = wing.main().fuselageHalfWidth() / u.metres();
+        if (fuselage > 0) {
+            XYSeries body = c.addSeries("fuselage", new double[] {-fuselage, fuselage},
+                    new double[] {band, band});
+            body.setXYSeriesRenderStyle(XYSeriesRenderStyle.Area);
+            body.setFillColor(Palette.FUSELAGE_FILL);
+            body.setLineColor(Palette.FUSELAGE_FILL);
+            body.setMarker(SeriesMarkers.NONE);
+        }
+        // With a fuselage each half gets its own line, so that none is drawn across it (no strips there).
+        int right = 0;
+        while (fuselage > 0 && right < n && y[right] < 0) {
+            right++;
+        }
+        String maxName = "section cl_max" + (stall.assumedClMax() ? " (partly assumed)" : "");
+        String atName = "section cl at stall onset";
+        for (int[] half : new int[][] {{0, right}, {right, n}}) {
+            if (half[1] == half[0]) {
+                continue;
+            }
+            boolean first = half[0] == 0;
+            XYSeries max = c.addSeries(first ? maxName : maxName + ", right half",
+                    Arrays.copyOfRange(y, half[0], half[1]), Arrays.copyOfRange(clMax, half[0], half[1]));
+            style(max, Palette.VERMILLION, Palette.line(1, 2.0f), SeriesMarkers.NONE);
+            max.setShowInLegend(first);
+            XYSeries at = c.addSeries(first ? atName : atName + ", right half",
+                    Arrays.copyOfRange(y, half[0], half[1]), Arrays.copyOfRange(cl, half[0], half[1]));
+            style(at, Palette.BLUE, Palette.line(0, 2.2f), SeriesMarkers.CIRCLE);
+            at.setShowInLegend(first);
+        }
         double yOnset = stall.y() / u.metres();
         double clOnset = strips.stream().filter(st -> Math.abs(Math.abs(st.y()) - stall.y()) < 1e-12)
                 .mapToDouble(StallEstimate.StripStall::clMax).findFirst().orElse(top);
@@ -257,8 +284,9 @@ public final class Plots {
         c.getStyler().setYAxisMax(band);
         String desc = String.format(Locale.ROOT, "Section lift coefficient along the span of %s at the wing CL where "
                 + "the first station reaches its section cl_max (%.3f, at %.2f degrees), beside the cl_max of each "
-                + "station; the aileron span is shaded. Critical-section method in linear theory.%s",
+                + "station; the aileron span is shaded%s. Critical-section method in linear theory.%s",
                 surfaceLabel(wing), stall.lift(), Math.toDegrees(stall.alpha()),
+                fuselage > 0 ? ", and so is the fuselage, inside which no station is a stall candidate" : "",
                 stall.assumedClMax() ? " Some sections give no cl-max: an assumed value is used." : "");
         return new ChartFigure("stall-map", desc, c);
     }
