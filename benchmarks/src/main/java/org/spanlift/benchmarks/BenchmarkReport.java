@@ -113,9 +113,9 @@ public final class BenchmarkReport {
                 "alloc kB", "cpu share"));
         double total = sweep.map(Row::cpu).orElse(Double.NaN);
         for (Optional<Row> o : List.of(sweep, analysis, solves)) {
-            o.ifPresent(r -> out.append(String.format(Locale.ROOT, "  %-34s %12.3f %10.3f %10.3f %12.1f %8.0f%%%n",
-                    label(r.name()), r.wall() * 1e3, r.wallError() * 1e3, r.cpu() * 1e3, r.allocated() / 1024,
-                    100 * r.cpu() / total)));
+            o.ifPresent(r -> out.append(String.format(Locale.ROOT, "  %-34s %s %s %s %s %s%%%n",
+                    label(r.name()), num(r.wall() * 1e3, 3, 12), num(r.wallError() * 1e3, 3, 10),
+                    num(r.cpu() * 1e3, 3, 10), num(r.allocated() / 1024, 1, 12), num(100 * r.cpu() / total, 0, 8))));
         }
         sweep.ifPresent(r -> out.append(String.format(Locale.ROOT, "  target: under 5 ms warm -> %s (wall %.2f ms, cpu %.2f ms)%n",
                 r.wall() < 5e-3 ? "met" : (r.cpu() < 5e-3 ? "met on CPU time, not on wall time" : "NOT met"),
@@ -188,6 +188,12 @@ public final class BenchmarkReport {
 
     private static String pad(String s, int w) {
         return String.format("%-" + w + "s", s);
+    }
+
+    /** A number right-aligned in a column, or "-" where there is none (a single iteration has no error). */
+    private static String num(double v, int decimals, int width) {
+        return Double.isFinite(v) ? String.format(Locale.ROOT, "%" + width + "." + decimals + "f", v)
+                : String.format("%" + width + "s", "-");
     }
 
     private static String label(String name) {
