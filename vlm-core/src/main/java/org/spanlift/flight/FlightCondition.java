@@ -1,5 +1,6 @@
 package org.spanlift.flight;
 
+import java.util.Locale;
 import java.util.OptionalDouble;
 
 import org.spanlift.atmosphere.Airspeed;
@@ -54,7 +55,9 @@ public record FlightCondition(double weight, double loadFactor, AtmosphereState 
     /** The equivalent airspeed (m/s) at which the wing carries n W at lift coefficient cl. */
     public double equivalentSpeedFor(double cl, Reference reference) {
         if (!(cl > 0)) {
-            throw new IllegalArgumentException("the wing's maximum lift coefficient is not positive");
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "no speed carries the weight at a wing CL "
+                    + "of %.3f; a station reaches its cl_max before the wing lifts (check the twist and the "
+                    + "deflections)", cl));
         }
         return Math.sqrt(2 * lift() / (seaLevelDensity() * reference.area() * cl));
     }
