@@ -87,7 +87,6 @@ public final class OutputOptions {
     /** Writes bytes to a file via a temporary file in the same folder, then moves it into place. */
     public static void writeAtomically(Path target, byte[] bytes) {
         Path absolute = target.toAbsolutePath();
-        Path dir = absolute.getParent();
         requireFolder(target);
         try {
             Path tmp = temporarySibling(absolute);
