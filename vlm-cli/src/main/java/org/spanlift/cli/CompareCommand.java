@@ -22,7 +22,7 @@ import org.spanlift.cli.report.Comparison;
 import org.spanlift.cli.report.WingSummary;
 import org.spanlift.geometry.LengthUnit;
 import org.spanlift.geometry.Wing;
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.results.Coefficients;
 import org.spanlift.solve.WingAnalysis;

@@ -18,7 +18,7 @@ import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.sweep.Manifest;
 import org.spanlift.cli.sweep.Ranker;
 import org.spanlift.cli.sweep.RowFormat;
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;

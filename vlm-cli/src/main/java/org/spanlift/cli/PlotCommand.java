@@ -19,7 +19,7 @@ import org.spanlift.cli.plot.FigureOutput;
 import org.spanlift.cli.plot.PlotKind;
 import org.spanlift.cli.plot.Plots;
 import org.spanlift.geometry.Wing;
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.solve.WingAnalysis;
 import org.spanlift.stall.MissingSectionDataException;

@@ -29,7 +29,7 @@ import org.spanlift.flight.FlightCondition;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Reference;
 import org.spanlift.geometry.Wing;
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.results.Coefficients;
 import org.spanlift.results.ProfileDrag;

@@ -4,7 +4,7 @@ import java.io.PrintWriter;
 
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 import org.spanlift.solve.SingularSystemException;
 
 import picocli.CommandLine;

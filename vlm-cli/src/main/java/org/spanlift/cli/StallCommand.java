@@ -26,7 +26,7 @@ import org.spanlift.flight.StallSpeed;
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Wing;
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.solve.WingAnalysis;
 import org.spanlift.stall.MissingSectionDataException;

@@ -13,7 +13,7 @@ import org.spanlift.cli.sweep.RowFormat;
 import org.spanlift.cli.sweep.Shard;
 import org.spanlift.cli.sweep.SweepRunner;
 import org.spanlift.cli.options.OutputOptions;
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 import org.spanlift.sweep.Ranking;
 import org.spanlift.sweep.ResultColumn;
 import org.spanlift.sweep.SweepFile;

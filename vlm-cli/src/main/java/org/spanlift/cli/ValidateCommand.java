@@ -16,7 +16,7 @@ import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.output.Json;
 import org.spanlift.cli.output.TextTable;
 import org.spanlift.geometry.LatticeSpec;
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 import org.spanlift.validation.cases.CaseResult;
 import org.spanlift.validation.cases.CaseRunner;
 import org.spanlift.validation.cases.ReferenceCase;

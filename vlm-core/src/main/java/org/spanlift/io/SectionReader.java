@@ -1,5 +1,7 @@
 package org.spanlift.io;
 
+import org.spanlift.input.Field;
+import org.spanlift.input.YamlValue;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;

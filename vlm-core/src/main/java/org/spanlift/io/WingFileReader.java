@@ -1,5 +1,10 @@
 package org.spanlift.io;
 
+import org.spanlift.input.Field;
+import org.spanlift.input.InputException;
+import org.spanlift.input.TextFile;
+import org.spanlift.input.YamlParser;
+import org.spanlift.input.YamlValue;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashSet;

@@ -6,11 +6,11 @@ import java.util.List;
 import java.util.Set;
 
 import org.spanlift.atmosphere.StandardAtmosphere;
-import org.spanlift.io.Field;
-import org.spanlift.io.TextFile;
-import org.spanlift.io.YamlParser;
-import org.spanlift.io.YamlValue;
-import org.spanlift.io.quantity.QuantityKind;
+import org.spanlift.input.Field;
+import org.spanlift.input.TextFile;
+import org.spanlift.input.YamlParser;
+import org.spanlift.input.YamlValue;
+import org.spanlift.input.quantity.QuantityKind;
 
 /**
  * Reads a cases file ({@code .cases.yaml}): a list of load cases, each with its weight, load factor and

@@ -6,10 +6,10 @@ import java.util.List;
 import java.util.OptionalDouble;
 import java.util.Set;
 
-import org.spanlift.io.Field;
-import org.spanlift.io.TextFile;
-import org.spanlift.io.YamlParser;
-import org.spanlift.io.YamlValue;
+import org.spanlift.input.Field;
+import org.spanlift.input.TextFile;
+import org.spanlift.input.YamlParser;
+import org.spanlift.input.YamlValue;
 
 /**
  * Reads an envelope file ({@code .envelope.yaml}): the limit load factors, design speeds (equivalent

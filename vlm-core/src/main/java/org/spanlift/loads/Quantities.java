@@ -1,9 +1,9 @@
 package org.spanlift.loads;
 
-import org.spanlift.io.Field;
-import org.spanlift.io.quantity.Quantity;
-import org.spanlift.io.quantity.QuantityFormatException;
-import org.spanlift.io.quantity.QuantityKind;
+import org.spanlift.input.Field;
+import org.spanlift.input.quantity.Quantity;
+import org.spanlift.input.quantity.QuantityFormatException;
+import org.spanlift.input.quantity.QuantityKind;
 
 /** Typed reads of the dimensional values in structure, cases and envelope files, failing at the field. */
 final class Quantities {

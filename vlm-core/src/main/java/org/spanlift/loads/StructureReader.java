@@ -9,10 +9,10 @@ import java.util.Set;
 import org.spanlift.geometry.Planform;
 import org.spanlift.geometry.Surface;
 import org.spanlift.geometry.Wing;
-import org.spanlift.io.Field;
-import org.spanlift.io.TextFile;
-import org.spanlift.io.YamlParser;
-import org.spanlift.io.YamlValue;
+import org.spanlift.input.Field;
+import org.spanlift.input.TextFile;
+import org.spanlift.input.YamlParser;
+import org.spanlift.input.YamlValue;
 
 /**
  * Reads the {@code structure} section of a wing file into a {@link WingStructure}. Lengths are in the

@@ -7,7 +7,7 @@ import java.util.Set;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
-import org.spanlift.io.YamlValue;
+import org.spanlift.input.YamlValue;
 
 /**
  * A place in a wing file named by its keys separated by dots, such as {@code surfaces.wing.trapezoid.taper}

@@ -1,5 +1,6 @@
 package org.spanlift.io;
 
+import org.spanlift.input.InputException;
 import static org.junit.jupiter.api.Assertions.assertAll;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;

@@ -9,9 +9,9 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.spanlift.atmosphere.StandardAtmosphere;
 import org.spanlift.geometry.Wing;
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 import org.spanlift.io.WingFileReader;
-import org.spanlift.io.YamlParser;
+import org.spanlift.input.YamlParser;
 
 /** The structure section, cases and envelope files: what they accept and the one-line errors they give. */
 class LoadsInputTest {

@@ -15,7 +15,7 @@ import org.spanlift.flight.StallSpeed;
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.Wing;
 import org.spanlift.io.WingFileReader;
-import org.spanlift.io.YamlValue;
+import org.spanlift.input.YamlValue;
 import org.spanlift.results.Coefficients;
 import org.spanlift.solve.WingAnalysis;
 import org.spanlift.stall.StallAnalysis;

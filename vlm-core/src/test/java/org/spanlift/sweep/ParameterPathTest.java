@@ -7,8 +7,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.Test;
 import org.spanlift.geometry.Wing;
 import org.spanlift.io.WingFileReader;
-import org.spanlift.io.YamlParser;
-import org.spanlift.io.YamlValue;
+import org.spanlift.input.YamlParser;
+import org.spanlift.input.YamlValue;
 
 class ParameterPathTest {
 

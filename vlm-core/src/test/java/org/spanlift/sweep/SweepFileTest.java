@@ -8,7 +8,7 @@ import java.nio.file.Path;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 
 class SweepFileTest {
 

@@ -3,7 +3,7 @@ package org.spanlift.cli.options;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 
 /** Angles of attack in degrees, from a list {@code 0,2,4} or a range {@code from:to:step}. */
 public final class AlphaList {

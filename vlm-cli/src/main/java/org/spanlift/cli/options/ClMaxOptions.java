@@ -2,7 +2,7 @@ package org.spanlift.cli.options;
 
 import java.util.OptionalDouble;
 
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 
 import picocli.CommandLine.Option;
 

@@ -14,10 +14,10 @@ import org.spanlift.flight.FlightCondition;
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Wing;
-import org.spanlift.io.InputException;
-import org.spanlift.io.quantity.Quantity;
-import org.spanlift.io.quantity.QuantityFormatException;
-import org.spanlift.io.quantity.QuantityKind;
+import org.spanlift.input.InputException;
+import org.spanlift.input.quantity.Quantity;
+import org.spanlift.input.quantity.QuantityFormatException;
+import org.spanlift.input.quantity.QuantityKind;
 
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Option;

@@ -11,7 +11,7 @@ import java.util.EnumSet;
 import java.util.Set;
 import java.util.concurrent.ThreadLocalRandom;
 
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Model.OptionSpec;

@@ -7,7 +7,7 @@ import java.util.Set;
 
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OutputOptions;
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 
 /** Writing figures and pages: the checks on the output file name and the atomic write. */
 public final class FigureOutput {

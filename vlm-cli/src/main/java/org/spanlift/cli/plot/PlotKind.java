@@ -3,7 +3,7 @@ package org.spanlift.cli.plot;
 import java.util.Arrays;
 import java.util.Locale;
 
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 
 /**
  * The plots of one wing, by the name {@code spanlift plot --what} takes. The id is the figure's id in SVG

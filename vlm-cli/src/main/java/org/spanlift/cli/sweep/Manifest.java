@@ -10,7 +10,7 @@ import java.util.Locale;
 
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.output.Json;
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 import org.spanlift.sweep.SweepFile;
 
 /**

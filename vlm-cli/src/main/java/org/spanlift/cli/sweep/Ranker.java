@@ -13,7 +13,7 @@ import java.util.Map;
 import java.util.PriorityQueue;
 
 import org.spanlift.cli.options.OutputOptions;
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 
 /**
  * Reads a finished results file once, streaming: counts its cases, failures and feasible cases, and keeps

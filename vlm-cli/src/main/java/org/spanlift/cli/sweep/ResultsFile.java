@@ -11,7 +11,7 @@ import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.util.List;
 
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 import org.spanlift.sweep.CaseResult;
 import org.spanlift.sweep.SweepFile;
 

@@ -4,7 +4,7 @@ import java.math.BigInteger;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
-import org.spanlift.io.InputException;
+import org.spanlift.input.InputException;
 
 /**
  * The i-th of n disjoint slices of a design (i from 1 to n): cases {@code floor(N (i-1) / n)} up to, not

@@ -1,4 +1,4 @@
-package org.spanlift.io;
+package org.spanlift.input;
 
 import java.util.ArrayList;
 import java.util.List;

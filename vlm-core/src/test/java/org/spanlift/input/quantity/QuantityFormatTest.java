@@ -1,4 +1,4 @@
-package org.spanlift.io.quantity;
+package org.spanlift.input.quantity;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;

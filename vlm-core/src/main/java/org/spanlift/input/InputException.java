@@ -1,4 +1,4 @@
-package org.spanlift.io;
+package org.spanlift.input;
 
 /**
  * Bad input in a file the user wrote: carries the file, the 1-based line (0 when unknown), the field path

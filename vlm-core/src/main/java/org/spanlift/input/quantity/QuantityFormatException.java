@@ -1,4 +1,4 @@
-package org.spanlift.io.quantity;
+package org.spanlift.input.quantity;
 
 /** A quantity string that cannot be read as the kind asked for; the message is one line. */
 public class QuantityFormatException extends IllegalArgumentException {

@@ -1,4 +1,4 @@
-package org.spanlift.io.quantity;
+package org.spanlift.input.quantity;
 
 /** Unit conversion factors to SI that are exact by definition. */
 final class ExactFactors {

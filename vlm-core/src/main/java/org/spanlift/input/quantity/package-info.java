@@ -3,4 +3,4 @@
  * suffix ({@code 6000N}, {@code 1350lb}, {@code 9800ft}, {@code 90kt}, {@code -10K}), read as a
  * given kind and converted to SI.
  */
-package org.spanlift.io.quantity;
+package org.spanlift.input.quantity;

@@ -1,4 +1,4 @@
-package org.spanlift.io.quantity;
+package org.spanlift.input.quantity;
 
 import java.math.BigDecimal;
 import java.math.MathContext;

@@ -1,4 +1,4 @@
-package org.spanlift.io;
+package org.spanlift.input;
 
 import java.io.IOException;
 import java.nio.charset.CharacterCodingException;

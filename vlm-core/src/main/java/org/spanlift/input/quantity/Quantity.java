@@ -1,4 +1,4 @@
-package org.spanlift.io.quantity;
+package org.spanlift.input.quantity;
 
 import java.util.Arrays;
 import java.util.List;
