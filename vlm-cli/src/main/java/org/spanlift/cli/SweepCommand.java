@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
+import org.spanlift.io.SweepFileReader;
 import org.spanlift.cli.sweep.Progress;
 import org.spanlift.cli.sweep.Ranker;
 import org.spanlift.cli.sweep.ResultsFile;
@@ -16,7 +17,7 @@ import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.input.InputException;
 import org.spanlift.sweep.Ranking;
 import org.spanlift.sweep.ResultColumn;
-import org.spanlift.sweep.SweepFile;
+import org.spanlift.sweep.Sweep;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -79,7 +80,7 @@ public final class SweepCommand implements Callable<Integer> {
         if (!slice.whole() && output == null) {
             throw new InputException("--shard", 0, "", "needs --output: spanlift merge joins the shard files");
         }
-        SweepFile sweep = SweepFile.read(file, force);
+        Sweep sweep = SweepFileReader.read(file, force);
         long n = sweep.design().count();
         long first = slice.first(n);
         long end = slice.end(n);
@@ -130,7 +131,7 @@ public final class SweepCommand implements Callable<Integer> {
         return tally.failed() > 0 ? SpanliftCommand.EXIT_FAILED_CASES : 0;
     }
 
-    private void summary(PrintWriter err, SweepFile sweep, long cases, long failed, long started, int threads,
+    private void summary(PrintWriter err, Sweep sweep, long cases, long failed, long started, int threads,
             Path ranked, Ranker.Tally tally) {
         double s = (System.nanoTime() - started) / 1e9;
         err.println(String.format(Locale.ROOT, "sweep: %d cases (%s), %d failed; %.1f s on %d thread%s",

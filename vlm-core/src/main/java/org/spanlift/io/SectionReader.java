@@ -1,6 +1,7 @@
 package org.spanlift.io;
 
 import org.spanlift.input.Field;
+import org.spanlift.input.InputException;
 import org.spanlift.input.YamlValue;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -45,8 +46,8 @@ public final class SectionReader {
             Path folder = wingFile.toAbsolutePath().getParent();
             Path coordinates = folder == null ? Path.of(c.text()) : folder.resolve(c.text());
             try {
-                return CamberLines.fromCoordinateFile(coordinates);
-            } catch (IllegalArgumentException e) {
+                return CoordinateFileReader.read(coordinates);
+            } catch (InputException e) {
                 throw c.error(e.getMessage());
             }
         }).orElseGet(() -> CamberLines.parse("flat")));

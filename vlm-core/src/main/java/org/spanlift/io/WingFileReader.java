@@ -28,7 +28,6 @@ import org.spanlift.geometry.StationPlanform;
 import org.spanlift.geometry.Surface;
 import org.spanlift.geometry.Vec3;
 import org.spanlift.geometry.Wing;
-import org.spanlift.loads.StructureReader;
 import org.spanlift.section.CamberLines;
 
 /**

@@ -1,5 +1,7 @@
 package org.spanlift.loads;
 
+import org.spanlift.structure.EnvelopeSpec;
+import org.spanlift.structure.LoadCase;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;

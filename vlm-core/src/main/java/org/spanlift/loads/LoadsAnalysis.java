@@ -1,5 +1,8 @@
 package org.spanlift.loads;
 
+import org.spanlift.structure.LoadCase;
+import org.spanlift.structure.PointMass;
+import org.spanlift.structure.WingStructure;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;

@@ -1,5 +1,7 @@
 package org.spanlift.loads;
 
+import org.spanlift.structure.LoadCase;
+
 /**
  * The loads of one case on the right half-wing at its stations (the strip edges, root to tip), SI. Signs as
  * in the package description: shear positive up, bending positive for up-bending, torsion positive

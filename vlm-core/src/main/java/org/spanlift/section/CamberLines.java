@@ -62,27 +62,6 @@ public final class CamberLines {
         throw refuse(s, "NACA must be followed by four or five digits, found " + d.length);
     }
 
-    /**
-     * Reads a plain two-column x/y airfoil coordinate file and extracts its mean line.
-     *
-     * <p>Format: one point per line, x and y separated by spaces, tabs or a comma, in chords. An optional
-     * first line gives the section's name (used as its designation; the file name otherwise). Blank lines and
-     * comments from {@code #} to the end of a line are ignored. The points either run as one contour (from the
-     * trailing edge over one surface round the leading edge and back along the other), or as two blocks, one
-     * per surface, each in either direction; a jump of x by more than half a chord separates the blocks.
-     *
-     * <p>Extraction: the leading edge is the point of minimum x, refined to the point farthest forward along
-     * the chord line it defines (the same point unless the section is inclined); the trailing edge is the
-     * midpoint of the two surfaces' ends. The coordinates are translated, derotated and scaled to unit chord,
-     * split there into the two surfaces, and the mean line is their midpoint at the same x. See
-     * {@link CoordinateMeanLine} for the interpolation and for its accuracy near the nose.
-     *
-     * @throws SectionFileException with a one-line message naming the file, the line and what is expected
-     */
-    public static CoordinateMeanLine fromCoordinateFile(Path file) {
-        return CoordinateFileReader.read(file);
-    }
-
     private static IllegalArgumentException refuse(String spec, String problem) {
         return new IllegalArgumentException("camber line '" + spec + "': " + problem + "; accepted: " + ACCEPTED);
     }

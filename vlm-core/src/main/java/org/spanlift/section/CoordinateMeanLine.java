@@ -3,7 +3,7 @@ package org.spanlift.section;
 import java.util.Arrays;
 
 /**
- * A mean line extracted from airfoil surface coordinates (see {@link CamberLines#fromCoordinateFile}).
+ * A mean line extracted from airfoil surface coordinates (see {@code org.spanlift.io.CoordinateFileReader}).
  *
  * <p>After normalisation to unit chord (leading edge at 0, trailing edge at 1), each surface is
  * interpolated by a clamped cubic spline in the variable s = sqrt(x), in which a round nose is smooth
@@ -36,7 +36,7 @@ public final class CoordinateMeanLine implements CamberLine {
     private final double leadingEdgeX;
     private final double leadingEdgeY;
 
-    CoordinateMeanLine(String designation, CubicSpline upper, CubicSpline lower,
+    public CoordinateMeanLine(String designation, CubicSpline upper, CubicSpline lower,
                        double chordInFileUnits, double chordAngle, double leadingEdgeX, double leadingEdgeY) {
         this.leadingEdgeX = leadingEdgeX;
         this.leadingEdgeY = leadingEdgeY;

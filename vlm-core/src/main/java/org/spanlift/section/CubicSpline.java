@@ -7,13 +7,13 @@ import java.util.Arrays;
  * derivative of the cubic through the four end points (fourth-order accurate end slopes, unlike the
  * natural end condition's zero curvature). Beyond the end knots the end cubic is continued.
  */
-final class CubicSpline {
+public final class CubicSpline {
 
     private final double[] t;
     private final double[] y;
     private final double[] d;   // first derivative at each knot
 
-    CubicSpline(double[] t, double[] y) {
+    public CubicSpline(double[] t, double[] y) {
         int n = t.length;
         if (n < 4 || y.length != n) {
             throw new IllegalArgumentException("a spline needs at least 4 knots");
@@ -108,7 +108,7 @@ final class CubicSpline {
         return Math.max(0, Math.min(t.length - 2, i));
     }
 
-    double value(double x) {
+    public double value(double x) {
         int i = interval(x);
         double h = t[i + 1] - t[i];
         double u = (x - t[i]) / h;
@@ -119,7 +119,7 @@ final class CubicSpline {
         return h00 * y[i] + h10 * h * d[i] + h01 * y[i + 1] + h11 * h * d[i + 1];
     }
 
-    double derivative(double x) {
+    public double derivative(double x) {
         int i = interval(x);
         double h = t[i + 1] - t[i];
         double u = (x - t[i]) / h;

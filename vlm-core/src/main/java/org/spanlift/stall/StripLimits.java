@@ -28,6 +28,13 @@ import org.spanlift.section.ThinAirfoil;
  */
 public final class StripLimits {
 
+    /**
+     * The cl_max assumed, when asked, for sections that give none: deliberately below what ordinary
+     * sections reach at light-aircraft Reynolds numbers, so that stall speeds come out high rather than low
+     * (the safe direction); the outputs flag it.
+     */
+    public static final double CONSERVATIVE_CL_MAX = 1.2;
+
     /** Plain-flap cl_max increment at full deflection (handbook value, see the class notes). */
     public static final double PLAIN_FLAP_INCREMENT = 0.9;
     /** The deflection taken as full for {@link #PLAIN_FLAP_INCREMENT}, degrees. */

@@ -50,7 +50,7 @@ public final class Parameter {
     }
 
     /** The number of grid values of a range: floor((to - from) / step + slack) + 1. */
-    static long rangeCount(BigDecimal from, BigDecimal to, BigDecimal step) {
+    public static long rangeCount(BigDecimal from, BigDecimal to, BigDecimal step) {
         BigDecimal q = to.subtract(from).divide(step, MathContext.DECIMAL128);
         BigDecimal slack = q.abs().max(BigDecimal.ONE).multiply(BigDecimal.valueOf(END_SLACK));
         BigDecimal n = q.add(slack).setScale(0, RoundingMode.FLOOR).add(BigDecimal.ONE);

@@ -7,6 +7,7 @@ import java.util.Set;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
+import org.spanlift.input.YamlSchema;
 import org.spanlift.input.YamlValue;
 
 /**
@@ -55,17 +56,18 @@ public final class ParameterPath {
     }
 
     /**
-     * Parses and checks a path against the wing-file schema.
+     * Parses and checks a path against a file schema.
      *
+     * @param root the schema of the file kind (a wing file's: {@code org.spanlift.io.WingSchema.ROOT})
      * @throws PathException saying what the schema expects where the path leaves it
      */
-    public static ParameterPath parse(String text) {
+    public static ParameterPath parse(String text, YamlSchema.Node root) {
         String t = text.trim();
         if (t.isEmpty()) {
             throw new PathException("expected a path of wing-file keys separated by dots");
         }
         List<Step> steps = new ArrayList<>();
-        WingSchema.Node node = WingSchema.ROOT;
+        YamlSchema.Node node = root;
         StringBuilder at = new StringBuilder();
         boolean elementNamed = false;
         for (String token : t.split("\\.", -1)) {
@@ -79,7 +81,7 @@ public final class ParameterPath {
                 case MAPPING -> {
                     if (!node.keys().containsKey(key)) {
                         throw new PathException("unknown key '" + key + "' at " + where + "; expected one of "
-                                + WingSchema.expected(node));
+                                + YamlSchema.expected(node));
                     }
                     if (key.equals("name") && elementNamed) {
                         throw new PathException("a name chooses the list element and cannot be swept");
@@ -103,7 +105,7 @@ public final class ParameterPath {
             at.append(at.length() == 0 ? "" : ".").append(key);
             Matcher idx = INDEX.matcher(m.group(2));
             while (idx.find()) {
-                if (node.kind() != WingSchema.Kind.INDEXED_LIST && node.kind() != WingSchema.Kind.NAMED_LIST) {
+                if (node.kind() != YamlSchema.Kind.INDEXED_LIST && node.kind() != YamlSchema.Kind.NAMED_LIST) {
                     throw new PathException("'" + at + "' is not a list; it takes no index");
                 }
                 String digits = idx.group(1);
@@ -111,14 +113,14 @@ public final class ParameterPath {
                     throw new PathException("the index " + digits + " in " + t + " is too large");
                 }
                 steps.add(new Index(Integer.parseInt(digits)));
-                elementNamed = node.kind() == WingSchema.Kind.NAMED_LIST;
+                elementNamed = node.kind() == YamlSchema.Kind.NAMED_LIST;
                 node = node.element();
                 at.append('[').append(digits).append(']');
             }
         }
         if (!node.leaf()) {
-            throw new PathException("'" + t + "' names " + (node.kind() == WingSchema.Kind.MAPPING
-                    ? "a mapping; continue the path with one of its keys: " + WingSchema.expected(node)
+            throw new PathException("'" + t + "' names " + (node.kind() == YamlSchema.Kind.MAPPING
+                    ? "a mapping; continue the path with one of its keys: " + YamlSchema.expected(node)
                     : "a list or a group; continue the path to one value"));
         }
         return new ParameterPath(t, steps);

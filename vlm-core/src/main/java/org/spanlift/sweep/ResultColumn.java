@@ -43,7 +43,7 @@ public record ResultColumn(String name, String key, Group group, String control,
 
     static final List<String> WING_KEYS = List.of("lift_slope_per_rad", "lift_slope_per_deg", "zero_lift_angle_deg",
             "reference.area", "reference.span", "reference.chord", "reference.aspect_ratio", "lattice.panels");
-    static final List<String> POINT_KEYS = List.of("CL", "CDi", "e", "Cm", "C_roll", "alpha_deg");
+    public static final List<String> POINT_KEYS = List.of("CL", "CDi", "e", "Cm", "C_roll", "alpha_deg");
     static final List<String> STALL_KEYS = List.of("CL", "alpha_deg", "y", "eta", "aileron_margin.dcl",
             "aileron_margin.y", "half_span_CL", "beside_control_end");
     static final List<String> SPEED_KEYS = List.of("clean_eas", "clean_tas", "flaps_eas", "flaps_tas");

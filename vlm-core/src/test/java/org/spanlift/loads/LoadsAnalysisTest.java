@@ -1,5 +1,8 @@
 package org.spanlift.loads;
 
+import org.spanlift.structure.LoadCase;
+import org.spanlift.structure.PointMass;
+import org.spanlift.structure.WingStructure;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;

@@ -1,5 +1,7 @@
 package org.spanlift.section;
 
+import org.spanlift.io.CoordinateFileReader;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -24,7 +26,7 @@ class CoordinateMeanLineTest {
     private CoordinateMeanLine extract(String text, String fileName) throws IOException {
         Path file = dir.resolve(fileName);
         Files.writeString(file, text);
-        return CamberLines.fromCoordinateFile(file);
+        return CoordinateFileReader.read(file);
     }
 
     private CoordinateMeanLine extract(String spec, int stations) throws IOException {
@@ -166,7 +168,7 @@ class CoordinateMeanLineTest {
     @Test
     void commentsBlankLinesAndNameAreAccepted() throws IOException {
         Path file = Path.of("src/test/resources/section/valid-commented.dat");
-        CoordinateMeanLine line = CamberLines.fromCoordinateFile(file);
+        CoordinateMeanLine line = CoordinateFileReader.read(file);
         assertEquals("thin test section", line.designation());
         assertEquals(0.0, line.z(0.5), 1e-6);
         assertFalse(line.slopeBoundedAtLeadingEdge());

@@ -1,5 +1,6 @@
 package org.spanlift.sweep;
 
+import org.spanlift.batch.CaseResult;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
@@ -12,11 +13,12 @@ import java.util.List;
 import java.util.Set;
 
 import org.junit.jupiter.api.Test;
+import org.spanlift.io.WingSchema;
 
 class DesignTest {
 
     private static Parameter range(String path, String from, String to, String step) {
-        return Parameter.ofRange(ParameterPath.parse(path), 1, new BigDecimal(from), new BigDecimal(to),
+        return Parameter.ofRange(ParameterPath.parse(path, WingSchema.ROOT), 1, new BigDecimal(from), new BigDecimal(to),
                 step == null ? null : new BigDecimal(step));
     }
 
@@ -38,7 +40,7 @@ class DesignTest {
     @Test
     void theGridRunsTheLastParameterFastest() {
         Design d = Design.grid(List.of(range("surfaces.wing.trapezoid.taper", "0.4", "0.6", "0.1"),
-                Parameter.ofList(ParameterPath.parse("surfaces.wing.trapezoid.washout"), 1, List.of("0", "2"))));
+                Parameter.ofList(ParameterPath.parse("surfaces.wing.trapezoid.washout", WingSchema.ROOT), 1, List.of("0", "2"))));
         assertEquals(6, d.count());
         assertArrayEquals(new String[] {"0.4", "0"}, d.values(0));
         assertArrayEquals(new String[] {"0.4", "2"}, d.values(1));

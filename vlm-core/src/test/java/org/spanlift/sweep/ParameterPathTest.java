@@ -9,6 +9,7 @@ import org.spanlift.geometry.Wing;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.input.YamlParser;
 import org.spanlift.input.YamlValue;
+import org.spanlift.io.WingSchema;
 
 class ParameterPathTest {
 
@@ -16,7 +17,7 @@ class ParameterPathTest {
     private static final YamlValue TRAPEZOID = YamlParser.parse(SweepFixtures.TRAPEZOID, "t.wing.yaml");
 
     private static Wing apply(YamlValue tree, String path, String value) {
-        return WingFileReader.fromTree(ParameterPath.parse(path).apply(tree, value), "x.wing.yaml");
+        return WingFileReader.fromTree(ParameterPath.parse(path, WingSchema.ROOT).apply(tree, value), "x.wing.yaml");
     }
 
     @Test
@@ -44,36 +45,36 @@ class ParameterPathTest {
     @Test
     void refusesPathsTheSchemaDoesNotKnow() {
         String m = assertThrows(ParameterPath.PathException.class,
-                () -> ParameterPath.parse("surfaces.wing.trapezoid.tapper")).getMessage();
+                () -> ParameterPath.parse("surfaces.wing.trapezoid.tapper", WingSchema.ROOT)).getMessage();
         assertTrue(m.contains("unknown key 'tapper'") && m.contains("taper"), m);
-        m = assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("surfaces.wing.lattice")).getMessage();
+        m = assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("surfaces.wing.lattice", WingSchema.ROOT)).getMessage();
         assertTrue(m.contains("a mapping") && m.contains("strips"), m);
-        m = assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("surfaces.wing.stations.twist"))
+        m = assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("surfaces.wing.stations.twist", WingSchema.ROOT))
                 .getMessage();
         assertTrue(m.contains("index in brackets"), m);
-        assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("surfaces.wing.controls.flap.name"));
-        assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("units.x"));
+        assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("surfaces.wing.controls.flap.name", WingSchema.ROOT));
+        assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("units.x", WingSchema.ROOT));
     }
 
     @Test
     void refusesWhatTheBaseFileLacks() {
         String m = assertThrows(ParameterPath.PathException.class,
-                () -> ParameterPath.parse("surfaces.wing.stations[3].twist").apply(STATIONS, "1")).getMessage();
+                () -> ParameterPath.parse("surfaces.wing.stations[3].twist", WingSchema.ROOT).apply(STATIONS, "1")).getMessage();
         assertTrue(m.contains("has 3 elements"), m);
         m = assertThrows(ParameterPath.PathException.class,
-                () -> ParameterPath.parse("surfaces.tail.trapezoid.taper").apply(TRAPEZOID, "1")).getMessage();
+                () -> ParameterPath.parse("surfaces.tail.trapezoid.taper", WingSchema.ROOT).apply(TRAPEZOID, "1")).getMessage();
         assertTrue(m.contains("no element named 'tail'") && m.contains("wing"), m);
         m = assertThrows(ParameterPath.PathException.class,
-                () -> ParameterPath.parse("surfaces.wing.trapezoid.taper").apply(STATIONS, "1")).getMessage();
+                () -> ParameterPath.parse("surfaces.wing.trapezoid.taper", WingSchema.ROOT).apply(STATIONS, "1")).getMessage();
         assertTrue(m.contains("has stations, not trapezoid"), m);
         m = assertThrows(ParameterPath.PathException.class,
-                () -> ParameterPath.parse("sections.tip.cl-max").apply(STATIONS, "1")).getMessage();
+                () -> ParameterPath.parse("sections.tip.cl-max", WingSchema.ROOT).apply(STATIONS, "1")).getMessage();
         assertTrue(m.contains("no 'tip'"), m);
     }
 
     @Test
     void leavesTheBaseTreeUnchanged() {
-        YamlValue changed = ParameterPath.parse("surfaces.wing.trapezoid.taper").apply(TRAPEZOID, "0.9");
+        YamlValue changed = ParameterPath.parse("surfaces.wing.trapezoid.taper", WingSchema.ROOT).apply(TRAPEZOID, "0.9");
         assertEquals(0.5 * 1.6, WingFileReader.fromTree(TRAPEZOID, "t").main().planform().chord(5.0), 1e-12);
         assertEquals(0.9 * 1.6, WingFileReader.fromTree(changed, "t").main().planform().chord(5.0), 1e-12);
     }

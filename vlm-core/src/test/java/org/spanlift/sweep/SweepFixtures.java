@@ -7,10 +7,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 
 /** Wing and sweep files of invented test scenarios, written into a test's temporary folder. */
-final class SweepFixtures {
+public final class SweepFixtures {
 
     /** A tapered wing given by stations, with a flap, a deflected aileron and cl-max data (one table). */
-    static final String WING = """
+    public static final String WING = """
             name: Test wing with stations
             units: m
             surfaces:
@@ -29,7 +29,7 @@ final class SweepFixtures {
             """;
 
     /** The same wing as a trapezoid without cl-max data, lattice left to its default. */
-    static final String TRAPEZOID = """
+    public static final String TRAPEZOID = """
             name: Test trapezoid
             units: m
             surfaces:
@@ -45,7 +45,7 @@ final class SweepFixtures {
     private SweepFixtures() {
     }
 
-    static Path write(Path dir, String name, String text) {
+    public static Path write(Path dir, String name, String text) {
         try {
             Path p = dir.resolve(name);
             Files.writeString(p, text, StandardCharsets.UTF_8);

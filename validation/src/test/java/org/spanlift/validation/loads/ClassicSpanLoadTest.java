@@ -10,10 +10,10 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.spanlift.geometry.Wing;
-import org.spanlift.loads.LoadCase;
+import org.spanlift.structure.LoadCase;
 import org.spanlift.loads.LoadsAnalysis;
 import org.spanlift.loads.SpanwiseLoads;
-import org.spanlift.loads.WingStructure;
+import org.spanlift.structure.WingStructure;
 import org.spanlift.solve.WingAnalysis;
 
 /**

@@ -9,12 +9,12 @@ import org.junit.jupiter.api.Test;
 import org.spanlift.atmosphere.StandardAtmosphere;
 import org.spanlift.geometry.Wing;
 import org.spanlift.io.WingFileReader;
-import org.spanlift.loads.LoadCase;
+import org.spanlift.structure.LoadCase;
 import org.spanlift.loads.LoadsAnalysis;
-import org.spanlift.loads.MassTable;
-import org.spanlift.loads.PointMass;
+import org.spanlift.structure.MassTable;
+import org.spanlift.structure.PointMass;
 import org.spanlift.loads.SpanwiseLoads;
-import org.spanlift.loads.WingStructure;
+import org.spanlift.structure.WingStructure;
 import org.spanlift.solve.WingAnalysis;
 
 /**

@@ -3,18 +3,16 @@ package org.spanlift.cli.options;
 import java.util.OptionalDouble;
 
 import org.spanlift.input.InputException;
+import org.spanlift.stall.StripLimits;
 
 import picocli.CommandLine.Option;
 
 /** The option that lets stall results use an assumed cl_max for sections that give none. */
 public final class ClMaxOptions {
 
-    /** The conservative cl_max assumed by {@code --assume-cl-max} without a value. */
-    public static final double CONSERVATIVE_CL_MAX = 1.2;
-
-    @Option(names = "--assume-cl-max", paramLabel = "CLMAX", arity = "0..1", fallbackValue = "" + CONSERVATIVE_CL_MAX,
+    @Option(names = "--assume-cl-max", paramLabel = "CLMAX", arity = "0..1", fallbackValue = "" + StripLimits.CONSERVATIVE_CL_MAX,
             description = "For sections without cl-max data, assume this cl_max (flagged in the output). Without a "
-                    + "value: the conservative default " + CONSERVATIVE_CL_MAX + ".")
+                    + "value: the conservative default " + StripLimits.CONSERVATIVE_CL_MAX + ".")
     Double assumeClMax;
 
     /** The assumed cl_max, if asked for, checked. */

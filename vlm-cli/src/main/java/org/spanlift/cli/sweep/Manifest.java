@@ -11,7 +11,7 @@ import java.util.Locale;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.output.Json;
 import org.spanlift.input.InputException;
-import org.spanlift.sweep.SweepFile;
+import org.spanlift.sweep.Sweep;
 
 /**
  * The one-line description written beside a sweep's output ({@code results.manifest.json} beside
@@ -26,7 +26,7 @@ public record Manifest(Map<String, String> fields) {
     public static final String VERSION = "1";
 
     /** The manifest of a run of a sweep over one shard. */
-    public static Manifest of(SweepFile sweep, Shard shard, RowFormat format) {
+    public static Manifest of(Sweep sweep, Shard shard, RowFormat format) {
         long n = sweep.design().count();
         Map<String, String> f = new LinkedHashMap<>();
         f.put("spanlift_sweep", VERSION);

@@ -12,8 +12,8 @@ import java.nio.file.StandardOpenOption;
 import java.util.List;
 
 import org.spanlift.input.InputException;
-import org.spanlift.sweep.CaseResult;
-import org.spanlift.sweep.SweepFile;
+import org.spanlift.batch.CaseResult;
+import org.spanlift.sweep.Sweep;
 
 /**
  * A sweep's output file, written row by row: each complete row is one write of its bytes, straight to the
@@ -40,7 +40,7 @@ public final class ResultsFile implements AutoCloseable {
      * Opens the output: a fresh file (manifest, then header) unless {@code resume} finds an unfinished run of
      * the same sweep and shard, which it continues.
      */
-    public static ResultsFile open(Path output, SweepFile sweep, Shard shard, RowFormat format, boolean resume) {
+    public static ResultsFile open(Path output, Sweep sweep, Shard shard, RowFormat format, boolean resume) {
         Manifest manifest = Manifest.of(sweep, shard, format);
         List<String> names = RowFormat.columnNames(sweep);
         String header = format.header(names);
@@ -107,7 +107,7 @@ public final class ResultsFile implements AutoCloseable {
     }
 
     /** Checks the complete rows: header, then cases first, first + 1, ... Returns how many rows there are. */
-    private static long check(Path output, RowFormat format, String header, SweepFile sweep, long first, long bytes)
+    private static long check(Path output, RowFormat format, String header, Sweep sweep, long first, long bytes)
             throws IOException {
         long rows = 0;
         String last = null;

@@ -8,9 +8,9 @@ import java.util.Map;
 import java.util.regex.Pattern;
 
 import org.spanlift.cli.output.Json;
-import org.spanlift.sweep.CaseResult;
+import org.spanlift.batch.CaseResult;
 import org.spanlift.sweep.ResultColumn;
-import org.spanlift.sweep.SweepFile;
+import org.spanlift.sweep.Sweep;
 
 /**
  * How sweep rows are written and read back: CSV (a header line, then one line per case) or JSON Lines (one
@@ -41,7 +41,7 @@ public enum RowFormat {
     }
 
     /** The column names of a sweep's rows. */
-    public static List<String> columnNames(SweepFile sweep) {
+    public static List<String> columnNames(Sweep sweep) {
         List<String> names = new ArrayList<>();
         names.add("case");
         names.add("id");
@@ -67,7 +67,7 @@ public enum RowFormat {
     }
 
     /** One row with its newline. */
-    public String row(List<String> names, SweepFile sweep, CaseResult r) {
+    public String row(List<String> names, Sweep sweep, CaseResult r) {
         List<Object> cells = new ArrayList<>();
         cells.add(r.index());
         cells.add(r.id());

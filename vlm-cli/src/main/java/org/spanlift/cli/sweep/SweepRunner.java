@@ -11,9 +11,9 @@ import java.util.concurrent.atomic.AtomicInteger;
 import java.util.function.BiConsumer;
 import java.util.function.Function;
 
-import org.spanlift.sweep.CaseEvaluator;
-import org.spanlift.sweep.CaseResult;
-import org.spanlift.sweep.SweepFile;
+import org.spanlift.batch.CaseEvaluator;
+import org.spanlift.batch.CaseResult;
+import org.spanlift.sweep.Sweep;
 
 /**
  * Runs cases {@code first} up to {@code end} of a sweep on {@code jobs} threads and hands the results to
@@ -41,7 +41,7 @@ public final class SweepRunner {
      * @param format turns a result into its row; runs on the worker threads, so it must be thread-safe
      * @param sink   receives each result with its row, in case order, on the calling thread
      */
-    public static Outcome run(SweepFile sweep, long first, long end, int jobs, Function<CaseResult, String> format,
+    public static Outcome run(Sweep sweep, long first, long end, int jobs, Function<CaseResult, String> format,
             BiConsumer<CaseResult, String> sink) {
         List<CaseEvaluator> evaluators = new CopyOnWriteArrayList<>();
         ThreadLocal<CaseEvaluator> local = ThreadLocal.withInitial(() -> {

@@ -9,7 +9,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Arrays;
 
-import org.spanlift.sweep.SweepFile;
+import org.spanlift.io.SweepFileReader;
+import org.spanlift.sweep.Sweep;
 
 /**
  * A JMH-free measurement of sweep throughput, cases per second, on an invented trapezoid wing with a
@@ -63,11 +64,11 @@ public final class SweepThroughput {
         Path dir = Files.createTempDirectory("spanlift-throughput");
         try {
             Files.writeString(dir.resolve("w.wing.yaml"), WING, StandardCharsets.UTF_8);
-            SweepFile planform = SweepFile.read(write(dir, "p.sweep.yaml", PLANFORM), false);
-            SweepFile twist = SweepFile.read(write(dir, "t.sweep.yaml", TWIST), false);
+            Sweep planform = SweepFileReader.read(write(dir, "p.sweep.yaml", PLANFORM), false);
+            Sweep twist = SweepFileReader.read(write(dir, "t.sweep.yaml", TWIST), false);
             System.out.printf(Locale.ROOT, "sweep throughput, lattice 24 x 6 per half, %d cores available, %.0f s per figure%n",
                     Runtime.getRuntime().availableProcessors(), seconds);
-            for (SweepFile s : List.of(planform, twist)) {
+            for (Sweep s : List.of(planform, twist)) {
                 for (int j : jobs) {
                     measure(s, j, Math.min(3, seconds));
                 }
@@ -98,7 +99,7 @@ public final class SweepThroughput {
     }
 
     /** Runs batches of cases until the time is up; returns cases per second. */
-    private static double measure(SweepFile s, int jobs, double seconds) {
+    private static double measure(Sweep s, int jobs, double seconds) {
         List<String> names = RowFormat.columnNames(s);
         long[] sink = new long[1];
         long start = System.nanoTime();

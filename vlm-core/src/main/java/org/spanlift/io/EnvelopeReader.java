@@ -1,5 +1,7 @@
-package org.spanlift.loads;
+package org.spanlift.io;
 
+import org.spanlift.loads.Envelope;
+import org.spanlift.structure.EnvelopeSpec;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;

@@ -1,5 +1,7 @@
-package org.spanlift.section;
+package org.spanlift.io;
 
+import org.spanlift.section.CamberLines;
+import org.spanlift.input.InputException;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -11,9 +13,9 @@ import org.junit.jupiter.api.Test;
 /** Malformed coordinate files under src/test/resources/section: one-line messages with file, line and expectation. */
 class SectionFileErrorsTest {
 
-    private static SectionFileException refuse(String name, int line, String... fragments) {
+    private static InputException refuse(String name, int line, String... fragments) {
         Path file = Path.of("src/test/resources/section", name);
-        SectionFileException e = assertThrows(SectionFileException.class, () -> CamberLines.fromCoordinateFile(file));
+        InputException e = assertThrows(InputException.class, () -> CoordinateFileReader.read(file));
         String message = e.getMessage();
         assertFalse(message.contains("\n") || message.contains("\r"), "one line: " + message);
         assertTrue(message.startsWith(file + ":" + line + ": "), "file and line first: " + message);
@@ -22,7 +24,7 @@ class SectionFileErrorsTest {
             assertTrue(message.contains(fragment), "'" + fragment + "' in: " + message);
         }
         assertEquals(line, e.line());
-        assertEquals(file, e.file());
+        assertEquals(file.toString(), e.file());
         return e;
     }
 
@@ -69,13 +71,9 @@ class SectionFileErrorsTest {
     @Test
     void missingFile() {
         Path file = Path.of("src/test/resources/section/absent.dat");
-        SectionFileException e = assertThrows(SectionFileException.class, () -> CamberLines.fromCoordinateFile(file));
-        assertTrue(e.getMessage().startsWith(file + ": cannot be read"), e.getMessage());
-        assertTrue(e.getMessage().contains("; expected a readable"), e.getMessage());
-    }
-
-    @Test
-    void isAnIllegalArgumentException() {
-        assertTrue(IllegalArgumentException.class.isAssignableFrom(SectionFileException.class));
+        InputException e = assertThrows(InputException.class, () -> CoordinateFileReader.read(file));
+        assertTrue(e.getMessage().startsWith(file + ": no such file"), e.getMessage());
+        assertTrue(e.getMessage().contains("; expected the path of a text file of x y section coordinates"),
+                e.getMessage());
     }
 }

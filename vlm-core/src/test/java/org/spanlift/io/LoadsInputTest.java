@@ -1,5 +1,11 @@
-package org.spanlift.loads;
+package org.spanlift.io;
 
+import org.spanlift.loads.Envelope;
+import org.spanlift.loads.GustFormula;
+import org.spanlift.structure.EnvelopeSpec;
+import org.spanlift.structure.LoadCase;
+import org.spanlift.structure.MassTable;
+import org.spanlift.structure.WingStructure;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -10,7 +16,6 @@ import org.junit.jupiter.api.Test;
 import org.spanlift.atmosphere.StandardAtmosphere;
 import org.spanlift.geometry.Wing;
 import org.spanlift.input.InputException;
-import org.spanlift.io.WingFileReader;
 import org.spanlift.input.YamlParser;
 
 /** The structure section, cases and envelope files: what they accept and the one-line errors they give. */

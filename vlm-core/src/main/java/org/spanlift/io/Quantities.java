@@ -1,4 +1,4 @@
-package org.spanlift.loads;
+package org.spanlift.io;
 
 import org.spanlift.input.Field;
 import org.spanlift.input.quantity.Quantity;

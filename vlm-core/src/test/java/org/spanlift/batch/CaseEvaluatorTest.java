@@ -1,5 +1,8 @@
-package org.spanlift.sweep;
+package org.spanlift.batch;
 
+import org.spanlift.io.SweepFileReader;
+import org.spanlift.sweep.Sweep;
+import org.spanlift.sweep.SweepFixtures;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
@@ -35,13 +38,13 @@ class CaseEvaluatorTest {
               controls.aileron.from_eta]
             """;
 
-    private SweepFile sweep(String parameters) {
+    private Sweep sweep(String parameters) {
         SweepFixtures.write(dir, "w.wing.yaml", SweepFixtures.WING);
-        return SweepFile.read(SweepFixtures.write(dir, "s.sweep.yaml", "base: w.wing.yaml\nparameters:\n" + parameters
+        return SweepFileReader.read(SweepFixtures.write(dir, "s.sweep.yaml", "base: w.wing.yaml\nparameters:\n" + parameters
                 + "flight: {weight: 9000N, altitude: 1500m, flaps: 25}\n" + COLUMNS), false);
     }
 
-    private static Wing wingOf(SweepFile s, long index) {
+    private static Wing wingOf(Sweep s, long index) {
         YamlValue tree = s.baseTree();
         String[] v = s.design().values(index);
         for (int p = 0; p < v.length; p++) {
@@ -50,11 +53,11 @@ class CaseEvaluatorTest {
         return WingFileReader.fromTree(tree, s.basePath().toString());
     }
 
-    private static double value(SweepFile s, CaseResult r, String column) {
+    private static double value(Sweep s, CaseResult r, String column) {
         return (Double) cell(s, r, column);
     }
 
-    private static Object cell(SweepFile s, CaseResult r, String column) {
+    private static Object cell(Sweep s, CaseResult r, String column) {
         for (int i = 0; i < s.columns().size(); i++) {
             if (s.columns().get(i).name().equals(column)) {
                 return r.results()[i];
@@ -65,7 +68,7 @@ class CaseEvaluatorTest {
 
     @Test
     void agreesWithTheEngineEntryPoints() {
-        SweepFile s = sweep("""
+        Sweep s = sweep("""
                   surfaces.wing.stations[1].chord: [1.1, 1.4]
                   surfaces.wing.stations[2].twist: [-3, 0]
                 """);
@@ -119,7 +122,7 @@ class CaseEvaluatorTest {
 
     @Test
     void twistOnlyCasesReuseOneFactorizationAndGiveTheSameNumbers() {
-        SweepFile s = sweep("""
+        Sweep s = sweep("""
                   surfaces.wing.stations[2].twist: {from: -4, to: 0, step: 1}
                   surfaces.wing.controls.aileron.deflection: [0, 5]
                 """);
@@ -136,7 +139,7 @@ class CaseEvaluatorTest {
 
     @Test
     void aFailingCaseRecordsItsErrorAndTheNextOneRuns() {
-        SweepFile s = sweep("""
+        Sweep s = sweep("""
                   surfaces.wing.controls.flap.chord-fraction: [1.5, 0.3]
                 """);
         CaseEvaluator ev = new CaseEvaluator(s);

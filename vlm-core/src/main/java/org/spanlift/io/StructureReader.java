@@ -1,5 +1,8 @@
-package org.spanlift.loads;
+package org.spanlift.io;
 
+import org.spanlift.structure.MassTable;
+import org.spanlift.structure.PointMass;
+import org.spanlift.structure.WingStructure;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;

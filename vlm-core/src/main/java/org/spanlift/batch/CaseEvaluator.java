@@ -1,5 +1,10 @@
-package org.spanlift.sweep;
+package org.spanlift.batch;
 
+import org.spanlift.sweep.Constraint;
+import org.spanlift.sweep.Parameter;
+import org.spanlift.sweep.ParameterPath;
+import org.spanlift.sweep.ResultColumn;
+import org.spanlift.sweep.Sweep;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -42,7 +47,7 @@ public final class CaseEvaluator {
     /** Geometries kept per thread. */
     static final int CACHE_SIZE = 4;
 
-    private final SweepFile sweep;
+    private final Sweep sweep;
     private final String baseFile;
     private final List<ResultColumn> columns;
     private final boolean wantStall;
@@ -50,7 +55,7 @@ public final class CaseEvaluator {
     private final boolean wantSpeed;
     private final InfluenceCache cache = new InfluenceCache(CACHE_SIZE);
 
-    public CaseEvaluator(SweepFile sweep) {
+    public CaseEvaluator(Sweep sweep) {
         this.sweep = sweep;
         this.baseFile = sweep.basePath().toString();
         this.columns = sweep.columns();

@@ -1,4 +1,4 @@
-package org.spanlift.loads;
+package org.spanlift.structure;
 
 import java.util.List;
 import java.util.OptionalDouble;

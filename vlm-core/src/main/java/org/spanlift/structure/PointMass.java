@@ -1,4 +1,4 @@
-package org.spanlift.loads;
+package org.spanlift.structure;
 
 /**
  * A concentrated mass on the right half-wing, mirrored on the left (so the aircraft carries it twice), such

@@ -1,5 +1,9 @@
-package org.spanlift.sweep;
+package org.spanlift.io;
 
+import org.spanlift.io.SweepFileReader;
+import org.spanlift.sweep.ResultColumn;
+import org.spanlift.sweep.Sweep;
+import org.spanlift.sweep.SweepFixtures;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -15,10 +19,10 @@ class SweepFileTest {
     @TempDir
     Path dir;
 
-    private SweepFile read(String sweep, boolean force) {
+    private Sweep read(String sweep, boolean force) {
         SweepFixtures.write(dir, "t.wing.yaml", SweepFixtures.TRAPEZOID);
         SweepFixtures.write(dir, "w.wing.yaml", SweepFixtures.WING);
-        return SweepFile.read(SweepFixtures.write(dir, "s.sweep.yaml", sweep), force);
+        return SweepFileReader.read(SweepFixtures.write(dir, "s.sweep.yaml", sweep), force);
     }
 
     private InputException bad(String sweep) {
@@ -27,7 +31,7 @@ class SweepFileTest {
 
     @Test
     void readsAGridWithPointsAndRanking() {
-        SweepFile s = read("""
+        Sweep s = read("""
                 base: t.wing.yaml
                 parameters:
                   surfaces.wing.trapezoid.taper: [0.5, 0.75, 1.0]
@@ -119,9 +123,9 @@ class SweepFileTest {
         assertEquals("columns", e.field());
         assertTrue(e.problem().contains("cl-max") && e.problem().contains("main")
                 && e.problem().contains("assume-cl-max"), e.getMessage());
-        SweepFile s = read(sweep + "assume-cl-max: 1.3\n", false);
+        Sweep s = read(sweep + "assume-cl-max: 1.3\n", false);
         assertEquals(ResultColumn.ASSUMED_CL_MAX, s.columns().get(s.columns().size() - 1).name());
-        SweepFile given = read(sweep.replace("t.wing.yaml", "w.wing.yaml").replace("surfaces.wing.trapezoid.washout",
+        Sweep given = read(sweep.replace("t.wing.yaml", "w.wing.yaml").replace("surfaces.wing.trapezoid.washout",
                 "surfaces.wing.stations[2].twist"), false);
         assertEquals(1, given.columns().size());
     }

@@ -1,5 +1,6 @@
-package org.spanlift.sweep;
+package org.spanlift.batch;
 
+import org.spanlift.sweep.Parameter;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;

@@ -1,4 +1,4 @@
-package org.spanlift.sweep;
+package org.spanlift.io;
 
 import java.math.BigDecimal;
 import java.nio.charset.StandardCharsets;
@@ -24,27 +24,32 @@ import org.spanlift.geometry.Wing;
 import org.spanlift.input.Field;
 import org.spanlift.input.InputException;
 import org.spanlift.input.TextFile;
-import org.spanlift.io.WingFileReader;
 import org.spanlift.input.YamlParser;
 import org.spanlift.input.YamlValue;
 import org.spanlift.input.quantity.Quantity;
 import org.spanlift.input.quantity.QuantityFormatException;
 import org.spanlift.input.quantity.QuantityKind;
 import org.spanlift.lattice.LatticeBuilder;
+import org.spanlift.sweep.Constraint;
+import org.spanlift.sweep.Design;
+import org.spanlift.sweep.Parameter;
+import org.spanlift.sweep.ParameterPath;
+import org.spanlift.sweep.Ranking;
+import org.spanlift.sweep.ResultColumn;
+import org.spanlift.sweep.Sweep;
 import org.spanlift.stall.MissingSectionDataException;
 import org.spanlift.stall.StripLimits;
 
 /**
- * A sweep file ({@code .sweep.yaml}), read and checked: the base wing file, the swept parameters, the
- * design (full grid or Latin hypercube), the flight condition and points, the result columns, constraints
- * and ranking. Every problem is an {@link InputException} naming the file, line and field.
+ * Reads and checks a sweep file ({@code .sweep.yaml}) and its base wing file into a {@link Sweep}: the base
+ * wing, the swept parameters, the design (full grid or Latin hypercube), the flight condition and points,
+ * the result columns, constraints and ranking. Every problem is an {@link InputException} naming the file,
+ * line and field.
  */
-public final class SweepFile {
+public final class SweepFileReader {
 
     /** The largest design run without {@code --force}. */
     public static final long MAX_CASES_WITHOUT_FORCE = 10_000_000L;
-    /** The conservative cl_max of {@code assume-cl-max: true}, the same as the stall command's default. */
-    public static final double CONSERVATIVE_CL_MAX = 1.2;
 
     static final Set<String> TOP_KEYS = Set.of("base", "parameters", "design", "flight", "points", "columns",
             "constraints", "rank", "assume-cl-max");
@@ -54,39 +59,7 @@ public final class SweepFile {
     static final Set<String> POINT_KEYS = Set.of("alpha", "CL");
     static final Set<String> RANK_KEYS = Set.of("by", "order", "keep");
 
-    private final String file;
-    private final String baseName;
-    private final Path basePath;
-    private final YamlValue baseTree;
-    private final Wing baseWing;
-    private final List<Parameter> parameters;
-    private final Design design;
-    private final List<ResultColumn> columns;
-    private final List<Constraint> constraints;
-    private final Ranking ranking;
-    private final Optional<FlightCondition> condition;
-    private final OptionalDouble flapsDeg;
-    private final OptionalDouble assumeClMax;
-    private final String fingerprint;
-
-    private SweepFile(String file, String baseName, Path basePath, YamlValue baseTree, Wing baseWing,
-            List<Parameter> parameters, Design design, List<ResultColumn> columns, List<Constraint> constraints,
-            Ranking ranking, Optional<FlightCondition> condition, OptionalDouble flapsDeg, OptionalDouble assumeClMax,
-            String fingerprint) {
-        this.file = file;
-        this.baseName = baseName;
-        this.basePath = basePath;
-        this.baseTree = baseTree;
-        this.baseWing = baseWing;
-        this.parameters = List.copyOf(parameters);
-        this.design = design;
-        this.columns = List.copyOf(columns);
-        this.constraints = List.copyOf(constraints);
-        this.ranking = ranking;
-        this.condition = condition;
-        this.flapsDeg = flapsDeg;
-        this.assumeClMax = assumeClMax;
-        this.fingerprint = fingerprint;
+    private SweepFileReader() {
     }
 
     /**
@@ -94,7 +67,7 @@ public final class SweepFile {
      *
      * @param force allow designs of more than {@link #MAX_CASES_WITHOUT_FORCE} cases
      */
-    public static SweepFile read(Path path, boolean force) {
+    public static Sweep read(Path path, boolean force) {
         String file = path.toString();
         String text = TextFile.read(path, "sweep file");
         Field root = new Field(file, "", YamlParser.parse(text, file));
@@ -126,7 +99,7 @@ public final class SweepFile {
 
         Optional<Field> flight = root.optional("flight");
         flight.ifPresent(f -> f.allowOnly(FLIGHT_KEYS));
-        OptionalDouble weight = flight.flatMap(f -> f.optional("weight")).map(SweepFile::weight)
+        OptionalDouble weight = flight.flatMap(f -> f.optional("weight")).map(SweepFileReader::weight)
                 .map(OptionalDouble::of).orElse(OptionalDouble.empty());
         double altitude = flight.flatMap(f -> f.optional("altitude")).map(f -> quantity(f, QuantityKind.LENGTH))
                 .orElse(0.0);
@@ -210,7 +183,7 @@ public final class SweepFile {
         OptionalDouble assume = root.optional("assume-cl-max").map(a -> {
             if (a.value() instanceof YamlValue.Scalar s && s.plain()
                     && (s.text().equalsIgnoreCase("true") || s.text().equalsIgnoreCase("false"))) {
-                return a.bool() ? OptionalDouble.of(CONSERVATIVE_CL_MAX) : OptionalDouble.empty();
+                return a.bool() ? OptionalDouble.of(StripLimits.CONSERVATIVE_CL_MAX) : OptionalDouble.empty();
             }
             return OptionalDouble.of(a.inRange(0.3, 3));
         }).orElse(OptionalDouble.empty());
@@ -233,8 +206,8 @@ public final class SweepFile {
         if (stall && assume.isPresent()) {
             columns.add(ResultColumn.parse(ResultColumn.ASSUMED_CL_MAX, controls));
         }
-        return new SweepFile(file, baseName, basePath, baseTree, baseWing, parameters, design, columns, constraints,
-                ranking, condition, flaps, assume, fingerprint(text, baseText));
+        return new Sweep(file, baseName, basePath, baseTree, baseWing, parameters, design, columns, constraints,
+                Optional.ofNullable(ranking), condition, flaps, assume, fingerprint(text, baseText));
     }
 
 
@@ -242,7 +215,7 @@ public final class SweepFile {
         String pathText = p.path().substring("parameters.".length());
         ParameterPath path;
         try {
-            path = ParameterPath.parse(pathText);
+            path = ParameterPath.parse(pathText, WingSchema.ROOT);
         } catch (ParameterPath.PathException e) {
             throw p.error(e.getMessage());
         }
@@ -270,7 +243,7 @@ public final class SweepFile {
             Field toField = p.required("to", "the last value of the range");
             BigDecimal from = decimal(fromField);
             BigDecimal to = decimal(toField);
-            BigDecimal step = p.optional("step").map(SweepFile::decimal).orElse(null);
+            BigDecimal step = p.optional("step").map(SweepFileReader::decimal).orElse(null);
             if (step != null) {
                 Field stepField = p.required("step", "");
                 if (step.signum() == 0) {
@@ -457,68 +430,5 @@ public final class SweepFile {
         } catch (NoSuchAlgorithmException e) {
             throw new IllegalStateException("SHA-256 is missing from this Java runtime", e);
         }
-    }
-
-    /** The sweep file as given. */
-    public String file() {
-        return file;
-    }
-
-    /** The base wing file's name as written in the sweep file. */
-    public String baseName() {
-        return baseName;
-    }
-
-    /** The base wing file, resolved against the sweep file's folder. */
-    public Path basePath() {
-        return basePath;
-    }
-
-    public YamlValue baseTree() {
-        return baseTree;
-    }
-
-    public Wing baseWing() {
-        return baseWing;
-    }
-
-    public List<Parameter> parameters() {
-        return parameters;
-    }
-
-    public Design design() {
-        return design;
-    }
-
-    /** Every output column: those listed, those the constraints and ranking read, and the flag column. */
-    public List<ResultColumn> columns() {
-        return columns;
-    }
-
-    public List<Constraint> constraints() {
-        return constraints;
-    }
-
-    public Optional<Ranking> ranking() {
-        return Optional.ofNullable(ranking);
-    }
-
-    /** The flight condition, when a weight is given. */
-    public Optional<FlightCondition> condition() {
-        return condition;
-    }
-
-    /** The flap deflection for the flapped configuration, degrees (else the base file's). */
-    public OptionalDouble flapsDeg() {
-        return flapsDeg;
-    }
-
-    public OptionalDouble assumeClMax() {
-        return assumeClMax;
-    }
-
-    /** SHA-256 of the sweep file and the base wing file: a run's output belongs to this fingerprint. */
-    public String fingerprint() {
-        return fingerprint;
     }
 }

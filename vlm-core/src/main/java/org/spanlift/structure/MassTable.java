@@ -1,4 +1,4 @@
-package org.spanlift.loads;
+package org.spanlift.structure;
 
 /**
  * Mass per unit span of one half-wing, linear between rows, zero outside the first and last row.

@@ -1,4 +1,4 @@
-package org.spanlift.loads;
+package org.spanlift.structure;
 
 /**
  * One symmetric flight load case: the aircraft's weight and load factor at an equivalent airspeed. The

@@ -1,5 +1,6 @@
-package org.spanlift.loads;
+package org.spanlift.io;
 
+import org.spanlift.structure.LoadCase;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;

@@ -1,17 +1,31 @@
-package org.spanlift.section;
+package org.spanlift.io;
 
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
+import org.spanlift.section.CoordinateMeanLine;
+import org.spanlift.section.CubicSpline;
+import org.spanlift.input.InputException;
+import org.spanlift.input.TextFile;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 
-/** Reads a plain two-column x/y airfoil coordinate file and extracts its mean line. */
-final class CoordinateFileReader {
+/**
+ * Reads a plain two-column x/y airfoil coordinate file and extracts its mean line.
+ *
+ * <p>Format: one point per line, x and y separated by spaces, tabs or a comma, in chords. An optional
+ * first line gives the section's name (used as its designation; the file name otherwise). Blank lines and
+ * comments from {@code #} to the end of a line are ignored. The points either run as one contour (from the
+ * trailing edge over one surface round the leading edge and back along the other), or as two blocks, one
+ * per surface, each in either direction; a jump of x by more than half a chord separates the blocks.
+ *
+ * <p>Extraction: the leading edge is the point of minimum x, refined to the point farthest forward along
+ * the chord line it defines (the same point unless the section is inclined); the trailing edge is the
+ * midpoint of the two surfaces' ends. The coordinates are translated, derotated and scaled to unit chord,
+ * split there into the two surfaces, and the mean line is their midpoint at the same x. See
+ * {@link CoordinateMeanLine} for the interpolation and for its accuracy near the nose.
+ */
+public final class CoordinateFileReader {
 
     /** Fewest coordinate points accepted (both surfaces together). */
     static final int MIN_POINTS = 10;
@@ -35,15 +49,19 @@ final class CoordinateFileReader {
     private CoordinateFileReader() {
     }
 
-    static CoordinateMeanLine read(Path file) {
-        List<String> lines;
-        try {
-            lines = Files.readAllLines(file, StandardCharsets.UTF_8);
-        } catch (IOException | UncheckedIOException e) {
-            throw new SectionFileException(file, 0, "cannot be read (" + e.getClass().getSimpleName() + ")",
-                    "a readable UTF-8 text file of x y coordinates");
-        }
+    /**
+     * Reads a plain two-column x/y airfoil coordinate file and extracts its mean line.
+     *
+     * @throws InputException with a one-line message naming the file, the line and what is expected
+     */
+    public static CoordinateMeanLine read(Path file) {
+        List<String> lines = TextFile.read(file, "text file of x y section coordinates").lines().toList();
         return parse(file, lines);
+    }
+
+    /** A refusal: {@code FILE:LINE: problem; expected what}, or {@code FILE: ...} where no line applies. */
+    private static InputException refuse(Path file, int line, String problem, String expected) {
+        return new InputException(file.toString(), line, "", problem + "; expected " + expected);
     }
 
     static CoordinateMeanLine parse(Path file, List<String> lines) {
@@ -77,28 +95,28 @@ final class CoordinateFileReader {
                     sawContent = true;
                     continue;
                 }
-                throw new SectionFileException(file, lineNo, "'" + abbreviate(text) + "' is not a pair of numbers",
+                throw refuse(file, lineNo, "'" + abbreviate(text) + "' is not a pair of numbers",
                         "two numbers x y per line (a name is allowed on the first line only)");
             }
             sawContent = true;
             if (tokens.length == 1) {
-                throw new SectionFileException(file, lineNo, "only one column (" + abbreviate(tokens[0]) + ")",
+                throw refuse(file, lineNo, "only one column (" + abbreviate(tokens[0]) + ")",
                         "two columns x y");
             }
             if (tokens.length > 2) {
-                throw new SectionFileException(file, lineNo, tokens.length + " columns", "two columns x y");
+                throw refuse(file, lineNo, tokens.length + " columns", "two columns x y");
             }
             if (!Double.isFinite(values[0]) || !Double.isFinite(values[1])) {
-                throw new SectionFileException(file, lineNo,
+                throw refuse(file, lineNo,
                         (Double.isFinite(values[0]) ? "y is " + tokens[1] : "x is " + tokens[0]),
                         "finite numbers x y");
             }
             if (values[0] < X_MIN || values[0] > X_MAX) {
-                throw new SectionFileException(file, lineNo, "x = " + tokens[0] + " is outside -0.1 to 1.1",
+                throw refuse(file, lineNo, "x = " + tokens[0] + " is outside -0.1 to 1.1",
                         EXPECT_CHORDS);
             }
             if (Math.abs(values[1]) > Y_LIMIT) {
-                throw new SectionFileException(file, lineNo, "y = " + tokens[1] + " is outside -0.5 to 0.5",
+                throw refuse(file, lineNo, "y = " + tokens[1] + " is outside -0.5 to 0.5",
                         EXPECT_CHORDS);
             }
             int last = points.size() - 1;
@@ -112,7 +130,7 @@ final class CoordinateFileReader {
         }
         int n = points.size();
         if (n < MIN_POINTS) {
-            throw new SectionFileException(file, Math.max(lastLine, lines.size()),
+            throw refuse(file, Math.max(lastLine, lines.size()),
                     "only " + n + " coordinate point" + (n == 1 ? "" : "s") + " in the file",
                     "at least " + MIN_POINTS + " points covering both surfaces");
         }
@@ -139,7 +157,7 @@ final class CoordinateFileReader {
         for (int i = 1; i < n; i++) {
             if (Math.abs(x[i] - x[i - 1]) > BLOCK_JUMP) {
                 if (jump >= 0) {
-                    throw new SectionFileException(file, ln[i], "x jumps by more than half a chord a second time",
+                    throw refuse(file, ln[i], "x jumps by more than half a chord a second time",
                             EXPECT_CONTOUR);
                 }
                 jump = i;
@@ -149,7 +167,7 @@ final class CoordinateFileReader {
             return new Loop(x, y, ln);
         }
         if (jump < 4 || n - jump < 4) {
-            throw new SectionFileException(file, ln[jump < 4 ? 0 : jump],
+            throw refuse(file, ln[jump < 4 ? 0 : jump],
                     "a surface block of only " + Math.min(jump, n - jump) + " points", "at least 4 points per surface block");
         }
         // First block ordered trailing edge to leading edge, second leading edge to trailing edge.
@@ -228,7 +246,7 @@ final class CoordinateFileReader {
                 }
             }
             if (fore == 0 || fore == n - 1) {
-                throw new SectionFileException(file, ln[fore],
+                throw refuse(file, ln[fore],
                         "no leading edge: the foremost point is an end of the point sequence", EXPECT_CONTOUR);
             }
             double[] xi = new double[3];
@@ -304,7 +322,7 @@ final class CoordinateFileReader {
         }
         double gap = Math.hypot(x[0] - x[n - 1], y[0] - y[n - 1]);
         if (gap > MAX_TRAILING_EDGE_GAP * chord) {
-            throw new SectionFileException(file, ln[n - 1],
+            throw refuse(file, ln[n - 1],
                     String.format(Locale.ROOT, "the two surfaces end %.3g chords apart", gap / chord),
                     "both surfaces to end at the trailing edge");
         }
@@ -349,7 +367,7 @@ final class CoordinateFileReader {
 
     private static CubicSpline surface(Path file, int[] idx, double[] xn, double[] yn, int[] ln) {
         if (idx.length < 4) {
-            throw new SectionFileException(file, ln[idx[idx.length - 1]],
+            throw refuse(file, ln[idx[idx.length - 1]],
                     "a surface of only " + idx.length + " points from the leading edge", "at least 4 points per surface");
         }
         double[] s = new double[idx.length];
@@ -357,7 +375,7 @@ final class CoordinateFileReader {
         for (int k = 0; k < idx.length; k++) {
             int i = idx[k];
             if (k > 0 && !(xn[i] > xn[idx[k - 1]])) {
-                throw new SectionFileException(file, ln[i],
+                throw refuse(file, ln[i],
                         "x does not increase along the surface away from the leading edge",
                         "each surface to run from the leading edge to the trailing edge with x increasing");
             }
@@ -373,7 +391,7 @@ final class CoordinateFileReader {
             int i = idx[k];
             double s = Math.sqrt(Math.min(xn[i], 1.0));
             if (upper.value(s) - lower.value(s) < -CROSSING_TOLERANCE) {
-                throw new SectionFileException(file, ln[i],
+                throw refuse(file, ln[i],
                         String.format(Locale.ROOT, "the upper and lower surfaces cross near x = %.4f", xFile[i]),
                         "the upper surface above the lower surface over the whole chord");
             }
