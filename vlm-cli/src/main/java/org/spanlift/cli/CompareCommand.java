@@ -77,7 +77,7 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
             Wing wing = WingFileReader.read(files.get(i));
             WingAnalysis analysis = WingAnalysis.of(wing);
             double[] d = analysis.fileDeflections();
-            if (!(Math.abs(cl) < analysis.liftLine(d).slope())) {
+            if (!(Math.abs(cl) < analysis.liftCurve(d).slope())) {
                 throw new InputException(files.get(i).toString(), 0, "", "CL " + cl + " is beyond this wing's linear "
                         + "range");
             }

@@ -20,6 +20,7 @@ import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.output.Csv;
 import org.spanlift.cli.output.Json;
+import org.spanlift.cli.output.Results;
 import org.spanlift.cli.output.TextTable;
 import org.spanlift.geometry.Wing;
 import org.spanlift.input.InputException;
@@ -39,6 +40,8 @@ import org.spanlift.loads.SpanwiseLoads;
 import org.spanlift.io.StructureReader;
 import org.spanlift.structure.WingStructure;
 import org.spanlift.solve.WingAnalysis;
+import org.spanlift.vocabulary.Vocabulary;
+import org.spanlift.vocabulary.WingResult;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -148,7 +151,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         } else if (envelopeFile != null) {
             EnvelopeSpec es = EnvelopeReader.read(envelopeFile);
             double area = wing.reference().area();
-            envelope = Envelope.points(es, area, area / wing.reference().span(), loads.liftLine().slope());
+            envelope = Envelope.points(es, area, area / wing.reference().span(), loads.liftCurve().slope());
             cases = envelope.stream().map(Envelope.Point::loadCase).toList();
         } else {
             if (weight.isEmpty()) {
@@ -232,7 +235,8 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         s.put("point_masses", pm);
         s.put("half_wing_mass", loads.halfWingMass());
         root.put("structure", s);
-        root.put("reference", Map.of("area", wing.reference().area(), "span", wing.reference().span()));
+        Results.put(root, Vocabulary.select(Vocabulary.WING, "reference.area", "reference.span"),
+                new WingResult(loads.analysis(), loads.liftCurve()));
         List<Object> cs = new ArrayList<>();
         for (SpanwiseLoads l : results) {
             LoadCase c = l.loadCase();
@@ -273,7 +277,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
             Map<String, Object> e = new LinkedHashMap<>();
             e.put("note", ENVELOPE_NOTE);
             e.put("gust_formula", GUST_FORMULA);
-            e.put("lift_slope_per_rad_of_wing", loads.liftLine().slope());
+            e.put("lift_slope_per_rad_of_wing", loads.liftCurve().slope());
             List<Object> pts = new ArrayList<>();
             for (Envelope.Point p : envelope) {
                 Map<String, Object> m = new LinkedHashMap<>();
@@ -357,7 +361,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         b.append(t.render());
         if (envelope != null) {
             b.append('\n').append(StallCommand.wrap("Gust load factors: " + GUST_FORMULA + "; a = "
-                    + String.format(Locale.ROOT, "%.3f", loads.liftLine().slope()) + " per rad (the wing's own unless the "
+                    + String.format(Locale.ROOT, "%.3f", loads.liftCurve().slope()) + " per rad (the wing's own unless the "
                     + "envelope file gives lift-slope), c = S/b. " + ENVELOPE_NOTE)).append('\n');
         }
         b.append('\n').append(StallCommand.wrap(NO_STALL)).append('\n');

@@ -23,6 +23,7 @@ import org.spanlift.input.InputException;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.solve.WingAnalysis;
 import org.spanlift.stall.MissingSectionDataException;
+import org.spanlift.stall.StallStudy;
 import org.spanlift.stall.StallEstimate;
 
 import picocli.CommandLine.Command;
@@ -82,7 +83,7 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
             case SPAN_LOAD -> Plots.spanLoad(analysis, analysis.solve(spanLoadAlpha(analysis, deflections),
                     deflections));
             case LIFT -> Plots.liftCurve(analysis, deflections, range());
-            case POLAR -> Plots.polar(analysis, deflections, range(), flight.reynoldsPerMetre(wing));
+            case POLAR -> Plots.polar(analysis, deflections, range(), flight.reynoldsRule(wing));
             case STALL -> Plots.stallMap(analysis, stall(analysis, deflections));
         };
         FigureOutput.write(figure, format, output, spec.commandLine().getOut());
@@ -92,7 +93,7 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
     /** The stall-onset station to mark on the planform, when the sections allow an estimate. */
     private OptionalDouble stallStation(WingAnalysis analysis, double[] deflections) {
         try {
-            return OptionalDouble.of(StallCommand.evaluate("plot", analysis, deflections, clMax.assumed(),
+            return OptionalDouble.of(StallStudy.configuration("plot", analysis, deflections, clMax.assumed(),
                     flight.condition()).estimate().y());
         } catch (MissingSectionDataException e) {
             return OptionalDouble.empty();
@@ -101,7 +102,7 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
 
     private StallEstimate stall(WingAnalysis analysis, double[] deflections) {
         try {
-            return StallCommand.evaluate("plot", analysis, deflections, clMax.assumed(), flight.condition()).estimate();
+            return StallStudy.configuration("plot", analysis, deflections, clMax.assumed(), flight.condition()).estimate();
         } catch (MissingSectionDataException e) {
             throw new InputException(file.toString(), 0, "sections", e.getMessage());
         }
@@ -109,7 +110,7 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
 
     private double spanLoadAlpha(WingAnalysis analysis, double[] deflections) {
         if (alpha == null) {
-            return analysis.liftLine(deflections).alphaFor(DEFAULT_CL);
+            return analysis.liftCurve(deflections).alphaFor(DEFAULT_CL);
         }
         List<Double> one = AlphaList.parse(alpha);
         if (one.size() != 1) {

@@ -21,6 +21,7 @@ import org.spanlift.geometry.Wing;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.solve.WingAnalysis;
 import org.spanlift.stall.MissingSectionDataException;
+import org.spanlift.stall.StallStudy;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -80,13 +81,13 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
         WingSummary fine = WingSummary.of(file, fineWing, WingAnalysis.of(fineWing), deflections, cl);
         StallSummary stall;
         try {
-            StallCommand.Config c = StallCommand.evaluate("report", analysis, deflections, clMax.assumed(),
+            StallStudy.Configuration c = StallStudy.configuration("report", analysis, deflections, clMax.assumed(),
                     flight.condition());
             stall = StallSummary.of(c.estimate(), c.speed());
         } catch (MissingSectionDataException e) {
             stall = StallSummary.unavailable(e.getMessage());
         }
-        String html = ReportPage.build(summary, fine, stall, alphas, curve, flight.reynoldsPerMetre(wing),
+        String html = ReportPage.build(summary, fine, stall, alphas, curve, flight.reynoldsRule(wing),
                 new VersionProvider().getVersion()[0]);
         assert format == Format.HTML;
         output.write(html, spec.commandLine().getOut());

@@ -13,8 +13,8 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.concurrent.Callable;
-import java.util.function.DoubleUnaryOperator;
 
+import org.spanlift.solve.LiftCurve;
 import org.spanlift.atmosphere.Airspeed;
 import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.AlphaList;
@@ -25,7 +25,16 @@ import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.output.Csv;
 import org.spanlift.cli.output.Json;
 import org.spanlift.cli.output.TextTable;
+import org.spanlift.cli.output.Results;
 import org.spanlift.flight.FlightCondition;
+import org.spanlift.flight.FlightPoint;
+import org.spanlift.flight.ReynoldsRule;
+import org.spanlift.geometry.LengthUnit;
+import org.spanlift.input.RefusedException;
+import org.spanlift.vocabulary.Need;
+import org.spanlift.vocabulary.ResultKey;
+import org.spanlift.vocabulary.Vocabulary;
+import org.spanlift.vocabulary.WingResult;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Reference;
 import org.spanlift.geometry.Wing;
@@ -68,6 +77,15 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
             description = "Also write the per-strip span load of every point to this CSV file (SI units).")
     Path spanLoadFile;
 
+    /** The wing-level keys of the JSON output, in its order. */
+    private static final List<ResultKey<WingResult>> WING_KEYS = Vocabulary.select(Vocabulary.WING,
+            "reference.area", "reference.span", "reference.chord", "reference.aspect_ratio", "lattice.panels",
+            "lattice.strips", "lattice.unknowns", "lift_slope_per_rad", "lift_slope_per_deg", "zero_lift_angle_deg");
+
+    /** The point keys of the table, in its order. */
+    private static final List<ResultKey<FlightPoint>> TABLE_KEYS = Vocabulary.select(Vocabulary.POINT,
+            "alpha_deg", "CL", "CDi", "e", "Cm", "C_roll", "CD", "L_D");
+
     @Mixin
     OutputOptions output;
 
@@ -86,7 +104,7 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
      * flight options give for each point's CL) and dimensional circulation.
      */
     record Dimensions(Wing wing, AtmosphereState atmosphere, OptionalDouble equivalentSpeed,
-            DoubleUnaryOperator reynoldsPerMetre) {
+            ReynoldsRule reynolds) {
 
         /** The circulation scale: the true speed in m/s when given (circulation in m^2/s), else 1 (Gamma/V in m). */
         double circulationScale() {
@@ -94,8 +112,8 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
                     ? Airspeed.trueFromEquivalent(equivalentSpeed.getAsDouble(), atmosphere) : 1;
         }
 
-        OptionalDouble profileDrag(Solution s, double cl) {
-            return ProfileDrag.coefficient(s, wing, reynoldsPerMetre.applyAsDouble(cl));
+        FlightPoint point(Solution s) {
+            return FlightPoint.of(s, wing, reynolds);
         }
     }
 
@@ -111,7 +129,7 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         Optional<FlightCondition> condition = flight.condition();
         WingAnalysis analysis = WingAnalysis.of(wing);
         double[] deflections = analysis.deflections(overrides);
-        WingAnalysis.LiftLine line = analysis.liftLine(deflections);
+        LiftCurve line = analysis.liftCurve(deflections);
         List<Solution> points = new ArrayList<>();
         for (double a : alphas) {
             points.add(analysis.solve(Math.toRadians(a), deflections));
@@ -121,11 +139,11 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         }
         Optional<Level> level = Optional.empty();
         if (condition.isPresent() && eas.isPresent()) {
-            double cl = condition.get().requiredLift(wing.reference());
+            double cl = condition.get().requiredLiftCoefficient(wing.reference());
             level = Optional.of(new Level(condition.get(),
                     analysis.solve(alphaFor(line, cl, "--weight with --speed"), deflections)));
         }
-        Dimensions dims = new Dimensions(wing, atmosphere, eas, flight.reynoldsPerMetre(wing));
+        Dimensions dims = new Dimensions(wing, atmosphere, eas, flight.reynoldsRule(wing));
         String text = switch (format) {
             case JSON -> Json.write(json(wing, analysis, line, points, level, dims));
             case CSV -> csv(points, dims);
@@ -139,19 +157,15 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         return 0;
     }
 
-    private static double alphaFor(WingAnalysis.LiftLine line, double cl, String option) {
-        if (!Double.isFinite(cl) || Math.abs(cl) > 3) {
-            throw new InputException(option, 0, "", "expected a lift coefficient from -3 to 3, got " + cl);
+    private static double alphaFor(LiftCurve line, double cl, String option) {
+        try {
+            return line.alphaForTarget(cl);
+        } catch (RefusedException e) {
+            throw new InputException(option, 0, "", e.getMessage());
         }
-        double a = line.zeroLiftAngle() + Math.asin(Math.max(-1, Math.min(1, cl / line.slope())));
-        if (Math.abs(cl) >= line.slope() || Math.abs(Math.toDegrees(a)) > 30) {
-            throw new InputException(option, 0, "", String.format(Locale.ROOT,
-                    "CL %.3f needs an angle of attack beyond 30 degrees, outside linear theory", cl));
-        }
-        return a;
     }
 
-    private static Map<String, Object> json(Wing wing, WingAnalysis analysis, WingAnalysis.LiftLine line,
+    private static Map<String, Object> json(Wing wing, WingAnalysis analysis, LiftCurve line,
             List<Solution> points, Optional<Level> level, Dimensions dims) {
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("name", wing.name());
@@ -164,17 +178,13 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         units.put("altitude", "m, pressure altitude (geopotential, standard atmosphere)");
         root.put("units", units);
         Reference r = wing.reference();
-        Map<String, Object> ref = new LinkedHashMap<>();
-        ref.put("area", r.area());
-        ref.put("span", r.span());
-        ref.put("chord", r.chord());
-        ref.put("aspect_ratio", r.aspectRatio());
+        Results.put(root, WING_KEYS, new WingResult(analysis, line));
+        @SuppressWarnings("unchecked")
+        Map<String, Object> ref = (Map<String, Object>) root.get("reference");
         ref.put("moment_point", new double[] {r.momentPoint().x(), r.momentPoint().y(), r.momentPoint().z()});
-        root.put("reference", ref);
-        root.put("lattice", latticeJson(analysis));
-        root.put("lift_slope_per_rad", line.slope());
-        root.put("lift_slope_per_deg", line.slope() * Math.PI / 180);
-        root.put("zero_lift_angle_deg", Math.toDegrees(line.zeroLiftAngle()));
+        @SuppressWarnings("unchecked")
+        Map<String, Object> lat = (Map<String, Object>) root.get("lattice");
+        lat.put("solve", analysis.lattice().mirrored() ? "half span, symmetric and antisymmetric" : "full span");
         root.put("deflections_deg", deflectionsJson(wing, analysis.deflections(Map.of()), points));
         level.ifPresent(l -> {
             Map<String, Object> f = new LinkedHashMap<>();
@@ -198,21 +208,9 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
     }
 
     private static Map<String, Object> pointJson(Wing wing, Solution s, Dimensions dims) {
-        Coefficients c = s.coefficients();
+        FlightPoint point = dims.point(s);
         Map<String, Object> p = new LinkedHashMap<>();
-        p.put("alpha_deg", Math.toDegrees(s.alpha()));
-        p.put("CL", c.lift());
-        p.put("CDi", c.inducedDrag());
-        p.put("e", c.spanEfficiency());
-        p.put("Cm", c.pitchingMoment());
-        p.put("C_roll", c.rollingMoment());
-        OptionalDouble cdp = dims.profileDrag(s, c.lift());
-        if (cdp.isPresent()) {
-            double cd = c.inducedDrag() + cdp.getAsDouble();
-            p.put("CDp", cdp.getAsDouble());
-            p.put("CD", cd);
-            p.put("L_D", c.lift() / cd);
-        }
+        Results.put(p, pointKeys(point), point);
         p.put("span_load", spanLoadJson(s.spanLoad(0), dims.circulationScale()));
         if (wing.surfaces().size() > 1) {
             List<Object> surfaces = new ArrayList<>();
@@ -228,14 +226,10 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         return p;
     }
 
-    static Map<String, Object> latticeJson(WingAnalysis analysis) {
-        Map<String, Object> lat = new LinkedHashMap<>();
-        lat.put("panels", analysis.lattice().panelCount());
-        lat.put("strips", analysis.lattice().strips().size());
-        lat.put("unknowns", analysis.lattice().mirrored() ? analysis.lattice().halfCount()
-                : analysis.lattice().panelCount());
-        lat.put("solve", analysis.lattice().mirrored() ? "half span, symmetric and antisymmetric" : "full span");
-        return lat;
+    /** The point keys that apply: the profile-drag ones only where the sections give polars. */
+    private static List<ResultKey<FlightPoint>> pointKeys(FlightPoint point) {
+        return Vocabulary.POINT.stream().filter(k -> point.profileDrag().isPresent() || !k.needs(Need.POLARS))
+                .toList();
     }
 
     private static Map<String, Object> deflectionsJson(Wing wing, double[] fileDeflections, List<Solution> points) {
@@ -266,22 +260,12 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
 
     private static String csv(List<Solution> points, Dimensions dims) {
         boolean drag = ProfileDrag.available(dims.wing());
-        List<String> header = new ArrayList<>(List.of("alpha_deg", "CL", "CDi", "e", "Cm", "C_roll"));
-        if (drag) {
-            header.addAll(List.of("CDp", "CD", "L_D"));
-        }
-        Csv csv = new Csv(header);
+        List<ResultKey<FlightPoint>> keys = Vocabulary.POINT.stream().filter(k -> drag || !k.needs(Need.POLARS))
+                .toList();
+        Csv csv = new Csv(Vocabulary.names(keys));
         for (Solution s : points) {
-            Coefficients c = s.coefficients();
-            List<Object> row = new ArrayList<>(List.of(Math.toDegrees(s.alpha()), c.lift(), c.inducedDrag()));
-            row.add(c.spanEfficiency().isPresent() ? c.spanEfficiency().getAsDouble() : null);
-            row.add(c.pitchingMoment());
-            row.add(c.rollingMoment());
-            if (drag) {
-                double cdp = dims.profileDrag(s, c.lift()).getAsDouble();
-                row.addAll(List.of(cdp, c.inducedDrag() + cdp, c.lift() / (c.inducedDrag() + cdp)));
-            }
-            csv.row(row.toArray());
+            FlightPoint point = dims.point(s);
+            csv.row(keys.stream().map(k -> k.of(point)).toArray());
         }
         return csv.toString();
     }
@@ -302,7 +286,7 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         return csv.toString();
     }
 
-    private static String table(Wing wing, WingAnalysis analysis, WingAnalysis.LiftLine line, List<Solution> points,
+    private static String table(Wing wing, WingAnalysis analysis, LiftCurve line, List<Solution> points,
             Optional<Level> level, Dimensions dims) {
         String u = wing.displayUnit().symbol();
         double k = wing.displayUnit().metres();
@@ -339,26 +323,17 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
                 Math.toDegrees(l.solution().alpha()))));
         b.append('\n');
         boolean drag = ProfileDrag.available(wing);
-        List<String> headers = new ArrayList<>(List.of("alpha [deg]", "CL", "CDi", "e", "Cm", "C_roll"));
-        if (drag) {
-            headers.addAll(List.of("CD", "L/D"));
-        }
+        LengthUnit unit = wing.displayUnit();
+        List<ResultKey<FlightPoint>> keys = TABLE_KEYS.stream().filter(key -> drag || !key.needs(Need.POLARS)).toList();
+        List<String> headers = new ArrayList<>(keys.stream().map(key -> Results.label(key, unit)).toList());
         boolean several = wing.surfaces().size() > 1;
         if (several) {
             wing.surfaces().forEach(s -> headers.add("CL " + s.name()));
         }
         TextTable t = new TextTable(headers);
         for (Solution s : points) {
-            Coefficients c = s.coefficients();
-            List<String> row = new ArrayList<>(List.of(TextTable.fixed(Math.toDegrees(s.alpha()), 2),
-                    TextTable.fixed(c.lift(), 4), TextTable.fixed(c.inducedDrag(), 5),
-                    c.spanEfficiency().isPresent() ? TextTable.fixed(c.spanEfficiency().getAsDouble(), 4) : "-",
-                    TextTable.fixed(c.pitchingMoment(), 4), TextTable.fixed(c.rollingMoment(), 5)));
-            if (drag) {
-                double cd = c.inducedDrag() + dims.profileDrag(s, c.lift()).getAsDouble();
-                row.add(TextTable.fixed(cd, 5));
-                row.add(TextTable.fixed(c.lift() / cd, 1));
-            }
+            FlightPoint point = dims.point(s);
+            List<String> row = new ArrayList<>(keys.stream().map(key -> Results.cell(key, point, unit)).toList());
             if (several) {
                 for (int k2 = 0; k2 < wing.surfaces().size(); k2++) {
                     row.add(TextTable.fixed(s.coefficients(k2).lift(), 4));

@@ -5,6 +5,7 @@ import java.io.PrintWriter;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.input.InputException;
+import org.spanlift.input.RefusedException;
 import org.spanlift.solve.SingularSystemException;
 
 import picocli.CommandLine;
@@ -53,7 +54,7 @@ public final class SpanliftCommand implements Runnable {
                 err.println("spanlift: cannot solve this geometry: " + e.getMessage());
                 return EXIT_BAD_INPUT;
             }
-            if (e instanceof IllegalArgumentException) {
+            if (e instanceof RefusedException) {
                 err.println("spanlift: " + e.getMessage());
                 return EXIT_BAD_INPUT;
             }

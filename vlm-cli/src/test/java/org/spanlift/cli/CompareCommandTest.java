@@ -11,6 +11,7 @@ import java.util.Map;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.spanlift.solve.LiftCurve;
 import org.spanlift.cli.plot.SvgSupport;
 import org.spanlift.geometry.Wing;
 import org.spanlift.io.WingFileReader;
@@ -56,7 +57,7 @@ class CompareCommandTest {
         for (int i = 0; i < WINGS.size(); i++) {
             Wing wing = WingFileReader.read(Path.of(CliRun.demo(WINGS.get(i))));
             WingAnalysis a = WingAnalysis.of(wing);
-            WingAnalysis.LiftLine line = a.liftLine(a.fileDeflections());
+            LiftCurve line = a.liftCurve(a.fileDeflections());
             double alpha = line.alphaFor(0.6);
             Coefficients c = a.solve(alpha).coefficients();
             assertEquals(0.6, c.lift(), 1e-9, "solved at the common CL");

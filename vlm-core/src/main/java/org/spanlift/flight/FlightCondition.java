@@ -1,5 +1,6 @@
 package org.spanlift.flight;
 
+import org.spanlift.input.RefusedException;
 import java.util.Locale;
 import java.util.OptionalDouble;
 
@@ -31,7 +32,7 @@ public record FlightCondition(double weight, double loadFactor, AtmosphereState 
     }
 
     /** The lift the wing must carry, n W, in newtons. */
-    public double lift() {
+    public double liftForce() {
         return loadFactor * weight;
     }
 
@@ -48,17 +49,17 @@ public record FlightCondition(double weight, double loadFactor, AtmosphereState 
     }
 
     /** The CL that carries n W at the given speed. */
-    public double requiredLift(Reference reference) {
-        return lift() / (dynamicPressure() * reference.area());
+    public double requiredLiftCoefficient(Reference reference) {
+        return liftForce() / (dynamicPressure() * reference.area());
     }
 
     /** The equivalent airspeed (m/s) at which the wing carries n W at lift coefficient cl. */
     public double equivalentSpeedFor(double cl, Reference reference) {
         if (!(cl > 0)) {
-            throw new IllegalArgumentException(String.format(Locale.ROOT, "no speed carries the weight at a wing CL "
+            throw new RefusedException(String.format(Locale.ROOT, "no speed carries the weight at a wing CL "
                     + "of %.3f; a station reaches its cl_max before the wing lifts (check the twist and the "
                     + "deflections)", cl));
         }
-        return Math.sqrt(2 * lift() / (seaLevelDensity() * reference.area() * cl));
+        return Math.sqrt(2 * liftForce() / (seaLevelDensity() * reference.area() * cl));
     }
 }

@@ -36,7 +36,7 @@ public class InputException extends RuntimeException {
     }
 
     /** The text with line breaks, tabs and other control characters written as backslash escapes. */
-    static String oneLine(String s) {
+    public static String oneLine(String s) {
         StringBuilder b = new StringBuilder(s.length());
         for (int i = 0; i < s.length(); i++) {
             char c = s.charAt(i);

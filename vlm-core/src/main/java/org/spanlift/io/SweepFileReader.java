@@ -137,7 +137,7 @@ public final class SweepFileReader {
         for (Field c : columnsField.items()) {
             String name = c.text().trim();
             List<String> expanded = new ArrayList<>();
-            if (ResultColumn.POINT_KEYS.contains(name) && (!alphas.isEmpty() || !lifts.isEmpty())) {
+            if (ResultColumn.isPointKey(name) && (!alphas.isEmpty() || !lifts.isEmpty())) {
                 alphas.forEach(a -> expanded.add(name + "@alpha=" + Field.format(a)));
                 lifts.forEach(l -> expanded.add(name + "@CL=" + Field.format(l)));
             } else {
@@ -193,17 +193,17 @@ public final class SweepFileReader {
             columns.add(ResultColumn.parse(n, controls));
         }
         boolean stall = columns.stream().anyMatch(ResultColumn::needsClMax);
-        if (stall && condition.isEmpty() && columns.stream().anyMatch(c -> c.group() == ResultColumn.Group.STALL_SPEED)) {
+        if (stall && condition.isEmpty() && columns.stream().anyMatch(ResultColumn::needsWeight)) {
             throw columnsField.error("stall_speed columns need a weight: add flight: {weight: ...} (such as 1100kg)");
         }
-        if (columns.stream().anyMatch(c -> c.group() == ResultColumn.Group.STALL_FLAPS)
+        if (columns.stream().anyMatch(ResultColumn::needsFlaps)
                 && baseWing.controls().stream().noneMatch(c -> c.kind() == ControlKind.FLAP)) {
             throw columnsField.error("stall_flaps columns need a control of kind flap; the base wing has none");
         }
         if (stall && assume.isEmpty()) {
             requireClMax(columnsField, baseName, basePath, baseWing, baseTree, parameters, design);
         }
-        if (stall && assume.isPresent()) {
+        if (stall && assume.isPresent() && !names.contains(ResultColumn.ASSUMED_CL_MAX)) {
             columns.add(ResultColumn.parse(ResultColumn.ASSUMED_CL_MAX, controls));
         }
         return new Sweep(file, baseName, basePath, baseTree, baseWing, parameters, design, columns, constraints,

@@ -84,6 +84,15 @@ public final class WingFileReader {
 
     /** The second stage: a wing from a YAML tree (perhaps changed by a sweep). */
     public static Wing fromTree(YamlValue tree, String file) {
+        try {
+            return build(tree, file);
+        } catch (IllegalArgumentException e) {
+            // A rule the model enforces that the checks above did not catch: still the file's fault.
+            throw new InputException(file, 0, "", e.getMessage());
+        }
+    }
+
+    private static Wing build(YamlValue tree, String file) {
         Field root = new Field(file, "", tree);
         root.mapping();
         root.allowOnly(TOP_KEYS);

@@ -1,5 +1,6 @@
 package org.spanlift.lattice;
 
+import org.spanlift.input.RefusedException;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -146,7 +147,7 @@ public final class LatticeBuilder {
             double xc = (1 - f) * x0 + f * x1;
             double zc = (1 - f) * z0 + f * z1;
             if (!(cc > 0)) {
-                throw new IllegalArgumentException("zero chord at a control point, y = " + yc + " m");
+                throw new RefusedException("zero chord at a control point, y = " + yc + " m");
             }
             // normal: t = +x, spanwise edge s = (0, dy, dz); n = t x s normalised, pointing up
             double dy = y1 - y0;

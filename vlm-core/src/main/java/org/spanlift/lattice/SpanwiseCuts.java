@@ -1,5 +1,6 @@
 package org.spanlift.lattice;
 
+import org.spanlift.input.RefusedException;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -49,7 +50,7 @@ final class SpanwiseCuts {
         });
         int m = interior.size();
         if (m > n - 1) {
-            throw new IllegalArgumentException(
+            throw new RefusedException(
                     "needs at least " + (m + 1) + " strips to fit its " + m + " cut lines");
         }
         int[] fixedIndex = new int[m + 2];

@@ -1,5 +1,7 @@
 package org.spanlift.loads;
 
+import org.spanlift.solve.LiftCurve;
+import org.spanlift.input.RefusedException;
 import org.spanlift.structure.LoadCase;
 import org.spanlift.structure.PointMass;
 import org.spanlift.structure.WingStructure;
@@ -48,7 +50,7 @@ public final class LoadsAnalysis {
     private final double[][] spar;
     private final double[][] sparAxis;
     private final double distributedHalfMass;
-    private final WingAnalysis.LiftLine wingLine;
+    private final LiftCurve wingLine;
 
     private LoadsAnalysis(WingAnalysis analysis, WingStructure structure, double[] deflections) {
         this.analysis = analysis;
@@ -155,8 +157,13 @@ public final class LoadsAnalysis {
         return distributedHalfMass + structure.pointMassPerSide();
     }
 
+    /** The solved wing these loads come from. */
+    public WingAnalysis analysis() {
+        return analysis;
+    }
+
     /** The lift line of the wing's own panels (the first surface) at this analysis's deflections. */
-    public WingAnalysis.LiftLine liftLine() {
+    public LiftCurve liftCurve() {
         return wingLine;
     }
 
@@ -168,8 +175,8 @@ public final class LoadsAnalysis {
         double alpha;
         try {
             alpha = wingLine.alphaFor(cl);
-        } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("load case '" + c.name() + "' needs CL " + String.format(Locale.ROOT,
+        } catch (RefusedException e) {
+            throw new RefusedException("load case '" + c.name() + "' needs CL " + String.format(Locale.ROOT,
                     "%.3f", cl) + ", beyond the wing's linear range; check its weight, load factor and speed");
         }
         Solution s = analysis.solve(alpha, deflections);
@@ -237,7 +244,7 @@ public final class LoadsAnalysis {
         return out;
     }
 
-    private WingAnalysis.LiftLine wingLiftLine() {
+    private LiftCurve wingLiftLine() {
         Lattice lattice = analysis.lattice();
         BasisSolutions basis = analysis.basis();
         double x = 0;
@@ -255,7 +262,7 @@ public final class LoadsAnalysis {
             z += 2 * basis.alongZ(i) * ly;
         }
         double area = analysis.wing().reference().area();
-        return new WingAnalysis.LiftLine(Math.hypot(x, z) / area, Math.atan2(-x, z));
+        return new LiftCurve(Math.hypot(x, z) / area, Math.atan2(-x, z));
     }
 
     /**

@@ -1,7 +1,8 @@
 package org.spanlift.solve;
 
+import org.spanlift.input.RefusedException;
 /** The influence system cannot be solved reliably: the geometry is degenerate (crossing or coincident panels). */
-public final class SingularSystemException extends RuntimeException {
+public final class SingularSystemException extends RefusedException {
 
     private static final long serialVersionUID = 1L;
 

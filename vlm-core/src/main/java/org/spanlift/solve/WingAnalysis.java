@@ -125,7 +125,7 @@ public final class WingAnalysis {
      * The lift line of the wing at the given deflections: CL(alpha) = R sin(alpha - alpha0) exactly, with
      * the freestream (cos alpha, 0, sin alpha).
      */
-    public LiftLine liftLine(double[] deflections) {
+    public LiftCurve liftCurve(double[] deflections) {
         double x = 0;
         double z = 0;
         double s = wing.reference().area();
@@ -136,26 +136,6 @@ public final class WingAnalysis {
             x += 2 * basis.alongX(i, deflections) * ly;
             z += 2 * basis.alongZ(i) * ly;
         }
-        return new LiftLine(Math.hypot(x, z) / s, Math.atan2(-x, z));
-    }
-
-    /**
-     * CL against alpha: CL = slope sin(alpha - zeroLiftAngle), so {@code slope} is dCL/dalpha at zero lift
-     * (per radian) and {@code zeroLiftAngle} is in radians.
-     */
-    public record LiftLine(double slope, double zeroLiftAngle) {
-
-        /** CL at angle of attack alpha (rad). */
-        public double lift(double alpha) {
-            return slope * Math.sin(alpha - zeroLiftAngle);
-        }
-
-        /** The angle of attack (rad) for a target CL; refused when |CL| is beyond the slope. */
-        public double alphaFor(double cl) {
-            if (Math.abs(cl) >= slope) {
-                throw new IllegalArgumentException("CL " + cl + " is beyond this wing's linear range");
-            }
-            return zeroLiftAngle + Math.asin(cl / slope);
-        }
+        return new LiftCurve(Math.hypot(x, z) / s, Math.atan2(-x, z));
     }
 }

@@ -1,9 +1,10 @@
 package org.spanlift.stall;
 
+import org.spanlift.input.RefusedException;
 import java.util.List;
 
 /** Stall results were asked for, but some sections give no cl_max and no default was allowed. */
-public final class MissingSectionDataException extends RuntimeException {
+public final class MissingSectionDataException extends RefusedException {
 
     private static final long serialVersionUID = 1L;
 

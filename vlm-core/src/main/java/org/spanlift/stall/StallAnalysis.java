@@ -1,5 +1,7 @@
 package org.spanlift.stall;
 
+import org.spanlift.solve.LiftCurve;
+import org.spanlift.input.RefusedException;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -27,7 +29,7 @@ public final class StallAnalysis {
     private final WingAnalysis analysis;
     private final double[] deflections;
     private final StripLimits limits;
-    private final WingAnalysis.LiftLine line;
+    private final LiftCurve line;
     private final double semi;
     private final double[] a;
     private final double[] b;
@@ -38,7 +40,7 @@ public final class StallAnalysis {
         this.analysis = analysis;
         this.deflections = deflections.clone();
         this.limits = limits;
-        this.line = analysis.liftLine(deflections);
+        this.line = analysis.liftCurve(deflections);
         Lattice lattice = analysis.lattice();
         BasisSolutions basis = analysis.basis();
         Wing wing = analysis.wing();
@@ -112,7 +114,7 @@ public final class StallAnalysis {
             }
         }
         if (!Double.isFinite(alphaReach[first])) {
-            throw new IllegalArgumentException("no station reaches its cl_max in linear theory; check the section data");
+            throw new RefusedException("no station reaches its cl_max in linear theory; check the section data");
         }
         double alpha = alphaReach[first];
         double alpha0 = line.zeroLiftAngle();

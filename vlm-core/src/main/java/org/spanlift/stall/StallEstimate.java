@@ -29,6 +29,16 @@ public record StallEstimate(double lift, double alpha, double y, double eta, Str
         Optional<AileronMargin> aileronMargin, OptionalDouble halfSpanLift, List<StripStall> strips,
         boolean assumedClMax, boolean defaultFlapIncrement, Optional<ControlEnd> besideControlEnd) {
 
+    public StallEstimate {
+        strips = List.copyOf(strips);
+    }
+
+    /** The strip where stall starts (the right-hand one of a symmetric pair). */
+    public StripStall onsetStrip() {
+        return strips.stream().filter(s -> Math.abs(s.y() - y) < 1e-12).findFirst()
+                .orElseThrow(() -> new IllegalStateException("the onset station is not a strip"));
+    }
+
     /**
      * A side edge of a control beside the onset strip.
      *

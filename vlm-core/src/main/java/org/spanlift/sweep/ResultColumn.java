@@ -1,54 +1,46 @@
 package org.spanlift.sweep;
 
 import java.util.List;
-import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
+import org.spanlift.vocabulary.Need;
+import org.spanlift.vocabulary.ResultKey;
+import org.spanlift.vocabulary.Vocabulary;
+
 /**
- * A named scalar result of a case, by its key path in the {@code solve} or {@code stall} JSON output
- * ({@code lift_slope_per_rad}, {@code stall.eta}, {@code stall_speed.clean_eas}), with {@code @CL=0.5} or
- * {@code @alpha=4} for a value taken at a wing CL or an angle of attack (degrees), and control ends
- * ({@code controls.aileron.from_eta}). SI units, angles in degrees, as in the JSON outputs.
+ * A sweep's result column: a key of the {@link Vocabulary}, with {@code @CL=0.5} or {@code @alpha=4} for a
+ * value taken at a wing CL or an angle of attack (degrees), {@code stall.} or {@code stall_flaps.} before a
+ * stall-onset key, and {@code controls.NAME.} before a control's key. SI units, angles in degrees, as in the
+ * JSON outputs. An unknown name is refused, never defaulted.
  *
  * @param name     the column name as written
- * @param key      the key without the point suffix
- * @param group    what must be computed for it
+ * @param group    the vocabulary group the key belongs to, and for an onset which configuration
+ * @param key      the vocabulary key
  * @param control  the control named by a {@code controls.NAME.*} column, else null
  * @param atLift   for a point column: true at a CL, false at an angle of attack
  * @param at       for a point column: the CL, or the angle of attack in degrees
  */
-public record ResultColumn(String name, String key, Group group, String control, boolean atLift, double at) {
+public record ResultColumn(String name, Group group, ResultKey<?> key, String control, boolean atLift, double at) {
 
-    /** What a column needs computed. */
+    /** Where a column's value comes from. */
     public enum Group {
-        /** Lift slope, zero-lift angle, reference values: no section data needed. */
+        /** {@link Vocabulary#WING}. */
         WING,
-        /** A value at one flight point (CL or alpha). */
+        /** {@link Vocabulary#POINT}, at a CL or an angle of attack. */
         POINT,
-        /** Clean stall onset; needs cl-max. */
+        /** {@link Vocabulary#ONSET} of the clean configuration. */
         STALL,
-        /** Stall onset with the flaps deflected; needs cl-max. */
+        /** {@link Vocabulary#ONSET} with the flaps deflected. */
         STALL_FLAPS,
-        /** Stall speeds; need cl-max and a weight. */
-        STALL_SPEED,
-        /** A control's geometry. */
-        CONTROL,
-        /** A yes/no flag (assumed_cl_max). */
-        FLAG
+        /** {@link Vocabulary#STUDY}: flap increment, stall speeds, the assumed-cl_max flag. */
+        STUDY,
+        /** {@link Vocabulary#CONTROL}. */
+        CONTROL
     }
 
     /** The flag column added when a sweep assumes cl-max for sections that give none. */
     public static final String ASSUMED_CL_MAX = "assumed_cl_max";
-
-    static final List<String> WING_KEYS = List.of("lift_slope_per_rad", "lift_slope_per_deg", "zero_lift_angle_deg",
-            "reference.area", "reference.span", "reference.chord", "reference.aspect_ratio", "lattice.panels");
-    public static final List<String> POINT_KEYS = List.of("CL", "CDi", "e", "Cm", "C_roll", "alpha_deg");
-    static final List<String> STALL_KEYS = List.of("CL", "alpha_deg", "y", "eta", "aileron_margin.dcl",
-            "aileron_margin.y", "half_span_CL", "beside_control_end");
-    static final List<String> SPEED_KEYS = List.of("clean_eas", "clean_tas", "flaps_eas", "flaps_tas");
-    static final List<String> CONTROL_KEYS = List.of("from", "to", "from_eta", "to_eta", "chord_fraction",
-            "deflection_deg");
 
     private static final Pattern POINT = Pattern.compile("(.+)@(CL|alpha)=([-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][-+]?\\d+)?)");
     private static final Pattern CONTROL = Pattern.compile("controls\\.([^.]+)\\.([^.]+)");
@@ -62,6 +54,11 @@ public record ResultColumn(String name, String key, Group group, String control,
         }
     }
 
+    /** True for a key that {@link Vocabulary#POINT} declares (taken at a flight point). */
+    public static boolean isPointKey(String name) {
+        return Vocabulary.lookup(Vocabulary.POINT, name).isPresent();
+    }
+
     /**
      * Parses a column name.
      *
@@ -70,13 +67,13 @@ public record ResultColumn(String name, String key, Group group, String control,
      */
     public static ResultColumn parse(String name, List<String> controls) {
         String n = name.trim();
+        List<String> pointKeys = Vocabulary.names(Vocabulary.POINT);
         Matcher p = POINT.matcher(n);
         if (p.matches()) {
             String key = p.group(1);
-            if (!POINT_KEYS.contains(key)) {
-                throw new ColumnException("'" + key + "' is not a value taken at a flight point; with @CL= or @alpha= "
-                        + "use one of " + String.join(", ", POINT_KEYS));
-            }
+            ResultKey<?> k = Vocabulary.lookup(Vocabulary.POINT, key).orElseThrow(() -> new ColumnException("'" + key
+                    + "' is not a value taken at a flight point; with @CL= or @alpha= use one of "
+                    + String.join(", ", pointKeys)));
             boolean atLift = p.group(2).equals("CL");
             double at = Double.parseDouble(p.group(3));
             if (!atLift && Math.abs(at) > 30) {
@@ -85,42 +82,32 @@ public record ResultColumn(String name, String key, Group group, String control,
             if (atLift && Math.abs(at) > 4) {
                 throw new ColumnException("a target CL must lie within -4 to 4, got " + at);
             }
-            return new ResultColumn(n, key, Group.POINT, null, atLift, at);
+            return new ResultColumn(n, Group.POINT, k, null, atLift, at);
         }
         if (n.contains("@")) {
             throw new ColumnException("expected KEY@CL=NUMBER or KEY@alpha=NUMBER (degrees), got '" + n + "'");
         }
-        if (POINT_KEYS.contains(n)) {
+        if (isPointKey(n)) {
             throw new ColumnException("'" + n + "' is taken at a flight point: write " + n + "@CL=0.5 or " + n
                     + "@alpha=4, or list the points under 'points'");
         }
-        if (WING_KEYS.contains(n)) {
-            return new ResultColumn(n, n, Group.WING, null, false, 0);
+        var wing = Vocabulary.lookup(Vocabulary.WING, n);
+        if (wing.isPresent()) {
+            return new ResultColumn(n, Group.WING, wing.get(), null, false, 0);
         }
-        if (n.equals(ASSUMED_CL_MAX)) {
-            return new ResultColumn(n, n, Group.FLAG, null, false, 0);
+        var study = Vocabulary.lookup(Vocabulary.STUDY, n);
+        if (study.isPresent()) {
+            return new ResultColumn(n, Group.STUDY, study.get(), null, false, 0);
         }
-        if (n.equals("flap_increment_CL")) {
-            return new ResultColumn(n, n, Group.STALL_FLAPS, null, false, 0);
-        }
-        for (Map.Entry<String, Group> prefix : Map.of("stall.", Group.STALL, "stall_flaps.", Group.STALL_FLAPS)
-                .entrySet()) {
-            if (n.startsWith(prefix.getKey())) {
-                String rest = n.substring(prefix.getKey().length());
-                if (!STALL_KEYS.contains(rest)) {
-                    throw new ColumnException("unknown stall result '" + rest + "'; expected " + prefix.getKey()
-                            + "followed by one of " + String.join(", ", STALL_KEYS));
-                }
-                return new ResultColumn(n, n, prefix.getValue(), null, false, 0);
+        for (String prefix : List.of(Vocabulary.CLEAN, Vocabulary.FLAPS)) {
+            if (n.startsWith(prefix)) {
+                String rest = n.substring(prefix.length());
+                ResultKey<?> k = Vocabulary.lookup(Vocabulary.ONSET, rest).orElseThrow(() -> new ColumnException(
+                        "unknown stall result '" + rest + "'; expected " + prefix + "followed by one of "
+                                + String.join(", ", Vocabulary.names(Vocabulary.ONSET))));
+                return new ResultColumn(n, prefix.equals(Vocabulary.CLEAN) ? Group.STALL : Group.STALL_FLAPS, k, null,
+                        false, 0);
             }
-        }
-        if (n.startsWith("stall_speed.")) {
-            String rest = n.substring("stall_speed.".length());
-            if (!SPEED_KEYS.contains(rest)) {
-                throw new ColumnException("unknown stall speed '" + rest + "'; expected one of "
-                        + String.join(", ", SPEED_KEYS));
-            }
-            return new ResultColumn(n, n, Group.STALL_SPEED, null, false, 0);
         }
         Matcher c = CONTROL.matcher(n);
         if (c.matches()) {
@@ -128,20 +115,31 @@ public record ResultColumn(String name, String key, Group group, String control,
                 throw new ColumnException("the base wing has no control named '" + c.group(1) + "'; it has "
                         + (controls.isEmpty() ? "none" : String.join(", ", controls)));
             }
-            if (!CONTROL_KEYS.contains(c.group(2))) {
-                throw new ColumnException("unknown control value '" + c.group(2) + "'; expected one of "
-                        + String.join(", ", CONTROL_KEYS));
-            }
-            return new ResultColumn(n, c.group(2), Group.CONTROL, c.group(1), false, 0);
+            ResultKey<?> k = Vocabulary.lookup(Vocabulary.CONTROL, c.group(2)).orElseThrow(() -> new ColumnException(
+                    "unknown control value '" + c.group(2) + "'; expected one of "
+                            + String.join(", ", Vocabulary.names(Vocabulary.CONTROL))));
+            return new ResultColumn(n, Group.CONTROL, k, c.group(1), false, 0);
         }
-        throw new ColumnException("unknown result '" + n + "'; expected one of " + String.join(", ", WING_KEYS)
-                + "; a point value (" + String.join(", ", POINT_KEYS) + ") with @CL= or @alpha=; stall.* or stall_flaps.* ("
-                + String.join(", ", STALL_KEYS) + "); flap_increment_CL; stall_speed.* (" + String.join(", ", SPEED_KEYS)
-                + "); controls.NAME.* (" + String.join(", ", CONTROL_KEYS) + ")");
+        throw new ColumnException("unknown result '" + n + "'; expected one of "
+                + String.join(", ", Vocabulary.names(Vocabulary.WING)) + "; a point value ("
+                + String.join(", ", pointKeys) + ") with @CL= or @alpha=; stall.* or stall_flaps.* ("
+                + String.join(", ", Vocabulary.names(Vocabulary.ONSET)) + "); "
+                + String.join(", ", Vocabulary.names(Vocabulary.STUDY)) + "; controls.NAME.* ("
+                + String.join(", ", Vocabulary.names(Vocabulary.CONTROL)) + ")");
     }
 
     /** True for columns that need section cl-max data. */
     public boolean needsClMax() {
-        return group == Group.STALL || group == Group.STALL_FLAPS || group == Group.STALL_SPEED;
+        return key.needs(Need.CL_MAX);
+    }
+
+    /** True for columns of the flapped configuration. */
+    public boolean needsFlaps() {
+        return group == Group.STALL_FLAPS || key.needs(Need.FLAPS);
+    }
+
+    /** True for columns that need a weight (stall speeds). */
+    public boolean needsWeight() {
+        return key.needs(Need.WEIGHT);
     }
 }

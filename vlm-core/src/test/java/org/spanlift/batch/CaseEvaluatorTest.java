@@ -1,5 +1,6 @@
 package org.spanlift.batch;
 
+import org.spanlift.solve.LiftCurve;
 import org.spanlift.io.SweepFileReader;
 import org.spanlift.sweep.Sweep;
 import org.spanlift.sweep.SweepFixtures;
@@ -14,7 +15,7 @@ import java.util.OptionalDouble;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.spanlift.flight.FlightCondition;
-import org.spanlift.flight.StallSpeed;
+import org.spanlift.stall.StallSpeed;
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.Wing;
 import org.spanlift.io.WingFileReader;
@@ -80,7 +81,7 @@ class CaseEvaluatorTest {
             Wing wing = wingOf(s, i);
             WingAnalysis a = WingAnalysis.of(wing);
             double[] d = a.fileDeflections();
-            WingAnalysis.LiftLine line = a.liftLine(d);
+            LiftCurve line = a.liftCurve(d);
             assertEquals(line.slope(), value(s, r, "lift_slope_per_rad"), 1e-12 * line.slope());
             assertEquals(Math.toDegrees(line.zeroLiftAngle()), value(s, r, "zero_lift_angle_deg"), 1e-10);
             Coefficients c = a.solve(line.alphaFor(0.5), d).coefficients();

@@ -1,6 +1,5 @@
 package org.spanlift.io;
 
-import org.spanlift.io.SweepFileReader;
 import org.spanlift.sweep.ResultColumn;
 import org.spanlift.sweep.Sweep;
 import org.spanlift.sweep.SweepFixtures;

@@ -10,7 +10,6 @@ import java.util.OptionalDouble;
 import org.junit.jupiter.api.Test;
 import org.spanlift.atmosphere.StandardAtmosphere;
 import org.spanlift.flight.FlightCondition;
-import org.spanlift.flight.StallSpeed;
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.LatticeSpec;
@@ -94,7 +93,7 @@ class StallTrendsTest {
         WingAnalysis a = WingAnalysis.of(w);
         StripLimits limits = StripLimits.of(w, a.lattice(), a.fileDeflections(), OptionalDouble.empty());
         StallEstimate e = StallAnalysis.estimate(a, a.fileDeflections(), limits, 0);
-        double alpha = a.liftLine(a.fileDeflections()).zeroLiftAngle() + 1e-4;
+        double alpha = a.liftCurve(a.fileDeflections()).zeroLiftAngle() + 1e-4;
         var solution = a.solve(alpha);
         double cl = solution.coefficients().lift();
         var load = solution.spanLoad(0);

@@ -61,7 +61,7 @@ public final class ConvergenceStudy {
         static Values of(Wing wing) {
             WingAnalysis a = WingAnalysis.of(wing);
             double[] clean = {0, 0};
-            double slope = a.liftLine(clean).slope();
+            double slope = a.liftCurve(clean).slope();
             Solution s = a.solve(Measures.ALPHA, clean);
             Solution f = a.solve(Measures.ALPHA, new double[] {FLAP_DOWN, 0});
             double da = Math.toRadians(10);

@@ -22,13 +22,13 @@ public final class Measures {
     /** dCL/dalpha at zero lift, per radian, with the wing's own deflections. */
     public static double liftSlope(Wing wing) {
         WingAnalysis a = WingAnalysis.of(wing);
-        return a.liftLine(a.fileDeflections()).slope();
+        return a.liftCurve(a.fileDeflections()).slope();
     }
 
     /** The wing's zero-lift angle, degrees. */
     public static double zeroLiftAngleDeg(Wing wing) {
         WingAnalysis a = WingAnalysis.of(wing);
-        return Math.toDegrees(a.liftLine(a.fileDeflections()).zeroLiftAngle());
+        return Math.toDegrees(a.liftCurve(a.fileDeflections()).zeroLiftAngle());
     }
 
     /** Span efficiency at {@link #ALPHA}. */
@@ -45,7 +45,7 @@ public final class Measures {
     public static double flapEffectiveness(Wing wing) {
         double d = 1e-3;
         WingAnalysis a = WingAnalysis.of(wing);
-        return -Math.tan(a.liftLine(new double[] {d}).zeroLiftAngle()) / d;
+        return -Math.tan(a.liftCurve(new double[] {d}).zeroLiftAngle()) / d;
     }
 
     /**

@@ -36,7 +36,7 @@ class CamberAndFlapTest {
         for (int rows : new int[] {6, 24}) {
             Wing wing = Wings.rectangular(ASPECT_RATIO, "NACA 2412",
                     new LatticeSpec(24, rows, Spacing.COSINE, Spacing.COSINE));
-            double alpha0 = WingAnalysis.of(wing).liftLine(new double[0]).zeroLiftAngle();
+            double alpha0 = WingAnalysis.of(wing).liftCurve(new double[0]).zeroLiftAngle();
             assertEquals(Math.toDegrees(reference), Math.toDegrees(alpha0), 0.1, rows + " rows");
         }
     }
@@ -54,8 +54,8 @@ class CamberAndFlapTest {
     private static double zeroLiftAnglePerDeflection(LatticeSpec lattice) {
         WingAnalysis analysis = WingAnalysis.of(flappedWing(lattice));
         double delta = 1e-3;
-        double up = analysis.liftLine(new double[] {delta}).zeroLiftAngle();
-        double down = analysis.liftLine(new double[] {-delta}).zeroLiftAngle();
+        double up = analysis.liftCurve(new double[] {delta}).zeroLiftAngle();
+        double down = analysis.liftCurve(new double[] {-delta}).zeroLiftAngle();
         return (up - down) / (2 * delta);
     }
 

@@ -15,7 +15,7 @@ final class EngineChecks {
 
     /** dCL/dalpha at zero lift, per radian, with every control at zero. */
     static double liftSlope(WingAnalysis analysis) {
-        return analysis.liftLine(new double[analysis.wing().controls().size()]).slope();
+        return analysis.liftCurve(new double[analysis.wing().controls().size()]).slope();
     }
 
     static double liftSlope(Wing wing) {

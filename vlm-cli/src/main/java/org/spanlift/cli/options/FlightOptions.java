@@ -5,12 +5,12 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
-import java.util.function.DoubleUnaryOperator;
 
 import org.spanlift.atmosphere.Airspeed;
 import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.atmosphere.StandardAtmosphere;
 import org.spanlift.flight.FlightCondition;
+import org.spanlift.flight.ReynoldsRule;
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Wing;
@@ -164,25 +164,10 @@ public final class FlightOptions {
         return Optional.of(new FlightCondition(w.getAsDouble(), loadFactor(), atm, equivalentSpeed(atm)));
     }
 
-    /**
-     * rho V / mu (true speed) for a point of wing lift coefficient CL, for profile drag: at the speed given,
-     * else at the level-flight speed of that CL for the weight given, else 0 (polars at their lowest
-     * Reynolds number).
-     */
-    public DoubleUnaryOperator reynoldsPerMetre(Wing wing) {
+    /** The Reynolds-number rule of these options for the section polars (see {@link ReynoldsRule}). */
+    public ReynoldsRule reynoldsRule(Wing wing) {
         AtmosphereState atm = atmosphere();
-        double nu = atm.kinematicViscosity();
-        OptionalDouble eas = equivalentSpeed(atm);
-        if (eas.isPresent()) {
-            double perMetre = Airspeed.trueFromEquivalent(eas.getAsDouble(), atm) / nu;
-            return cl -> perMetre;
-        }
-        Optional<FlightCondition> fc = condition();
-        if (fc.isPresent()) {
-            return cl -> cl > 0 ? Airspeed.trueFromEquivalent(fc.get().equivalentSpeedFor(cl, wing.reference()), atm) / nu
-                    : 0;
-        }
-        return cl -> 0;
+        return ReynoldsRule.of(wing.reference(), atm, equivalentSpeed(atm), condition());
     }
 
     private static double quantity(String option, String text, QuantityKind kind) {

@@ -10,7 +10,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.OptionalDouble;
-import java.util.function.DoubleUnaryOperator;
 
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
@@ -19,6 +18,8 @@ import org.knowm.xchart.style.Styler.LegendLayout;
 import org.knowm.xchart.style.Styler.LegendPosition;
 import org.knowm.xchart.style.XYStyler;
 import org.knowm.xchart.style.markers.SeriesMarkers;
+import org.spanlift.flight.ReynoldsRule;
+import org.spanlift.solve.LiftCurve;
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.LengthUnit;
@@ -115,7 +116,7 @@ public final class Plots {
 
     /** CL against alpha at the given deflections. */
     public static ChartFigure liftCurve(WingAnalysis analysis, double[] deflections, List<Double> alphasDeg) {
-        WingAnalysis.LiftLine line = analysis.liftLine(deflections);
+        LiftCurve line = analysis.liftCurve(deflections);
         double[] a = toArray(alphasDeg);
         double[] cl = new double[a.length];
         for (int i = 0; i < a.length; i++) {
@@ -146,7 +147,7 @@ public final class Plots {
      *                         lowest Reynolds number)
      */
     public static ChartFigure polar(WingAnalysis analysis, double[] deflections, List<Double> alphasDeg,
-            DoubleUnaryOperator reynoldsPerMetre) {
+            ReynoldsRule reynoldsPerMetre) {
         Wing wing = analysis.wing();
         double[] a = toArray(alphasDeg);
         double[] cl = new double[a.length];
@@ -159,7 +160,7 @@ public final class Plots {
             cl[i] = co.lift();
             cd[i] = co.inducedDrag();
             if (profile) {
-                total[i] = cd[i] + ProfileDrag.coefficient(sol, wing, reynoldsPerMetre.applyAsDouble(cl[i])).getAsDouble();
+                total[i] = cd[i] + ProfileDrag.coefficient(sol, wing, reynoldsPerMetre.perMetre(cl[i])).getAsDouble();
             }
         }
         double ar = wing.reference().aspectRatio();
@@ -173,7 +174,7 @@ public final class Plots {
             rcd[i] = rcl[i] * rcl[i] / (Math.PI * ar);
         }
         String eText = "";
-        WingAnalysis.LiftLine line = analysis.liftLine(deflections);
+        LiftCurve line = analysis.liftCurve(deflections);
         if (0.5 < line.slope()) {
             var at = analysis.solve(line.alphaFor(0.5), deflections).coefficients();
             if (at.spanEfficiency().isPresent()) {

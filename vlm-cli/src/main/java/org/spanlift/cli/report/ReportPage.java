@@ -4,8 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
-import java.util.function.DoubleUnaryOperator;
 
+import org.spanlift.flight.ReynoldsRule;
 import org.spanlift.cli.plot.Figure;
 import org.spanlift.cli.plot.PlotKind;
 import org.spanlift.cli.plot.Plots;
@@ -36,7 +36,7 @@ public final class ReportPage {
      * @param version   the program version for the footer
      */
     public static String build(WingSummary summary, WingSummary fine, StallSummary stall, List<Double> alphasDeg,
-            List<Double> rangeDeg, DoubleUnaryOperator reynolds, String version) {
+            List<Double> rangeDeg, ReynoldsRule reynolds, String version) {
         Wing wing = summary.wing();
         WingAnalysis analysis = summary.analysis();
         LengthUnit u = wing.displayUnit();
@@ -83,7 +83,7 @@ public final class ReportPage {
      * map needs section cl-max data and is null without it.
      */
     static Figure figure(PlotKind kind, WingSummary s, StallSummary stall, List<Double> rangeDeg,
-            DoubleUnaryOperator reynolds) {
+            ReynoldsRule reynolds) {
         return switch (kind) {
             case STALL -> stall.estimate().map(e -> (Figure) Plots.stallMap(s.analysis(), e)).orElse(null);
             case PLANFORM -> Plots.planform(s.analysis(), stall.estimate()

@@ -2,7 +2,7 @@ package org.spanlift.cli.report;
 
 import java.util.Optional;
 
-import org.spanlift.flight.StallSpeed;
+import org.spanlift.stall.StallSpeed;
 import org.spanlift.stall.StallEstimate;
 
 /**

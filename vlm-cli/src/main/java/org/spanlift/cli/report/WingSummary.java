@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
 
+import org.spanlift.solve.LiftCurve;
 import org.spanlift.geometry.LatticeSpec;
 import org.spanlift.geometry.Surface;
 import org.spanlift.geometry.Wing;
@@ -22,12 +23,12 @@ import org.spanlift.solve.WingAnalysis;
  * @param spanLoadAtCl the solution there (for span-load plots)
  */
 public record WingSummary(Path file, Wing wing, WingAnalysis analysis, double[] deflections,
-        WingAnalysis.LiftLine line, double mac, double cl, double alphaAtCl, Coefficients atCl,
+        LiftCurve line, double mac, double cl, double alphaAtCl, Coefficients atCl,
         Solution spanLoadAtCl) {
 
     /** Solves the wing at its file lattice and the condition at lift coefficient {@code cl}. */
     public static WingSummary of(Path file, Wing wing, WingAnalysis analysis, double[] deflections, double cl) {
-        WingAnalysis.LiftLine line = analysis.liftLine(deflections);
+        LiftCurve line = analysis.liftCurve(deflections);
         double alpha = line.alphaFor(cl);
         Solution s = analysis.solve(alpha, deflections);
         return new WingSummary(file, wing, analysis, deflections.clone(), line, wing.main().meanAerodynamicChord(), cl,

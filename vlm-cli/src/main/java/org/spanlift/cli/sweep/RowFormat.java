@@ -139,7 +139,7 @@ public enum RowFormat {
             b.append("null");
         } else if (v instanceof Double d) {
             b.append(number(d));
-        } else if (v instanceof Long || v instanceof Boolean) {
+        } else if (v instanceof Long || v instanceof Integer || v instanceof Boolean) {
             b.append(v);
         } else if (v instanceof ParameterValue p) {
             if (JSON_NUMBER.matcher(p.text()).matches()) {

@@ -1,10 +1,9 @@
-package org.spanlift.flight;
+package org.spanlift.stall;
 
+import org.spanlift.input.RefusedException;
+import org.spanlift.flight.FlightCondition;
 import org.spanlift.atmosphere.Airspeed;
 import org.spanlift.solve.WingAnalysis;
-import org.spanlift.stall.StallAnalysis;
-import org.spanlift.stall.StallEstimate;
-import org.spanlift.stall.StripLimits;
 
 /**
  * The stall speed of a flight condition from the critical-section estimate of stall-onset CL, with the
@@ -36,7 +35,7 @@ public record StallSpeed(double equivalent, double trueSpeed, StallEstimate esti
             }
             vt = next;
         }
-        throw new IllegalArgumentException("the stall speed and the Reynolds numbers did not settle; "
+        throw new RefusedException("the stall speed and the Reynolds numbers did not settle; "
                 + "check the cl-max table against Reynolds number");
     }
 }

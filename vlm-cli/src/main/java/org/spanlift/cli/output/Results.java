@@ -1,0 +1,124 @@
+package org.spanlift.cli.output;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.spanlift.geometry.LengthUnit;
+import org.spanlift.vocabulary.ResultKey;
+
+/**
+ * Writes vocabulary results: into JSON trees (a dotted key nests, and an object whose values are all
+ * absent is written as null), as flat rows, and as table cells in the wing file's length unit. Every
+ * writer that shows a result goes through here, so the key, its unit and its table label come from the
+ * vocabulary alone.
+ */
+public final class Results {
+
+    private Results() {
+    }
+
+    /**
+     * Puts each key's value into {@code tree} under its dotted key, nesting objects (in key order).
+     *
+     * @param tree the JSON object to fill (modified)
+     */
+    public static <S> void put(Map<String, Object> tree, List<ResultKey<S>> keys, S source) {
+        put(tree, keys, source, "");
+    }
+
+    /** As {@link #put(Map, List, Object)}, each key after {@code prefix} ({@code "stall."}). */
+    public static <S> void put(Map<String, Object> tree, List<ResultKey<S>> keys, S source, String prefix) {
+        for (ResultKey<S> k : keys) {
+            nest(tree, prefix + k.key(), k.of(source));
+        }
+        collapse(tree);
+    }
+
+    /** The values as a flat map, dotted key to value (for flat JSON objects and CSV rows). */
+    public static <S> Map<String, Object> flat(List<ResultKey<S>> keys, S source, String prefix) {
+        Map<String, Object> out = new LinkedHashMap<>();
+        for (ResultKey<S> k : keys) {
+            out.put(prefix + k.key(), k.of(source));
+        }
+        return out;
+    }
+
+    @SuppressWarnings("unchecked")
+    private static void nest(Map<String, Object> tree, String dotted, Object value) {
+        String[] parts = dotted.split("\\.");
+        Map<String, Object> m = tree;
+        for (int i = 0; i < parts.length - 1; i++) {
+            Object child = m.get(parts[i]);
+            if (!(child instanceof Map)) {
+                child = new LinkedHashMap<String, Object>();
+                m.put(parts[i], child);
+            }
+            m = (Map<String, Object>) child;
+        }
+        m.put(parts[parts.length - 1], value);
+    }
+
+    /** Replaces every nested object whose leaves are all null by null. Returns true when all of tree's are. */
+    @SuppressWarnings("unchecked")
+    private static boolean collapse(Map<String, Object> tree) {
+        boolean allNull = true;
+        for (Map.Entry<String, Object> e : new ArrayList<>(tree.entrySet())) {
+            Object v = e.getValue();
+            if (v instanceof Map<?, ?> child) {
+                if (collapse((Map<String, Object>) child) && !child.isEmpty()) {
+                    tree.put(e.getKey(), null);
+                } else {
+                    allNull = false;
+                }
+            } else if (v != null) {
+                allNull = false;
+            }
+        }
+        return allNull;
+    }
+
+    /** The table label of a key, with its unit in the display length unit: {@code alpha [deg]}. */
+    public static String label(ResultKey<?> key, LengthUnit unit) {
+        String u = unit(key, unit);
+        return u.isEmpty() ? key.label() : key.label() + " [" + u + "]";
+    }
+
+    /** A key's unit as tables show it (lengths in the file's unit; nothing for ratios, counts and names). */
+    public static String unit(ResultKey<?> key, LengthUnit unit) {
+        return switch (key.unit()) {
+            case METRE -> unit.symbol();
+            case SQUARE_METRE -> unit.symbol() + "^2";
+            case NONE, COUNT, FLAG, TEXT -> "";
+            case PER_RADIAN -> "/rad";
+            case PER_DEGREE -> "/deg";
+            default -> key.unit().symbol();
+        };
+    }
+
+    /** A value in the table's units: lengths and areas in the display unit; other units as they are. */
+    public static double display(ResultKey<?> key, double si, LengthUnit unit) {
+        return switch (key.unit()) {
+            case METRE -> si / unit.metres();
+            case SQUARE_METRE -> si / (unit.metres() * unit.metres());
+            default -> si;
+        };
+    }
+
+    /** A table cell: the value in display units with the key's decimals, text as it is, "-" where absent. */
+    public static <S> String cell(ResultKey<S> key, S source, LengthUnit unit) {
+        return cellOf(key, key.of(source), unit);
+    }
+
+    /** A table cell of a value already read. */
+    public static String cellOf(ResultKey<?> key, Object value, LengthUnit unit) {
+        if (value == null) {
+            return "-";
+        }
+        if (value instanceof Double d) {
+            return TextTable.fixed(display(key, d, unit), key.decimals());
+        }
+        return String.valueOf(value);
+    }
+}

@@ -1,0 +1,225 @@
+package org.spanlift.vocabulary;
+
+import static org.spanlift.vocabulary.ResultUnit.COUNT;
+import static org.spanlift.vocabulary.ResultUnit.DEGREE;
+import static org.spanlift.vocabulary.ResultUnit.FLAG;
+import static org.spanlift.vocabulary.ResultUnit.METRE;
+import static org.spanlift.vocabulary.ResultUnit.METRE_PER_SECOND;
+import static org.spanlift.vocabulary.ResultUnit.NONE;
+import static org.spanlift.vocabulary.ResultUnit.PER_DEGREE;
+import static org.spanlift.vocabulary.ResultUnit.PER_RADIAN;
+import static org.spanlift.vocabulary.ResultUnit.SQUARE_METRE;
+import static org.spanlift.vocabulary.ResultUnit.TEXT;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.Set;
+import java.util.function.Function;
+
+import org.spanlift.flight.FlightPoint;
+import org.spanlift.lattice.Lattice;
+import org.spanlift.stall.StallEstimate;
+import org.spanlift.stall.StallSpeed;
+import org.spanlift.stall.StallStudy;
+
+/**
+ * Every scalar result a user can ask for, declared once: key, SI unit, table label, description and how it
+ * is obtained. The JSON, CSV and table writers, the sweep's columns, {@code compare} and {@code report} all
+ * take their keys from here. Lengths in metres, angles in degrees (the key says so), speeds in m/s.
+ *
+ * <p>The results come in groups by their source:
+ * <ul>
+ * <li>{@link #WING}: the wing at its deflections (reference values, lattice, lift curve);</li>
+ * <li>{@link #POINT}: one flight point, named in a sweep with {@code @CL=} or {@code @alpha=}
+ * ({@code e@CL=0.5});</li>
+ * <li>{@link #ONSET}: a stall onset, under {@link #CLEAN} ({@code stall.eta}) or {@link #FLAPS}
+ * ({@code stall_flaps.CL});</li>
+ * <li>{@link #STUDY}: the clean-and-flapped stall study (flap increment, stall speeds);</li>
+ * <li>{@link #CONTROL}: a control's geometry, under {@code controls.NAME.}.</li>
+ * </ul>
+ *
+ * <p>Adding a result is one declaration in its group, plus its test.
+ */
+public final class Vocabulary {
+
+    /** The prefix of the clean configuration's onset keys. */
+    public static final String CLEAN = "stall.";
+    /** The prefix of the flapped configuration's onset keys. */
+    public static final String FLAPS = "stall_flaps.";
+    /** The prefix of a control's keys, followed by its name and a dot. */
+    public static final String CONTROLS = "controls.";
+
+    private static final Set<Need> CL_MAX = Set.of(Need.CL_MAX);
+    private static final Set<Need> POLARS = Set.of(Need.POLARS);
+
+    /** The wing at its deflections. */
+    public static final List<ResultKey<WingResult>> WING = List.of(
+            key("reference.area", SQUARE_METRE, "reference area", "reference area, both halves", 3,
+                    w -> w.analysis().wing().reference().area()),
+            key("reference.span", METRE, "reference span", "reference span, tip to tip", 3,
+                    w -> w.analysis().wing().reference().span()),
+            key("reference.chord", METRE, "reference chord", "reference chord of the pitching moment", 3,
+                    w -> w.analysis().wing().reference().chord()),
+            key("reference.aspect_ratio", NONE, "aspect ratio", "span squared over reference area", 3,
+                    w -> w.analysis().wing().reference().aspectRatio()),
+            key("mean_aerodynamic_chord", METRE, "mean aerodynamic chord",
+                    "mean aerodynamic chord of the first surface", 3,
+                    w -> w.analysis().wing().main().meanAerodynamicChord()),
+            key("lattice.panels", COUNT, "panels", "panels of the whole lattice, both halves", 0,
+                    w -> w.analysis().lattice().panelCount()),
+            key("lattice.strips", COUNT, "strips", "strips of the whole lattice, both halves", 0,
+                    w -> w.analysis().lattice().strips().size()),
+            key("lattice.unknowns", COUNT, "unknowns", "size of each influence system solved", 0,
+                    w -> unknowns(w.analysis().lattice())),
+            key("lift_slope_per_rad", PER_RADIAN, "lift slope", "dCL/dalpha at zero lift, per radian", 4,
+                    w -> w.curve().slope()),
+            key("lift_slope_per_deg", PER_DEGREE, "lift slope", "dCL/dalpha at zero lift, per degree", 5,
+                    w -> w.curve().slope() * Math.PI / 180),
+            key("zero_lift_angle_deg", DEGREE, "zero-lift angle", "angle of attack of zero wing lift", 3,
+                    w -> Math.toDegrees(w.curve().zeroLiftAngle())));
+
+    /** One flight point. */
+    public static final List<ResultKey<FlightPoint>> POINT = List.of(
+            key("alpha_deg", DEGREE, "alpha", "angle of attack", 2, p -> Math.toDegrees(p.alpha())),
+            key("CL", NONE, "CL", "lift coefficient of the whole configuration", 4, p -> p.coefficients().lift()),
+            key("CDi", NONE, "CDi", "induced drag coefficient (Trefftz plane)", 5,
+                    p -> p.coefficients().inducedDrag()),
+            key("e", NONE, "e", "span efficiency CL^2/(pi A CDi); absent where |CL| < 0.05", 4,
+                    p -> boxed(p.coefficients().spanEfficiency())),
+            key("Cm", NONE, "Cm", "pitching moment coefficient about the moment point, positive nose-up", 4,
+                    p -> p.coefficients().pitchingMoment()),
+            key("C_roll", NONE, "C_roll", "rolling moment coefficient on q S b, positive right wing down", 5,
+                    p -> p.coefficients().rollingMoment()),
+            key("CDp", NONE, "CDp", "profile drag coefficient (strip integration of the section polars)", 5,
+                    POLARS, p -> boxed(p.profileDrag())),
+            key("CD", NONE, "CD", "drag coefficient, CDi + CDp", 5, POLARS, p -> boxed(p.drag())),
+            key("L_D", NONE, "L/D", "lift over drag, CL / CD", 1, POLARS, p -> boxed(p.liftToDrag())));
+
+    /** A stall onset (critical-section method, linear theory). */
+    public static final List<ResultKey<StallEstimate>> ONSET = List.of(
+            key("CL", NONE, "wing CL at onset", "wing CL at stall onset", 3, CL_MAX, StallEstimate::lift),
+            key("alpha_deg", DEGREE, "alpha at onset", "angle of attack at stall onset", 2, CL_MAX,
+                    e -> Math.toDegrees(e.alpha())),
+            key("y", METRE, "onset station y", "spanwise station where stall starts", 3, CL_MAX, StallEstimate::y),
+            key("eta", NONE, "onset station eta", "that station over the semi-span", 3, CL_MAX,
+                    StallEstimate::eta),
+            key("section", TEXT, "section there", "the section nearest to the onset station", 0, CL_MAX,
+                    StallEstimate::section),
+            key("section_alpha_deg", DEGREE, "  its angle of attack",
+                    "the onset section's effective angle of attack", 2, CL_MAX,
+                    e -> Math.toDegrees(e.onsetStrip().sectionAngle())),
+            key("aileron_margin.dcl", NONE, "aileron margin dcl",
+                    "least cl_max - cl over the aileron span at onset", 3, CL_MAX,
+                    e -> e.aileronMargin().map(m -> (Object) m.dcl()).orElse(null)),
+            key("aileron_margin.y", METRE, "  at y", "where that least aileron margin is", 3, CL_MAX,
+                    e -> e.aileronMargin().map(m -> (Object) Math.abs(m.y())).orElse(null)),
+            key("half_span_CL", NONE, "CL with half span at cl_max",
+                    "wing CL at which half the span has reached cl_max (linear theory)", 3, CL_MAX,
+                    e -> boxed(e.halfSpanLift())),
+            key("assumed_cl_max", FLAG, "cl_max assumed", "true when some section's cl_max was assumed", 0,
+                    CL_MAX, StallEstimate::assumedClMax),
+            key("default_flap_increment", FLAG, "default flap increment",
+                    "true when a flapped strip used the handbook default cl_max increment", 0, CL_MAX,
+                    StallEstimate::defaultFlapIncrement),
+            key("beside_control_end.control", TEXT, "onset beside the end of",
+                    "the deflected control whose end the onset strip touches (lattice-sensitive onset)", 0,
+                    CL_MAX, e -> e.besideControlEnd().map(c -> (Object) c.control()).orElse(null)),
+            key("beside_control_end.y", METRE, "  that end at y", "the y of that control end", 3, CL_MAX,
+                    e -> e.besideControlEnd().map(c -> (Object) c.y()).orElse(null)),
+            key("beside_control_end.first_on_control.CL", NONE, "  first on the control at CL",
+                    "the wing CL at which a strip on that control itself first reaches cl_max", 3, CL_MAX,
+                    e -> e.besideControlEnd().flatMap(StallEstimate.ControlEnd::firstOnControl)
+                            .map(f -> (Object) f.lift()).orElse(null)),
+            key("beside_control_end.first_on_control.y", METRE, "  at y", "that strip's y", 3, CL_MAX,
+                    e -> e.besideControlEnd().flatMap(StallEstimate.ControlEnd::firstOnControl)
+                            .map(f -> (Object) Math.abs(f.y())).orElse(null)));
+
+    /** The clean-and-flapped stall study. */
+    public static final List<ResultKey<StallStudy>> STUDY = List.of(
+            key("flap_increment_CL", NONE, "flap increment of onset CL",
+                    "how much the flaps raise the stall-onset CL", 3, Set.of(Need.CL_MAX, Need.FLAPS),
+                    s -> boxed(s.flapIncrement())),
+            key("stall_speed.clean_eas", METRE_PER_SECOND, "stall speed clean EAS",
+                    "stall speed clean, equivalent airspeed, at the onset CL (wing alone)", 2,
+                    Set.of(Need.CL_MAX, Need.WEIGHT), s -> speed(Optional.of(s.clean()), StallSpeed::equivalent)),
+            key("stall_speed.clean_tas", METRE_PER_SECOND, "stall speed clean TAS",
+                    "stall speed clean, true airspeed", 2, Set.of(Need.CL_MAX, Need.WEIGHT),
+                    s -> speed(Optional.of(s.clean()), StallSpeed::trueSpeed)),
+            key("stall_speed.flaps_eas", METRE_PER_SECOND, "stall speed flaps EAS",
+                    "stall speed with flaps, equivalent airspeed, at the onset CL (wing alone)", 2,
+                    Set.of(Need.CL_MAX, Need.FLAPS, Need.WEIGHT), s -> speed(s.flaps(), StallSpeed::equivalent)),
+            key("stall_speed.flaps_tas", METRE_PER_SECOND, "stall speed flaps TAS",
+                    "stall speed with flaps, true airspeed", 2, Set.of(Need.CL_MAX, Need.FLAPS, Need.WEIGHT),
+                    s -> speed(s.flaps(), StallSpeed::trueSpeed)),
+            key("assumed_cl_max", FLAG, "cl_max assumed",
+                    "true when some section's cl_max was assumed, clean or with flaps", 0, CL_MAX,
+                    StallStudy::assumedClMax));
+
+    /** A control's geometry. */
+    public static final List<ResultKey<ControlGeometry>> CONTROL = List.of(
+            key("from", METRE, "inner end y", "the control's inner end", 3, c -> c.control().from()),
+            key("to", METRE, "outer end y", "the control's outer end", 3, c -> c.control().to()),
+            key("from_eta", NONE, "inner end eta", "the inner end over the semi-span", 3,
+                    c -> c.control().from() / c.semiSpan()),
+            key("to_eta", NONE, "outer end eta", "the outer end over the semi-span", 3,
+                    c -> c.control().to() / c.semiSpan()),
+            key("chord_fraction", NONE, "chord fraction", "the control's chord over the local chord", 3,
+                    c -> c.control().chordFraction()),
+            key("deflection_deg", DEGREE, "deflection", "the file's deflection, trailing edge down", 2,
+                    c -> Math.toDegrees(c.control().deflection())));
+
+    private Vocabulary() {
+    }
+
+    /**
+     * The key named {@code name} in a group.
+     *
+     * @throws IllegalArgumentException when the group has no such key (a writer's mistake, not the user's)
+     */
+    public static <S> ResultKey<S> find(List<ResultKey<S>> group, String name) {
+        return lookup(group, name).orElseThrow(() -> new IllegalArgumentException("no result key '" + name + "'"));
+    }
+
+    /** The key named {@code name} in a group, if it has one. */
+    public static <S> Optional<ResultKey<S>> lookup(List<ResultKey<S>> group, String name) {
+        return group.stream().filter(k -> k.key().equals(name)).findFirst();
+    }
+
+    /** Several keys of a group, in the order named. */
+    public static <S> List<ResultKey<S>> select(List<ResultKey<S>> group, String... names) {
+        List<ResultKey<S>> out = new ArrayList<>();
+        for (String n : names) {
+            out.add(find(group, n));
+        }
+        return List.copyOf(out);
+    }
+
+    /** The names of a group's keys, for messages. */
+    public static List<String> names(List<? extends ResultKey<?>> group) {
+        return group.stream().map(k -> k.key()).map(String::valueOf).toList();
+    }
+
+    private static int unknowns(Lattice lattice) {
+        return lattice.mirrored() ? lattice.halfCount() : lattice.panelCount();
+    }
+
+    private static Object boxed(OptionalDouble v) {
+        return v.isPresent() ? (Object) v.getAsDouble() : null;
+    }
+
+    private static Object speed(Optional<StallStudy.Configuration> c, Function<StallSpeed, Double> f) {
+        return c.flatMap(StallStudy.Configuration::speed).map(s -> (Object) f.apply(s)).orElse(null);
+    }
+
+    private static <S> ResultKey<S> key(String key, ResultUnit unit, String label, String description, int decimals,
+            Function<S, Object> value) {
+        return new ResultKey<>(key, unit, label, description, decimals, Set.of(), value);
+    }
+
+    private static <S> ResultKey<S> key(String key, ResultUnit unit, String label, String description, int decimals,
+            Set<Need> needs, Function<S, Object> value) {
+        return new ResultKey<>(key, unit, label, description, decimals, needs, value);
+    }
+}
