@@ -11,6 +11,7 @@ import java.util.Set;
 import java.util.concurrent.Callable;
 
 import org.spanlift.cli.options.AlphaList;
+import org.spanlift.cli.options.CommonLift;
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
@@ -53,7 +54,7 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
             description = "The common lift coefficient of e, CDi and the span loads. Default: ${DEFAULT-VALUE}.")
     double cl;
 
-    @Option(names = "--range", paramLabel = "FROM:TO:STEP", defaultValue = PlotCommand.DEFAULT_RANGE,
+    @Option(names = "--range", paramLabel = "FROM:TO:STEP", defaultValue = AlphaList.DEFAULT_CURVE,
             description = "Angles of the lift curves on the HTML page, degrees. Default: ${DEFAULT-VALUE}.")
     String range;
 
@@ -69,7 +70,7 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
         if (files.size() > MAX_WINGS) {
             throw new InputException("compare", 0, "", "at most " + MAX_WINGS + " wings at once, got " + files.size());
         }
-        checkCl(cl);
+        CommonLift.check(cl);
         List<Double> curve = AlphaList.parse(range);
         List<String> labels = new ArrayList<>();
         List<WingSummary> wings = new ArrayList<>();
@@ -95,12 +96,6 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
         return 0;
     }
 
-    static void checkCl(double cl) {
-        if (!Double.isFinite(cl) || Math.abs(cl) < Coefficients.SPAN_EFFICIENCY_MIN_LIFT || Math.abs(cl) > 3) {
-            throw new InputException("--cl", 0, "", "expected a lift coefficient with 0.05 <= |CL| <= 3 (e is "
-                    + "defined only away from zero lift), got " + cl);
-        }
-    }
 
     private static String csv(Comparison cmp) {
         List<String> header = new ArrayList<>(List.of("quantity", "unit"));
@@ -109,7 +104,7 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
             header.add(cmp.labels().get(i) + "-" + cmp.labels().get(0));
         }
         Csv csv = new Csv(header);
-        for (Comparison.Row r : Comparison.rows()) {
+        for (Comparison.Row r : cmp.rows()) {
             List<Object> cells = new ArrayList<>(List.of(r.key(), r.unit(LengthUnit.M)));
             for (int i = 0; i < cmp.wings().size(); i++) {
                 cells.add(boxed(cmp.value(r, i)));
@@ -140,7 +135,7 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
             header.add(cmp.labels().get(i) + "-" + cmp.labels().get(0));
         }
         TextTable t = new TextTable(header);
-        for (Comparison.Row r : Comparison.rows()) {
+        for (Comparison.Row r : cmp.rows()) {
             List<String> row = new ArrayList<>(List.of(r.label(), r.unit(u)));
             for (int i = 0; i < cmp.wings().size(); i++) {
                 OptionalDouble v = cmp.value(r, i);

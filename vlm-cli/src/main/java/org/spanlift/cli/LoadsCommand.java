@@ -360,12 +360,12 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         }
         b.append(t.render());
         if (envelope != null) {
-            b.append('\n').append(StallCommand.wrap("Gust load factors: " + GUST_FORMULA + "; a = "
+            b.append('\n').append(TextTable.wrap("Gust load factors: " + GUST_FORMULA + "; a = "
                     + String.format(Locale.ROOT, "%.3f", loads.liftCurve().slope()) + " per rad (the wing's own unless the "
                     + "envelope file gives lift-slope), c = S/b. " + ENVELOPE_NOTE)).append('\n');
         }
-        b.append('\n').append(StallCommand.wrap(NO_STALL)).append('\n');
-        b.append('\n').append(StallCommand.wrap(CAUTION)).append('\n');
+        b.append('\n').append(TextTable.wrap(NO_STALL)).append('\n');
+        b.append('\n').append(TextTable.wrap(CAUTION)).append('\n');
         return b.toString();
     }
 

@@ -44,7 +44,6 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
 
     /** The lift coefficient of the span load when no angle is given. */
     static final double DEFAULT_CL = 0.5;
-    static final String DEFAULT_RANGE = "-4:14:1";
 
     @Parameters(index = "0", paramLabel = "FILE", description = "The wing file (.wing.yaml).")
     Path file;
@@ -56,7 +55,7 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
 
     @Option(names = {"-a", "--alpha"}, paramLabel = "DEG",
             description = "span-load: the angle of attack in degrees (default: the angle where CL = 0.5). lift and "
-                    + "polar: the angles, a list 0,2,4 or a range from:to:step (default " + DEFAULT_RANGE + ").")
+                    + "polar: the angles, a list 0,2,4 or a range from:to:step (default " + AlphaList.DEFAULT_CURVE + ").")
     String alpha;
 
     @Mixin
@@ -120,7 +119,7 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
     }
 
     private List<Double> range() {
-        List<Double> list = AlphaList.parse(alpha == null ? DEFAULT_RANGE : alpha);
+        List<Double> list = AlphaList.parse(alpha == null ? AlphaList.DEFAULT_CURVE : alpha);
         if (list.size() < 2) {
             throw new InputException("--alpha", 0, "", "a curve needs at least two angles of attack");
         }

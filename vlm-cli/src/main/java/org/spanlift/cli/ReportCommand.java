@@ -8,6 +8,7 @@ import java.util.Set;
 import java.util.concurrent.Callable;
 
 import org.spanlift.cli.options.AlphaList;
+import org.spanlift.cli.options.CommonLift;
 import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
@@ -47,7 +48,7 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
                     + "Default: ${DEFAULT-VALUE}.")
     String alpha;
 
-    @Option(names = "--range", paramLabel = "FROM:TO:STEP", defaultValue = PlotCommand.DEFAULT_RANGE,
+    @Option(names = "--range", paramLabel = "FROM:TO:STEP", defaultValue = AlphaList.DEFAULT_CURVE,
             description = "Angles of the lift curve and polar, degrees. Default: ${DEFAULT-VALUE}.")
     String range;
 
@@ -72,7 +73,7 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
         Format format = FigureOutput.format(output, FORMATS);
         List<Double> alphas = AlphaList.parse(alpha);
         List<Double> curve = AlphaList.parse(range);
-        CompareCommand.checkCl(cl);
+        CommonLift.check(cl);
         Wing wing = WingFileReader.read(file);
         WingAnalysis analysis = WingAnalysis.of(wing);
         double[] deflections = analysis.deflections(flight.deflections(wing));

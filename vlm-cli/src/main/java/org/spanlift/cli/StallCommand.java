@@ -198,7 +198,7 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         study.flapIncrement().ifPresent(inc -> b.append(String.format(Locale.ROOT,
                 "%n  flaps raise the stall-onset CL by %.3f%n", inc)));
         for (Configuration c : configs) {
-            c.estimate().besideControlEnd().ifPresent(end -> b.append('\n').append(wrap(String.format(Locale.ROOT,
+            c.estimate().besideControlEnd().ifPresent(end -> b.append('\n').append(TextTable.wrap(String.format(Locale.ROOT,
                     "NOTE (%s): stall starts beside the end of the %s at y = %.3f %s. Linear theory concentrates a "
                             + "deflected control's lift in a peak at its ends, narrower than the chord, so this "
                             + "onset depends on the lattice (finer strips resolve more of the peak and lower it) and "
@@ -219,7 +219,7 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         if (study.condition().isEmpty()) {
             b.append("\n  No --weight given: no stall speeds; cl-max tables read at their lowest Reynolds number.\n");
         }
-        b.append('\n').append(wrap(CAUTION)).append('\n');
+        b.append('\n').append(TextTable.wrap(CAUTION)).append('\n');
         return b.toString();
     }
 
@@ -234,19 +234,6 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         return row;
     }
 
-    static String wrap(String text) {
-        StringBuilder out = new StringBuilder("  ");
-        int col = 2;
-        for (String word : text.split(" ")) {
-            if (col + word.length() > 100) {
-                out.append("\n  ");
-                col = 2;
-            }
-            out.append(word).append(' ');
-            col += word.length() + 1;
-        }
-        return out.toString().replace(" \n", "\n").stripTrailing();
-    }
 
     @Override
     public Set<Format> formats() {

@@ -64,8 +64,8 @@ class CompareCommandTest {
             double[] expected = {wing.reference().area(), wing.reference().span(), wing.reference().aspectRatio(),
                 wing.main().meanAerodynamicChord(), line.slope(), Math.toDegrees(line.zeroLiftAngle()),
                 Math.toDegrees(alpha), c.spanEfficiency().getAsDouble(), c.inducedDrag()};
-            String[] keys = {"area_m2", "span_m", "aspect_ratio", "mac_m", "lift_slope_per_rad", "zero_lift_angle_deg",
-                "alpha_at_CL_deg", "e_at_CL", "CDi_at_CL"};
+            String[] keys = {"reference.area", "reference.span", "reference.aspect_ratio", "mean_aerodynamic_chord",
+                "lift_slope_per_rad", "zero_lift_angle_deg", "alpha_deg@CL=0.6", "e@CL=0.6", "CDi@CL=0.6"};
             for (int k = 0; k < keys.length; k++) {
                 double got = Double.parseDouble(rows.get(keys[k])[i]);
                 assertEquals(expected[k], got, 1e-8 * Math.max(1, Math.abs(expected[k])), keys[k] + " of " + WINGS.get(i));

@@ -103,7 +103,7 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
             if (n.startsWith(prefix)) {
                 String rest = n.substring(prefix.length());
                 ResultKey<?> k = Vocabulary.lookup(Vocabulary.ONSET, rest).orElseThrow(() -> new ColumnException(
-                        "unknown stall result '" + rest + "'; expected " + prefix + "followed by one of "
+                        "unknown stall result '" + rest + "'; expected " + prefix + " followed by one of "
                                 + String.join(", ", Vocabulary.names(Vocabulary.ONSET))));
                 return new ResultColumn(n, prefix.equals(Vocabulary.CLEAN) ? Group.STALL : Group.STALL_FLAPS, k, null,
                         false, 0);

@@ -35,7 +35,7 @@ class CaseEvaluatorTest {
     private static final String COLUMNS = """
             columns: [lift_slope_per_rad, zero_lift_angle_deg, e@CL=0.5, CDi@CL=0.5, alpha_deg@CL=0.5, CL@alpha=4,
               C_roll@alpha=4, stall.CL, stall.eta, stall.alpha_deg, stall.aileron_margin.dcl, stall.half_span_CL,
-              stall_flaps.CL, stall_flaps.beside_control_end, flap_increment_CL, stall_speed.clean_eas, stall_speed.flaps_tas,
+              stall_flaps.CL, stall_flaps.beside_control_end.control, flap_increment_CL, stall_speed.clean_eas, stall_speed.flaps_tas,
               controls.aileron.from_eta]
             """;
 
@@ -110,7 +110,7 @@ class CaseEvaluatorTest {
             assertEquals(e.halfSpanLift().getAsDouble(), value(s, r, "stall.half_span_CL"), 1e-12);
             assertEquals(sf.estimate().lift(), value(s, r, "stall_flaps.CL"), 1e-12);
             assertEquals(sf.estimate().besideControlEnd().map(StallEstimate.ControlEnd::control).orElse(null),
-                    cell(s, r, "stall_flaps.beside_control_end"));
+                    cell(s, r, "stall_flaps.beside_control_end.control"));
             assertEquals(sf.estimate().lift() - e.lift(), value(s, r, "flap_increment_CL"), 1e-12);
             assertEquals(sc.equivalent(), value(s, r, "stall_speed.clean_eas"), 1e-10);
             assertEquals(sf.trueSpeed(), value(s, r, "stall_speed.flaps_tas"), 1e-10);

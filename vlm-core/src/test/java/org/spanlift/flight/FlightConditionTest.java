@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.OptionalDouble;
 
 import org.junit.jupiter.api.Test;
+import org.spanlift.input.RefusedException;
 import org.spanlift.atmosphere.StandardAtmosphere;
 import org.spanlift.geometry.Reference;
 import org.spanlift.geometry.Vec3;
@@ -26,7 +27,7 @@ class FlightConditionTest {
     @Test
     void aStallOnsetBeforeTheWingLiftsHasNoSpeedAndSaysWhy() {
         FlightCondition fc = new FlightCondition(7000, 1, StandardAtmosphere.at(0), OptionalDouble.empty());
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+        RefusedException e = assertThrows(RefusedException.class,
                 () -> fc.equivalentSpeedFor(-0.024, WING));
         assertTrue(e.getMessage().contains("a wing CL of -0.024"), e.getMessage());
         assertTrue(e.getMessage().contains("before the wing lifts"), e.getMessage());

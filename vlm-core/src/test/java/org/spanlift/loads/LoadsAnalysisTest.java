@@ -1,5 +1,6 @@
 package org.spanlift.loads;
 
+import org.spanlift.input.RefusedException;
 import org.spanlift.structure.LoadCase;
 import org.spanlift.structure.PointMass;
 import org.spanlift.structure.WingStructure;
@@ -101,7 +102,7 @@ class LoadsAnalysisTest {
     @Test
     void aCaseBeyondTheLinearRangeIsRefused() {
         LoadsAnalysis la = LoadsAnalysis.of(ANALYSIS, WingStructure.NONE, ANALYSIS.fileDeflections());
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+        RefusedException e = assertThrows(RefusedException.class,
                 () -> la.loads(new LoadCase("slow", 60000, 6, 20, 0, "given")));
         assertTrue(e.getMessage().contains("'slow'"), e.getMessage());
     }

@@ -8,6 +8,10 @@ import org.spanlift.input.InputException;
 /** Angles of attack in degrees, from a list {@code 0,2,4} or a range {@code from:to:step}. */
 public final class AlphaList {
 
+    /** The angles of a lift curve or polar when none are given, degrees. */
+    public static final String DEFAULT_CURVE = "-4:14:1";
+
+
     private static final int MAX_POINTS = 1000;
 
     private AlphaList() {

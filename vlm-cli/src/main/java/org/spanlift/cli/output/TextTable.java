@@ -77,4 +77,19 @@ public final class TextTable {
         // no "-0.000": a value that rounds to zero prints without a sign
         return s.startsWith("-") && s.chars().noneMatch(ch -> ch >= '1' && ch <= '9') ? s.substring(1) : s;
     }
+
+    /** Text as an indented paragraph, lines of at most 100 characters. */
+    public static String wrap(String text) {
+        StringBuilder out = new StringBuilder("  ");
+        int col = 2;
+        for (String word : text.split(" ")) {
+            if (col + word.length() > 100) {
+                out.append("\n  ");
+                col = 2;
+            }
+            out.append(word).append(' ');
+            col += word.length() + 1;
+        }
+        return out.toString().replace(" \n", "\n").stripTrailing();
+    }
 }

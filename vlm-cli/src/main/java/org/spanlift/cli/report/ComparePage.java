@@ -46,7 +46,7 @@ public final class ComparePage {
             header.add(labels.get(i) + " \u2212 " + labels.get(0));
         }
         List<List<String>> rows = new ArrayList<>();
-        for (Comparison.Row r : Comparison.rows()) {
+        for (Comparison.Row r : cmp.rows()) {
             List<String> row = new ArrayList<>(List.of(r.label(), r.unit(u).replace("^2", "\u00b2")));
             for (int i = 0; i < wings.size(); i++) {
                 row.add(cell(cmp.value(r, i), r, u, false));

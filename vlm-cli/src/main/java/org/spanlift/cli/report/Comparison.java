@@ -7,31 +7,49 @@ import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.function.Function;
 
+import org.spanlift.cli.output.Results;
+import org.spanlift.flight.FlightPoint;
 import org.spanlift.geometry.LengthUnit;
+import org.spanlift.input.Field;
+import org.spanlift.vocabulary.ResultKey;
+import org.spanlift.vocabulary.Vocabulary;
+import org.spanlift.vocabulary.WingResult;
 
 /**
  * The comparison table: one column per wing, and the differences of every later wing from the first.
- * Values are SI (m, m^2) with angles in degrees, lift slope per radian; {@link Row#display} converts
- * lengths to a display unit.
+ * The quantities are vocabulary keys; values are SI (m, m^2) with angles in degrees, lift slope per radian;
+ * {@link Row#display} converts lengths to a display unit.
  */
 public final class Comparison {
 
-    /** How a quantity is converted for display: by a power of the length unit (0, 1 or 2). */
-    public record Row(String key, String label, int lengthPower, String unitSuffix, int decimals,
-            Function<WingSummary, OptionalDouble> value) {
+    /**
+     * One compared quantity: a vocabulary key, taken from the wing or (for a point key) at the common CL.
+     *
+     * @param key    the key as JSON and CSV write it ({@code reference.area}, {@code e@CL=0.5})
+     * @param result the vocabulary key
+     * @param label  the table label
+     * @param value  its value for one wing, SI
+     */
+    public record Row(String key, ResultKey<?> result, String label, Function<WingSummary, OptionalDouble> value) {
 
+        /** The unit as the table shows it, lengths in {@code u}; "-" for a ratio. */
         public String unit(LengthUnit u) {
-            return switch (lengthPower) {
-                case 1 -> u.symbol();
-                case 2 -> u.symbol() + "^2";
-                default -> unitSuffix;
-            };
+            String unit = Results.unit(result, u);
+            return unit.isEmpty() ? "-" : unit;
         }
 
         public double display(double si, LengthUnit u) {
-            return si / Math.pow(u.metres(), lengthPower);
+            return Results.display(result, si, u);
+        }
+
+        public int decimals() {
+            return result.decimals();
         }
     }
+
+    private static final List<String> WING_KEYS = List.of("reference.area", "reference.span",
+            "reference.aspect_ratio", "mean_aerodynamic_chord", "lift_slope_per_rad", "zero_lift_angle_deg");
+    private static final List<String> POINT_KEYS = List.of("alpha_deg", "e", "CDi");
 
     private final List<String> labels;
     private final List<WingSummary> wings;
@@ -43,20 +61,21 @@ public final class Comparison {
         this.cl = cl;
     }
 
-    public static List<Row> rows() {
-        return List.of(
-                new Row("area_m2", "reference area", 2, "", 3, s -> OptionalDouble.of(s.area())),
-                new Row("span_m", "reference span", 1, "", 3, s -> OptionalDouble.of(s.span())),
-                new Row("aspect_ratio", "aspect ratio", 0, "-", 3, s -> OptionalDouble.of(s.aspectRatio())),
-                new Row("mac_m", "mean aerodynamic chord", 1, "", 3, s -> OptionalDouble.of(s.mac())),
-                new Row("lift_slope_per_rad", "lift slope", 0, "/rad", 4, s -> OptionalDouble.of(s.liftSlope())),
-                new Row("zero_lift_angle_deg", "zero-lift angle", 0, "deg", 3,
-                        s -> OptionalDouble.of(Math.toDegrees(s.zeroLiftAngle()))),
-                new Row("alpha_at_CL_deg", "alpha at the common CL", 0, "deg", 3,
-                        s -> OptionalDouble.of(Math.toDegrees(s.alphaAtCl()))),
-                new Row("e_at_CL", "span efficiency e at the common CL", 0, "-", 4, WingSummary::spanEfficiency),
-                new Row("CDi_at_CL", "induced drag CDi at the common CL", 0, "-", 5,
-                        s -> OptionalDouble.of(s.inducedDrag())));
+    /** The compared quantities: wing keys, then point keys at the common CL. */
+    public List<Row> rows() {
+        List<Row> rows = new ArrayList<>();
+        for (ResultKey<WingResult> k : Vocabulary.select(Vocabulary.WING, WING_KEYS.toArray(String[]::new))) {
+            rows.add(new Row(k.key(), k, k.label(), s -> number(k.of(s.wingResult()))));
+        }
+        String at = "@CL=" + Field.format(cl);
+        for (ResultKey<FlightPoint> k : Vocabulary.select(Vocabulary.POINT, POINT_KEYS.toArray(String[]::new))) {
+            rows.add(new Row(k.key() + at, k, k.label() + " at the common CL", s -> number(k.of(s.pointAtCl()))));
+        }
+        return rows;
+    }
+
+    private static OptionalDouble number(Object v) {
+        return v instanceof Number n ? OptionalDouble.of(n.doubleValue()) : OptionalDouble.empty();
     }
 
     public List<String> labels() {

@@ -6,7 +6,9 @@ import java.util.List;
 import java.util.OptionalDouble;
 
 import org.spanlift.solve.LiftCurve;
+import org.spanlift.flight.FlightPoint;
 import org.spanlift.geometry.LatticeSpec;
+import org.spanlift.vocabulary.WingResult;
 import org.spanlift.geometry.Surface;
 import org.spanlift.geometry.Wing;
 import org.spanlift.results.Coefficients;
@@ -33,6 +35,16 @@ public record WingSummary(Path file, Wing wing, WingAnalysis analysis, double[] 
         Solution s = analysis.solve(alpha, deflections);
         return new WingSummary(file, wing, analysis, deflections.clone(), line, wing.main().meanAerodynamicChord(), cl,
                 alpha, s.coefficients(), s);
+    }
+
+    /** The wing-level vocabulary source. */
+    public WingResult wingResult() {
+        return new WingResult(analysis, line);
+    }
+
+    /** The point at the chosen CL, as a vocabulary source (induced drag only). */
+    public FlightPoint pointAtCl() {
+        return new FlightPoint(spanLoadAtCl, OptionalDouble.empty());
     }
 
     public double area() {

@@ -1,0 +1,23 @@
+package org.spanlift.cli.options;
+
+import org.spanlift.input.InputException;
+import org.spanlift.results.Coefficients;
+
+/** The common lift coefficient of {@code compare} and {@code report} (e, CDi and span loads are taken there). */
+public final class CommonLift {
+
+    private CommonLift() {
+    }
+
+    /**
+     * Checks a common CL given with {@code --cl}.
+     *
+     * @throws InputException unless 0.05 <= |CL| <= 3 (e is defined only away from zero lift)
+     */
+    public static void check(double cl) {
+        if (!Double.isFinite(cl) || Math.abs(cl) < Coefficients.SPAN_EFFICIENCY_MIN_LIFT || Math.abs(cl) > 3) {
+            throw new InputException("--cl", 0, "", "expected a lift coefficient with 0.05 <= |CL| <= 3 (e is "
+                    + "defined only away from zero lift), got " + cl);
+        }
+    }
+}
