@@ -5,7 +5,13 @@ import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 
+import org.spanlift.cli.output.Results;
+import org.spanlift.flight.FlightPoint;
 import org.spanlift.flight.ReynoldsRule;
+import org.spanlift.stall.StallEstimate;
+import org.spanlift.vocabulary.ResultKey;
+import org.spanlift.vocabulary.Vocabulary;
+import org.spanlift.vocabulary.WingResult;
 import org.spanlift.cli.plot.Figure;
 import org.spanlift.cli.plot.PlotKind;
 import org.spanlift.cli.plot.Plots;
@@ -17,7 +23,6 @@ import org.spanlift.geometry.Reference;
 import org.spanlift.geometry.Surface;
 import org.spanlift.geometry.Wing;
 import org.spanlift.lattice.Lattice;
-import org.spanlift.results.Coefficients;
 import org.spanlift.solve.WingAnalysis;
 
 /**
@@ -50,7 +55,7 @@ public final class ReportPage {
         h.caution();
 
         keyResults(h, summary, stall, alphasDeg);
-        description(h, wing);
+        description(h, summary);
         h.el("h2", "Figures");
         for (PlotKind kind : PlotKind.values()) {
             Figure f = figure(kind, summary, stall, rangeDeg, reynolds);
@@ -95,41 +100,58 @@ public final class ReportPage {
     }
 
     private static void keyResults(Html h, WingSummary s, StallSummary stall, List<Double> alphasDeg) {
+        LengthUnit u = s.wing().displayUnit();
+        WingResult w = s.wingResult();
+        FlightPoint atCl = s.pointAtCl();
+        String cl = Html.fixed(s.cl(), 2);
         h.el("h2", "Key results");
         h.line("<ul class=\"keys\">");
-        key(h, "lift slope", Html.fixed(s.liftSlope(), 3) + " /rad", Html.fixed(s.liftSlope() * Math.PI / 180, 4)
-                + " per degree, at zero lift");
-        key(h, "zero-lift angle", Html.fixed(Math.toDegrees(s.zeroLiftAngle()), 2) + "\u00b0", "angle of attack of "
-                + "zero wing lift");
-        String cl = Html.fixed(s.cl(), 2);
-        key(h, "span efficiency e at CL " + cl, s.spanEfficiency().isPresent()
-                ? Html.fixed(s.spanEfficiency().getAsDouble(), 4) : "\u2013", "CL\u00b2 / (\u03c0 A CDi)");
-        key(h, "induced drag CDi at CL " + cl, Html.fixed(s.inducedDrag(), 5), "at \u03b1 = "
-                + Html.fixed(Math.toDegrees(s.alphaAtCl()), 2) + "\u00b0");
-        stall.estimate().ifPresent(e -> {
-            String flag = (e.assumedClMax() ? "; some cl_max assumed" : "") + e.besideControlEnd()
+        ResultKey<WingResult> slope = Vocabulary.find(Vocabulary.WING, "lift_slope_per_rad");
+        ResultKey<WingResult> perDeg = Vocabulary.find(Vocabulary.WING, "lift_slope_per_deg");
+        key(h, slope.label(), value(slope, w, u) + " /rad", value(perDeg, w, u) + " per degree, at zero lift");
+        ResultKey<WingResult> zero = Vocabulary.find(Vocabulary.WING, "zero_lift_angle_deg");
+        key(h, zero.label(), value(zero, w, u) + "\u00b0", zero.description());
+        ResultKey<FlightPoint> e = Vocabulary.find(Vocabulary.POINT, "e");
+        key(h, "span efficiency e at CL " + cl, value(e, atCl, u), "CL\u00b2 / (\u03c0 A CDi)");
+        ResultKey<FlightPoint> cdi = Vocabulary.find(Vocabulary.POINT, "CDi");
+        ResultKey<FlightPoint> alpha = Vocabulary.find(Vocabulary.POINT, "alpha_deg");
+        key(h, "induced drag CDi at CL " + cl, value(cdi, atCl, u), "at \u03b1 = " + value(alpha, atCl, u) + "\u00b0");
+        stall.estimate().ifPresent(est -> {
+            String flag = (est.assumedClMax() ? "; some cl_max assumed" : "") + est.besideControlEnd()
                     .map(end -> "; beside the end of the " + end.control() + ", where linear theory peaks: lattice-sensitive, "
                             + "pessimistic").orElse("");
-            key(h, "stall-onset CL", Html.fixed(e.lift(), 3), "critical-section method, at \u03b1 = "
-                    + Html.fixed(Math.toDegrees(e.alpha()), 2) + "\u00b0" + flag);
-            key(h, "stall starts at", "\u03b7 = " + Html.fixed(e.eta(), 3), "y = " + Html.fixed(e.y()
-                    / s.wing().displayUnit().metres(), 3) + " " + s.wing().displayUnit().symbol() + ", section "
-                    + e.section());
-            e.aileronMargin().ifPresent(m -> key(h, "aileron margin", "\u0394cl = " + Html.fixed(m.dcl(), 3),
-                    "least cl_max \u2212 cl over the aileron span at onset"));
+            ResultKey<StallEstimate> onset = Vocabulary.find(Vocabulary.ONSET, "CL");
+            key(h, "stall-onset CL", value(onset, est, u), "critical-section method, at \u03b1 = "
+                    + value(Vocabulary.find(Vocabulary.ONSET, "alpha_deg"), est, u) + "\u00b0" + flag);
+            key(h, "stall starts at", "\u03b7 = " + value(Vocabulary.find(Vocabulary.ONSET, "eta"), est, u), "y = "
+                    + value(Vocabulary.find(Vocabulary.ONSET, "y"), est, u) + " " + u.symbol() + ", section "
+                    + est.section());
+            ResultKey<StallEstimate> margin = Vocabulary.find(Vocabulary.ONSET, "aileron_margin.dcl");
+            est.aileronMargin().ifPresent(m -> key(h, "aileron margin", "\u0394cl = " + value(margin, est, u),
+                    margin.description()));
         });
         stall.speed().ifPresent(v -> key(h, "stall speed", Html.fixed(v.equivalent() * 3600 / 1852, 1) + " kt EAS",
                 Html.fixed(v.trueSpeed() * 3600 / 1852, 1) + " kt TAS; wing alone, see the caution"));
         h.line("</ul>");
+        List<ResultKey<FlightPoint>> columns = Vocabulary.select(Vocabulary.POINT, "alpha_deg", "CL", "CDi", "e", "Cm",
+                "C_roll");
         List<List<String>> rows = new ArrayList<>();
         for (double a : alphasDeg) {
-            Coefficients c = s.analysis().solve(Math.toRadians(a), s.deflections()).coefficients();
-            rows.add(List.of(Html.fixed(a, 1), Html.fixed(c.lift(), 4), Html.fixed(c.inducedDrag(), 5),
-                    c.spanEfficiency().isPresent() ? Html.fixed(c.spanEfficiency().getAsDouble(), 4) : "\u2013",
-                    Html.fixed(c.pitchingMoment(), 4), Html.fixed(c.rollingMoment(), 5)));
+            FlightPoint p = new FlightPoint(s.analysis().solve(Math.toRadians(a), s.deflections()), OptionalDouble.empty());
+            rows.add(columns.stream().map(k -> value(k, p, u)).toList());
         }
-        h.table("results", "Coefficients by angle of attack", List.of("\u03b1 [deg]", "CL", "CDi", "e", "Cm", "C_roll"),
+        h.table("results", "Coefficients by angle of attack", columns.stream().map(k -> Results.label(k, u)).toList(),
                 rows);
+    }
+
+    /** A vocabulary value as the page shows it: display units, the key's decimals, a dash where absent. */
+    private static <S> String value(ResultKey<S> key, S source, LengthUnit u) {
+        Object v = key.of(source);
+        if (v == null) {
+            return "\u2013";
+        }
+        return v instanceof Number n ? Html.fixed(Results.display(key, n.doubleValue(), u), key.decimals())
+                : String.valueOf(v);
     }
 
     private static void key(Html h, String label, String value, String note) {
@@ -137,19 +159,21 @@ public final class ReportPage {
                 .raw("</span><span class=\"note\">").text(note).line("</span></li>");
     }
 
-    private static void description(Html h, Wing wing) {
+    private static void description(Html h, WingSummary summary) {
+        Wing wing = summary.wing();
         LengthUnit u = wing.displayUnit();
         String l = u.symbol();
         Reference r = wing.reference();
         h.el("h2", "The wing");
-        h.table("reference", "Reference values (coefficients are based on these)", List.of("quantity", "value"),
-                List.of(List.of("area [" + l + "\u00b2]", Html.fixed(r.area() / (u.metres() * u.metres()), 3)),
-                        List.of("span [" + l + "]", Html.fixed(r.span() / u.metres(), 3)),
-                        List.of("chord [" + l + "]", Html.fixed(r.chord() / u.metres(), 3)),
-                        List.of("aspect ratio", Html.fixed(r.aspectRatio(), 3)),
-                        List.of("moment point x, y, z [" + l + "]", Html.fixed(r.momentPoint().x() / u.metres(), 3)
-                                + ", " + Html.fixed(r.momentPoint().y() / u.metres(), 3) + ", "
-                                + Html.fixed(r.momentPoint().z() / u.metres(), 3))));
+        List<List<String>> ref = new ArrayList<>();
+        for (ResultKey<WingResult> k : Vocabulary.select(Vocabulary.WING, "reference.area", "reference.span",
+                "reference.chord", "reference.aspect_ratio")) {
+            ref.add(List.of(Results.label(k, u).replace("^2", "\u00b2"), value(k, summary.wingResult(), u)));
+        }
+        ref.add(List.of("moment point x, y, z [" + l + "]", Html.fixed(r.momentPoint().x() / u.metres(), 3)
+                + ", " + Html.fixed(r.momentPoint().y() / u.metres(), 3) + ", "
+                + Html.fixed(r.momentPoint().z() / u.metres(), 3)));
+        h.table("reference", "Reference values (coefficients are based on these)", List.of("quantity", "value"), ref);
         List<List<String>> rows = new ArrayList<>();
         for (Surface s : wing.surfaces()) {
             Planform p = s.planform();
@@ -198,19 +222,23 @@ public final class ReportPage {
         h.el("p", lat.panelCount() + " panels in " + lat.strips().size() + " strips over both halves; " + unknowns
                 + " unknowns per system (" + (lat.mirrored() ? "half span, solved with mirror images" : "full span")
                 + ").");
+        LengthUnit u = wing.displayUnit();
         double slopeChange = relative(fine.liftSlope(), s.liftSlope());
+        ResultKey<WingResult> slope = Vocabulary.find(Vocabulary.WING, "lift_slope_per_rad");
+        ResultKey<FlightPoint> e = Vocabulary.find(Vocabulary.POINT, "e");
+        ResultKey<FlightPoint> cdi = Vocabulary.find(Vocabulary.POINT, "CDi");
+        String at = " at CL " + Html.fixed(s.cl(), 2);
         List<List<String>> conv = new ArrayList<>();
-        conv.add(List.of("lift slope [per rad]", Html.fixed(s.liftSlope(), 4), Html.fixed(fine.liftSlope(), 4),
+        conv.add(List.of(Results.label(slope, u), value(slope, s.wingResult(), u), value(slope, fine.wingResult(), u),
                 Html.signed(100 * slopeChange, 2) + " %"));
         double eChange = Double.NaN;
         if (s.spanEfficiency().isPresent() && fine.spanEfficiency().isPresent()) {
             eChange = relative(fine.spanEfficiency().getAsDouble(), s.spanEfficiency().getAsDouble());
-            conv.add(List.of("e at CL " + Html.fixed(s.cl(), 2), Html.fixed(s.spanEfficiency().getAsDouble(), 4),
-                    Html.fixed(fine.spanEfficiency().getAsDouble(), 4), Html.signed(100 * eChange, 2) + " %"));
+            conv.add(List.of(e.label() + at, value(e, s.pointAtCl(), u), value(e, fine.pointAtCl(), u),
+                    Html.signed(100 * eChange, 2) + " %"));
         }
-        conv.add(List.of("CDi at CL " + Html.fixed(s.cl(), 2), Html.fixed(s.inducedDrag(), 5),
-                Html.fixed(fine.inducedDrag(), 5), Html.signed(100 * relative(fine.inducedDrag(), s.inducedDrag()), 2)
-                + " %"));
+        conv.add(List.of(cdi.label() + at, value(cdi, s.pointAtCl(), u), value(cdi, fine.pointAtCl(), u),
+                Html.signed(100 * relative(fine.inducedDrag(), s.inducedDrag()), 2) + " %"));
         int strips = wing.main().lattice().strips();
         h.table("convergence", "Convergence: the file lattice against twice as many strips",
                 List.of("quantity", strips + " strips", 2 * strips + " strips", "change"), conv);
