@@ -13,6 +13,7 @@ import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.concurrent.Callable;
 
+import org.spanlift.atmosphere.Airspeed;
 import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
@@ -344,7 +345,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         for (int i = 0; i < results.size(); i++) {
             SpanwiseLoads l = results.get(i);
             cases.row(List.of(String.valueOf(i), l.loadCase().name(), TextTable.fixed(l.loadCase().loadFactor(), 2),
-                    TextTable.fixed(l.loadCase().equivalentSpeed() * 3600 / 1852, 1), TextTable.fixed(l.liftCoefficient(), 3),
+                    TextTable.fixed(Airspeed.knots(l.loadCase().equivalentSpeed()), 1), TextTable.fixed(l.liftCoefficient(), 3),
                     TextTable.fixed(Math.toDegrees(l.alpha()), 2), TextTable.fixed(l.rootShear(), 0),
                     TextTable.fixed(l.rootBending(), 0), TextTable.fixed(l.rootTorsion(), 0)));
         }

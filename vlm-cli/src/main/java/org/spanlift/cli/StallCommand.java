@@ -12,6 +12,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
 
+import org.spanlift.atmosphere.Airspeed;
 import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
@@ -190,8 +191,8 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
             t.row(cells(Results.label(key, unit), configs, c -> Results.cell(key, c.estimate(), unit)));
         }
         if (study.condition().isPresent()) {
-            t.row(cells("stall speed EAS [kt]", configs, c -> TextTable.fixed(c.speed().orElseThrow().equivalent() * 3600 / 1852, 1)));
-            t.row(cells("stall speed TAS [kt]", configs, c -> TextTable.fixed(c.speed().orElseThrow().trueSpeed() * 3600 / 1852, 1)));
+            t.row(cells("stall speed EAS [kt]", configs, c -> TextTable.fixed(Airspeed.knots(c.speed().orElseThrow().equivalent()), 1)));
+            t.row(cells("stall speed TAS [kt]", configs, c -> TextTable.fixed(Airspeed.knots(c.speed().orElseThrow().trueSpeed()), 1)));
             t.row(cells("stall speed EAS [m/s]", configs, c -> TextTable.fixed(c.speed().orElseThrow().equivalent(), 2)));
         }
         b.append(t.render());

@@ -50,4 +50,9 @@ public final class Airspeed {
         }
         return value;
     }
+
+    /** A speed in knots (international nautical miles, 1852 m, per hour) from m/s. */
+    public static double knots(double metresPerSecond) {
+        return metresPerSecond * 3600 / 1852;
+    }
 }

@@ -7,6 +7,10 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.regex.Pattern;
 
+import org.spanlift.input.quantity.Quantity;
+import org.spanlift.input.quantity.QuantityFormatException;
+import org.spanlift.input.quantity.QuantityKind;
+
 /**
  * A value of an input file together with where it is (file, line, dotted field path), with typed readers
  * that fail with an {@link InputException} naming that place and what was expected.
@@ -248,6 +252,32 @@ public final class Field {
             out[i] = list.get(i).number();
         }
         return out;
+    }
+
+    /**
+     * A quantity of the given kind with its unit ({@code 95kg}, {@code 9800ft}), in SI.
+     *
+     * @throws InputException at this field, with the units accepted
+     */
+    public double quantity(QuantityKind kind) {
+        try {
+            return Quantity.parse(text(), kind).value();
+        } catch (QuantityFormatException e) {
+            throw error(e.getMessage());
+        }
+    }
+
+    /**
+     * A weight: a force (N, kN, kgf, lbf, lb) or a mass (kg, g) under standard gravity; positive, newtons.
+     *
+     * @throws InputException at this field
+     */
+    public double weight() {
+        try {
+            return Quantity.weight(text());
+        } catch (QuantityFormatException e) {
+            throw error(e.getMessage());
+        }
     }
 
     public static String format(double d) {

@@ -55,7 +55,7 @@ public final class CasesReader {
             Field c = items.get(i);
             c.allowOnly(CASE_KEYS);
             String name = c.optional("name").map(Field::text).orElse("case " + (i + 1));
-            double w = Quantities.weight(c.required("weight", "the aircraft weight with a unit, such as 1100kg"));
+            double w = c.required("weight", "the aircraft weight with a unit, such as 1100kg").weight();
             double n = c.required("load-factor", "the load factor n (a plain number, negative for down loads)")
                     .inRange(-MAX_LOAD_FACTOR, MAX_LOAD_FACTOR);
             double v = Quantities.speed(c.required("speed", "the equivalent airspeed with a unit, such as 105kt"));
@@ -67,7 +67,7 @@ public final class CasesReader {
 
     /** A pressure altitude with its unit, within the standard atmosphere's range. */
     static double altitude(Field f) {
-        double h = Quantities.of(f, QuantityKind.LENGTH);
+        double h = f.quantity(QuantityKind.LENGTH);
         if (h < StandardAtmosphere.MIN_ALTITUDE || h > StandardAtmosphere.MAX_ALTITUDE) {
             throw f.error("a pressure altitude must be from " + Field.format(StandardAtmosphere.MIN_ALTITUDE)
                     + " m to " + Field.format(StandardAtmosphere.MAX_ALTITUDE) + " m, got " + f.text());

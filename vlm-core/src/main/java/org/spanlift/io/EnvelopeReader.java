@@ -55,9 +55,9 @@ public final class EnvelopeReader {
             if (items.isEmpty() || items.size() > 20) {
                 throw wf.error("expected from 1 to 20 weights, got " + items.size());
             }
-            items.forEach(i -> weights.add(Quantities.weight(i)));
+            items.forEach(i -> weights.add(i.weight()));
         } else {
-            weights.add(Quantities.weight(wf));
+            weights.add(wf.weight());
         }
         double h = root.optional("altitude").map(CasesReader::altitude).orElse(0.0);
 

@@ -11,18 +11,9 @@ final class Quantities {
     private Quantities() {
     }
 
-    /** A quantity of the given kind with its unit, such as {@code 95kg}. */
-    static double of(Field f, QuantityKind kind) {
-        try {
-            return Quantity.parse(f.text(), kind).value();
-        } catch (QuantityFormatException e) {
-            throw f.error(e.getMessage());
-        }
-    }
-
     /** A mass with its unit (kg, g, lb), not negative. */
     static double mass(Field f) {
-        double m = of(f, QuantityKind.MASS);
+        double m = f.quantity(QuantityKind.MASS);
         if (m < 0) {
             throw f.error("a mass must not be negative, got " + f.text());
         }
@@ -49,17 +40,6 @@ final class Quantities {
             throw f.error("a mass must not be negative, got " + t);
         }
         return mass / length;
-    }
-
-    /**
-     * A weight: a force (N, kN, kgf, lbf, lb) or a mass (kg, g) times standard gravity; positive. In newtons.
-     */
-    static double weight(Field f) {
-        try {
-            return Quantity.weight(f.text());
-        } catch (QuantityFormatException e) {
-            throw f.error(e.getMessage());
-        }
     }
 
     /** A speed (m/s, km/h, kt, mph, and for gust velocities also ft/s), positive, m/s. */

@@ -99,12 +99,12 @@ public final class SweepFileReader {
 
         Optional<Field> flight = root.optional("flight");
         flight.ifPresent(f -> f.allowOnly(FLIGHT_KEYS));
-        OptionalDouble weight = flight.flatMap(f -> f.optional("weight")).map(SweepFileReader::weight)
+        OptionalDouble weight = flight.flatMap(f -> f.optional("weight")).map(Field::weight)
                 .map(OptionalDouble::of).orElse(OptionalDouble.empty());
-        double altitude = flight.flatMap(f -> f.optional("altitude")).map(f -> quantity(f, QuantityKind.LENGTH))
+        double altitude = flight.flatMap(f -> f.optional("altitude")).map(f -> f.quantity(QuantityKind.LENGTH))
                 .orElse(0.0);
         double isaOffset = flight.flatMap(f -> f.optional("isa-offset"))
-                .map(f -> quantity(f, QuantityKind.TEMPERATURE_DIFFERENCE)).orElse(0.0);
+                .map(f -> f.quantity(QuantityKind.TEMPERATURE_DIFFERENCE)).orElse(0.0);
         double loadFactor = flight.flatMap(f -> f.optional("load-factor")).map(f -> f.inRange(0.1, 15)).orElse(1.0);
         OptionalDouble flaps = flight.flatMap(f -> f.optional("flaps")).map(f -> OptionalDouble.of(f.inRange(-45, 45)))
                 .orElse(OptionalDouble.empty());
@@ -337,22 +337,6 @@ public final class SweepFileReader {
             return v;
         } catch (ArithmeticException | NumberFormatException e) {
             throw f.error("expected a whole number, got " + f.text());
-        }
-    }
-
-    private static double weight(Field f) {
-        try {
-            return Quantity.weight(f.text());
-        } catch (QuantityFormatException e) {
-            throw f.error(e.getMessage());
-        }
-    }
-
-    private static double quantity(Field f, QuantityKind kind) {
-        try {
-            return Quantity.parse(f.text(), kind).value();
-        } catch (QuantityFormatException e) {
-            throw f.error(e.getMessage());
         }
     }
 

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 
+import org.spanlift.atmosphere.Airspeed;
 import org.spanlift.cli.output.Results;
 import org.spanlift.flight.FlightPoint;
 import org.spanlift.flight.ReynoldsRule;
@@ -130,8 +131,8 @@ public final class ReportPage {
             est.aileronMargin().ifPresent(m -> key(h, "aileron margin", "\u0394cl = " + value(margin, est, u),
                     margin.description()));
         });
-        stall.speed().ifPresent(v -> key(h, "stall speed", Html.fixed(v.equivalent() * 3600 / 1852, 1) + " kt EAS",
-                Html.fixed(v.trueSpeed() * 3600 / 1852, 1) + " kt TAS; wing alone, see the caution"));
+        stall.speed().ifPresent(v -> key(h, "stall speed", Html.fixed(Airspeed.knots(v.equivalent()), 1) + " kt EAS",
+                Html.fixed(Airspeed.knots(v.trueSpeed()), 1) + " kt TAS; wing alone, see the caution"));
         h.line("</ul>");
         List<ResultKey<FlightPoint>> columns = Vocabulary.select(Vocabulary.POINT, "alpha_deg", "CL", "CDi", "e", "Cm",
                 "C_roll");
