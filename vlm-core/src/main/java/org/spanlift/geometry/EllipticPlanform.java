@@ -25,6 +25,9 @@ public record EllipticPlanform(double semiSpan, double rootChord, double rootNos
         if (!(semiSpan > 0) || !(rootChord > 0)) {
             throw new IllegalArgumentException("an elliptic planform needs a positive span and root chord");
         }
+        if (sectionName == null) {
+            throw new IllegalArgumentException("an elliptic planform needs a section name");
+        }
     }
 
     @Override
