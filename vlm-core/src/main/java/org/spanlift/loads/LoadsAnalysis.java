@@ -185,8 +185,8 @@ public final class LoadsAnalysis {
             double[] g = moment[j];
             for (int r = 0; r < st.rows(); r++) {
                 int i = st.firstPanel() + r;
-                double[] fi = {q * pf.fx()[i], q * pf.fy()[i], q * pf.fz()[i]};
-                add(f, g, new double[] {pf.x()[i], pf.y()[i], pf.z()[i]}, fi);
+                double[] fi = {q * pf.fx(i), q * pf.fy(i), q * pf.fz(i)};
+                add(f, g, new double[] {pf.x(i), pf.y(i), pf.z(i)}, fi);
             }
             double w = -ng * stripMass[j];
             add(f, g, massPoint[j], new double[] {w * lift[0], w * lift[1], w * lift[2]});
@@ -226,7 +226,7 @@ public final class LoadsAnalysis {
                 loadAlongLift = dot(f, lift);
             }
         }
-        return new SpanwiseLoads(c, alpha, cl, q, edges.clone(), shear, bending, torsion, chordShear, chordBending,
+        return new SpanwiseLoads(c, alpha, cl, q, edges, shear, bending, torsion, chordShear, chordBending,
                 loadAlongLift, 1);
     }
 

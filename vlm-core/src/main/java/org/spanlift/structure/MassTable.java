@@ -2,6 +2,7 @@ package org.spanlift.structure;
 
 /**
  * Mass per unit span of one half-wing, linear between rows, zero outside the first and last row.
+ * Immutable: the arrays are copied on the way in and on the way out.
  *
  * @param y        spanwise positions, m, strictly increasing (copied)
  * @param perSpan  mass per unit span there, kg/m, not negative (copied)
@@ -22,6 +23,16 @@ public record MassTable(double[] y, double[] perSpan) {
                 throw new IllegalArgumentException("mass-table rows must be in increasing y");
             }
         }
+    }
+
+    @Override
+    public double[] y() {
+        return y.clone();
+    }
+
+    @Override
+    public double[] perSpan() {
+        return perSpan.clone();
     }
 
     /** Mass per unit span at y, kg/m. */
