@@ -77,13 +77,6 @@ public record Wing(String name, LengthUnit displayUnit, Reference reference, Lis
         return new Reference(first.area(), first.span(), first.meanAerodynamicChord(), first.quarterMacPoint());
     }
 
-    /** A copy with one control's deflection replaced (radians, trailing edge down). */
-    public Wing withDeflection(String controlName, double radians) {
-        List<Surface> changed = surfaces.stream().map(s -> s.withControls(s.controls().stream()
-                .map(c -> c.name().equals(controlName) ? c.withDeflection(radians) : c).toList())).toList();
-        return new Wing(name, displayUnit, reference, changed, sections);
-    }
-
     /** A copy with every surface's lattice replaced. */
     public Wing withLattice(LatticeSpec spec) {
         return new Wing(name, displayUnit, reference, surfaces.stream().map(s -> s.withLattice(spec)).toList(),

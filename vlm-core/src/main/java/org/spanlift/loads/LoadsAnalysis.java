@@ -131,20 +131,6 @@ public final class LoadsAnalysis {
         return structure;
     }
 
-    /** The stations: the right half's strip edges, root to tip, m (a copy). */
-    public double[] stations() {
-        return edges.clone();
-    }
-
-    /** The spar point at each station (x, y, z), m (copies). */
-    public double[][] sparPoints() {
-        double[][] out = new double[spar.length][];
-        for (int k = 0; k < spar.length; k++) {
-            out[k] = spar[k].clone();
-        }
-        return out;
-    }
-
     /** One half's distributed mass, kg. */
     public double distributedHalfMass() {
         return distributedHalfMass;

@@ -48,13 +48,4 @@ public record MassTable(double[] y, double[] perSpan) {
         }
         return perSpan[y.length - 1];
     }
-
-    /** The table's mass (one half), kg: the exact integral of the piecewise-linear table. */
-    public double total() {
-        double m = 0;
-        for (int i = 1; i < y.length; i++) {
-            m += 0.5 * (perSpan[i - 1] + perSpan[i]) * (y[i] - y[i - 1]);
-        }
-        return m;
-    }
 }
