@@ -310,9 +310,15 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
                 "torsion_N_m", "chord_shear_N", "chord_bending_N_m"));
         for (int i = 0; i < results.size(); i++) {
             SpanwiseLoads l = results.get(i);
+            double[] y = l.y();
+            double[] shear = l.shear();
+            double[] bending = l.bending();
+            double[] torsion = l.torsion();
+            double[] chordShear = l.chordShear();
+            double[] chordBending = l.chordBending();
             for (int k = 0; k < l.stations(); k++) {
-                c.row(i, l.loadCase().name(), l.loadCase().loadFactor(), l.loadCase().equivalentSpeed(), l.y()[k],
-                        l.shear()[k], l.bending()[k], l.torsion()[k], l.chordShear()[k], l.chordBending()[k]);
+                c.row(i, l.loadCase().name(), l.loadCase().loadFactor(), l.loadCase().equivalentSpeed(), y[k],
+                        shear[k], bending[k], torsion[k], chordShear[k], chordBending[k]);
             }
         }
         return "# " + CAUTION + " " + capitalized(factorNote()) + ".\n" + c;
@@ -353,11 +359,19 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         b.append("  governing case at each station: value (case #)\n");
         TextTable t = new TextTable(List.of("y [" + u + "]", "shear max [N]", "shear min [N]", "bending max [N m]",
                 "bending min [N m]", "torsion max [N m]", "torsion min [N m]"));
-        for (int s = 0; s < g.y().length; s++) {
-            t.row(List.of(TextTable.fixed(g.y()[s] / k, 3), cell(g.shear().max()[s], g.shear().maxCase()[s]),
-                    cell(g.shear().min()[s], g.shear().minCase()[s]), cell(g.bending().max()[s], g.bending().maxCase()[s]),
-                    cell(g.bending().min()[s], g.bending().minCase()[s]), cell(g.torsion().max()[s], g.torsion().maxCase()[s]),
-                    cell(g.torsion().min()[s], g.torsion().minCase()[s])));
+        double[] gy = g.y();
+        List<double[]> values = new ArrayList<>();
+        List<int[]> which = new ArrayList<>();
+        for (Governing.Extremes e : List.of(g.shear(), g.bending(), g.torsion())) {
+            values.addAll(List.of(e.max(), e.min()));
+            which.addAll(List.of(e.maxCase(), e.minCase()));
+        }
+        for (int s = 0; s < gy.length; s++) {
+            List<String> row = new ArrayList<>(List.of(TextTable.fixed(gy[s] / k, 3)));
+            for (int c = 0; c < values.size(); c++) {
+                row.add(cell(values.get(c)[s], which.get(c)[s]));
+            }
+            t.row(row);
         }
         b.append(t.render());
         if (envelope != null) {

@@ -247,11 +247,11 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         m.put("chord", l.chord());
         m.put("cl", l.cl());
         m.put("cl_c", l.clc());
-        double[] gamma = new double[l.size()];
-        double[] deg = new double[l.size()];
+        double[] gamma = l.circulation();
+        double[] deg = l.inducedAngle();
         for (int i = 0; i < deg.length; i++) {
-            gamma[i] = l.circulation()[i] * circulationScale;
-            deg[i] = Math.toDegrees(l.inducedAngle()[i]);
+            gamma[i] *= circulationScale;
+            deg[i] = Math.toDegrees(deg[i]);
         }
         m.put("circulation", gamma);
         m.put("induced_angle_deg", deg);
@@ -277,9 +277,15 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         for (Solution s : points) {
             for (int k = 0; k < wing.surfaces().size(); k++) {
                 SpanLoad l = s.spanLoad(k);
+                double[] y = l.y();
+                double[] chord = l.chord();
+                double[] cl = l.cl();
+                double[] clc = l.clc();
+                double[] gamma = l.circulation();
+                double[] induced = l.inducedAngle();
                 for (int i = 0; i < l.size(); i++) {
-                    csv.row(Math.toDegrees(s.alpha()), wing.surfaces().get(k).name(), l.y()[i], l.chord()[i], l.cl()[i],
-                            l.clc()[i], l.circulation()[i] * dims.circulationScale(), Math.toDegrees(l.inducedAngle()[i]));
+                    csv.row(Math.toDegrees(s.alpha()), wing.surfaces().get(k).name(), y[i], chord[i], cl[i], clc[i],
+                            gamma[i] * dims.circulationScale(), Math.toDegrees(induced[i]));
                 }
             }
         }

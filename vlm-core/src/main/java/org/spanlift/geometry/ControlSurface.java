@@ -12,8 +12,4 @@ public record ControlSurface(String name, ControlKind kind, double from, double 
     public double hingeFraction() {
         return 1 - chordFraction;
     }
-
-    public ControlSurface withDeflection(double radians) {
-        return new ControlSurface(name, kind, from, to, chordFraction, radians);
-    }
 }

@@ -3,9 +3,20 @@ package org.spanlift.geometry;
 import java.util.List;
 
 /**
- * An elliptic planform of semi-span s with a straight, unswept quarter-chord line: chord
- * c(y) = c0 sqrt(1 - (y/s)^2), leading edge at x = x0 + c0/4 - c(y)/4, height z = z0 + |y| tan(dihedral),
- * twist linear in y from rootTwist at the root to rootTwist - washout at the tip (radians). Described from the root (y = 0) to the tip.
+ * An elliptic mirrored planform with a straight, unswept quarter-chord line, described on its right half
+ * from the root (y = 0) to the tip (y = semiSpan). SI units and radians; wing axes: x aft, y toward the
+ * right tip, z up. Chord c(y) = c0 sqrt(1 - (y/s)^2), leading edge at x = x0 + c0/4 - c(y)/4, height
+ * z = z0 + |y| tan(dihedral), twist (positive nose-up) linear in y from rootTwist at the root to
+ * rootTwist - washout at the tip.
+ *
+ * @param semiSpan    half the tip-to-tip span, m (positive)
+ * @param rootChord   c0, the chord at y = 0, m (positive)
+ * @param rootNoseX   x0, x of the root leading edge, m
+ * @param rootNoseZ   z0, z of the root leading edge, m
+ * @param dihedral    dihedral of the leading edge, rad, positive with the tip up
+ * @param rootTwist   twist at the root, rad, positive nose-up
+ * @param washout     root twist minus tip twist, rad
+ * @param sectionName name of the section of the whole span, a key of the wing's section map
  */
 public record EllipticPlanform(double semiSpan, double rootChord, double rootNoseX, double rootNoseZ,
         double dihedral, double rootTwist, double washout, String sectionName) implements Planform {
@@ -13,6 +24,9 @@ public record EllipticPlanform(double semiSpan, double rootChord, double rootNos
     public EllipticPlanform {
         if (!(semiSpan > 0) || !(rootChord > 0)) {
             throw new IllegalArgumentException("an elliptic planform needs a positive span and root chord");
+        }
+        if (sectionName == null) {
+            throw new IllegalArgumentException("an elliptic planform needs a section name");
         }
     }
 
@@ -50,6 +64,11 @@ public record EllipticPlanform(double semiSpan, double rootChord, double rootNos
     @Override
     public SectionBlend section(double y) {
         return SectionBlend.of(sectionName);
+    }
+
+    @Override
+    public List<String> sectionNames() {
+        return List.of(sectionName);
     }
 
     @Override

@@ -29,6 +29,9 @@ public sealed interface Planform permits StationPlanform, EllipticPlanform {
      */
     SectionBlend section(double y);
 
+    /** The names of the sections the planform uses, root to tip, each once. */
+    List<String> sectionNames();
+
     /** The y of the defining stations, root to tip, ends included (lattice cut lines). */
     List<Double> stationYs();
 

@@ -5,4 +5,10 @@ package org.spanlift.geometry;
  * metres, the twist (incidence, positive nose-up) in radians, and the name of its section.
  */
 public record Station(double y, double chord, double noseX, double noseZ, double twist, String section) {
+
+    public Station {
+        if (section == null) {
+            throw new IllegalArgumentException("the station at y = " + y + " m needs a section name");
+        }
+    }
 }

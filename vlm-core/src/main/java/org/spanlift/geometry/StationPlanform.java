@@ -83,6 +83,11 @@ public record StationPlanform(List<Station> stations) implements Planform {
     }
 
     @Override
+    public List<String> sectionNames() {
+        return stations.stream().map(Station::section).distinct().toList();
+    }
+
+    @Override
     public List<Double> stationYs() {
         return stations.stream().map(Station::y).toList();
     }

@@ -62,10 +62,6 @@ public record Surface(String name, boolean mirrored, Planform planform, List<Con
         return new Vec3(xLe + 0.25 * meanAerodynamicChord(), y, z);
     }
 
-    public Surface withControls(List<ControlSurface> newControls) {
-        return new Surface(name, mirrored, planform, newControls, lattice, fuselageHalfWidth);
-    }
-
     public Surface withLattice(LatticeSpec spec) {
         return new Surface(name, mirrored, planform, controls, spec, fuselageHalfWidth);
     }

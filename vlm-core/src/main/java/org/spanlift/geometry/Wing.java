@@ -4,11 +4,13 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.TreeSet;
 
 /**
  * A whole aircraft lifting system as described by one wing file: its surfaces (the first is the wing), the
  * sections they name, and the reference values. Immutable; SI units throughout. The length unit of the
- * file is kept for display only.
+ * file is kept for display only. Every section a surface names must be in {@code sections}: a wing naming
+ * one that is not is refused with an {@link IllegalArgumentException} naming the station and the section.
  */
 public record Wing(String name, LengthUnit displayUnit, Reference reference, List<Surface> surfaces,
         Map<String, Section> sections) {
@@ -19,6 +21,34 @@ public record Wing(String name, LengthUnit displayUnit, Reference reference, Lis
         if (surfaces.isEmpty()) {
             throw new IllegalArgumentException("a wing needs at least one surface");
         }
+        for (Surface s : surfaces) {
+            requireSections(s, sections);
+        }
+    }
+
+    /**
+     * Refuses a surface naming a section that the section map lacks, naming the station (or the surface, for
+     * an elliptic planform) and the section.
+     */
+    private static void requireSections(Surface surface, Map<String, Section> sections) {
+        String where = "surface '" + surface.name() + "'";
+        if (surface.planform() instanceof StationPlanform p) {
+            List<Station> stations = p.stations();
+            for (int i = 0; i < stations.size(); i++) {
+                Station st = stations.get(i);
+                if (!sections.containsKey(st.section())) {
+                    throw missingSection(where + ", station index " + i + " (y = " + st.y() + " m)", st.section(),
+                            sections);
+                }
+            }
+        } else if (surface.planform() instanceof EllipticPlanform e && !sections.containsKey(e.sectionName())) {
+            throw missingSection(where + " (elliptic planform)", e.sectionName(), sections);
+        }
+    }
+
+    private static IllegalArgumentException missingSection(String where, String name, Map<String, Section> sections) {
+        return new IllegalArgumentException(where + " names section '" + name + "', which the wing's sections lack; "
+                + "they are: " + (sections.isEmpty() ? "none" : String.join(", ", new TreeSet<>(sections.keySet()))));
     }
 
     /** The first surface: the one that stall, aileron and load results concern. */
@@ -45,13 +75,6 @@ public record Wing(String name, LengthUnit displayUnit, Reference reference, Lis
     /** Reference values defaulted from the first surface: its area, span, MAC and quarter-MAC point. */
     public static Reference defaultReference(Surface first) {
         return new Reference(first.area(), first.span(), first.meanAerodynamicChord(), first.quarterMacPoint());
-    }
-
-    /** A copy with one control's deflection replaced (radians, trailing edge down). */
-    public Wing withDeflection(String controlName, double radians) {
-        List<Surface> changed = surfaces.stream().map(s -> s.withControls(s.controls().stream()
-                .map(c -> c.name().equals(controlName) ? c.withDeflection(radians) : c).toList())).toList();
-        return new Wing(name, displayUnit, reference, changed, sections);
     }
 
     /** A copy with every surface's lattice replaced. */

@@ -144,15 +144,6 @@ public final class Field {
         return out;
     }
 
-    /**
-     * The last key of the path (for entries of a mapping). A key holding a dot is ambiguous here; read the
-     * keys from {@link #mapping()} when they may hold one.
-     */
-    public String key() {
-        int dot = path.lastIndexOf('.');
-        return dot < 0 ? path : path.substring(dot + 1);
-    }
-
     public String text() {
         if (value instanceof YamlValue.Scalar s && !s.isNull()) {
             return s.text();
@@ -187,14 +178,6 @@ public final class Field {
         double d = number();
         if (!(d > 0)) {
             throw error("must be positive, got " + format(d));
-        }
-        return d;
-    }
-
-    public double nonNegative() {
-        double d = number();
-        if (d < 0) {
-            throw error("must not be negative, got " + format(d));
         }
         return d;
     }

@@ -26,6 +26,7 @@ import org.spanlift.geometry.Spacing;
 import org.spanlift.geometry.Station;
 import org.spanlift.geometry.StationPlanform;
 import org.spanlift.geometry.Surface;
+import org.spanlift.geometry.Trapezoid;
 import org.spanlift.geometry.Vec3;
 import org.spanlift.geometry.Wing;
 import org.spanlift.section.CamberLines;
@@ -335,7 +336,7 @@ public final class WingFileReader {
         f.allowOnly(TRAPEZOID_KEYS);
         requireMirrored(f, mirrored);
         Field spanField = f.required("span", "the tip-to-tip span");
-        double semi = length(spanField, spanField.positive(), k) / 2;
+        double span = length(spanField, spanField.positive(), k);
         Field rootField = f.required("root-chord", "the root chord");
         double rootChord = length(rootField, rootField.positive(), k);
         double taper = f.optional("taper").map(t -> t.inRange(0, 10)).orElse(1.0);
@@ -344,14 +345,8 @@ public final class WingFileReader {
         double washout = Math.toRadians(f.optional("washout").map(t -> t.inRange(-20, 20)).orElse(0.0));
         double rootTwist = Math.toRadians(f.optional("root-twist").map(t -> t.inRange(-45, 45)).orElse(0.0));
         double[] nose = rootNose(f, k);
-        double x0 = nose[0];
-        double z0 = nose[1];
-        double tipChord = taper * rootChord;
-        double xQuarter = x0 + 0.25 * rootChord + semi * Math.tan(sweep);
-        Station root = new Station(0, rootChord, x0, z0, rootTwist, section);
-        Station tip = new Station(semi, tipChord, xQuarter - 0.25 * tipChord, z0 + semi * Math.tan(dihedral),
-                rootTwist - washout, section);
-        return new StationPlanform(List.of(root, tip));
+        return new Trapezoid(span, rootChord, taper, sweep, dihedral, rootTwist, washout, section, nose[0], nose[1])
+                .planform();
     }
 
     private static Planform readElliptic(Field f, double k, boolean mirrored, String section) {

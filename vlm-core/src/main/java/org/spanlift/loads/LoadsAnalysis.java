@@ -133,20 +133,6 @@ public final class LoadsAnalysis {
         return structure;
     }
 
-    /** The stations: the right half's strip edges, root to tip, m (a copy). */
-    public double[] stations() {
-        return edges.clone();
-    }
-
-    /** The spar point at each station (x, y, z), m (copies). */
-    public double[][] sparPoints() {
-        double[][] out = new double[spar.length][];
-        for (int k = 0; k < spar.length; k++) {
-            out[k] = spar[k].clone();
-        }
-        return out;
-    }
-
     /** One half's distributed mass, kg. */
     public double distributedHalfMass() {
         return distributedHalfMass;
@@ -192,8 +178,8 @@ public final class LoadsAnalysis {
             double[] g = moment[j];
             for (int r = 0; r < st.rows(); r++) {
                 int i = st.firstPanel() + r;
-                double[] fi = {q * pf.fx()[i], q * pf.fy()[i], q * pf.fz()[i]};
-                add(f, g, new double[] {pf.x()[i], pf.y()[i], pf.z()[i]}, fi);
+                double[] fi = {q * pf.fx(i), q * pf.fy(i), q * pf.fz(i)};
+                add(f, g, new double[] {pf.x(i), pf.y(i), pf.z(i)}, fi);
             }
             double w = -ng * stripMass[j];
             add(f, g, massPoint[j], new double[] {w * lift[0], w * lift[1], w * lift[2]});
@@ -233,7 +219,7 @@ public final class LoadsAnalysis {
                 loadAlongLift = dot(f, lift);
             }
         }
-        return new SpanwiseLoads(c, alpha, cl, q, edges.clone(), shear, bending, torsion, chordShear, chordBending,
+        return new SpanwiseLoads(c, alpha, cl, q, edges, shear, bending, torsion, chordShear, chordBending,
                 loadAlongLift, 1);
     }
 

@@ -5,7 +5,8 @@ import org.spanlift.structure.LoadCase;
 /**
  * The loads of one case on the right half-wing at its stations (the strip edges, root to tip), SI. Signs as
  * in the package description: shear positive up, bending positive for up-bending, torsion positive
- * nose-up, chord shear and chord bending positive for an aft load outboard.
+ * nose-up, chord shear and chord bending positive for an aft load outboard. Immutable: the arrays are
+ * copied on the way in and every array accessor returns a copy.
  *
  * @param loadCase       the case
  * @param alpha          angle of attack, rad
@@ -24,6 +25,50 @@ import org.spanlift.structure.LoadCase;
 public record SpanwiseLoads(LoadCase loadCase, double alpha, double liftCoefficient, double dynamicPressure,
         double[] y, double[] shear, double[] bending, double[] torsion, double[] chordShear, double[] chordBending,
         double loadAlongLift, double factor) {
+
+    public SpanwiseLoads {
+        int n = y.length;
+        if (shear.length != n || bending.length != n || torsion.length != n || chordShear.length != n
+                || chordBending.length != n) {
+            throw new IllegalArgumentException("spanwise-load arrays differ in length");
+        }
+        y = y.clone();
+        shear = shear.clone();
+        bending = bending.clone();
+        torsion = torsion.clone();
+        chordShear = chordShear.clone();
+        chordBending = chordBending.clone();
+    }
+
+    @Override
+    public double[] y() {
+        return y.clone();
+    }
+
+    @Override
+    public double[] shear() {
+        return shear.clone();
+    }
+
+    @Override
+    public double[] bending() {
+        return bending.clone();
+    }
+
+    @Override
+    public double[] torsion() {
+        return torsion.clone();
+    }
+
+    @Override
+    public double[] chordShear() {
+        return chordShear.clone();
+    }
+
+    @Override
+    public double[] chordBending() {
+        return chordBending.clone();
+    }
 
     public int stations() {
         return y.length;

@@ -2,7 +2,6 @@ package org.spanlift.results;
 
 import java.util.List;
 import java.util.OptionalDouble;
-import java.util.stream.Stream;
 
 import org.spanlift.geometry.Section;
 import org.spanlift.geometry.SectionBlend;
@@ -23,16 +22,8 @@ public final class ProfileDrag {
 
     /** True when every section used by the wing's surfaces has a drag polar. */
     public static boolean available(Wing wing) {
-        return wing.surfaces().stream().flatMap(s -> sectionNames(s).stream())
+        return wing.surfaces().stream().flatMap(s -> s.planform().sectionNames().stream())
                 .allMatch(n -> wing.sections().get(n).dragPolar().isPresent());
-    }
-
-    private static List<String> sectionNames(Surface surface) {
-        List<Double> ys = surface.planform().stationYs();
-        return ys.stream().flatMap(y -> {
-            SectionBlend b = surface.planform().section(y);
-            return Stream.of(b.inner(), b.outer());
-        }).distinct().toList();
     }
 
     /**

@@ -91,13 +91,13 @@ public final class Solution {
             if (surface >= 0 && lattice.strips().get(lattice.stripOf(i)).surface() != surface) {
                 continue;
             }
-            fx += f.fx()[i];
-            fz += f.fz()[i];
-            double rx = f.x()[i] - xm;
-            double ry = f.y()[i] - ym;
-            double rz = f.z()[i] - zm;
-            mx += ry * f.fz()[i] - rz * f.fy()[i];
-            my += rz * f.fx()[i] - rx * f.fz()[i];
+            fx += f.fx(i);
+            fz += f.fz(i);
+            double rx = f.x(i) - xm;
+            double ry = f.y(i) - ym;
+            double rz = f.z(i) - zm;
+            mx += ry * f.fz(i) - rz * f.fy(i);
+            my += rz * f.fx(i) - rx * f.fz(i);
         }
         double lift = (fz * Math.cos(alpha) - fx * Math.sin(alpha)) / s;
         double dragArea = 0;

@@ -83,16 +83,6 @@ public final class CoordinateMeanLine implements CamberLine {
         return 0.25 * (upper.derivative(s) + lower.derivative(s)) / s;
     }
 
-    /** Upper-surface ordinate at chord fraction x (unit chord, chord line along x). */
-    public double upperSurface(double x) {
-        return upper.value(Math.sqrt(clamp(x)));
-    }
-
-    /** Lower-surface ordinate at chord fraction x (unit chord, chord line along x). */
-    public double lowerSurface(double x) {
-        return lower.value(Math.sqrt(clamp(x)));
-    }
-
     /** Chord length in the file's units, before normalisation. */
     public double chordInFileUnits() {
         return chordInFileUnits;

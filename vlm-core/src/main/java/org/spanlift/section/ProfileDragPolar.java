@@ -7,7 +7,8 @@ import java.util.List;
  * numbers (linear in cl within a polar, linear in Reynolds number between polars, constant beyond the
  * ends).
  *
- * @param reynolds increasing Reynolds numbers of the polars (one value 0 for a single polar)
+ * @param reynolds increasing Reynolds numbers of the polars (one value 0 for a single polar; copied in and
+ *                 out)
  * @param polars   cd against cl, one table per Reynolds number
  */
 public record ProfileDragPolar(double[] reynolds, List<Table> polars) {
@@ -18,6 +19,12 @@ public record ProfileDragPolar(double[] reynolds, List<Table> polars) {
         if (reynolds.length != polars.size() || polars.isEmpty()) {
             throw new IllegalArgumentException("one polar per Reynolds number");
         }
+    }
+
+    /** The Reynolds numbers of the polars (a copy). */
+    @Override
+    public double[] reynolds() {
+        return reynolds.clone();
     }
 
     public double cd(double cl, double re) {

@@ -159,8 +159,4 @@ public final class BasisSolutions {
     public double control(int c, int panel) {
         return controls[c] == null ? 0 : controls[c][panel];
     }
-
-    public int controlCount() {
-        return controls.length;
-    }
 }

@@ -1,38 +1,17 @@
 package org.spanlift.solve;
 
-import org.spanlift.lattice.Lattice;
-
 /**
- * Biot-Savart velocity of a unit-strength horseshoe vortex (circulation 1 m^2/s): a semi-infinite leg
- * from +infinity along +x to A, the bound leg from A to B, and a semi-infinite leg from B to +infinity
- * along +x. A point within the cut-off distance of a leg gets no velocity from that leg, so a point on a
- * vortex line never yields NaN.
+ * Biot-Savart velocity of the legs of a unit-strength horseshoe vortex (circulation 1 m^2/s): the bound leg
+ * from A to B, and the semi-infinite legs along +x from A and B (a horseshoe is the leg from +infinity
+ * into A, the bound leg, and the leg from B back to +infinity). {@link InfluenceSystem} sums them, sharing
+ * each trailing leg between the panels that meet at its start. A point within the cut-off distance of a
+ * leg gets no velocity from that leg, so a point on a vortex line never yields NaN.
  */
-public final class HorseshoeKernel {
+final class HorseshoeKernel {
 
     private static final double FOUR_PI = 4 * Math.PI;
 
     private HorseshoeKernel() {
-    }
-
-    /**
-     * Writes into {@code out} (length 3, overwritten) the velocity at (px, py, pz) induced by horseshoe
-     * {@code j} at unit circulation.
-     */
-    public static void velocity(Lattice lat, int j, double px, double py, double pz, double[] out) {
-        double ax = lat.ax(j);
-        double ay = lat.ay(j);
-        double az = lat.az(j);
-        double bx = lat.bx(j);
-        double by = lat.by(j);
-        double bz = lat.bz(j);
-        double eps = lat.cutoff(j);
-        out[0] = 0;
-        out[1] = 0;
-        out[2] = 0;
-        segment(ax, ay, az, bx, by, bz, px, py, pz, eps, out);
-        trailing(bx, by, bz, px, py, pz, eps, 1, out);
-        trailing(ax, ay, az, px, py, pz, eps, -1, out);
     }
 
     /** Adds the velocity of the finite segment A -> B (unit circulation) at P. */

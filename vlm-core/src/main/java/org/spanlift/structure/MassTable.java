@@ -2,6 +2,7 @@ package org.spanlift.structure;
 
 /**
  * Mass per unit span of one half-wing, linear between rows, zero outside the first and last row.
+ * Immutable: the arrays are copied on the way in and on the way out.
  *
  * @param y        spanwise positions, m, strictly increasing (copied)
  * @param perSpan  mass per unit span there, kg/m, not negative (copied)
@@ -24,6 +25,16 @@ public record MassTable(double[] y, double[] perSpan) {
         }
     }
 
+    @Override
+    public double[] y() {
+        return y.clone();
+    }
+
+    @Override
+    public double[] perSpan() {
+        return perSpan.clone();
+    }
+
     /** Mass per unit span at y, kg/m. */
     public double at(double yy) {
         if (yy < y[0] || yy > y[y.length - 1]) {
@@ -36,14 +47,5 @@ public record MassTable(double[] y, double[] perSpan) {
             }
         }
         return perSpan[y.length - 1];
-    }
-
-    /** The table's mass (one half), kg: the exact integral of the piecewise-linear table. */
-    public double total() {
-        double m = 0;
-        for (int i = 1; i < y.length; i++) {
-            m += 0.5 * (perSpan[i - 1] + perSpan[i]) * (y[i] - y[i - 1]);
-        }
-        return m;
     }
 }

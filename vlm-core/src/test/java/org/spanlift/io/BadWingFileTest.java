@@ -70,6 +70,7 @@ class BadWingFileTest {
             chord-fraction-above-one    | 6  | surfaces[0].controls[0].chord-fraction  | is 1.3; expected a fraction of the local chord between 0 and 1, both excluded
             aileron-unmirrored          | 9  | surfaces[0].controls[0].kind            | an aileron deflects antisymmetrically and needs a mirrored surface; expected kind flap
             unknown-section-name        | 4  | surfaces[0].section                     | unknown section 'main'; expected flat or one of the file's sections: inner
+            unknown-station-section     | 8  | surfaces[0].stations[1].section         | unknown section 'outer'; expected flat or one of the file's sections: inner
             flat-section-redefined      | 6  | sections.flat                           | the section name 'flat' is built in
             unknown-units               | 1  | units                                   | expected one of m, ft, in, got 'furlong'
             newline-in-text             | 1  | units                                   | expected one of m, ft, in, got 'm\\nft'

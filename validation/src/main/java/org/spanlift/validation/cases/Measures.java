@@ -72,12 +72,14 @@ public final class Measures {
         double b = wing.reference().span();
         double root = 4 * cl * area / (Math.PI * b);
         SpanLoad l = s.spanLoad(0);
+        double[] ys = l.y();
+        double[] clc = l.clc();
         double worst = 0;
-        for (int i = 0; i < l.size(); i++) {
-            double eta = 2 * l.y()[i] / b;
+        for (int i = 0; i < ys.length; i++) {
+            double eta = 2 * ys[i] / b;
             if (Math.abs(eta) <= etaMax) {
                 double elliptic = root * Math.sqrt(1 - eta * eta);
-                worst = Math.max(worst, Math.abs(l.clc()[i] - elliptic) / root);
+                worst = Math.max(worst, Math.abs(clc[i] - elliptic) / root);
             }
         }
         return 100 * worst;
@@ -94,15 +96,17 @@ public final class Measures {
         double b = wing.reference().span();
         double mean = area / b;
         SpanLoad l = s.spanLoad(0);
+        double[] ys = l.y();
+        double[] clc = l.clc();
         double worst = 0;
-        for (int i = 0; i < l.size(); i++) {
-            double y = l.y()[i];
+        for (int i = 0; i < ys.length; i++) {
+            double y = ys[i];
             double eta = 2 * y / b;
             if (Math.abs(eta) <= etaMax) {
                 double chord = wing.main().planform().chord(Math.abs(y));
                 double elliptic = 4 * area / (Math.PI * b) * Math.sqrt(1 - eta * eta);
                 double schrenk = 0.5 * (chord + elliptic);
-                worst = Math.max(worst, Math.abs(l.clc()[i] / cl - schrenk) / mean);
+                worst = Math.max(worst, Math.abs(clc[i] / cl - schrenk) / mean);
             }
         }
         return 100 * worst;

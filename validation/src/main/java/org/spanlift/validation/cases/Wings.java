@@ -9,9 +9,8 @@ import org.spanlift.geometry.LatticeSpec;
 import org.spanlift.geometry.LengthUnit;
 import org.spanlift.geometry.Planform;
 import org.spanlift.geometry.Section;
-import org.spanlift.geometry.Station;
-import org.spanlift.geometry.StationPlanform;
 import org.spanlift.geometry.Surface;
+import org.spanlift.geometry.Trapezoid;
 import org.spanlift.geometry.Wing;
 import org.spanlift.section.CamberLines;
 
@@ -37,10 +36,7 @@ public final class Wings {
         double s = SEMI_SPAN;
         double area = 4 * s * s / aspectRatio;                 // both halves
         double root = area / (s * (1 + taper));                // S = b cr (1 + taper) / 2, b = 2 s
-        double tip = taper * root;
-        double tipNose = s * Math.tan(sweepQuarter) + 0.25 * root - 0.25 * tip;
-        Planform p = new StationPlanform(List.of(new Station(0, root, 0, 0, 0, "s"),
-                new Station(s, tip, tipNose, 0, 0, "s")));
+        Planform p = new Trapezoid(2 * s, root, taper, sweepQuarter, 0, 0, 0, "s", 0, 0).planform();
         return wing("trapezoid A=" + aspectRatio + " taper=" + taper, p, camber, controls, lattice);
     }
 

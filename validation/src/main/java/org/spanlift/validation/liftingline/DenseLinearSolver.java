@@ -85,11 +85,6 @@ final class DenseLinearSolver {
         }
     }
 
-    /** Size of the system. */
-    int size() {
-        return n;
-    }
-
     /**
      * Solves {@code A x = rhs} for x.
      *

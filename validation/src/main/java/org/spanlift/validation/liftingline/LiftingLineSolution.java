@@ -114,11 +114,6 @@ public record LiftingLineSolution(
         return circulation.clone();
     }
 
-    /** Number of odd Fourier terms used. */
-    public int terms() {
-        return fourierCoefficients.length;
-    }
-
     private static void requireFinite(double v, String what) {
         if (!Double.isFinite(v)) {
             throw new IllegalArgumentException(what + " is not finite: " + v);

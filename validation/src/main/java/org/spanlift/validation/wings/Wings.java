@@ -7,12 +7,10 @@ import java.util.Map;
 import org.spanlift.geometry.EllipticPlanform;
 import org.spanlift.geometry.LatticeSpec;
 import org.spanlift.geometry.LengthUnit;
-import org.spanlift.geometry.Planform;
 import org.spanlift.geometry.Reference;
 import org.spanlift.geometry.Section;
-import org.spanlift.geometry.StationPlanform;
-import org.spanlift.geometry.Station;
 import org.spanlift.geometry.Surface;
+import org.spanlift.geometry.Trapezoid;
 import org.spanlift.geometry.Wing;
 import org.spanlift.section.CamberLines;
 
@@ -37,7 +35,7 @@ public final class Wings {
     public static Wing of(String name, List<Surface> surfaces, Reference reference) {
         Map<String, Section> sections = new LinkedHashMap<>();
         for (Surface s : surfaces) {
-            for (String section : sectionNames(s.planform())) {
+            for (String section : s.planform().sectionNames()) {
                 sections.computeIfAbsent(section, n -> Section.of(n, CamberLines.parse(n)));
             }
         }
@@ -47,14 +45,6 @@ public final class Wings {
     /** A wing of one surface, referred to it. */
     public static Wing of(Surface surface) {
         return of(surface.name(), List.of(surface));
-    }
-
-    private static List<String> sectionNames(Planform planform) {
-        if (planform instanceof StationPlanform p) {
-            return p.stations().stream().map(Station::section).distinct().toList();
-        }
-        EllipticPlanform e = (EllipticPlanform) planform;
-        return List.of(e.sectionName());
     }
 
     /**

@@ -12,9 +12,9 @@ import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.LatticeSpec;
 import org.spanlift.geometry.Spacing;
+import org.spanlift.geometry.Trapezoid;
 import org.spanlift.geometry.Wing;
 import org.spanlift.solve.WingAnalysis;
-import org.spanlift.validation.wings.Trapezoid;
 import org.spanlift.validation.wings.Wings;
 
 /**

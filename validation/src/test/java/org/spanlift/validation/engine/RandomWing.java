@@ -10,9 +10,9 @@ import org.spanlift.geometry.LatticeSpec;
 import org.spanlift.geometry.Reference;
 import org.spanlift.geometry.Spacing;
 import org.spanlift.geometry.Surface;
+import org.spanlift.geometry.Trapezoid;
 import org.spanlift.geometry.Vec3;
 import org.spanlift.geometry.Wing;
-import org.spanlift.validation.wings.Trapezoid;
 import org.spanlift.validation.wings.Wings;
 
 /**
@@ -48,7 +48,7 @@ record RandomWing(long seed, Trapezoid main, Trapezoid tail, List<ControlSurface
             double tailSpan = uniform(r, 0.3, 0.4) * span;
             tail = new Trapezoid(tailSpan, uniform(r, 0.4, 0.7) * rootChord, uniform(r, 0.5, 1),
                     deg(uniform(r, 0, 20)), 0, deg(uniform(r, -3, 0)), 0, "NACA 0012",
-                    main.rootX() + uniform(r, 3, 4) * rootChord, main.rootZ() + uniform(r, 0.3, 0.8));
+                    main.rootNoseX() + uniform(r, 3, 4) * rootChord, main.rootNoseZ() + uniform(r, 0.3, 0.8));
         }
         Spacing[] spacings = Spacing.values();
         LatticeSpec lattice = new LatticeSpec(6 + r.nextInt(5), 2 + r.nextInt(3),
@@ -108,14 +108,26 @@ record RandomWing(long seed, Trapezoid main, Trapezoid tail, List<ControlSurface
     RandomWing scaled(double k) {
         List<ControlSurface> c = controls.stream().map(x -> new ControlSurface(x.name(), x.kind(), k * x.from(),
                 k * x.to(), x.chordFraction(), x.deflection())).toList();
-        return new RandomWing(seed, main.scaled(k), tail == null ? null : tail.scaled(k), c, lattice, alpha,
+        return new RandomWing(seed, scaled(main, k), tail == null ? null : scaled(tail, k), c, lattice, alpha,
                 deflections);
     }
 
     /** The whole wing moved by (dx, 0, dz). */
     RandomWing translated(double dx, double dz) {
-        return new RandomWing(seed, main.translated(dx, dz), tail == null ? null : tail.translated(dx, dz),
+        return new RandomWing(seed, translated(main, dx, dz), tail == null ? null : translated(tail, dx, dz),
                 controls, lattice, alpha, deflections);
+    }
+
+    /** The same shape with every length multiplied by k (angles unchanged). */
+    private static Trapezoid scaled(Trapezoid t, double k) {
+        return new Trapezoid(k * t.span(), k * t.rootChord(), t.taper(), t.quarterChordSweep(), t.dihedral(),
+                t.rootTwist(), t.washout(), t.section(), k * t.rootNoseX(), k * t.rootNoseZ());
+    }
+
+    /** The same shape moved by (dx, 0, dz). */
+    private static Trapezoid translated(Trapezoid t, double dx, double dz) {
+        return new Trapezoid(t.span(), t.rootChord(), t.taper(), t.quarterChordSweep(), t.dihedral(), t.rootTwist(),
+                t.washout(), t.section(), t.rootNoseX() + dx, t.rootNoseZ() + dz);
     }
 
     /** The reference values scaled by k (area by k^2, lengths and moment point by k). */

@@ -8,9 +8,9 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.spanlift.geometry.LatticeSpec;
 import org.spanlift.geometry.Spacing;
+import org.spanlift.geometry.Trapezoid;
 import org.spanlift.lattice.Lattice;
 import org.spanlift.solve.WingAnalysis;
-import org.spanlift.validation.wings.Trapezoid;
 import org.spanlift.validation.wings.Wings;
 
 /**

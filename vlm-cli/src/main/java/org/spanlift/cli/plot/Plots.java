@@ -86,13 +86,12 @@ public final class Plots {
         Reference r = wing.reference();
         SpanLoad load = s.spanLoad(0);
         int n = load.size();
-        double[] y = new double[n];
-        double[] clc = new double[n];
-        double[] cl = new double[n];
+        double[] y = load.y();
+        double[] clc = load.clc();
+        double[] cl = load.cl();
         for (int i = 0; i < n; i++) {
-            y[i] = load.y()[i] / u.metres();
-            clc[i] = load.clc()[i] / r.chord();
-            cl[i] = load.cl()[i];
+            y[i] /= u.metres();
+            clc[i] /= r.chord();
         }
         double wingLift = s.coefficients(0).lift();
         double[][] ell = ellipticLoad(wing.main(), wingLift * r.area(), r.chord(), u, REFERENCE_POINTS);
@@ -322,11 +321,11 @@ public final class Plots {
             double b = main.span();
             double mid = main.mirrored() ? 0 : 0.5 * (main.planform().yStart() + main.planform().yEnd());
             double mean = s.coefficients(0).lift() * wings.get(i).reference().area() / b;
-            double[] eta = new double[load.size()];
-            double[] v = new double[load.size()];
-            for (int k = 0; k < load.size(); k++) {
-                eta[k] = 2 * (load.y()[k] - mid) / b;
-                v[k] = load.clc()[k] / mean;
+            double[] eta = load.y();
+            double[] v = load.clc();
+            for (int k = 0; k < eta.length; k++) {
+                eta[k] = 2 * (eta[k] - mid) / b;
+                v[k] /= mean;
             }
             XYSeries series = c.addSeries(legendLabel(labels.get(i), wings.size()), eta, v);
             style(series, Palette.series(i), Palette.line(i, 2f), Palette.marker(i));

@@ -5,7 +5,6 @@ import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.TreeMap;
 
@@ -229,11 +228,6 @@ public final class SvgWriter {
             }
         }
         return b.toString();
-    }
-
-    /** Formats for ids: lower case letters, digits and hyphens. */
-    static String slug(String s) {
-        return s.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "-").replaceAll("^-|-$", "");
     }
 
     /** The UTF-8 bytes of {@link #document}. */

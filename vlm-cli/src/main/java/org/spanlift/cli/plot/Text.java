@@ -8,7 +8,6 @@ import java.awt.Shape;
 import java.awt.font.FontRenderContext;
 import java.awt.font.TextLayout;
 import java.awt.geom.AffineTransform;
-import java.awt.geom.Rectangle2D;
 
 /**
  * Text drawn as outlines, the way the charts draw theirs, so that a figure looks the same in every viewer
@@ -26,11 +25,6 @@ final class Text {
     /** The advance width of the text in pixels. */
     static double width(String text, Font font) {
         return new TextLayout(text, font, FRC).getAdvance();
-    }
-
-    /** Ascent of the font at its size, pixels. */
-    static double ascent(Font font) {
-        return new TextLayout("Hg", font, FRC).getAscent();
     }
 
     /**
@@ -58,9 +52,5 @@ final class Text {
         }
         g.setColor(colour);
         g.fill(shape);
-    }
-
-    static Rectangle2D bounds(String text, Font font) {
-        return new TextLayout(text, font, FRC).getBounds();
     }
 }
