@@ -6,27 +6,41 @@ import java.util.Collections;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.concurrent.Callable;
 
+import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.AlphaList;
+import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.CommonLift;
+import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
+import org.spanlift.cli.options.UnitsOption;
+import org.spanlift.cli.output.Cautions;
 import org.spanlift.cli.output.Csv;
+import org.spanlift.cli.output.DisplayUnits;
 import org.spanlift.cli.output.Json;
 import org.spanlift.cli.output.TextTable;
 import org.spanlift.cli.report.ComparePage;
 import org.spanlift.cli.report.Comparison;
 import org.spanlift.cli.report.WingSummary;
-import org.spanlift.geometry.LengthUnit;
+import org.spanlift.flight.FlightCondition;
 import org.spanlift.geometry.Wing;
 import org.spanlift.input.InputException;
+import org.spanlift.input.RefusedException;
+import org.spanlift.io.StructureReader;
 import org.spanlift.io.WingFileReader;
-import org.spanlift.results.Coefficients;
+import org.spanlift.loads.LoadsAnalysis;
+import org.spanlift.loads.SpanwiseLoads;
 import org.spanlift.solve.WingAnalysis;
+import org.spanlift.stall.StallStudy;
+import org.spanlift.structure.LoadCase;
+import org.spanlift.structure.WingStructure;
+
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -37,9 +51,11 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code spanlift compare}: several wings side by side, as a table or an HTML page. */
 @Command(name = "compare", mixinStandardHelpOptions = true,
-        description = "Compare wings side by side: area, span, aspect ratio, MAC, lift slope, zero-lift angle, and e "
-                + "and CDi at a common CL, with the differences from the first; as a table, JSON, CSV or an HTML "
-                + "page with the planforms and span loads overlaid.")
+        description = "Compare wings side by side: area, span, aspect ratio, MAC, lift slope, zero-lift angle, e and "
+                + "CDi at a common CL; with section cl_max the stall onset clean and with flaps and the aileron "
+                + "margin; with --weight the stall speeds; with --speed as well, the root shear and bending of that "
+                + "load case. With the differences from the first wing; as a table, JSON, CSV or an HTML page with "
+                + "the planforms and span loads overlaid.")
 public final class CompareCommand implements Callable<Integer>, OffersFormats {
 
     /** The formats this command writes. */
@@ -61,41 +77,98 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
     @Mixin
     OutputOptions output;
 
+    @Mixin
+    FlightOptions flight;
+
+    @Mixin
+    ClMaxOptions clMax;
+
+    @Mixin
+    UnitsOption units;
+
     @Spec
     CommandSpec spec;
 
     @Override
     public Integer call() {
         Format format = output.format(FORMATS);
+        units.check(format);
         if (files.size() > MAX_WINGS) {
             throw new InputException("compare", 0, "", "at most " + MAX_WINGS + " wings at once, got " + files.size());
         }
         CommonLift.check(cl);
         List<Double> curve = AlphaList.parse(range);
+        Optional<FlightCondition> condition = flight.condition();
+        AtmosphereState atmosphere = flight.atmosphere();
+        OptionalDouble speed = flight.equivalentSpeed(atmosphere);
+        if (speed.isPresent() && condition.isEmpty()) {
+            throw new InputException("--speed", 0, "", "the speed sets the load case of the root loads, which also "
+                    + "needs --weight (and --load-factor, default 1)");
+        }
+        Optional<LoadCase> loadCase = speed.isPresent()
+                ? Optional.of(new LoadCase(String.format(Locale.ROOT, "n %.2f at %.1f m/s EAS", flight.loadFactor(),
+                        speed.getAsDouble()), condition.get().weight(), flight.loadFactor(), speed.getAsDouble(),
+                        atmosphere.pressureAltitude(), "given"))
+                : Optional.empty();
         List<String> labels = new ArrayList<>();
-        List<WingSummary> wings = new ArrayList<>();
+        List<Comparison.Entry> entries = new ArrayList<>();
         for (int i = 0; i < files.size(); i++) {
-            Wing wing = WingFileReader.read(files.get(i));
-            WingAnalysis analysis = WingAnalysis.of(wing);
-            double[] d = analysis.fileDeflections();
-            if (!(Math.abs(cl) < analysis.liftCurve(d).slope())) {
-                throw new InputException(files.get(i).toString(), 0, "", "CL " + cl + " is beyond this wing's linear "
-                        + "range");
-            }
-            wings.add(WingSummary.of(files.get(i), wing, analysis, d, cl));
+            entries.add(entry(files.get(i), condition, loadCase));
             labels.add(String.valueOf((char) ('A' + i)));
         }
-        Comparison cmp = new Comparison(labels, wings, cl);
+        Comparison cmp = new Comparison(labels, entries, cl, condition, loadCase, flight.flapsDeg());
+        DisplayUnits u = units.units(entries.get(0).summary().wing().displayUnit());
         String text = switch (format) {
-            case JSON -> Json.write(cmp.json());
+            case JSON -> Json.write(cmp.json(Cautions.COMPARISON));
             case CSV -> csv(cmp);
-            case HTML -> ComparePage.build(cmp, curve, new VersionProvider().getVersion()[0]);
-            default -> table(cmp);
+            case HTML -> ComparePage.build(cmp, curve, u, new VersionProvider().getVersion()[0]);
+            default -> table(cmp, u);
         };
         output.write(text, spec.commandLine().getOut());
         return 0;
     }
 
+    /**
+     * One wing: its aerodynamics at the common CL clean, its stall study with the asked deflections (as
+     * {@code stall} gives it) and the load case's loads clean (as {@code loads} gives them).
+     */
+    private Comparison.Entry entry(Path file, Optional<FlightCondition> condition, Optional<LoadCase> loadCase) {
+        Wing wing = WingFileReader.read(file);
+        WingAnalysis analysis = WingAnalysis.of(wing);
+        double[] asked = analysis.deflections(flight.deflections(wing));
+        double[] clean = StallStudy.cleanDeflections(wing, asked);
+        if (!(Math.abs(cl) < analysis.liftCurve(clean).slope())) {
+            throw new InputException(file.toString(), 0, "", "CL " + cl + " is beyond this wing's linear range");
+        }
+        WingSummary summary = WingSummary.of(file, wing, analysis, clean, cl);
+        List<String> notes = new ArrayList<>();
+        Optional<StallStudy> stall = Optional.empty();
+        try {
+            stall = Optional.of(StallStudy.of(analysis, asked, clMax.assumed(), condition));
+            if (stall.get().assumedClMax()) {
+                notes.add("cl_max assumed for sections that give none (--assume-cl-max)");
+            }
+        } catch (RefusedException e) {
+            notes.add("no stall results: " + e.getMessage());
+        }
+        Optional<SpanwiseLoads> loads = Optional.empty();
+        if (loadCase.isPresent()) {
+            if (!wing.main().mirrored()) {
+                notes.add("no root loads: loads are computed per half-wing and the first surface is not mirrored");
+            } else {
+                WingStructure structure = StructureReader.read(file, wing);
+                if (structure == WingStructure.NONE) {
+                    notes.add("no structure section: root loads are the air load alone, without inertia relief");
+                }
+                try {
+                    loads = Optional.of(LoadsAnalysis.of(analysis, structure, clean).loads(loadCase.get()));
+                } catch (RefusedException e) {
+                    notes.add("no root loads: " + e.getMessage());
+                }
+            }
+        }
+        return new Comparison.Entry(summary, stall, loads, notes);
+    }
 
     private static String csv(Comparison cmp) {
         List<String> header = new ArrayList<>(List.of("quantity", "unit"));
@@ -105,11 +178,11 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
         }
         Csv csv = new Csv(header);
         for (Comparison.Row r : cmp.rows()) {
-            List<Object> cells = new ArrayList<>(List.of(r.key(), r.unit(LengthUnit.M)));
-            for (int i = 0; i < cmp.wings().size(); i++) {
+            List<Object> cells = new ArrayList<>(List.of(r.key(), r.unit(DisplayUnits.si())));
+            for (int i = 0; i < cmp.entries().size(); i++) {
                 cells.add(boxed(cmp.value(r, i)));
             }
-            for (int i = 1; i < cmp.wings().size(); i++) {
+            for (int i = 1; i < cmp.entries().size(); i++) {
                 cells.add(boxed(cmp.difference(r, i)));
             }
             csv.row(cells.toArray());
@@ -121,14 +194,15 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
         return v.isPresent() ? v.getAsDouble() : null;
     }
 
-    private static String table(Comparison cmp) {
-        LengthUnit u = cmp.wings().get(0).wing().displayUnit();
+    private static String table(Comparison cmp, DisplayUnits u) {
         StringBuilder b = new StringBuilder();
-        for (int i = 0; i < cmp.wings().size(); i++) {
-            b.append("  ").append(cmp.labels().get(i)).append("  ").append(cmp.wings().get(i).wing().name())
-                    .append(" (").append(cmp.wings().get(i).file()).append(")\n");
+        for (int i = 0; i < cmp.entries().size(); i++) {
+            WingSummary w = cmp.entries().get(i).summary();
+            b.append("  ").append(cmp.labels().get(i)).append("  ").append(w.wing().name())
+                    .append(" (").append(w.file()).append(")\n");
         }
-        b.append('\n');
+        b.append(ComparePage.conditionText(cmp, u).isEmpty() ? "" : "  " + ComparePage.conditionText(cmp, u) + "\n")
+                .append('\n');
         List<String> header = new ArrayList<>(List.of("quantity", "unit"));
         header.addAll(cmp.labels());
         for (int i = 1; i < cmp.labels().size(); i++) {
@@ -137,19 +211,27 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
         TextTable t = new TextTable(header);
         for (Comparison.Row r : cmp.rows()) {
             List<String> row = new ArrayList<>(List.of(r.label(), r.unit(u)));
-            for (int i = 0; i < cmp.wings().size(); i++) {
+            for (int i = 0; i < cmp.entries().size(); i++) {
                 OptionalDouble v = cmp.value(r, i);
                 row.add(v.isPresent() ? TextTable.fixed(r.display(v.getAsDouble(), u), r.decimals()) : "-");
             }
-            for (int i = 1; i < cmp.wings().size(); i++) {
+            for (int i = 1; i < cmp.entries().size(); i++) {
                 OptionalDouble v = cmp.difference(r, i);
                 row.add(v.isPresent() ? signed(TextTable.fixed(r.display(v.getAsDouble(), u), r.decimals())) : "-");
             }
             t.row(row);
         }
         b.append(t.render());
-        b.append(String.format(Locale.ROOT, "%n  Common CL %.3f. Lengths in %s (the first wing's unit); each "
-                + "wing on its own reference values; CDi is induced drag only.%n", cmp.cl(), u.symbol()));
+        b.append(String.format(Locale.ROOT, "%n  Common CL %.3f, every flap at zero there. Lengths in %s; each "
+                + "wing on its own reference values; CDi is induced drag only.%n", cmp.cl(), u.length().symbol()));
+        for (int i = 0; i < cmp.entries().size(); i++) {
+            for (String note : cmp.entries().get(i).notes()) {
+                b.append("  ").append(cmp.labels().get(i)).append(": ").append(note).append('\n');
+            }
+        }
+        if (cmp.bearsOnSafety()) {
+            b.append('\n').append(TextTable.wrap(Cautions.COMPARISON)).append('\n');
+        }
         return b.toString();
     }
 

@@ -19,10 +19,14 @@ import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
+import org.spanlift.cli.options.UnitsOption;
+import org.spanlift.cli.output.Cautions;
 import org.spanlift.cli.output.Csv;
+import org.spanlift.cli.output.DisplayUnits;
 import org.spanlift.cli.output.Json;
 import org.spanlift.cli.output.Results;
 import org.spanlift.cli.output.TextTable;
+import org.spanlift.geometry.LengthUnit;
 import org.spanlift.geometry.Wing;
 import org.spanlift.input.InputException;
 import org.spanlift.io.WingFileReader;
@@ -41,6 +45,8 @@ import org.spanlift.loads.SpanwiseLoads;
 import org.spanlift.io.StructureReader;
 import org.spanlift.structure.WingStructure;
 import org.spanlift.solve.WingAnalysis;
+import org.spanlift.vocabulary.ResultKey;
+import org.spanlift.vocabulary.ResultUnit;
 import org.spanlift.vocabulary.Vocabulary;
 import org.spanlift.vocabulary.WingResult;
 
@@ -65,10 +71,6 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
     static final String NO_STALL = "Linear theory has no stall: check each case's CL against the wing's maximum "
             + "(spanlift stall); a case beyond it cannot be flown at that speed.";
 
-    static final String CAUTION = "Caution: loads for preliminary sizing only. Structural design and substantiation "
-            + "follow the applicable airworthiness standards and licensed engineering practice, with the required "
-            + "safety factors, which this tool does not apply unless told to (--safety-factor).";
-
     static final String ENVELOPE_NOTE = "The envelope's corner points are an aid to exploring loads, not a statement "
             + "of compliance with any airworthiness standard.";
 
@@ -77,6 +79,8 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
             + "text) and EASA CS-23.341 (after Pratt, NACA TN 2964)";
 
     static final Map<String, String> SIGNS = signs();
+
+
 
     @Parameters(index = "0", paramLabel = "FILE", description = "The wing file (.wing.yaml), with its structure section.")
     Path file;
@@ -104,12 +108,19 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
     @Mixin
     FlightOptions flight;
 
+    @Mixin
+    UnitsOption units;
+
     @Spec
     CommandSpec spec;
+
+    /** The load case of --weight, --load-factor and --speed, when given that way. */
+    private LoadCase commandLineCase;
 
     @Override
     public Integer call() {
         Format format = output.format(FORMATS);
+        units.check(format);
         if (safetyFactor != null && !(safetyFactor >= 1 && safetyFactor <= 3)) {
             throw new InputException("--safety-factor", 0, "", "expected a factor from 1 to 3, got " + safetyFactor);
         }
@@ -162,8 +173,9 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
                 throw new InputException("--speed", 0, "", "a load case needs the equivalent airspeed (such as 105kt)");
             }
             double n = flight.loadFactor();
-            cases = List.of(new LoadCase(String.format(Locale.ROOT, "n %.2f at %.1f m/s EAS", n, speed.getAsDouble()),
-                    weight.getAsDouble(), n, speed.getAsDouble(), atmosphere.pressureAltitude(), "given"));
+            commandLineCase = new LoadCase(String.format(Locale.ROOT, "n %.2f at %.1f m/s EAS", n, speed.getAsDouble()),
+                    weight.getAsDouble(), n, speed.getAsDouble(), atmosphere.pressureAltitude(), "given");
+            cases = List.of(commandLineCase);
         }
         List<SpanwiseLoads> results = new ArrayList<>();
         double f = safetyFactor == null ? 1 : safetyFactor;
@@ -174,7 +186,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         String text = switch (format) {
             case JSON -> Json.write(json(wing, loads, results, governing, envelope));
             case CSV -> csv(results);
-            default -> table(wing, loads, results, governing, envelope);
+            default -> table(wing, loads, results, governing, envelope, units.units(wing.displayUnit()));
         };
         output.write(text, spec.commandLine().getOut());
         return 0;
@@ -213,7 +225,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         units.put("pressure", "Pa");
         units.put("altitude", "m, pressure altitude (geopotential, standard atmosphere)");
         root.put("units", units);
-        root.put("caution", CAUTION);
+        root.put("caution", Cautions.LOADS);
         root.put("note", NO_STALL);
         root.put("safety_factor", safetyFactor);
         root.put("loads_are", factorNote());
@@ -248,23 +260,15 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
             m.put("load_factor", c.loadFactor());
             m.put("speed", c.equivalentSpeed());
             m.put("altitude", c.altitude());
-            m.put("dynamic_pressure", l.dynamicPressure());
-            m.put("CL", l.liftCoefficient());
-            m.put("alpha_deg", Math.toDegrees(l.alpha()));
+            Results.put(m, Vocabulary.select(Vocabulary.LOADS, "dynamic_pressure", "CL", "alpha_deg"), l);
             m.put("y", l.y());
             m.put("shear", l.shear());
             m.put("bending", l.bending());
             m.put("torsion", l.torsion());
             m.put("chord_shear", l.chordShear());
             m.put("chord_bending", l.chordBending());
-            Map<String, Object> r = new LinkedHashMap<>();
-            r.put("shear", l.rootShear());
-            r.put("bending", l.rootBending());
-            r.put("torsion", l.rootTorsion());
-            r.put("chord_shear", l.chordShear()[0]);
-            r.put("chord_bending", l.chordBending()[0]);
-            r.put("load_along_lift", l.loadAlongLift());
-            m.put("root", r);
+            Results.put(m, Vocabulary.select(Vocabulary.LOADS, "root.shear", "root.bending", "root.torsion",
+                    "root.chord_shear", "root.chord_bending", "root.load_along_lift"), l);
             cs.add(m);
         }
         root.put("cases", cs);
@@ -321,7 +325,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
                         shear[k], bending[k], torsion[k], chordShear[k], chordBending[k]);
             }
         }
-        return "# " + CAUTION + " " + capitalized(factorNote()) + ".\n" + c;
+        return "# " + Cautions.LOADS + " " + capitalized(factorNote()) + ".\n" + c;
     }
 
     private static String capitalized(String s) {
@@ -329,36 +333,47 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
     }
 
     private String table(Wing wing, LoadsAnalysis loads, List<SpanwiseLoads> results, Governing g,
-            List<Envelope.Point> envelope) {
-        String u = wing.displayUnit().symbol();
-        double k = wing.displayUnit().metres();
+            List<Envelope.Point> envelope, DisplayUnits du) {
+        String u = du.length().symbol();
+        double k = du.length().metres();
+        String m = du.massSymbol();
         WingStructure st = loads.structure();
         StringBuilder b = new StringBuilder(wing.name()).append('\n');
         b.append("  spanwise loads of the right half-wing; ").append(factorNote()).append('\n');
-        b.append(String.format(Locale.ROOT, "  spar line at %.0f%% chord; half-wing mass %.2f kg (distributed %.2f kg, %s, "
-                + "centre at %.0f%% chord", 100 * st.sparFraction(), loads.halfWingMass(), loads.distributedHalfMass(),
-                st.table().isPresent() ? "mass table" : "by chord", 100 * st.massCentreFraction()));
+        b.append(String.format(Locale.ROOT, "  spar line at %.0f%% chord; half-wing mass %.2f %s (distributed %.2f %s, %s, "
+                + "centre at %.0f%% chord", 100 * st.sparFraction(), du.mass(loads.halfWingMass()), m,
+                du.mass(loads.distributedHalfMass()), m, st.table().isPresent() ? "mass table" : "by chord",
+                100 * st.massCentreFraction()));
         for (PointMass p : st.pointMasses()) {
-            b.append(String.format(Locale.ROOT, "; %s %.2f kg at y %.3f %s", p.name(), p.mass(), p.y() / k, u));
+            b.append(String.format(Locale.ROOT, "; %s %.2f %s at y %.3f %s", p.name(), du.mass(p.mass()), m, p.y() / k, u));
         }
         b.append(")\n");
         if (!st.hasMass()) {
             b.append("  NOTE: no wing mass given: no inertia relief (larger loads in magnitude).\n");
         }
         b.append("  signs: shear up +, bending up-bending +, torsion nose-up + (about the spar line; see the README)\n\n");
-        TextTable cases = new TextTable(List.of("#", "case", "n", "EAS [kt]", "CL", "alpha [deg]", "root shear [N]",
-                "root bending [N m]", "root torsion [N m]"));
+        List<ResultKey<SpanwiseLoads>> keys = Vocabulary.select(Vocabulary.LOADS, "CL", "alpha_deg", "root.shear",
+                "root.bending", "root.torsion");
+        List<String> header = new ArrayList<>(List.of("#", "case", "n", "EAS [kt]"));
+        keys.forEach(key -> header.add(Results.label(key, du)));
+        TextTable cases = new TextTable(header);
         for (int i = 0; i < results.size(); i++) {
             SpanwiseLoads l = results.get(i);
-            cases.row(List.of(String.valueOf(i), l.loadCase().name(), TextTable.fixed(l.loadCase().loadFactor(), 2),
-                    TextTable.fixed(Airspeed.knots(l.loadCase().equivalentSpeed()), 1), TextTable.fixed(l.liftCoefficient(), 3),
-                    TextTable.fixed(Math.toDegrees(l.alpha()), 2), TextTable.fixed(l.rootShear(), 0),
-                    TextTable.fixed(l.rootBending(), 0), TextTable.fixed(l.rootTorsion(), 0)));
+            List<String> row = new ArrayList<>(List.of(String.valueOf(i), caseName(l.loadCase(), envelope, du),
+                    TextTable.fixed(l.loadCase().loadFactor(), 2),
+                    TextTable.fixed(Airspeed.knots(l.loadCase().equivalentSpeed()), 1)));
+            keys.forEach(key -> row.add(Results.cell(key, l, du)));
+            cases.row(row);
         }
         b.append(cases.render()).append('\n');
         b.append("  governing case at each station: value (case #)\n");
-        TextTable t = new TextTable(List.of("y [" + u + "]", "shear max [N]", "shear min [N]", "bending max [N m]",
-                "bending min [N m]", "torsion max [N m]", "torsion min [N m]"));
+        String f = du.symbol(ResultUnit.NEWTON);
+        String mo = du.symbol(ResultUnit.NEWTON_METRE);
+        TextTable t = new TextTable(List.of("y [" + u + "]", "shear max [" + f + "]", "shear min [" + f + "]",
+                "bending max [" + mo + "]", "bending min [" + mo + "]", "torsion max [" + mo + "]",
+                "torsion min [" + mo + "]"));
+        ResultUnit[] kinds = {ResultUnit.NEWTON, ResultUnit.NEWTON, ResultUnit.NEWTON_METRE, ResultUnit.NEWTON_METRE,
+            ResultUnit.NEWTON_METRE, ResultUnit.NEWTON_METRE};
         double[] gy = g.y();
         List<double[]> values = new ArrayList<>();
         List<int[]> which = new ArrayList<>();
@@ -369,7 +384,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         for (int s = 0; s < gy.length; s++) {
             List<String> row = new ArrayList<>(List.of(TextTable.fixed(gy[s] / k, 3)));
             for (int c = 0; c < values.size(); c++) {
-                row.add(cell(values.get(c)[s], which.get(c)[s]));
+                row.add(cell(du.convert(kinds[c], values.get(c)[s]), which.get(c)[s]));
             }
             t.row(row);
         }
@@ -380,8 +395,37 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
                     + "envelope file gives lift-slope), c = S/b. " + ENVELOPE_NOTE)).append('\n');
         }
         b.append('\n').append(TextTable.wrap(NO_STALL)).append('\n');
-        b.append('\n').append(TextTable.wrap(CAUTION)).append('\n');
+        b.append('\n').append(TextTable.wrap(Cautions.LOADS)).append('\n');
         return b.toString();
+    }
+
+    /**
+     * A case's name in the table's units: the command line's case and the envelope's points are named from their
+     * values; a case from a cases file keeps its own name.
+     */
+    private String caseName(LoadCase c, List<Envelope.Point> envelope, DisplayUnits du) {
+        if (c == commandLineCase) {
+            return String.format(Locale.ROOT, "n %.2f at %s EAS", c.loadFactor(), du.speed(c.equivalentSpeed()));
+        }
+        if (envelope != null) {
+            for (Envelope.Point p : envelope) {
+                if (p.loadCase() == c) {
+                    return Double.isNaN(p.gustVelocity())
+                            ? String.format(Locale.ROOT, "manoeuvre n %+.2f at %s, %s", c.loadFactor(), p.speedName(),
+                                    du.force(c.weight()))
+                            : String.format(Locale.ROOT, "%s gust %s at %s, n %+.2f, %s", c.loadFactor() >= 1 ? "up"
+                                    : "down", gust(p.gustVelocity(), du), p.speedName(), c.loadFactor(),
+                                    du.force(c.weight()));
+                }
+            }
+        }
+        return c.name();
+    }
+
+    /** A derived gust velocity as the standards give it: m/s, or ft/s in US units. */
+    private static String gust(double metresPerSecond, DisplayUnits du) {
+        return du.us() ? String.format(Locale.ROOT, "%.1f ft/s", metresPerSecond / LengthUnit.FT.metres())
+                : String.format(Locale.ROOT, "%.2f m/s", metresPerSecond);
     }
 
     private static String cell(double v, int c) {

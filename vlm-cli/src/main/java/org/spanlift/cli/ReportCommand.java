@@ -4,25 +4,28 @@ import java.nio.file.Path;
 import java.util.Collections;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
 
 import org.spanlift.cli.options.AlphaList;
-import org.spanlift.cli.options.CommonLift;
 import org.spanlift.cli.options.ClMaxOptions;
+import org.spanlift.cli.options.CommonLift;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
+import org.spanlift.cli.options.UnitsOption;
 import org.spanlift.cli.plot.FigureOutput;
 import org.spanlift.cli.report.ReportPage;
-import org.spanlift.cli.report.StallSummary;
 import org.spanlift.cli.report.WingSummary;
+import org.spanlift.flight.FlightCondition;
 import org.spanlift.geometry.Wing;
+import org.spanlift.input.RefusedException;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.solve.WingAnalysis;
-import org.spanlift.stall.MissingSectionDataException;
 import org.spanlift.stall.StallStudy;
+
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -65,6 +68,9 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
     @Mixin
     ClMaxOptions clMax;
 
+    @Mixin
+    UnitsOption units;
+
     @Spec
     CommandSpec spec;
 
@@ -76,20 +82,27 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
         CommonLift.check(cl);
         Wing wing = WingFileReader.read(file);
         WingAnalysis analysis = WingAnalysis.of(wing);
-        double[] deflections = analysis.deflections(flight.deflections(wing));
-        WingSummary summary = WingSummary.of(file, wing, analysis, deflections, cl);
+        double[] asked = analysis.deflections(flight.deflections(wing));
+        double[] clean = StallStudy.cleanDeflections(wing, asked);
+        Optional<FlightCondition> condition = flight.condition();
+        WingSummary summary = WingSummary.of(file, wing, analysis, clean, cl);
+        Optional<WingSummary> flaps = StallStudy.anyFlapDeflected(wing, asked)
+                ? Optional.of(WingSummary.of(file, wing, analysis, asked, cl)) : Optional.empty();
         Wing fineWing = WingSummary.doubledStrips(wing);
-        WingSummary fine = WingSummary.of(file, fineWing, WingAnalysis.of(fineWing), deflections, cl);
-        StallSummary stall;
+        WingAnalysis fineAnalysis = WingAnalysis.of(fineWing);
+        WingSummary fine = WingSummary.of(file, fineWing, fineAnalysis, clean, cl);
+        Optional<StallStudy> stall = Optional.empty();
+        Optional<StallStudy> stallFine = Optional.empty();
+        String unavailable = "";
         try {
-            StallStudy.Configuration c = StallStudy.configuration("report", analysis, deflections, clMax.assumed(),
-                    flight.condition());
-            stall = StallSummary.of(c.estimate(), c.speed());
-        } catch (MissingSectionDataException e) {
-            stall = StallSummary.unavailable(e.getMessage());
+            stall = Optional.of(StallStudy.of(analysis, asked, clMax.assumed(), condition));
+            stallFine = Optional.of(StallStudy.of(fineAnalysis, clean, Optional.empty(), clMax.assumed(), condition));
+        } catch (RefusedException e) {
+            unavailable = e.getMessage();
         }
-        String html = ReportPage.build(summary, fine, stall, alphas, curve, flight.reynoldsRule(wing),
-                new VersionProvider().getVersion()[0]);
+        String html = ReportPage.build(new ReportPage.Inputs(summary, flaps, fine, stall, stallFine, unavailable,
+                condition, flight.reynoldsRule(wing), alphas, curve, units.units(wing.displayUnit()),
+                new VersionProvider().getVersion()[0]));
         assert format == Format.HTML;
         output.write(html, spec.commandLine().getOut());
         return 0;

@@ -22,14 +22,15 @@ import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
+import org.spanlift.cli.options.UnitsOption;
 import org.spanlift.cli.output.Csv;
+import org.spanlift.cli.output.DisplayUnits;
 import org.spanlift.cli.output.Json;
 import org.spanlift.cli.output.TextTable;
 import org.spanlift.cli.output.Results;
 import org.spanlift.flight.FlightCondition;
 import org.spanlift.flight.FlightPoint;
 import org.spanlift.flight.ReynoldsRule;
-import org.spanlift.geometry.LengthUnit;
 import org.spanlift.input.RefusedException;
 import org.spanlift.vocabulary.Need;
 import org.spanlift.vocabulary.ResultKey;
@@ -92,6 +93,9 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
     @Mixin
     FlightOptions flight;
 
+    @Mixin
+    UnitsOption units;
+
     @Spec
     CommandSpec spec;
 
@@ -120,6 +124,11 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
     @Override
     public Integer call() {
         Format format = output.format(FORMATS);
+        units.check(format);
+        if (!spec.commandLine().getParseResult().hasMatchedOption("--weight")) {
+            FlightOptions.refuse(spec, "the load factor sets the CL required by --weight at --speed; give --weight",
+                    "--load-factor");
+        }
         boolean alphaGiven = spec.commandLine().getParseResult().hasMatchedOption("--alpha");
         List<Double> alphas = targetLift.isEmpty() || alphaGiven ? AlphaList.parse(alpha) : List.of();
         Wing wing = WingFileReader.read(file);
@@ -147,7 +156,7 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         String text = switch (format) {
             case JSON -> Json.write(json(wing, analysis, line, points, level, dims));
             case CSV -> csv(points, dims);
-            default -> table(wing, analysis, line, points, level, dims);
+            default -> table(wing, analysis, line, points, level, dims, units.units(wing.displayUnit()));
         };
         String loads = spanLoadFile == null ? null : spanLoadCsv(wing, points, dims);
         output.write(text, spec.commandLine().getOut());
@@ -293,9 +302,9 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
     }
 
     private static String table(Wing wing, WingAnalysis analysis, LiftCurve line, List<Solution> points,
-            Optional<Level> level, Dimensions dims) {
-        String u = wing.displayUnit().symbol();
-        double k = wing.displayUnit().metres();
+            Optional<Level> level, Dimensions dims, DisplayUnits unit) {
+        String u = unit.length().symbol();
+        double k = unit.length().metres();
         Reference r = wing.reference();
         StringBuilder b = new StringBuilder();
         b.append(wing.name()).append('\n');
@@ -322,14 +331,14 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
             b.append("  controls     ").append(String.join(", ", d)).append(" (trailing edge down; aileron: right side)\n");
         }
         level.ifPresent(l -> b.append(String.format(Locale.ROOT,
-                "  flight       weight %.0f N, n = %.2f, %.1f m/s EAS (%.1f m/s TAS) at %.0f m pressure altitude:%n"
+                "  flight       weight %s, n = %.2f, %s EAS (%s TAS) at %s pressure altitude:%n"
                         + "               CL required %.4f at alpha %.2f deg%n",
-                l.condition().weight(), l.condition().loadFactor(), dims.equivalentSpeed().getAsDouble(),
-                dims.circulationScale(), dims.atmosphere().pressureAltitude(), l.solution().coefficients().lift(),
+                unit.force(l.condition().weight()), l.condition().loadFactor(),
+                unit.speed(dims.equivalentSpeed().getAsDouble()), unit.speed(dims.circulationScale()),
+                unit.altitude(dims.atmosphere().pressureAltitude()), l.solution().coefficients().lift(),
                 Math.toDegrees(l.solution().alpha()))));
         b.append('\n');
         boolean drag = ProfileDrag.available(wing);
-        LengthUnit unit = wing.displayUnit();
         List<ResultKey<FlightPoint>> keys = TABLE_KEYS.stream().filter(key -> drag || !key.needs(Need.POLARS)).toList();
         List<String> headers = new ArrayList<>(keys.stream().map(key -> Results.label(key, unit)).toList());
         boolean several = wing.surfaces().size() > 1;

@@ -44,6 +44,7 @@ public final class SpanliftCommand implements Runnable {
                 OutputOptions.describeFormats(sub.getCommandSpec(), command.formats());
             }
         }
+        cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.setExecutionExceptionHandler((e, line, parse) -> {
             PrintWriter err = line.getErr();
             if (e instanceof InputException) {

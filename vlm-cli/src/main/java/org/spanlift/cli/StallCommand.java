@@ -19,11 +19,13 @@ import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
+import org.spanlift.cli.options.UnitsOption;
+import org.spanlift.cli.output.Cautions;
+import org.spanlift.cli.output.DisplayUnits;
 import org.spanlift.cli.output.Json;
 import org.spanlift.cli.output.Results;
 import org.spanlift.cli.output.TextTable;
 import org.spanlift.flight.FlightCondition;
-import org.spanlift.geometry.LengthUnit;
 import org.spanlift.geometry.Wing;
 import org.spanlift.input.InputException;
 import org.spanlift.io.WingFileReader;
@@ -51,10 +53,6 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
     /** The formats this command writes. */
     static final Set<Format> FORMATS = Collections.unmodifiableSet(EnumSet.of(Format.TABLE, Format.JSON));
 
-    static final String CAUTION = "Caution: an estimate from linear theory and section data for the wing alone (the "
-            + "tail's download, which raises the real stall speed, is not included); not a substitute for flight "
-            + "test, airworthiness standards or licensed engineering judgement.";
-
     @Parameters(index = "0", paramLabel = "FILE", description = "The wing file (.wing.yaml).")
     Path file;
 
@@ -67,12 +65,18 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
     @Mixin
     FlightOptions flight;
 
+    @Mixin
+    UnitsOption units;
+
     @Spec
     CommandSpec spec;
 
     @Override
     public Integer call() {
         Format format = output.format(FORMATS);
+        units.check(format);
+        FlightOptions.refuse(spec, "stall finds the stall speed itself; give --weight (and --altitude) for it",
+                "--speed", "--true-speed");
         Wing wing = WingFileReader.read(file);
         Map<String, Double> overrides = flight.deflections(wing);
         Optional<FlightCondition> condition = flight.condition();
@@ -88,7 +92,7 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         WingResult wingResult = WingResult.of(analysis, asked);
         String text = format == Format.JSON
                 ? Json.write(json(wingResult, study, atmosphere))
-                : table(wing, study, atmosphere);
+                : table(wing, study, atmosphere, units.units(wing.displayUnit()));
         output.write(text, spec.commandLine().getOut());
         return 0;
     }
@@ -154,7 +158,7 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
             sp.put("weight", fc.weight());
             sp.put("load_factor", fc.loadFactor());
         });
-        root.put("caution", CAUTION);
+        root.put("caution", Cautions.STALL);
         return root;
     }
 
@@ -166,10 +170,9 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         return m;
     }
 
-    private static String table(Wing wing, StallStudy study, AtmosphereState atmosphere) {
-        LengthUnit unit = wing.displayUnit();
-        String u = unit.symbol();
-        double k = unit.metres();
+    private static String table(Wing wing, StallStudy study, AtmosphereState atmosphere, DisplayUnits unit) {
+        String u = unit.length().symbol();
+        double k = unit.length().metres();
         StringBuilder b = new StringBuilder(wing.name()).append('\n');
         b.append("  stall onset by the critical-section method (linear theory)\n");
         double fuselage = wing.main().fuselageHalfWidth();
@@ -177,10 +180,14 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
             b.append(String.format(Locale.ROOT, "  stations inside the fuselage (|y| < %.3f %s) are not stall candidates%n",
                     fuselage / k, u));
         }
-        if (study.condition().isPresent()) {
-            b.append(String.format(Locale.ROOT, "  pressure altitude %.0f m (geopotential), density %.4f kg/m^3, %.2f K%n",
-                    atmosphere.pressureAltitude(), atmosphere.density(), atmosphere.temperature()));
-        }
+        study.condition().ifPresent(fc -> {
+            b.append("  weight ").append(unit.weight(fc.weight()));
+            if (fc.loadFactor() != 1) {
+                b.append(String.format(Locale.ROOT, ", load factor %.2f", fc.loadFactor()));
+            }
+            b.append(String.format(Locale.ROOT, "; pressure altitude %s (geopotential), density %.4f kg/m^3, %.2f K%n",
+                    unit.altitude(atmosphere.pressureAltitude()), atmosphere.density(), atmosphere.temperature()));
+        });
         b.append('\n');
         List<Configuration> configs = study.configurations();
         List<String> headers = new ArrayList<>(List.of(""));
@@ -193,7 +200,9 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         if (study.condition().isPresent()) {
             t.row(cells("stall speed EAS [kt]", configs, c -> TextTable.fixed(Airspeed.knots(c.speed().orElseThrow().equivalent()), 1)));
             t.row(cells("stall speed TAS [kt]", configs, c -> TextTable.fixed(Airspeed.knots(c.speed().orElseThrow().trueSpeed()), 1)));
-            t.row(cells("stall speed EAS [m/s]", configs, c -> TextTable.fixed(c.speed().orElseThrow().equivalent(), 2)));
+            if (!unit.us()) {
+                t.row(cells("stall speed EAS [m/s]", configs, c -> TextTable.fixed(c.speed().orElseThrow().equivalent(), 2)));
+            }
         }
         b.append(t.render());
         study.flapIncrement().ifPresent(inc -> b.append(String.format(Locale.ROOT,
@@ -220,7 +229,7 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         if (study.condition().isEmpty()) {
             b.append("\n  No --weight given: no stall speeds; cl-max tables read at their lowest Reynolds number.\n");
         }
-        b.append('\n').append(TextTable.wrap(CAUTION)).append('\n');
+        b.append('\n').append(TextTable.wrap(Cautions.STALL)).append('\n');
         return b.toString();
     }
 

@@ -14,6 +14,7 @@ import org.spanlift.cli.sweep.RowFormat;
 import org.spanlift.cli.sweep.Shard;
 import org.spanlift.cli.sweep.SweepRunner;
 import org.spanlift.cli.options.OutputOptions;
+import org.spanlift.cli.output.Cautions;
 import org.spanlift.input.InputException;
 import org.spanlift.sweep.Ranking;
 import org.spanlift.sweep.ResultColumn;
@@ -30,9 +31,6 @@ import picocli.CommandLine.Model.CommandSpec;
         description = "Run a geometry sweep (.sweep.yaml): every case of a full grid or a Latin hypercube, one row "
                 + "per case in case order, with a ranked summary beside the results.")
 public final class SweepCommand implements Callable<Integer> {
-
-    static final String CAUTION = "Caution: stall results are linear-theory estimates for the wing alone; they "
-            + "inform design and do not replace flight test, airworthiness standards or licensed engineering judgement.";
 
     @Parameters(index = "0", paramLabel = "FILE", description = "The sweep file (.sweep.yaml).")
     Path file;
@@ -154,7 +152,7 @@ public final class SweepCommand implements Callable<Integer> {
                 err.println("  NOTE: sections without cl-max data use the assumed cl_max "
                         + sweep.assumeClMax().getAsDouble() + " (column " + ResultColumn.ASSUMED_CL_MAX + ")");
             }
-            err.println("  " + CAUTION);
+            err.println("  " + Cautions.SWEEP);
         }
         err.flush();
     }

@@ -25,8 +25,14 @@ public final class Envelope {
     private Envelope() {
     }
 
-    /** One point of the envelope with the gust formula's intermediate values where it is a gust point. */
-    public record Point(LoadCase loadCase, String kind, double massRatio, double alleviation) {
+    /**
+     * One point of the envelope with the gust formula's intermediate values where it is a gust point.
+     *
+     * @param speedName    the design speed it stands at ({@code VA}, {@code VC}, ...)
+     * @param gustVelocity the derived gust velocity, m/s (NaN for a manoeuvre point)
+     */
+    public record Point(LoadCase loadCase, String kind, String speedName, double gustVelocity, double massRatio,
+            double alleviation) {
     }
 
     /**
@@ -62,8 +68,8 @@ public final class Envelope {
 
     private static void manoeuvre(List<Point> out, String speedName, double v, double n, double w, double h, String wt) {
         String name = String.format(Locale.ROOT, "manoeuvre n %+.2f at %s, %s", n, speedName, wt);
-        out.add(new Point(new LoadCase(name, w, n, v, h, "manoeuvre " + speedName), "manoeuvre", Double.NaN,
-                Double.NaN));
+        out.add(new Point(new LoadCase(name, w, n, v, h, "manoeuvre " + speedName), "manoeuvre", speedName,
+                Double.NaN, Double.NaN, Double.NaN));
     }
 
     private static void gust(List<Point> out, String speedName, double v, double u, double w, double h, double area,
@@ -74,7 +80,7 @@ public final class Envelope {
             String name = String.format(Locale.ROOT, "%s gust %.2f m/s at %s, n %+.2f, %s", sign > 0 ? "up" : "down", u,
                     speedName, n, wt);
             out.add(new Point(new LoadCase(name, w, n, v, h, (sign > 0 ? "up" : "down") + " gust " + speedName),
-                    "gust", g.massRatio(), g.alleviation()));
+                    "gust", speedName, u, g.massRatio(), g.alleviation()));
         }
     }
 }

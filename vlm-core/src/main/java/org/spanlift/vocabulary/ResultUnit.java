@@ -14,6 +14,12 @@ public enum ResultUnit {
     METRE("m", "length"),
     /** Square metres. */
     SQUARE_METRE("m^2", "area"),
+    /** Newtons. */
+    NEWTON("N", "force"),
+    /** Newton metres. */
+    NEWTON_METRE("N m", "moment"),
+    /** Pascals. */
+    PASCAL("Pa", "pressure"),
     /** Metres per second. */
     METRE_PER_SECOND("m/s", "speed"),
     /** A whole number. */

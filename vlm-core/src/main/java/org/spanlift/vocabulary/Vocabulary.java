@@ -5,7 +5,10 @@ import static org.spanlift.vocabulary.ResultUnit.DEGREE;
 import static org.spanlift.vocabulary.ResultUnit.FLAG;
 import static org.spanlift.vocabulary.ResultUnit.METRE;
 import static org.spanlift.vocabulary.ResultUnit.METRE_PER_SECOND;
+import static org.spanlift.vocabulary.ResultUnit.NEWTON;
+import static org.spanlift.vocabulary.ResultUnit.NEWTON_METRE;
 import static org.spanlift.vocabulary.ResultUnit.NONE;
+import static org.spanlift.vocabulary.ResultUnit.PASCAL;
 import static org.spanlift.vocabulary.ResultUnit.PER_DEGREE;
 import static org.spanlift.vocabulary.ResultUnit.PER_RADIAN;
 import static org.spanlift.vocabulary.ResultUnit.SQUARE_METRE;
@@ -20,6 +23,7 @@ import java.util.function.Function;
 
 import org.spanlift.flight.FlightPoint;
 import org.spanlift.lattice.Lattice;
+import org.spanlift.loads.SpanwiseLoads;
 import org.spanlift.stall.StallEstimate;
 import org.spanlift.stall.StallSpeed;
 import org.spanlift.stall.StallStudy;
@@ -37,6 +41,7 @@ import org.spanlift.stall.StallStudy;
  * <li>{@link #ONSET}: a stall onset, under {@link #CLEAN} ({@code stall.eta}) or {@link #FLAPS}
  * ({@code stall_flaps.CL});</li>
  * <li>{@link #STUDY}: the clean-and-flapped stall study (flap increment, stall speeds);</li>
+ * <li>{@link #LOADS}: one load case's root loads, under {@link #LOAD_CASE} in {@code compare};</li>
  * <li>{@link #CONTROL}: a control's geometry, under {@code controls.NAME.}.</li>
  * </ul>
  *
@@ -48,6 +53,8 @@ public final class Vocabulary {
     public static final String CLEAN = "stall.";
     /** The prefix of the flapped configuration's onset keys. */
     public static final String FLAPS = "stall_flaps.";
+    /** The prefix of the load keys where several groups share one flat row (compare). */
+    public static final String LOAD_CASE = "loads.";
     /** The prefix of a control's keys, followed by its name and a dot. */
     public static final String CONTROLS = "controls.";
 
@@ -156,6 +163,27 @@ public final class Vocabulary {
             key("assumed_cl_max", FLAG, "cl_max assumed",
                     "true when some section's cl_max was assumed, clean or with flaps", 0, CL_MAX,
                     StallStudy::assumedClMax));
+
+    /** One load case of the spanwise loads (limit loads unless a safety factor was applied). */
+    public static final List<ResultKey<SpanwiseLoads>> LOADS = List.of(
+            key("dynamic_pressure", PASCAL, "dynamic pressure", "q = rho0 Ve^2 / 2 of the case", 0,
+                    SpanwiseLoads::dynamicPressure),
+            key("CL", NONE, "wing CL", "the wing CL that carries the case, n W / (q S)", 3,
+                    SpanwiseLoads::liftCoefficient),
+            key("alpha_deg", DEGREE, "alpha", "the angle of attack of the case", 2, l -> Math.toDegrees(l.alpha())),
+            key("root.shear", NEWTON, "root shear", "shear at the root of one half-wing, positive up", 0,
+                    SpanwiseLoads::rootShear),
+            key("root.bending", NEWTON_METRE, "root bending", "bending at the root of one half-wing, positive "
+                    + "up-bending", 0, SpanwiseLoads::rootBending),
+            key("root.torsion", NEWTON_METRE, "root torsion", "torsion at the root of one half-wing, positive "
+                    + "nose-up", 0, SpanwiseLoads::rootTorsion),
+            key("root.chord_shear", NEWTON, "root chord shear", "in-plane shear at the root, positive aft", 0,
+                    l -> l.chordShear()[0]),
+            key("root.chord_bending", NEWTON_METRE, "root chord bending",
+                    "in-plane bending at the root, positive for an aft load outboard", 0, l -> l.chordBending()[0]),
+            key("root.load_along_lift", NEWTON, "root load along the lift",
+                    "the half-wing's lift less n g times its mass, along the lift direction", 0,
+                    SpanwiseLoads::loadAlongLift));
 
     /** A control's geometry. */
     public static final List<ResultKey<ControlGeometry>> CONTROL = List.of(

@@ -5,7 +5,10 @@ import java.util.List;
 
 import org.spanlift.input.InputException;
 
-/** Angles of attack in degrees, from a list {@code 0,2,4} or a range {@code from:to:step}. */
+/**
+ * Angles of attack in degrees, from a list {@code 0,2,4} or a range {@code from:to:step}, each number in the
+ * one angle syntax of {@link Angles}.
+ */
 public final class AlphaList {
 
     /** The angles of a lift curve or polar when none are given, degrees. */
@@ -32,15 +35,17 @@ public final class AlphaList {
                 throw new InputException("--alpha", 0, "", "the step of " + text + " must be non-zero and lead from "
                         + "the first value to the second");
             }
-            long n = (long) Math.floor((to - from) / step + 1e-9) + 1;
-            if (n > MAX_POINTS) {
-                throw new InputException("--alpha", 0, "", "at most " + MAX_POINTS + " angles, got " + n);
+            double count = Math.floor((to - from) / step + 1e-9) + 1;
+            if (!(count <= MAX_POINTS)) {
+                throw new InputException("--alpha", 0, "", "at most " + MAX_POINTS + " angles, got "
+                        + (Double.isFinite(count) && count < 1e15 ? String.valueOf((long) count) : "far more"));
             }
+            long n = (long) count;
             for (long i = 0; i < n; i++) {
                 out.add(from + i * step);
             }
         } else {
-            for (String s : t.split(",")) {
+            for (String s : t.split(",", -1)) {
                 out.add(number(s, text));
             }
         }
@@ -54,15 +59,11 @@ public final class AlphaList {
     }
 
     private static double number(String s, String whole) {
-        try {
-            double d = Double.parseDouble(s.trim());
-            if (!Double.isFinite(d)) {
-                throw bad(whole);
-            }
-            return d;
-        } catch (NumberFormatException e) {
+        if (!Angles.matches(s)) {
             throw bad(whole);
         }
+        String t = s.strip();
+        return Double.parseDouble(t.endsWith("deg") ? t.substring(0, t.length() - 3) : t);
     }
 
     private static InputException bad(String text) {

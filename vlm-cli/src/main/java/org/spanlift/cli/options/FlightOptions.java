@@ -20,6 +20,7 @@ import org.spanlift.input.quantity.QuantityFormatException;
 import org.spanlift.input.quantity.QuantityKind;
 
 import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 
 /**
@@ -28,6 +29,9 @@ import picocli.CommandLine.Option;
  * trailing edge down, an aileron's being the right one's.
  */
 public final class FlightOptions {
+
+    /** The largest control deflection accepted, degrees. */
+    static final double MAX_DEFLECTION = 45;
 
     @Option(names = "--weight", paramLabel = "W",
             description = "Aircraft weight with a unit: a force (N, kN, kgf, lbf, lb) or a mass (kg), "
@@ -66,8 +70,8 @@ public final class FlightOptions {
     List<String> deflect = List.of();
 
     @Option(names = "--flaps", paramLabel = "DEG",
-            description = "Deflect every control of kind flap by DEG degrees.")
-    Double flaps;
+            description = "Deflect every control of kind flap by DEG degrees (trailing edge down), from -45 to 45.")
+    String flaps;
 
     /**
      * The deflections asked for on the command line, in radians by control name: first --flaps for every
@@ -78,12 +82,12 @@ public final class FlightOptions {
     public Map<String, Double> deflections(Wing wing) {
         Map<String, Double> out = new LinkedHashMap<>();
         if (flaps != null) {
-            checkAngle("--flaps", flaps);
+            double flapsDeg = Angles.parse("--flaps", flaps, "a flap deflection", MAX_DEFLECTION);
             List<ControlSurface> flapList = wing.controls().stream().filter(c -> c.kind() == ControlKind.FLAP).toList();
             if (flapList.isEmpty()) {
                 throw new InputException("--flaps", 0, "", "the wing has no control of kind flap");
             }
-            flapList.forEach(c -> out.put(c.name(), Math.toRadians(flaps)));
+            flapList.forEach(c -> out.put(c.name(), Math.toRadians(flapsDeg)));
         }
         for (String d : deflect) {
             int eq = d.indexOf('=');
@@ -91,14 +95,7 @@ public final class FlightOptions {
                 throw new InputException("--deflect", 0, "", "expected NAME=DEG (such as flap=20), got '" + d + "'");
             }
             String name = d.substring(0, eq).trim();
-            double deg;
-            try {
-                deg = Double.parseDouble(d.substring(eq + 1).trim());
-            } catch (NumberFormatException e) {
-                throw new InputException("--deflect", 0, name, "expected the deflection in degrees, got '"
-                        + d.substring(eq + 1) + "'");
-            }
-            checkAngle("--deflect " + name, deg);
+            double deg = Angles.parse("--deflect " + name, d.substring(eq + 1), "a deflection", MAX_DEFLECTION);
             if (wing.control(name).isEmpty()) {
                 List<String> names = wing.controls().stream().map(ControlSurface::name).toList();
                 throw new InputException("--deflect", 0, name, "the wing has no control of that name; it has "
@@ -107,6 +104,12 @@ public final class FlightOptions {
             out.put(name, Math.toRadians(deg));
         }
         return out;
+    }
+
+    /** The flap setting asked for with {@code --flaps}, degrees. */
+    public OptionalDouble flapsDeg() {
+        return flaps == null ? OptionalDouble.empty()
+                : OptionalDouble.of(Angles.parse("--flaps", flaps, "a flap deflection", MAX_DEFLECTION));
     }
 
     /** The atmosphere at the given pressure altitude and offset. */
@@ -178,9 +181,16 @@ public final class FlightOptions {
         }
     }
 
-    private static void checkAngle(String option, double deg) {
-        if (!Double.isFinite(deg) || Math.abs(deg) > 45) {
-            throw new InputException(option, 0, "", "expected a deflection from -45 to 45 degrees, got " + deg);
+    /**
+     * Refuses any of the named options given on this command line, with the reason it does not apply.
+     *
+     * @throws InputException naming the first option given
+     */
+    public static void refuse(CommandSpec spec, String reason, String... options) {
+        for (String o : options) {
+            if (spec.commandLine().getParseResult().hasMatchedOption(o)) {
+                throw new InputException(o, 0, "", "does not apply to " + spec.name() + ": " + reason);
+            }
         }
     }
 }

@@ -5,7 +5,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-import org.spanlift.geometry.LengthUnit;
 import org.spanlift.vocabulary.ResultKey;
 
 /**
@@ -79,45 +78,29 @@ public final class Results {
         return allNull;
     }
 
-    /** The table label of a key, with its unit in the display length unit: {@code alpha [deg]}. */
-    public static String label(ResultKey<?> key, LengthUnit unit) {
-        String u = unit(key, unit);
+    /** The table label of a key, with its unit in the display units: {@code alpha [deg]}. */
+    public static String label(ResultKey<?> key, DisplayUnits units) {
+        String u = units.symbol(key.unit());
         return u.isEmpty() ? key.label() : key.label() + " [" + u + "]";
     }
 
-    /** A key's unit as tables show it (lengths in the file's unit; nothing for ratios, counts and names). */
-    public static String unit(ResultKey<?> key, LengthUnit unit) {
-        return switch (key.unit()) {
-            case METRE -> unit.symbol();
-            case SQUARE_METRE -> unit.symbol() + "^2";
-            case NONE, COUNT, FLAG, TEXT -> "";
-            case PER_RADIAN -> "/rad";
-            case PER_DEGREE -> "/deg";
-            default -> key.unit().symbol();
-        };
-    }
-
-    /** A value in the table's units: lengths and areas in the display unit; other units as they are. */
-    public static double display(ResultKey<?> key, double si, LengthUnit unit) {
-        return switch (key.unit()) {
-            case METRE -> si / unit.metres();
-            case SQUARE_METRE -> si / (unit.metres() * unit.metres());
-            default -> si;
-        };
+    /** A value in the display units. */
+    public static double display(ResultKey<?> key, double si, DisplayUnits units) {
+        return units.convert(key.unit(), si);
     }
 
     /** A table cell: the value in display units with the key's decimals, text as it is, "-" where absent. */
-    public static <S> String cell(ResultKey<S> key, S source, LengthUnit unit) {
-        return cellOf(key, key.of(source), unit);
+    public static <S> String cell(ResultKey<S> key, S source, DisplayUnits units) {
+        return cellOf(key, key.of(source), units);
     }
 
     /** A table cell of a value already read. */
-    public static String cellOf(ResultKey<?> key, Object value, LengthUnit unit) {
+    public static String cellOf(ResultKey<?> key, Object value, DisplayUnits units) {
         if (value == null) {
             return "-";
         }
         if (value instanceof Double d) {
-            return TextTable.fixed(display(key, d, unit), key.decimals());
+            return TextTable.fixed(display(key, d, units), key.decimals());
         }
         return String.valueOf(value);
     }

@@ -4,10 +4,10 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
 
+import org.spanlift.cli.output.DisplayUnits;
 import org.spanlift.cli.plot.Figure;
 import org.spanlift.cli.plot.Plots;
 import org.spanlift.cli.plot.SvgWriter;
-import org.spanlift.geometry.LengthUnit;
 import org.spanlift.geometry.Wing;
 import org.spanlift.results.Solution;
 import org.spanlift.solve.WingAnalysis;
@@ -18,17 +18,23 @@ public final class ComparePage {
     private ComparePage() {
     }
 
-    public static String build(Comparison cmp, List<Double> rangeDeg, String version) {
+    /**
+     * @param u the units of the table (the figures draw lengths in its length unit)
+     */
+    public static String build(Comparison cmp, List<Double> rangeDeg, DisplayUnits u, String version) {
         List<WingSummary> wings = cmp.wings();
         List<String> labels = cmp.labels();
-        LengthUnit u = wings.get(0).wing().displayUnit();
         Html h = Html.page("Spanlift comparison of " + wings.size() + " wings");
         h.line("<header class=\"title\">");
         h.el("p", "class=\"kicker\"", "Spanlift wing comparison");
         h.el("h1", wings.size() + " wings side by side");
-        h.el("p", "class=\"meta\"", "Lengths in " + u.symbol() + " (the first wing's unit), angles in degrees; "
-                + "conditions at the common CL " + Html.fixed(cmp.cl(), 2) + "; differences are from wing "
+        h.el("p", "class=\"meta\"", "Lengths in " + u.length().symbol() + ", angles in degrees; aerodynamic rows at "
+                + "the common CL " + Html.fixed(cmp.cl(), 2) + " with every flap at zero; differences are from wing "
                 + labels.get(0) + ".");
+        String condition = conditionText(cmp, u);
+        if (!condition.isEmpty()) {
+            h.el("p", "class=\"meta\"", condition);
+        }
         h.line("</header>");
         h.line("<ul class=\"wings\">");
         for (int i = 0; i < wings.size(); i++) {
@@ -63,6 +69,11 @@ public final class ComparePage {
             rows.add(row);
         }
         h.table("wide compare", null, header, rows);
+        for (int i = 0; i < cmp.entries().size(); i++) {
+            for (String note : cmp.entries().get(i).notes()) {
+                h.el("p", "class=\"meta\"", labels.get(i) + ": " + note);
+            }
+        }
         h.el("h2", "Figures");
         List<Wing> ws = wings.stream().map(WingSummary::wing).toList();
         List<String> keyed = new ArrayList<>();
@@ -71,7 +82,7 @@ public final class ComparePage {
         }
         List<Solution> atCl = wings.stream().map(WingSummary::spanLoadAtCl).toList();
         List<WingAnalysis> analyses = wings.stream().map(WingSummary::analysis).toList();
-        figure(h, Plots.planformOverlay(ws, keyed, u));
+        figure(h, Plots.planformOverlay(ws, keyed, u.length()));
         figure(h, Plots.spanLoadOverlay(ws, atCl, keyed, cmp.cl()));
         figure(h, Plots.liftOverlay(analyses, keyed, rangeDeg));
         h.line("<footer>");
@@ -81,6 +92,23 @@ public final class ComparePage {
         return h.close();
     }
 
+    /** The flight condition in words: weight, load factor, pressure altitude, load case, flaps; empty if none. */
+    public static String conditionText(Comparison cmp, DisplayUnits u) {
+        List<String> parts = new ArrayList<>();
+        cmp.condition().ifPresent(fc -> {
+            parts.add("weight " + u.weight(fc.weight()));
+            if (fc.loadFactor() != 1) {
+                parts.add("load factor " + Html.fixed(fc.loadFactor(), 2));
+            }
+            parts.add("pressure altitude " + u.altitude(fc.atmosphere().pressureAltitude()));
+        });
+        cmp.loadCase().ifPresent(lc -> parts.add("load case at " + u.speed(lc.equivalentSpeed()) + " EAS"));
+        if (cmp.flapsDeg().isPresent()) {
+            parts.add("flaps " + Html.fixed(cmp.flapsDeg().getAsDouble(), 0) + "\u00b0 for the rows marked flaps");
+        }
+        return parts.isEmpty() ? "" : "Condition: " + String.join(", ", parts) + ".";
+    }
+
     private static void figure(Html h, Figure f) {
         h.raw("<figure id=\"figure-").raw(f.id()).line("\">");
         h.line(SvgWriter.element(f));
@@ -88,7 +116,7 @@ public final class ComparePage {
         h.line("</figure>");
     }
 
-    private static String cell(OptionalDouble v, Comparison.Row r, LengthUnit u, boolean signed) {
+    private static String cell(OptionalDouble v, Comparison.Row r, DisplayUnits u, boolean signed) {
         if (v.isEmpty()) {
             return "\u2013";
         }

@@ -4,42 +4,66 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.function.Function;
 
-import org.spanlift.cli.output.Results;
+import org.spanlift.cli.output.DisplayUnits;
+import org.spanlift.flight.FlightCondition;
 import org.spanlift.flight.FlightPoint;
-import org.spanlift.geometry.LengthUnit;
 import org.spanlift.input.Field;
+import org.spanlift.loads.SpanwiseLoads;
+import org.spanlift.stall.StallEstimate;
+import org.spanlift.stall.StallStudy;
+import org.spanlift.structure.LoadCase;
 import org.spanlift.vocabulary.ResultKey;
 import org.spanlift.vocabulary.Vocabulary;
 import org.spanlift.vocabulary.WingResult;
 
 /**
- * The comparison table: one column per wing, and the differences of every later wing from the first.
- * The quantities are vocabulary keys; values are SI (m, m^2) with angles in degrees, lift slope per radian;
- * {@link Row#display} converts lengths to a display unit.
+ * The comparison: one column per wing and the differences of every later wing from the first. The
+ * quantities are vocabulary keys, each value the one the single-wing command prints for the same options:
+ * the wing and its point at the common CL clean (every flap at zero, as {@code solve} without {@code --flaps}),
+ * the stall onset clean and with flaps and the stall speeds as {@code stall} gives them, the root loads of
+ * the load case as {@code loads} gives them (clean). Values are SI; {@link Row#display} converts them.
  */
 public final class Comparison {
 
     /**
-     * One compared quantity: a vocabulary key, taken from the wing or (for a point key) at the common CL.
+     * One wing of the comparison.
      *
-     * @param key    the key as JSON and CSV write it ({@code reference.area}, {@code e@CL=0.5})
+     * @param summary   the wing and its point at the common CL, clean
+     * @param stall     its stall study, when its sections give cl_max (or one is assumed)
+     * @param loads     the load case's loads, when there is a load case
+     * @param notes     why a group of values is missing or how it was obtained
+     */
+    public record Entry(WingSummary summary, Optional<StallStudy> stall, Optional<SpanwiseLoads> loads,
+            List<String> notes) {
+
+        public Entry {
+            notes = List.copyOf(notes);
+        }
+    }
+
+    /**
+     * One compared quantity.
+     *
+     * @param key    the key as JSON and CSV write it ({@code reference.area}, {@code e@CL=0.5},
+     *               {@code stall_flaps.CL}, {@code loads.root.bending})
      * @param result the vocabulary key
      * @param label  the table label
      * @param value  its value for one wing, SI
      */
-    public record Row(String key, ResultKey<?> result, String label, Function<WingSummary, OptionalDouble> value) {
+    public record Row(String key, ResultKey<?> result, String label, Function<Entry, OptionalDouble> value) {
 
-        /** The unit as the table shows it, lengths in {@code u}; "-" for a ratio. */
-        public String unit(LengthUnit u) {
-            String unit = Results.unit(result, u);
+        /** The unit as the table shows it; "-" for a ratio. */
+        public String unit(DisplayUnits u) {
+            String unit = u.symbol(result.unit());
             return unit.isEmpty() ? "-" : unit;
         }
 
-        public double display(double si, LengthUnit u) {
-            return Results.display(result, si, u);
+        public double display(double si, DisplayUnits u) {
+            return u.convert(result.unit(), si);
         }
 
         public int decimals() {
@@ -49,50 +73,129 @@ public final class Comparison {
 
     private static final List<String> WING_KEYS = List.of("reference.area", "reference.span",
             "reference.aspect_ratio", "mean_aerodynamic_chord", "lift_slope_per_rad", "zero_lift_angle_deg");
-    private static final List<String> POINT_KEYS = List.of("alpha_deg", "e", "CDi");
+    private static final List<String> POINT_KEYS = List.of("alpha_deg", "e", "CDi", "CD", "L_D");
+    private static final List<String> ONSET_KEYS = List.of("CL", "alpha_deg", "eta", "aileron_margin.dcl",
+            "half_span_CL");
+    private static final List<String> FLAP_KEYS = List.of("CL", "alpha_deg", "eta", "aileron_margin.dcl");
+    private static final List<String> LOAD_KEYS = List.of("CL", "root.shear", "root.bending", "root.torsion");
 
     private final List<String> labels;
-    private final List<WingSummary> wings;
+    private final List<Entry> entries;
     private final double cl;
+    private final Optional<FlightCondition> condition;
+    private final Optional<LoadCase> loadCase;
+    private final OptionalDouble flapsDeg;
+    private final List<Row> rows;
 
-    public Comparison(List<String> labels, List<WingSummary> wings, double cl) {
+    /**
+     * @param flapsDeg the flap setting asked for, degrees (for labels)
+     */
+    public Comparison(List<String> labels, List<Entry> entries, double cl, Optional<FlightCondition> condition,
+            Optional<LoadCase> loadCase, OptionalDouble flapsDeg) {
         this.labels = List.copyOf(labels);
-        this.wings = List.copyOf(wings);
+        this.entries = List.copyOf(entries);
         this.cl = cl;
+        this.condition = condition;
+        this.loadCase = loadCase;
+        this.flapsDeg = flapsDeg;
+        this.rows = List.copyOf(buildRows());
     }
 
-    /** The compared quantities: wing keys, then point keys at the common CL. */
-    public List<Row> rows() {
-        List<Row> rows = new ArrayList<>();
+    private List<Row> buildRows() {
+        List<Row> out = new ArrayList<>();
         for (ResultKey<WingResult> k : Vocabulary.select(Vocabulary.WING, WING_KEYS.toArray(String[]::new))) {
-            rows.add(new Row(k.key(), k, k.label(), s -> number(k.of(s.wingResult()))));
+            out.add(new Row(k.key(), k, k.label(), e -> number(k.of(e.summary().wingResult()))));
         }
         String at = "@CL=" + Field.format(cl);
+        boolean polars = entries.stream().anyMatch(e -> e.summary().pointAtCl().profileDrag().isPresent());
         for (ResultKey<FlightPoint> k : Vocabulary.select(Vocabulary.POINT, POINT_KEYS.toArray(String[]::new))) {
-            rows.add(new Row(k.key() + at, k, k.label() + " at the common CL", s -> number(k.of(s.pointAtCl()))));
+            if (polars || !k.needs(org.spanlift.vocabulary.Need.POLARS)) {
+                out.add(new Row(k.key() + at, k, k.label() + " at the common CL",
+                        e -> number(k.of(e.summary().pointAtCl()))));
+            }
         }
-        return rows;
+        if (entries.stream().anyMatch(e -> e.stall().isPresent())) {
+            for (ResultKey<StallEstimate> k : Vocabulary.select(Vocabulary.ONSET, ONSET_KEYS.toArray(String[]::new))) {
+                out.add(new Row(Vocabulary.CLEAN + k.key(), k, k.label() + ", clean",
+                        e -> e.stall().map(s -> number(k.of(s.clean().estimate()))).orElse(OptionalDouble.empty())));
+            }
+        }
+        if (entries.stream().anyMatch(e -> e.stall().flatMap(StallStudy::flaps).isPresent())) {
+            String flaps = flapsDeg.isPresent() ? ", flaps " + Field.format(flapsDeg.getAsDouble()) + " deg" : ", flaps";
+            for (ResultKey<StallEstimate> k : Vocabulary.select(Vocabulary.ONSET, FLAP_KEYS.toArray(String[]::new))) {
+                out.add(new Row(Vocabulary.FLAPS + k.key(), k, k.label() + flaps, e -> e.stall().flatMap(StallStudy::flaps)
+                        .map(f -> number(k.of(f.estimate()))).orElse(OptionalDouble.empty())));
+            }
+            ResultKey<StallStudy> inc = Vocabulary.find(Vocabulary.STUDY, "flap_increment_CL");
+            out.add(new Row(inc.key(), inc, inc.label(), e -> e.stall().map(s -> number(inc.of(s)))
+                    .orElse(OptionalDouble.empty())));
+        }
+        if (condition.isPresent() && entries.stream().anyMatch(e -> e.stall().isPresent())) {
+            for (ResultKey<StallStudy> k : Vocabulary.select(Vocabulary.STUDY, "stall_speed.clean_eas",
+                    "stall_speed.clean_tas", "stall_speed.flaps_eas", "stall_speed.flaps_tas")) {
+                if (k.key().contains("flaps") && entries.stream().allMatch(e -> e.stall().flatMap(StallStudy::flaps)
+                        .isEmpty())) {
+                    continue;
+                }
+                out.add(new Row(k.key(), k, k.label() + " (wing alone)", e -> e.stall().map(s -> number(k.of(s)))
+                        .orElse(OptionalDouble.empty())));
+            }
+        }
+        if (loadCase.isPresent()) {
+            for (ResultKey<SpanwiseLoads> k : Vocabulary.select(Vocabulary.LOADS, LOAD_KEYS.toArray(String[]::new))) {
+                out.add(new Row(Vocabulary.LOAD_CASE + k.key(), k, k.label() + " in the load case",
+                        e -> e.loads().map(l -> number(k.of(l))).orElse(OptionalDouble.empty())));
+            }
+        }
+        return out;
     }
 
     private static OptionalDouble number(Object v) {
         return v instanceof Number n ? OptionalDouble.of(n.doubleValue()) : OptionalDouble.empty();
     }
 
+    /** The compared quantities, in table order. */
+    public List<Row> rows() {
+        return rows;
+    }
+
     public List<String> labels() {
         return labels;
     }
 
+    public List<Entry> entries() {
+        return entries;
+    }
+
+    /** The wings' summaries, in order. */
     public List<WingSummary> wings() {
-        return wings;
+        return entries.stream().map(Entry::summary).toList();
     }
 
     public double cl() {
         return cl;
     }
 
+    public Optional<FlightCondition> condition() {
+        return condition;
+    }
+
+    public Optional<LoadCase> loadCase() {
+        return loadCase;
+    }
+
+    public OptionalDouble flapsDeg() {
+        return flapsDeg;
+    }
+
+    /** True when a row bears on safety (stall speeds, maximum lift, loads): the outputs then carry the caution. */
+    public boolean bearsOnSafety() {
+        return rows.stream().anyMatch(r -> r.key().startsWith("stall") || r.key().startsWith(Vocabulary.LOAD_CASE));
+    }
+
     /** Value of a row for wing i, or empty. */
     public OptionalDouble value(Row row, int i) {
-        return row.value().apply(wings.get(i));
+        return row.value().apply(entries.get(i));
     }
 
     /** Difference of wing i from the first, or empty where either is. */
@@ -104,38 +207,55 @@ public final class Comparison {
     }
 
     /** The tree for JSON output (SI). */
-    public Map<String, Object> json() {
+    public Map<String, Object> json(String caution) {
         Map<String, Object> root = new LinkedHashMap<>();
         Map<String, Object> units = new LinkedHashMap<>();
         units.put("length", "m");
         units.put("area", "m^2");
         units.put("angle", "deg");
         units.put("lift_slope", "per rad");
+        units.put("speed", "m/s (equivalent airspeed where the key says eas)");
+        units.put("force", "N");
+        units.put("moment", "N m");
+        units.put("altitude", "m, pressure altitude (geopotential, standard atmosphere)");
         root.put("units", units);
         root.put("common_CL", cl);
+        condition.ifPresent(fc -> {
+            Map<String, Object> c = new LinkedHashMap<>();
+            c.put("weight", fc.weight());
+            c.put("load_factor", fc.loadFactor());
+            c.put("pressure_altitude", fc.atmosphere().pressureAltitude());
+            c.put("flaps_deg", flapsDeg.isPresent() ? (Object) flapsDeg.getAsDouble() : null);
+            loadCase.ifPresent(lc -> c.put("load_case_speed_eas", lc.equivalentSpeed()));
+            root.put("condition", c);
+        });
         List<Object> list = new ArrayList<>();
-        for (int i = 0; i < wings.size(); i++) {
+        for (int i = 0; i < entries.size(); i++) {
             Map<String, Object> w = new LinkedHashMap<>();
             w.put("label", labels.get(i));
-            w.put("name", wings.get(i).wing().name());
-            w.put("file", wings.get(i).file().toString());
-            for (Row r : rows()) {
+            w.put("name", entries.get(i).summary().wing().name());
+            w.put("file", entries.get(i).summary().file().toString());
+            for (Row r : rows) {
                 w.put(r.key(), value(r, i));
             }
+            w.put("notes", entries.get(i).notes());
             list.add(w);
         }
         root.put("wings", list);
         List<Object> diffs = new ArrayList<>();
-        for (int i = 1; i < wings.size(); i++) {
+        for (int i = 1; i < entries.size(); i++) {
             Map<String, Object> d = new LinkedHashMap<>();
             d.put("label", labels.get(i));
             d.put("minus", labels.get(0));
-            for (Row r : rows()) {
+            for (Row r : rows) {
                 d.put(r.key(), difference(r, i));
             }
             diffs.add(d);
         }
         root.put("differences", diffs);
+        if (bearsOnSafety()) {
+            root.put("caution", caution);
+        }
         return root;
     }
 }

@@ -3,13 +3,17 @@ package org.spanlift.cli.report;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.spanlift.atmosphere.Airspeed;
+import org.spanlift.cli.output.DisplayUnits;
 import org.spanlift.cli.output.Results;
+import org.spanlift.flight.FlightCondition;
 import org.spanlift.flight.FlightPoint;
 import org.spanlift.flight.ReynoldsRule;
 import org.spanlift.stall.StallEstimate;
+import org.spanlift.stall.StallStudy;
 import org.spanlift.vocabulary.ResultKey;
 import org.spanlift.vocabulary.Vocabulary;
 import org.spanlift.vocabulary.WingResult;
@@ -33,35 +37,60 @@ import org.spanlift.solve.WingAnalysis;
 public final class ReportPage {
 
     /**
-     * @param summary   the wing at its file lattice, with the condition at the chosen CL
-     * @param fine      the same at twice as many strips, for the convergence note
-     * @param stall     the stall-onset estimate, or why there is none
-     * @param reynolds  rho V / mu for a point of lift coefficient CL, for the profile drag
+     * What the page shows.
+     *
+     * @param clean     the wing clean (every flap at zero, other controls as asked), with its point at the chosen CL
+     * @param flaps     the wing with the flaps asked, when a flap is deflected
+     * @param fine      the clean wing at twice as many strips, for the convergence note
+     * @param stall     the stall study (clean and flapped), when the sections allow it
+     * @param stallFine the same at twice as many strips
+     * @param unavailable why there is no stall study, else empty
+     * @param condition the flight condition given, if any
+     * @param reynolds  the Reynolds-number rule of the profile drag
      * @param alphasDeg the angles of the results table
      * @param rangeDeg  the angles of the lift curve and polar
+     * @param units     the units of the tables
      * @param version   the program version for the footer
      */
-    public static String build(WingSummary summary, WingSummary fine, StallSummary stall, List<Double> alphasDeg,
-            List<Double> rangeDeg, ReynoldsRule reynolds, String version) {
+    public record Inputs(WingSummary clean, Optional<WingSummary> flaps, WingSummary fine, Optional<StallStudy> stall,
+            Optional<StallStudy> stallFine, String unavailable, Optional<FlightCondition> condition,
+            ReynoldsRule reynolds, List<Double> alphasDeg, List<Double> rangeDeg, DisplayUnits units, String version) {
+
+        /** The configuration the figures draw: with flaps when asked, else clean. */
+        WingSummary drawn() {
+            return flaps.orElse(clean);
+        }
+
+        /** The stall configuration the figures draw. */
+        Optional<StallStudy.Configuration> drawnStall() {
+            return stall.map(s -> flaps.isPresent() && s.flaps().isPresent() ? s.flaps().get() : s.clean());
+        }
+    }
+
+    public static String build(Inputs in) {
+        WingSummary summary = in.clean();
         Wing wing = summary.wing();
-        WingAnalysis analysis = summary.analysis();
-        LengthUnit u = wing.displayUnit();
+        DisplayUnits u = in.units();
         Html h = Html.page("Spanlift report: " + wing.name());
         h.line("<header class=\"title\">");
         h.el("p", "class=\"kicker\"", "Spanlift wing report");
         h.el("h1", wing.name());
-        h.el("p", "class=\"meta\"", "Wing file " + summary.file().getFileName() + "; lengths in " + u.symbol()
-                + ", angles in degrees; " + deflectionText(wing, summary.deflections()) + ".");
+        h.el("p", "class=\"meta\"", "Wing file " + summary.file().getFileName() + "; lengths in " + u.length().symbol()
+                + ", angles in degrees.");
+        h.el("p", "class=\"condition\"", conditionText(in));
         h.line("</header>");
         h.caution();
 
-        keyResults(h, summary, stall, alphasDeg);
-        description(h, summary);
+        keyResults(h, in);
+        description(h, summary, u);
         h.el("h2", "Figures");
+        String drawn = in.flaps().isPresent() ? "The figures show the wing with flaps ("
+                + deflectionText(wing, in.drawn().deflections()) + ")." : "The figures show the wing clean.";
+        h.el("p", "class=\"meta\"", drawn);
         for (PlotKind kind : PlotKind.values()) {
-            Figure f = figure(kind, summary, stall, rangeDeg, reynolds);
+            Figure f = figure(kind, in.drawn(), in.drawnStall(), in.rangeDeg(), in.reynolds());
             if (f == null) {
-                h.el("p", "class=\"missing\"", "No stall map: " + stall.unavailable());
+                h.el("p", "class=\"missing\"", "No stall map: " + in.unavailable());
                 continue;
             }
             h.raw("<figure id=\"figure-").raw(kind.figureId()).line("\">");
@@ -69,84 +98,150 @@ public final class ReportPage {
             h.raw("<figcaption><b>").text(f.title()).raw(".</b> ").text(f.description()).line("</figcaption>");
             h.line("</figure>");
         }
-        lattice(h, summary, fine);
+        lattice(h, in);
         h.el("h2", "Method and limits");
         h.el("p", "Vortex-lattice method: a horseshoe vortex on every panel, bound leg on the panel's quarter-chord "
                 + "line, flow tangency at three-quarter chord; twist, camber and control deflections enter the "
                 + "boundary condition linearly. Lift from Kutta-Joukowski on the bound legs, induced drag in the "
                 + "Trefftz plane. The span efficiency e is CL\u00b2 / (\u03c0 A CDi) and is shown only where "
                 + "|CL| \u2265 0.05. Pitching moment positive nose-up about the moment point; rolling moment positive "
-                + "right wing down. The theory is linear and inviscid: it has no stall and no profile drag.");
+                + "right wing down. The theory is linear and inviscid: it has no stall and no profile drag. Stall "
+                + "onset is the critical-section estimate: the lowest wing CL at which a station reaches its section "
+                + "cl_max.");
         h.line("<footer>");
-        h.text("Made by " + version + " from " + summary.file().getFileName() + ". The same wing file and options "
-                + "give the same page.");
+        h.text("Made by " + in.version() + " from " + summary.file().getFileName() + ". The same wing file and "
+                + "options give the same page.");
         h.line("</footer>");
         return h.close();
+    }
+
+    /** The condition the page was made for, in words: weight, altitude and its kind, flap setting. */
+    static String conditionText(Inputs in) {
+        List<String> parts = new ArrayList<>();
+        DisplayUnits u = in.units();
+        if (in.condition().isPresent()) {
+            FlightCondition fc = in.condition().get();
+            parts.add("weight " + u.weight(fc.weight()));
+            if (fc.loadFactor() != 1) {
+                parts.add("load factor " + Html.fixed(fc.loadFactor(), 2));
+            }
+            parts.add("pressure altitude " + u.altitude(fc.atmosphere().pressureAltitude())
+                    + " (standard atmosphere, geopotential)");
+        } else {
+            parts.add("no weight given, so no stall speeds (cl_max tables read at their lowest Reynolds number)");
+        }
+        Wing wing = in.clean().wing();
+        parts.add(in.flaps().isPresent() ? "flaps: " + deflectionText(wing, in.flaps().get().deflections())
+                : "clean: " + deflectionText(wing, in.clean().deflections()));
+        parts.add("aerodynamic results at CL " + Html.fixed(in.clean().cl(), 2));
+        return "Condition: " + String.join("; ", parts) + ".";
     }
 
     /**
      * The figure of a kind, as the report shows it; every kind has one (the switch is exhaustive), but the stall
      * map needs section cl-max data and is null without it.
      */
-    static Figure figure(PlotKind kind, WingSummary s, StallSummary stall, List<Double> rangeDeg,
+    static Figure figure(PlotKind kind, WingSummary s, Optional<StallStudy.Configuration> stall, List<Double> rangeDeg,
             ReynoldsRule reynolds) {
         return switch (kind) {
-            case STALL -> stall.estimate().map(e -> (Figure) Plots.stallMap(s.analysis(), e)).orElse(null);
-            case PLANFORM -> Plots.planform(s.analysis(), stall.estimate()
-                    .map(e -> OptionalDouble.of(e.y())).orElse(OptionalDouble.empty()));
+            case STALL -> stall.map(c -> (Figure) Plots.stallMap(s.analysis(), c.estimate())).orElse(null);
+            case PLANFORM -> Plots.planform(s.analysis(), stall
+                    .map(c -> OptionalDouble.of(c.estimate().y())).orElse(OptionalDouble.empty()));
             case SPAN_LOAD -> Plots.spanLoad(s.analysis(), s.spanLoadAtCl());
             case LIFT -> Plots.liftCurve(s.analysis(), s.deflections(), rangeDeg);
             case POLAR -> Plots.polar(s.analysis(), s.deflections(), rangeDeg, reynolds);
         };
     }
 
-    private static void keyResults(Html h, WingSummary s, StallSummary stall, List<Double> alphasDeg) {
-        LengthUnit u = s.wing().displayUnit();
-        WingResult w = s.wingResult();
-        FlightPoint atCl = s.pointAtCl();
+    /** One row of the clean-and-flapped table: a label and a cell per configuration. */
+    private interface Cell {
+        String of(WingSummary summary, Optional<StallStudy.Configuration> stall);
+    }
+
+    private static void keyResults(Html h, Inputs in) {
+        DisplayUnits u = in.units();
+        WingSummary s = in.clean();
         String cl = Html.fixed(s.cl(), 2);
         h.el("h2", "Key results");
+        Optional<StallStudy.Configuration> cleanStall = in.stall().map(StallStudy::clean);
         h.line("<ul class=\"keys\">");
         ResultKey<WingResult> slope = Vocabulary.find(Vocabulary.WING, "lift_slope_per_rad");
         ResultKey<WingResult> perDeg = Vocabulary.find(Vocabulary.WING, "lift_slope_per_deg");
-        key(h, slope.label(), value(slope, w, u) + " /rad", value(perDeg, w, u) + " per degree, at zero lift");
-        ResultKey<WingResult> zero = Vocabulary.find(Vocabulary.WING, "zero_lift_angle_deg");
-        key(h, zero.label(), value(zero, w, u) + "\u00b0", zero.description());
+        key(h, slope.label(), value(slope, s.wingResult(), u) + " /rad", value(perDeg, s.wingResult(), u)
+                + " per degree, at zero lift, clean");
         ResultKey<FlightPoint> e = Vocabulary.find(Vocabulary.POINT, "e");
-        key(h, "span efficiency e at CL " + cl, value(e, atCl, u), "CL\u00b2 / (\u03c0 A CDi)");
-        ResultKey<FlightPoint> cdi = Vocabulary.find(Vocabulary.POINT, "CDi");
-        ResultKey<FlightPoint> alpha = Vocabulary.find(Vocabulary.POINT, "alpha_deg");
-        key(h, "induced drag CDi at CL " + cl, value(cdi, atCl, u), "at \u03b1 = " + value(alpha, atCl, u) + "\u00b0");
-        stall.estimate().ifPresent(est -> {
-            String flag = (est.assumedClMax() ? "; some cl_max assumed" : "") + est.besideControlEnd()
-                    .map(end -> "; beside the end of the " + end.control() + ", where linear theory peaks: lattice-sensitive, "
-                            + "pessimistic").orElse("");
-            ResultKey<StallEstimate> onset = Vocabulary.find(Vocabulary.ONSET, "CL");
-            key(h, "stall-onset CL", value(onset, est, u), "critical-section method, at \u03b1 = "
-                    + value(Vocabulary.find(Vocabulary.ONSET, "alpha_deg"), est, u) + "\u00b0" + flag);
-            key(h, "stall starts at", "\u03b7 = " + value(Vocabulary.find(Vocabulary.ONSET, "eta"), est, u), "y = "
-                    + value(Vocabulary.find(Vocabulary.ONSET, "y"), est, u) + " " + u.symbol() + ", section "
-                    + est.section());
+        key(h, "span efficiency e at CL " + cl, value(e, s.pointAtCl(), u), "CL\u00b2 / (\u03c0 A CDi), clean");
+        cleanStall.ifPresent(c -> {
+            StallEstimate est = c.estimate();
+            key(h, "stall-onset CL, clean", value(Vocabulary.find(Vocabulary.ONSET, "CL"), est, u),
+                    "critical-section method, starting at \u03b7 = " + value(Vocabulary.find(Vocabulary.ONSET, "eta"),
+                            est, u) + (est.assumedClMax() ? "; some cl_max assumed" : ""));
             ResultKey<StallEstimate> margin = Vocabulary.find(Vocabulary.ONSET, "aileron_margin.dcl");
-            est.aileronMargin().ifPresent(m -> key(h, "aileron margin", "\u0394cl = " + value(margin, est, u),
+            est.aileronMargin().ifPresent(m -> key(h, "aileron margin, clean", "\u0394cl = " + value(margin, est, u),
                     margin.description()));
+            c.speed().ifPresent(v -> key(h, "stall speed, clean", Html.fixed(Airspeed.knots(v.equivalent()), 1)
+                    + " kt EAS", Html.fixed(Airspeed.knots(v.trueSpeed()), 1) + " kt TAS; wing alone, see the caution"));
         });
-        stall.speed().ifPresent(v -> key(h, "stall speed", Html.fixed(Airspeed.knots(v.equivalent()), 1) + " kt EAS",
-                Html.fixed(Airspeed.knots(v.trueSpeed()), 1) + " kt TAS; wing alone, see the caution"));
+        in.stall().flatMap(StallStudy::flaps).ifPresent(f -> f.speed().ifPresent(v -> key(h, "stall speed, flaps",
+                Html.fixed(Airspeed.knots(v.equivalent()), 1) + " kt EAS", Html.fixed(Airspeed.knots(v.trueSpeed()), 1)
+                        + " kt TAS; " + deflectionText(s.wing(), f.deflections()))));
         h.line("</ul>");
+        if (in.stall().isEmpty()) {
+            h.el("p", "class=\"missing\"", "No stall results: " + in.unavailable());
+        }
+
+        List<String> header = new ArrayList<>(List.of("quantity", "clean"));
+        in.flaps().ifPresent(f -> header.add("flaps"));
+        List<List<String>> rows = new ArrayList<>();
+        Optional<StallStudy.Configuration> flapStall = in.stall().flatMap(StallStudy::flaps);
+        for (ResultKey<WingResult> k : Vocabulary.select(Vocabulary.WING, "lift_slope_per_rad", "zero_lift_angle_deg")) {
+            rows.add(row(Results.label(k, u), in, flapStall, (w, st) -> value(k, w.wingResult(), u)));
+        }
+        for (ResultKey<FlightPoint> k : Vocabulary.select(Vocabulary.POINT, "alpha_deg", "e", "CDi")) {
+            rows.add(row(Results.label(k, u) + " at CL " + cl, in, flapStall, (w, st) -> value(k, w.pointAtCl(), u)));
+        }
+        if (in.stall().isPresent()) {
+            for (ResultKey<StallEstimate> k : Vocabulary.select(Vocabulary.ONSET, "CL", "alpha_deg", "y", "eta",
+                    "section", "aileron_margin.dcl", "half_span_CL")) {
+                rows.add(row(Results.label(k, u), in, flapStall,
+                        (w, st) -> st.map(c -> value(k, c.estimate(), u)).orElse("\u2013")));
+            }
+            if (in.condition().isPresent()) {
+                rows.add(row("stall speed EAS [kt]", in, flapStall, (w, st) -> st.flatMap(StallStudy.Configuration::speed)
+                        .map(v -> Html.fixed(Airspeed.knots(v.equivalent()), 1)).orElse("\u2013")));
+                rows.add(row("stall speed TAS [kt]", in, flapStall, (w, st) -> st.flatMap(StallStudy.Configuration::speed)
+                        .map(v -> Html.fixed(Airspeed.knots(v.trueSpeed()), 1)).orElse("\u2013")));
+            }
+        }
+        h.table("configurations", in.flaps().isPresent() ? "Clean and with flaps" : "Clean", header, rows);
+        in.stall().ifPresent(study -> study.configurations().forEach(c -> c.estimate().besideControlEnd().ifPresent(
+                end -> h.el("p", "class=\"meta\"", "Note (" + c.label() + "): stall starts beside the end of the "
+                        + end.control() + ", where linear theory concentrates the deflected control's lift in a narrow "
+                        + "peak; this onset falls as the lattice is refined and is pessimistic. "
+                        + end.firstOnControl().map(f -> "On the " + end.control() + " itself the first station "
+                                + "reaches cl_max at CL " + Html.fixed(f.lift(), 3) + ".").orElse("")))));
+
         List<ResultKey<FlightPoint>> columns = Vocabulary.select(Vocabulary.POINT, "alpha_deg", "CL", "CDi", "e", "Cm",
                 "C_roll");
-        List<List<String>> rows = new ArrayList<>();
-        for (double a : alphasDeg) {
-            FlightPoint p = new FlightPoint(s.analysis().solve(Math.toRadians(a), s.deflections()), OptionalDouble.empty());
-            rows.add(columns.stream().map(k -> value(k, p, u)).toList());
+        List<List<String>> coefficients = new ArrayList<>();
+        WingSummary drawn = in.drawn();
+        for (double a : in.alphasDeg()) {
+            FlightPoint p = new FlightPoint(drawn.analysis().solve(Math.toRadians(a), drawn.deflections()),
+                    OptionalDouble.empty());
+            coefficients.add(columns.stream().map(k -> value(k, p, u)).toList());
         }
-        h.table("results", "Coefficients by angle of attack", columns.stream().map(k -> Results.label(k, u)).toList(),
-                rows);
+        h.table("results", "Coefficients by angle of attack, " + (in.flaps().isPresent() ? "with flaps" : "clean"),
+                columns.stream().map(k -> Results.label(k, u)).toList(), coefficients);
+    }
+
+    private static List<String> row(String label, Inputs in, Optional<StallStudy.Configuration> flapStall, Cell cell) {
+        List<String> row = new ArrayList<>(List.of(label, cell.of(in.clean(), in.stall().map(StallStudy::clean))));
+        in.flaps().ifPresent(f -> row.add(cell.of(f, flapStall)));
+        return row;
     }
 
     /** A vocabulary value as the page shows it: display units, the key's decimals, a dash where absent. */
-    private static <S> String value(ResultKey<S> key, S source, LengthUnit u) {
+    private static <S> String value(ResultKey<S> key, S source, DisplayUnits u) {
         Object v = key.of(source);
         if (v == null) {
             return "\u2013";
@@ -160,16 +255,16 @@ public final class ReportPage {
                 .raw("</span><span class=\"note\">").text(note).line("</span></li>");
     }
 
-    private static void description(Html h, WingSummary summary) {
+    private static void description(Html h, WingSummary summary, DisplayUnits units) {
         Wing wing = summary.wing();
-        LengthUnit u = wing.displayUnit();
+        LengthUnit u = units.length();
         String l = u.symbol();
         Reference r = wing.reference();
         h.el("h2", "The wing");
         List<List<String>> ref = new ArrayList<>();
         for (ResultKey<WingResult> k : Vocabulary.select(Vocabulary.WING, "reference.area", "reference.span",
                 "reference.chord", "reference.aspect_ratio")) {
-            ref.add(List.of(Results.label(k, u).replace("^2", "\u00b2"), value(k, summary.wingResult(), u)));
+            ref.add(List.of(Results.label(k, units).replace("^2", "\u00b2"), value(k, summary.wingResult(), units)));
         }
         ref.add(List.of("moment point x, y, z [" + l + "]", Html.fixed(r.momentPoint().x() / u.metres(), 3)
                 + ", " + Html.fixed(r.momentPoint().y() / u.metres(), 3) + ", "
@@ -207,7 +302,9 @@ public final class ReportPage {
         }
     }
 
-    private static void lattice(Html h, WingSummary s, WingSummary fine) {
+    private static void lattice(Html h, Inputs in) {
+        WingSummary s = in.clean();
+        WingSummary fine = in.fine();
         Wing wing = s.wing();
         Lattice lat = s.analysis().lattice();
         h.el("h2", "Lattice and convergence");
@@ -223,7 +320,7 @@ public final class ReportPage {
         h.el("p", lat.panelCount() + " panels in " + lat.strips().size() + " strips over both halves; " + unknowns
                 + " unknowns per system (" + (lat.mirrored() ? "half span, solved with mirror images" : "full span")
                 + ").");
-        LengthUnit u = wing.displayUnit();
+        DisplayUnits u = in.units();
         double slopeChange = relative(fine.liftSlope(), s.liftSlope());
         ResultKey<WingResult> slope = Vocabulary.find(Vocabulary.WING, "lift_slope_per_rad");
         ResultKey<FlightPoint> e = Vocabulary.find(Vocabulary.POINT, "e");
@@ -240,6 +337,15 @@ public final class ReportPage {
         }
         conv.add(List.of(cdi.label() + at, value(cdi, s.pointAtCl(), u), value(cdi, fine.pointAtCl(), u),
                 Html.signed(100 * relative(fine.inducedDrag(), s.inducedDrag()), 2) + " %"));
+        ResultKey<StallEstimate> onset = Vocabulary.find(Vocabulary.ONSET, "CL");
+        double onsetChange = Double.NaN;
+        if (in.stall().isPresent() && in.stallFine().isPresent()) {
+            StallEstimate coarse = in.stall().get().clean().estimate();
+            StallEstimate refined = in.stallFine().get().clean().estimate();
+            onsetChange = relative(refined.lift(), coarse.lift());
+            conv.add(List.of("stall-onset CL, clean", value(onset, coarse, u), value(onset, refined, u),
+                    Html.signed(100 * onsetChange, 2) + " %"));
+        }
         int strips = wing.main().lattice().strips();
         h.table("convergence", "Convergence: the file lattice against twice as many strips",
                 List.of("quantity", strips + " strips", 2 * strips + " strips", "change"), conv);
@@ -250,6 +356,12 @@ public final class ReportPage {
                 : String.format(Locale.ROOT, "Doubling the strips moves the lift slope or e by %.2f %%: refine the "
                         + "lattice (more strips) before relying on them.", 100 * worst);
         h.el("p", verdict);
+        if (!Double.isNaN(onsetChange)) {
+            h.el("p", String.format(Locale.ROOT, "Doubling the strips moves the clean stall-onset CL by %.2f %%. The "
+                    + "onset is a local value (the first station to reach cl_max) and settles more slowly than the "
+                    + "integrated ones; a change of more than 1 %% means the onset should be read with that "
+                    + "margin.", 100 * onsetChange));
+        }
     }
 
     private static double relative(double fine, double coarse) {

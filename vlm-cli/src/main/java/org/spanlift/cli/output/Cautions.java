@@ -1,0 +1,31 @@
+package org.spanlift.cli.output;
+
+/**
+ * The cautions that outputs bearing on safety carry (stall speeds, maximum lift, loads), declared once so
+ * every command says the same. They defer to the airworthiness standards and licensed engineering practice.
+ */
+public final class Cautions {
+
+    /** Stall onset and stall speeds. */
+    public static final String STALL = "Caution: an estimate from linear theory and section data for the wing alone "
+            + "(the tail's download, which raises the real stall speed, is not included); not a substitute for "
+            + "flight test, airworthiness standards or licensed engineering judgement.";
+
+    /** Spanwise loads. */
+    public static final String LOADS = "Caution: loads for preliminary sizing only. Structural design and "
+            + "substantiation follow the applicable airworthiness standards and licensed engineering practice, with "
+            + "the required safety factors, which this tool does not apply unless told to (--safety-factor).";
+
+    /** Stall results of a sweep. */
+    public static final String SWEEP = "Caution: stall results are linear-theory estimates for the wing alone; they "
+            + "inform design and do not replace flight test, airworthiness standards or licensed engineering judgement.";
+
+    /** A comparison that shows stall results, loads or both. */
+    public static final String COMPARISON = "Caution: stall speeds and loads are linear-theory estimates for the wing "
+            + "alone (without the tail's download, which raises the real stall speed); loads are limit loads without "
+            + "safety factors. They inform design and defer to the applicable airworthiness standards, local rules "
+            + "and licensed engineering practice.";
+
+    private Cautions() {
+    }
+}
