@@ -98,12 +98,18 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
         }
         CommonLift.check(cl);
         List<Double> curve = AlphaList.parse(range);
-        Optional<FlightCondition> condition = flight.condition();
+        // Stall speeds are the 1 g ones; the load factor belongs to the load case of the root loads.
         AtmosphereState atmosphere = flight.atmosphere();
+        Optional<FlightCondition> condition = flight.condition()
+                .map(fc -> new FlightCondition(fc.weight(), 1, atmosphere, OptionalDouble.empty()));
         OptionalDouble speed = flight.equivalentSpeed(atmosphere);
         if (speed.isPresent() && condition.isEmpty()) {
             throw new InputException("--speed", 0, "", "the speed sets the load case of the root loads, which also "
                     + "needs --weight (and --load-factor, default 1)");
+        }
+        if (speed.isEmpty()) {
+            FlightOptions.refuse(spec, "the load factor belongs to the load case of the root loads; give --speed too "
+                    + "(stall speeds are at 1 g)", "--load-factor");
         }
         Optional<LoadCase> loadCase = speed.isPresent()
                 ? Optional.of(new LoadCase(String.format(Locale.ROOT, "n %.2f at %.1f m/s EAS", flight.loadFactor(),

@@ -82,6 +82,30 @@ class ReportCommandTest {
     }
 
     @Test
+    void reportStatesItsConditionAndShowsCleanAndFlappedSideBySide() throws Exception {
+        String html = report("trainer.wing.yaml", "--flaps", "30", "--weight", "750kg", "--altitude", "1000m");
+        int top = html.indexOf("</header>");
+        String header = html.substring(0, top);
+        for (String s : List.of("Condition:", "weight 7355 N (750.0 kg)", "pressure altitude 1000 m (standard "
+                + "atmosphere, geopotential)", "flap 30.0\u00b0")) {
+            assertTrue(header.contains(s), s + " in the page's header");
+        }
+        assertTrue(html.contains("Clean and with flaps"), "a side-by-side table");
+        assertTrue(html.contains(">clean</th>") && html.contains(">flaps</th>"), "clean and flaps columns");
+        assertTrue(html.contains("stall speed, clean") && html.contains("stall speed, flaps"), "both stall speeds");
+        assertTrue(html.contains("stall-onset CL, clean"), "the convergence note covers the stall onset");
+        assertTrue(html.contains("The figures show the wing with flaps"), "the figures' configuration is stated");
+    }
+
+    @Test
+    void reportInUsUnits() throws Exception {
+        String html = report("trainer.wing.yaml", "--units", "us", "--weight", "750kg");
+        assertTrue(html.contains("weight 1653 lbf"), "weight in lbf");
+        assertTrue(html.contains("lengths in ft"), "lengths in ft");
+        assertTrue(html.contains("reference span [ft]"), "reference values in ft");
+    }
+
+    @Test
     void reportIsDeterministic() throws Exception {
         byte[] a = report("tourer.wing.yaml", "--flaps", "15").getBytes(java.nio.charset.StandardCharsets.UTF_8);
         byte[] b = report("tourer.wing.yaml", "--flaps", "15").getBytes(java.nio.charset.StandardCharsets.UTF_8);

@@ -142,9 +142,28 @@ class VocabularyOutputsTest {
     }
 
     @Test
+    void everyLoadKeyIsInTheLoadsOutputAndCompareAgrees() {
+        String wingFile = dir.resolve("w.wing.yaml").toString();
+        String[] loadCase = {"--weight", WEIGHT, "--load-factor", "3.8", "--speed", "100kt"};
+        YamlValue loads = json(CliRun.of("loads", wingFile, loadCase[0], loadCase[1], loadCase[2], loadCase[3],
+                loadCase[4], loadCase[5], "--format", "json"));
+        YamlValue both = json(CliRun.of("compare", wingFile, wingFile, loadCase[0], loadCase[1], loadCase[2],
+                loadCase[3], loadCase[4], loadCase[5], "--format", "json"));
+        YamlValue firstCase = at(loads, "cases.0");
+        for (ResultKey<?> k : Vocabulary.LOADS) {
+            YamlValue printed = at(firstCase, k.key());
+            assertNotNull(printed, k.key() + " is in the loads output");
+            YamlValue compared = at(at(both, "wings"), "0." + Vocabulary.LOAD_CASE + k.key(), true);
+            if (compared != null) {
+                assertEquals(Double.parseDouble(text(printed)), Double.parseDouble(text(compared)), 0, k.key());
+            }
+        }
+    }
+
+    @Test
     void everyKeyIsDeclaredOnceWithAUnitLabelAndDescription() {
         List<List<? extends ResultKey<?>>> groups = List.of(Vocabulary.WING, Vocabulary.POINT, Vocabulary.ONSET,
-                Vocabulary.STUDY, Vocabulary.CONTROL);
+                Vocabulary.STUDY, Vocabulary.LOADS, Vocabulary.CONTROL);
         for (List<? extends ResultKey<?>> g : groups) {
             assertEquals(g.size(), g.stream().map(ResultKey::key).distinct().count(), "keys unique in a group");
             for (ResultKey<?> k : g) {

@@ -97,12 +97,11 @@ public final class ComparePage {
         List<String> parts = new ArrayList<>();
         cmp.condition().ifPresent(fc -> {
             parts.add("weight " + u.weight(fc.weight()));
-            if (fc.loadFactor() != 1) {
-                parts.add("load factor " + Html.fixed(fc.loadFactor(), 2));
-            }
             parts.add("pressure altitude " + u.altitude(fc.atmosphere().pressureAltitude()));
+            parts.add("stall speeds at 1 g");
         });
-        cmp.loadCase().ifPresent(lc -> parts.add("load case at " + u.speed(lc.equivalentSpeed()) + " EAS"));
+        cmp.loadCase().ifPresent(lc -> parts.add("load case n " + Html.fixed(lc.loadFactor(), 2) + " at "
+                + u.speed(lc.equivalentSpeed()) + " EAS"));
         if (cmp.flapsDeg().isPresent()) {
             parts.add("flaps " + Html.fixed(cmp.flapsDeg().getAsDouble(), 0) + "\u00b0 for the rows marked flaps");
         }

@@ -223,10 +223,15 @@ public final class Comparison {
         condition.ifPresent(fc -> {
             Map<String, Object> c = new LinkedHashMap<>();
             c.put("weight", fc.weight());
-            c.put("load_factor", fc.loadFactor());
             c.put("pressure_altitude", fc.atmosphere().pressureAltitude());
+            c.put("stall_load_factor", fc.loadFactor());
             c.put("flaps_deg", flapsDeg.isPresent() ? (Object) flapsDeg.getAsDouble() : null);
-            loadCase.ifPresent(lc -> c.put("load_case_speed_eas", lc.equivalentSpeed()));
+            loadCase.ifPresent(lc -> {
+                Map<String, Object> l = new LinkedHashMap<>();
+                l.put("load_factor", lc.loadFactor());
+                l.put("speed_eas", lc.equivalentSpeed());
+                c.put("load_case", l);
+            });
             root.put("condition", c);
         });
         List<Object> list = new ArrayList<>();
