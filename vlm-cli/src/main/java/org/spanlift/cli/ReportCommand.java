@@ -14,6 +14,7 @@ import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
+import org.spanlift.cli.plot.FigureContext;
 import org.spanlift.cli.plot.FigureOutput;
 import org.spanlift.cli.report.ReportPage;
 import org.spanlift.cli.report.StallSummary;
@@ -89,7 +90,7 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
             stall = StallSummary.unavailable(e.getMessage());
         }
         String html = ReportPage.build(summary, fine, stall, alphas, curve, flight.reynoldsRule(wing),
-                new VersionProvider().getVersion()[0]);
+                FigureContext.of(wing, deflections, flight.condition()), new VersionProvider().getVersion()[0]);
         assert format == Format.HTML;
         output.write(html, spec.commandLine().getOut());
         return 0;

@@ -14,6 +14,7 @@ import org.spanlift.vocabulary.ResultKey;
 import org.spanlift.vocabulary.Vocabulary;
 import org.spanlift.vocabulary.WingResult;
 import org.spanlift.cli.plot.Figure;
+import org.spanlift.cli.plot.FigureContext;
 import org.spanlift.cli.plot.PlotKind;
 import org.spanlift.cli.plot.Plots;
 import org.spanlift.cli.plot.SvgWriter;
@@ -37,12 +38,13 @@ public final class ReportPage {
      * @param fine      the same at twice as many strips, for the convergence note
      * @param stall     the stall-onset estimate, or why there is none
      * @param reynolds  rho V / mu for a point of lift coefficient CL, for the profile drag
+     * @param context   the configuration of the figures (the summary's deflections and the flight condition)
      * @param alphasDeg the angles of the results table
      * @param rangeDeg  the angles of the lift curve and polar
      * @param version   the program version for the footer
      */
     public static String build(WingSummary summary, WingSummary fine, StallSummary stall, List<Double> alphasDeg,
-            List<Double> rangeDeg, ReynoldsRule reynolds, String version) {
+            List<Double> rangeDeg, ReynoldsRule reynolds, FigureContext context, String version) {
         Wing wing = summary.wing();
         WingAnalysis analysis = summary.analysis();
         LengthUnit u = wing.displayUnit();
@@ -59,7 +61,7 @@ public final class ReportPage {
         description(h, summary);
         h.el("h2", "Figures");
         for (PlotKind kind : PlotKind.values()) {
-            Figure f = figure(kind, summary, stall, rangeDeg, reynolds);
+            Figure f = figure(kind, summary, stall, rangeDeg, reynolds, context);
             if (f == null) {
                 h.el("p", "class=\"missing\"", "No stall map: " + stall.unavailable());
                 continue;
@@ -89,14 +91,14 @@ public final class ReportPage {
      * map needs section cl-max data and is null without it.
      */
     static Figure figure(PlotKind kind, WingSummary s, StallSummary stall, List<Double> rangeDeg,
-            ReynoldsRule reynolds) {
+            ReynoldsRule reynolds, FigureContext context) {
         return switch (kind) {
-            case STALL -> stall.estimate().map(e -> (Figure) Plots.stallMap(s.analysis(), e)).orElse(null);
+            case STALL -> stall.estimate().map(e -> (Figure) Plots.stallMap(s.analysis(), e, context)).orElse(null);
             case PLANFORM -> Plots.planform(s.analysis(), stall.estimate()
-                    .map(e -> OptionalDouble.of(e.y())).orElse(OptionalDouble.empty()));
-            case SPAN_LOAD -> Plots.spanLoad(s.analysis(), s.spanLoadAtCl());
-            case LIFT -> Plots.liftCurve(s.analysis(), s.deflections(), rangeDeg);
-            case POLAR -> Plots.polar(s.analysis(), s.deflections(), rangeDeg, reynolds);
+                    .map(e -> OptionalDouble.of(e.y())).orElse(OptionalDouble.empty()), context);
+            case SPAN_LOAD -> Plots.spanLoad(s.analysis(), s.spanLoadAtCl(), stall.estimate(), context);
+            case LIFT -> Plots.liftCurve(s.analysis(), s.deflections(), rangeDeg, stall.estimate(), context);
+            case POLAR -> Plots.polar(s.analysis(), s.deflections(), rangeDeg, reynolds, context);
         };
     }
 
