@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.Collections;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.concurrent.Callable;
@@ -15,9 +16,11 @@ import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.plot.Figure;
+import org.spanlift.cli.plot.FigureContext;
 import org.spanlift.cli.plot.FigureOutput;
 import org.spanlift.cli.plot.PlotKind;
 import org.spanlift.cli.plot.Plots;
+import org.spanlift.flight.FlightCondition;
 import org.spanlift.geometry.Wing;
 import org.spanlift.input.InputException;
 import org.spanlift.io.WingFileReader;
@@ -35,8 +38,13 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code spanlift plot}: one figure of one wing, as SVG or PNG. */
 @Command(name = "plot", mixinStandardHelpOptions = true,
-        description = "Draw one figure of a wing as SVG or PNG: its planform and lattice, its span load, its lift "
-                + "curve, its induced-drag polar or its stall map.")
+        description = {"Draw one figure of a wing as SVG or PNG: its planform and lattice, its span load, its lift "
+                + "curve, its drag polar or its stall map.",
+            "Every figure states the configuration it was drawn for under its title: each deflected control (degrees, "
+                + "trailing edge down) and, with --weight, the weight, the pressure altitude and the load factor "
+                + "when it is not 1. Where the sections give cl-max data (or --assume-cl-max is given), the "
+                + "critical-section stall onset of that configuration is marked on the planform and the lift "
+                + "curve, and the span load draws each station's cl_max beside its cl."})
 public final class PlotCommand implements Callable<Integer>, OffersFormats {
 
     /** The formats this command writes. */
@@ -49,8 +57,11 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
     Path file;
 
     @Option(names = {"-w", "--what"}, paramLabel = "KIND", required = true,
-            description = "What to draw: planform, span-load, lift, polar or stall (the stall map: section cl and "
-                    + "cl_max along the span at stall onset).")
+            description = "What to draw: planform (outline, lattice, controls, stall-onset station), span-load "
+                    + "(c cl, cl and, with cl-max data, cl_max along the span, against the elliptic load), lift (CL "
+                    + "against alpha, stall onset marked), polar (CL against CDi, and CD with section polars) or "
+                    + "stall (the stall map: section cl at stall onset and cl_max along the span, ailerons, deflected "
+                    + "flaps and fuselage shaded).")
     String what;
 
     @Option(names = {"-a", "--alpha"}, paramLabel = "DEG",
@@ -77,31 +88,40 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
         Wing wing = WingFileReader.read(file);
         WingAnalysis analysis = WingAnalysis.of(wing);
         double[] deflections = analysis.deflections(flight.deflections(wing));
+        Optional<FlightCondition> condition = flight.condition();
+        FigureContext context = FigureContext.of(wing, deflections, condition);
         Figure figure = switch (kind) {
-            case PLANFORM -> Plots.planform(analysis, stallStation(analysis, deflections));
+            case PLANFORM -> Plots.planform(analysis, estimate(analysis, deflections, condition)
+                    .map(e -> OptionalDouble.of(e.y())).orElse(OptionalDouble.empty()), context);
             case SPAN_LOAD -> Plots.spanLoad(analysis, analysis.solve(spanLoadAlpha(analysis, deflections),
-                    deflections));
-            case LIFT -> Plots.liftCurve(analysis, deflections, range());
-            case POLAR -> Plots.polar(analysis, deflections, range(), flight.reynoldsRule(wing));
-            case STALL -> Plots.stallMap(analysis, stall(analysis, deflections));
+                    deflections), estimate(analysis, deflections, condition), context);
+            case LIFT -> Plots.liftCurve(analysis, deflections, range(), estimate(analysis, deflections, condition),
+                    context);
+            case POLAR -> Plots.polar(analysis, deflections, range(), flight.reynoldsRule(wing), context);
+            case STALL -> Plots.stallMap(analysis, stall(analysis, deflections, condition), context);
         };
         FigureOutput.write(figure, format, output, spec.commandLine().getOut());
         return 0;
     }
 
-    /** The stall-onset station to mark on the planform, when the sections allow an estimate. */
-    private OptionalDouble stallStation(WingAnalysis analysis, double[] deflections) {
+    /**
+     * The stall-onset estimate of the configuration drawn, when the sections allow one (every section gives
+     * cl-max, or --assume-cl-max is given): it marks the planform and the lift curve and gives the span load
+     * its cl_max line.
+     */
+    private Optional<StallEstimate> estimate(WingAnalysis analysis, double[] deflections,
+            Optional<FlightCondition> condition) {
         try {
-            return OptionalDouble.of(StallStudy.configuration("plot", analysis, deflections, clMax.assumed(),
-                    flight.condition()).estimate().y());
+            return Optional.of(StallStudy.configuration("plot", analysis, deflections, clMax.assumed(), condition)
+                    .estimate());
         } catch (MissingSectionDataException e) {
-            return OptionalDouble.empty();
+            return Optional.empty();
         }
     }
 
-    private StallEstimate stall(WingAnalysis analysis, double[] deflections) {
+    private StallEstimate stall(WingAnalysis analysis, double[] deflections, Optional<FlightCondition> condition) {
         try {
-            return StallStudy.configuration("plot", analysis, deflections, clMax.assumed(), flight.condition()).estimate();
+            return StallStudy.configuration("plot", analysis, deflections, clMax.assumed(), condition).estimate();
         } catch (MissingSectionDataException e) {
             throw new InputException(file.toString(), 0, "sections", e.getMessage());
         }

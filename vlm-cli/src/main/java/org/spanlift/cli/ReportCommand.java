@@ -16,6 +16,7 @@ import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.options.UnitsOption;
+import org.spanlift.cli.plot.FigureContext;
 import org.spanlift.cli.plot.FigureOutput;
 import org.spanlift.cli.report.ReportPage;
 import org.spanlift.cli.report.WingSummary;
@@ -100,9 +101,10 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
         } catch (RefusedException e) {
             unavailable = e.getMessage();
         }
+        double[] drawn = StallStudy.anyFlapDeflected(wing, asked) ? asked : clean;
         String html = ReportPage.build(new ReportPage.Inputs(summary, flaps, fine, stall, stallFine, unavailable,
-                condition, flight.reynoldsRule(wing), alphas, curve, units.units(wing.displayUnit()),
-                new VersionProvider().getVersion()[0]));
+                condition, flight.reynoldsRule(wing), FigureContext.of(wing, drawn, condition), alphas, curve,
+                units.units(wing.displayUnit()), new VersionProvider().getVersion()[0]));
         assert format == Format.HTML;
         output.write(html, spec.commandLine().getOut());
         return 0;

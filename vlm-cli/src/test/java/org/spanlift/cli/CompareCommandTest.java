@@ -100,6 +100,10 @@ class CompareCommandTest {
         Document doc = SvgSupport.parse(Files.readString(out));
         assertEquals(3, SvgSupport.all(doc, "svg").size());
         assertEquals(1, SvgSupport.all(doc, "table").size());
+        for (var caption : SvgSupport.all(doc, "figcaption")) {
+            assertTrue(caption.getTextContent().contains("Drawn for every wing: no control deflected."),
+                    caption.getTextContent());
+        }
         assertTrue(Files.readString(out).contains("they do not certify it"));
     }
 

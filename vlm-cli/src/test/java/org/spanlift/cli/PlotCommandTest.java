@@ -10,6 +10,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Locale;
 
 import javax.imageio.ImageIO;
 
@@ -109,6 +110,34 @@ class PlotCommandTest {
         String svg = Files.readString(plot("trainer.wing.yaml", PlotKind.SPAN_LOAD, "s.svg", "--alpha", "6",
                 "--flaps", "20"));
         assertTrue(svg.contains("Span load at \u03b1 = 6.00\u00b0"), "title");
+    }
+
+    private static String description(Path svg) throws Exception {
+        return SvgSupport.all(SvgSupport.parse(Files.readString(svg)), "desc").get(0).getTextContent();
+    }
+
+    @Test
+    void everyKindStatesTheConfigurationItWasDrawnFor() throws Exception {
+        // 750 kg at standard gravity, 9.80665 m/s^2
+        String weight = String.format(Locale.ROOT, "weight %.0f N", 750 * 9.80665);
+        for (PlotKind kind : PlotKind.values()) {
+            String configured = description(plot("trainer.wing.yaml", kind, kind.cliName() + "-c.svg", "--flaps", "20",
+                    "--weight", "750kg", "--altitude", "3000m", "--load-factor", "2"));
+            for (String part : List.of("flap 20\u00b0 trailing edge down", weight, "pressure altitude 3000 m",
+                    "load factor 2")) {
+                assertTrue(configured.contains(part), kind.cliName() + " lacks " + part + ": " + configured);
+            }
+            String plain = description(plot("trainer.wing.yaml", kind, kind.cliName() + "-p.svg"));
+            assertTrue(plain.startsWith("Drawn for no control deflected."), kind.cliName() + ": " + plain);
+            assertFalse(plain.contains("weight") || plain.contains("pressure altitude"), kind.cliName() + ": " + plain);
+        }
+    }
+
+    @Test
+    void stallMapShadesTheDeflectedFlapsOnly() throws Exception {
+        String fill = "fill:" + rgb(Palette.FLAP_FILL);
+        assertTrue(Files.readString(plot("trainer.wing.yaml", PlotKind.STALL, "f.svg", "--flaps", "20")).contains(fill));
+        assertFalse(Files.readString(plot("trainer.wing.yaml", PlotKind.STALL, "c.svg")).contains(fill));
     }
 
     @Test

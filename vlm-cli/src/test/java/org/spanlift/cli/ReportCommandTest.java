@@ -106,6 +106,20 @@ class ReportCommandTest {
     }
 
     @Test
+    void everyFigureCaptionStatesTheConfiguration() throws Exception {
+        Document doc = SvgSupport.parse(report("trainer.wing.yaml", "--flaps", "20", "--weight", "750kg"));
+        List<Element> captions = SvgSupport.all(doc, "figcaption");
+        assertEquals(PlotKind.values().length, captions.size());
+        // 750 kg at standard gravity, 9.80665 m/s^2
+        String weight = String.format(java.util.Locale.ROOT, "weight %.0f N", 750 * 9.80665);
+        for (Element caption : captions) {
+            String text = caption.getTextContent();
+            assertTrue(text.contains("Drawn for flap 20\u00b0 trailing edge down; " + weight + "; pressure altitude 0 m."),
+                    text);
+        }
+    }
+
+    @Test
     void reportIsDeterministic() throws Exception {
         byte[] a = report("tourer.wing.yaml", "--flaps", "15").getBytes(java.nio.charset.StandardCharsets.UTF_8);
         byte[] b = report("tourer.wing.yaml", "--flaps", "15").getBytes(java.nio.charset.StandardCharsets.UTF_8);

@@ -10,6 +10,7 @@ import java.awt.geom.Area;
 import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
 import java.awt.geom.Rectangle2D;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -33,8 +34,15 @@ public final class PlanformFigure implements Figure {
 
     private static final int WIDTH = 960;
     private static final double MARGIN_SIDE = 48;
-    private static final double HEADER = 78;
+    /** The title's baseline, the first subtitle line's, and the step to each further line. */
+    private static final double TITLE_BASELINE = 30;
+    private static final double SUBTITLE_BASELINE = 52;
+    private static final double LINE = 19;
+    /** From the last subtitle line's baseline to the top of the drawing (room for the stall label). */
+    private static final double BELOW_SUBTITLE = 32;
     private static final double FOOTER = 86;
+    /** Room kept clear of the subtitle at the top right, for the direction-of-flight arrow and its label. */
+    private static final double ARROW_ROOM = 150;
     private static final double MAX_DRAWING_HEIGHT = 560;
     private static final double MIN_DRAWING_HEIGHT = 90;
 
@@ -45,7 +53,8 @@ public final class PlanformFigure implements Figure {
 
     private final String id;
     private final String title;
-    private final String subtitle;
+    private final List<String> subtitle;
+    private final double header;
     private final String description;
     private final List<Layer> layers;
     private final LengthUnit unit;
@@ -57,20 +66,22 @@ public final class PlanformFigure implements Figure {
     private final int height;
     private final OptionalDouble stallStation;
 
-    public PlanformFigure(String id, String title, String subtitle, String description, List<Layer> layers,
-            LengthUnit unit) {
-        this(id, title, subtitle, description, layers, unit, OptionalDouble.empty());
-    }
-
     /**
+     * @param subtitle     the lines under the title (each wrapped when it is too long): the geometry, the
+     *                     configuration
      * @param stallStation the spanwise station (m, right half) where stall starts, marked on both halves
      */
-    public PlanformFigure(String id, String title, String subtitle, String description, List<Layer> layers,
+    public PlanformFigure(String id, String title, List<String> subtitle, String description, List<Layer> layers,
             LengthUnit unit, OptionalDouble stallStation) {
         this.stallStation = stallStation;
         this.id = id;
         this.title = title;
-        this.subtitle = subtitle;
+        List<String> lines = new ArrayList<>();
+        for (String s : subtitle) {
+            lines.addAll(Text.wrap(s, SUBTITLE, WIDTH - 2 * MARGIN_SIDE - ARROW_ROOM));
+        }
+        this.subtitle = List.copyOf(lines);
+        this.header = SUBTITLE_BASELINE + LINE * (lines.size() - 1) + BELOW_SUBTITLE;
         this.description = description;
         this.layers = List.copyOf(layers);
         this.unit = unit;
@@ -98,7 +109,7 @@ public final class PlanformFigure implements Figure {
         double along = MAX_DRAWING_HEIGHT / Math.max(xMax - xMin, 1e-9);
         this.scale = Math.min(across, along);
         double drawing = Math.max(MIN_DRAWING_HEIGHT, (xMax - xMin) * scale);
-        this.height = (int) Math.ceil(HEADER + drawing + FOOTER);
+        this.height = (int) Math.ceil(header + drawing + FOOTER);
     }
 
     @Override
@@ -126,6 +137,11 @@ public final class PlanformFigure implements Figure {
         return height;
     }
 
+    /** The lines under the title, as drawn. */
+    public List<String> subtitle() {
+        return subtitle;
+    }
+
     /** Pixels per metre, the same across and along the span. */
     public double scale() {
         return scale;
@@ -136,9 +152,9 @@ public final class PlanformFigure implements Figure {
     }
 
     private double sy(double x) {
-        double drawing = height - HEADER - FOOTER;
+        double drawing = height - header - FOOTER;
         double used = (xMax - xMin) * scale;
-        return HEADER + (drawing - used) / 2 + (x - xMin) * scale;
+        return header + (drawing - used) / 2 + (x - xMin) * scale;
     }
 
     @Override
@@ -147,8 +163,11 @@ public final class PlanformFigure implements Figure {
         g.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
         g.setColor(Palette.PAPER);
         g.fill(new Rectangle2D.Double(0, 0, WIDTH, height));
-        Text.draw(g, title, TITLE, MARGIN_SIDE - 24, 30, Text.Align.LEFT, Palette.INK, null);
-        Text.draw(g, subtitle, SUBTITLE, MARGIN_SIDE - 24, 52, Text.Align.LEFT, Palette.MUTED, null);
+        Text.draw(g, title, TITLE, MARGIN_SIDE - 24, TITLE_BASELINE, Text.Align.LEFT, Palette.INK, null);
+        for (int i = 0; i < subtitle.size(); i++) {
+            Text.draw(g, subtitle.get(i), SUBTITLE, MARGIN_SIDE - 24, SUBTITLE_BASELINE + LINE * i, Text.Align.LEFT,
+                    Palette.MUTED, null);
+        }
         flightArrow(g);
         centreline(g);
         boolean single = layers.size() == 1;

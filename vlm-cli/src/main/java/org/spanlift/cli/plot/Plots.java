@@ -9,13 +9,12 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.XYSeries.XYSeriesRenderStyle;
-import org.knowm.xchart.style.Styler.LegendLayout;
-import org.knowm.xchart.style.Styler.LegendPosition;
 import org.knowm.xchart.style.XYStyler;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 import org.spanlift.flight.ReynoldsRule;
@@ -46,17 +45,26 @@ public final class Plots {
      */
     static final int REFERENCE_POINTS = 29;
 
+    /** The legend entry of the stall onset on the lift curve. */
+    static final String STALL_ONSET = "stall onset (critical section)";
+    /** The legend entry of the aileron span on the stall map. */
+    static final String AILERON_SPAN = "aileron span";
+    /** The legend entry of the deflected flaps' span on the stall map. */
+    static final String FLAP_SPAN = "deflected flap span";
+    /** The legend entry of the section lift coefficient on the span load. */
+    static final String SECTION_CL = "section cl";
+
     private Plots() {
     }
 
     // ---------------------------------------------------------------- one wing
 
-    public static PlanformFigure planform(WingAnalysis analysis) {
-        return planform(analysis, OptionalDouble.empty());
-    }
-
-    /** The planform with the stall-onset station (m, right half) marked when known. */
-    public static PlanformFigure planform(WingAnalysis analysis, OptionalDouble stallStation) {
+    /**
+     * The planform with the stall-onset station (m, right half) marked when known.
+     *
+     * @param context the configuration the stall station was found for
+     */
+    public static PlanformFigure planform(WingAnalysis analysis, OptionalDouble stallStation, FigureContext context) {
         Wing wing = analysis.wing();
         Map<Integer, String> names = new LinkedHashMap<>();
         List<ControlSurface> controls = wing.controls();
@@ -68,19 +76,27 @@ public final class Plots {
         LengthUnit u = wing.displayUnit();
         Reference r = wing.reference();
         int panels = analysis.lattice().panelCount();
-        String subtitle = String.format(Locale.ROOT, "span %s %s  \u00b7  area %s %s\u00b2  \u00b7  aspect ratio %.2f  "
+        String geometry = String.format(Locale.ROOT, "span %s %s  \u00b7  area %s %s\u00b2  \u00b7  aspect ratio %.2f  "
                 + "\u00b7  mean aerodynamic chord %s %s  \u00b7  %d panels", length(r.span(), u), u.symbol(),
                 area(r.area(), u), u.symbol(), r.aspectRatio(), length(r.chord(), u), u.symbol(), panels);
-        String desc = "Top view of " + wing.name() + " to scale, leading edge up: the outline of both halves, the "
-                + panels + " lattice panels, and the control surfaces shaded by kind (flaps hatched one way, "
-                + "ailerons the other)" + (stallStation.isPresent() ? "; the dashed lines mark the stations where "
-                + "stall starts (critical-section estimate)." : ".");
-        return new PlanformFigure("planform", "Planform: " + wing.name(), subtitle, desc, List.of(layer), u,
-                stallStation);
+        String desc = context.sentence() + " Top view of " + wing.name() + " to scale, leading edge up: the outline "
+                + "of both halves, the " + panels + " lattice panels, and the control surfaces shaded by kind (flaps "
+                + "hatched one way, ailerons the other)" + (stallStation.isPresent() ? "; the dashed lines mark the "
+                + "stations where stall starts in this configuration (critical-section estimate)." : ".");
+        return new PlanformFigure("planform", "Planform: " + wing.name(), List.of(geometry, context.text()), desc,
+                List.of(layer), u, stallStation);
     }
 
-    /** The span load of the first surface (the wing) at one solved condition. */
-    public static ChartFigure spanLoad(WingAnalysis analysis, Solution s) {
+    /**
+     * The span load of the first surface (the wing) at one solved condition and, when the sections give
+     * cl_max data, each station's cl_max beside its cl.
+     *
+     * @param limits  the stall estimate of the same configuration, whose strips carry each station's cl_max;
+     *                empty when the sections give none
+     * @param context the configuration of the solution
+     */
+    public static ChartFigure spanLoad(WingAnalysis analysis, Solution s, Optional<StallEstimate> limits,
+            FigureContext context) {
         Wing wing = analysis.wing();
         LengthUnit u = wing.displayUnit();
         Reference r = wing.reference();
@@ -98,23 +114,45 @@ public final class Plots {
         String title = String.format(Locale.ROOT, "Span load at \u03b1 = %.2f\u00b0 (CL = %.3f)",
                 Math.toDegrees(s.alpha()), s.coefficients().lift());
         XYChart c = chart(title, "spanwise station y [" + u.symbol() + "], right tip positive",
-                "c\u00b7cl / c_ref  and  cl");
+                limits.isPresent() ? "c\u00b7cl / c_ref,  cl  and  cl_max" : "c\u00b7cl / c_ref  and  cl");
         XYSeries a = c.addSeries("c\u00b7cl / c_ref, lattice strips", y, clc);
         style(a, Palette.BLUE, Palette.line(0, 2.2f), SeriesMarkers.CIRCLE);
         XYSeries b = c.addSeries("elliptic load of the same lift", ell[0], ell[1]);
         style(b, Palette.INK, Palette.referenceLine(), SeriesMarkers.NONE);
-        XYSeries d = c.addSeries("section cl", y, cl);
+        XYSeries d = c.addSeries(SECTION_CL, y, cl);
         style(d, Palette.VERMILLION, Palette.line(2, 1.8f), SeriesMarkers.DIAMOND);
-        c.getStyler().setYAxisMin(0.0);
-        String desc = String.format(Locale.ROOT, "Spanwise load of %s at %.2f degrees angle of attack: c times cl "
-                + "over the reference chord %s %s for each lattice strip, the elliptic load carrying the same lift, "
-                + "and the section lift coefficient cl.", surfaceLabel(wing), Math.toDegrees(s.alpha()),
-                length(r.chord(), u), u.symbol());
-        return new ChartFigure("span-load", desc, c);
+        String limitText = "";
+        if (limits.isPresent()) {
+            StallEstimate e = limits.get();
+            double[][] max = clMaxAlongSpan(e, u);
+            halves(c, clMaxName(e), max[0], max[1], wing.main().fuselageHalfWidth() > 0, Palette.VERMILLION,
+                    Palette.line(1, 2.0f), SeriesMarkers.NONE);
+            limitText = " The line section cl_max is each station's cl_max as the stall estimate of this configuration "
+                    + "reads it (flap increments included; at " + (context.weight().isPresent() ? "the stall speed's "
+                    + "Reynolds numbers" : "the cl-max tables' lowest Reynolds number") + "), so the gap between cl and "
+                    + "cl_max is each station's margin" + (e.assumedClMax() ? "; some sections give no cl-max and an "
+                    + "assumed value is used." : ".");
+        }
+        // Negative loads (a washed-out tip beside a deflected flap) stay in view.
+        if (min(clc) >= 0 && min(cl) >= 0) {
+            c.getStyler().setYAxisMin(0.0);
+        }
+        String desc = context.sentence() + String.format(Locale.ROOT, " Spanwise load of %s at %.2f degrees angle of "
+                + "attack: c times cl over the reference chord %s %s for each lattice strip, the elliptic load "
+                + "carrying the same lift, and the section lift coefficient cl.", surfaceLabel(wing),
+                Math.toDegrees(s.alpha()), length(r.chord(), u), u.symbol()) + limitText;
+        return new ChartFigure(PlotKind.SPAN_LOAD.figureId(), desc, c, context.text());
     }
 
-    /** CL against alpha at the given deflections. */
-    public static ChartFigure liftCurve(WingAnalysis analysis, double[] deflections, List<Double> alphasDeg) {
+    /**
+     * CL against alpha at the given deflections, with the stall onset marked when it is known.
+     *
+     * @param onset   the critical-section stall onset of the same configuration, empty when the sections give
+     *                no cl_max
+     * @param context the configuration
+     */
+    public static ChartFigure liftCurve(WingAnalysis analysis, double[] deflections, List<Double> alphasDeg,
+            Optional<StallEstimate> onset, FigureContext context) {
         LiftCurve line = analysis.liftCurve(deflections);
         double[] a = toArray(alphasDeg);
         double[] cl = new double[a.length];
@@ -132,10 +170,29 @@ public final class Plots {
         z.setXYSeriesRenderStyle(XYSeriesRenderStyle.Scatter);
         z.setMarker(SeriesMarkers.DIAMOND);
         z.setMarkerColor(Palette.VERMILLION);
-        String desc = String.format(Locale.ROOT, "Lift coefficient against angle of attack from %.1f to %.1f "
-                + "degrees by linear vortex-lattice theory, which does not stall; the lift slope at zero lift is "
-                + "%.3f per radian.", a[0], a[a.length - 1], line.slope());
-        return new ChartFigure("lift-curve", desc, c);
+        String onsetText = " No stall onset is marked: the sections give no cl_max data.";
+        if (onset.isPresent()) {
+            StallEstimate e = onset.get();
+            double alphaDeg = Math.toDegrees(e.alpha());
+            boolean outside = alphaDeg < min(a) || alphaDeg > max(a);
+            XYSeries m = c.addSeries(String.format(Locale.ROOT, "%s: CL = %.3f at \u03b1 = %.2f\u00b0%s", STALL_ONSET,
+                    e.lift(), alphaDeg, outside ? ", beyond the angles drawn" : ""), new double[] {alphaDeg},
+                    new double[] {e.lift()});
+            m.setXYSeriesRenderStyle(XYSeriesRenderStyle.Scatter);
+            m.setMarker(new OnsetMarker());
+            m.setMarkerColor(Palette.INK);
+            c.addAnnotation(new MarkLabel(String.format(Locale.ROOT, "stall onset, CL %.3f", e.lift()), alphaDeg,
+                    e.lift(), Palette.font(Font.PLAIN, 12f), Palette.INK));
+            onsetText = String.format(Locale.ROOT, " The black diamond marks the stall onset of this configuration by "
+                    + "the critical-section method: at CL %.3f (%.2f degrees) the first station, at y = %s %s, reaches "
+                    + "its section cl_max%s. Beyond it the straight line is linear theory only.", e.lift(), alphaDeg,
+                    length(e.y(), analysis.wing().displayUnit()), analysis.wing().displayUnit().symbol(),
+                    e.assumedClMax() ? " (some sections give no cl-max: an assumed value is used)" : "");
+        }
+        String desc = context.sentence() + String.format(Locale.ROOT, " Lift coefficient against angle of attack from "
+                + "%.1f to %.1f degrees by linear vortex-lattice theory, which does not stall; the lift slope at zero "
+                + "lift is %.3f per radian.", a[0], a[a.length - 1], line.slope()) + onsetText;
+        return new ChartFigure(PlotKind.LIFT.figureId(), desc, c, context.text());
     }
 
     /**
@@ -144,9 +201,10 @@ public final class Plots {
      *
      * @param reynoldsPerMetre rho V / mu for a point of lift coefficient CL (0 reads the polars at their
      *                         lowest Reynolds number)
+     * @param context          the configuration
      */
     public static ChartFigure polar(WingAnalysis analysis, double[] deflections, List<Double> alphasDeg,
-            ReynoldsRule reynoldsPerMetre) {
+            ReynoldsRule reynoldsPerMetre, FigureContext context) {
         Wing wing = analysis.wing();
         double[] a = toArray(alphasDeg);
         double[] cl = new double[a.length];
@@ -193,53 +251,47 @@ public final class Plots {
         style(e, Palette.INK, Palette.referenceLine(), SeriesMarkers.NONE);
         c.getStyler().setXAxisMin(0.0);
         c.getStyler().setXAxisDecimalPattern("0.000");
-        String desc = String.format(Locale.ROOT, "Lift coefficient against induced drag coefficient from %.1f to %.1f "
+        String desc = context.sentence() + String.format(Locale.ROOT, " Lift coefficient against induced drag "
+                + "coefficient from %.1f to %.1f "
                 + "degrees angle of attack, beside the parabola of elliptic loading at the same aspect ratio. %s",
                 a[0], a[a.length - 1], profile ? "The total drag adds the profile drag of the section polars, "
                         + "integrated strip by strip." : "Profile drag is not included: the sections give no polar.");
-        return new ChartFigure("polar", desc, c);
+        return new ChartFigure(PlotKind.POLAR.figureId(), desc, c, context.text());
     }
 
     /**
      * The stall map: section cl at stall onset and the section cl_max along the span (critical-section
-     * method, linear theory), the aileron span shaded and the onset station marked.
+     * method, linear theory), the aileron span, the span of each deflected flap and the fuselage shaded, and
+     * the onset station marked.
+     *
+     * @param context the configuration of the estimate; its deflected flaps are shaded
      */
-    public static ChartFigure stallMap(WingAnalysis analysis, StallEstimate stall) {
+    public static ChartFigure stallMap(WingAnalysis analysis, StallEstimate stall, FigureContext context) {
         Wing wing = analysis.wing();
         LengthUnit u = wing.displayUnit();
         List<StallEstimate.StripStall> strips = stall.strips();
         int n = strips.size();
         double[] y = new double[n];
         double[] cl = new double[n];
-        double[] clMax = new double[n];
         double top = 0;
         for (int i = 0; i < n; i++) {
             y[i] = strips.get(i).y() / u.metres();
             cl[i] = strips.get(i).clAtOnset();
-            clMax[i] = strips.get(i).clMax();
-            top = Math.max(top, Math.max(cl[i], clMax[i]));
+            top = Math.max(top, Math.max(cl[i], strips.get(i).clMax()));
         }
         double band = 1.1 * top;
         String title = String.format(Locale.ROOT, "Stall map: onset at CL = %.3f (\u03b1 = %.2f\u00b0), station \u03b7 = %.2f",
                 stall.lift(), Math.toDegrees(stall.alpha()), stall.eta());
         XYChart c = chart(title, "spanwise station y [" + u.symbol() + "], right tip positive",
                 "section cl at stall onset  and  cl_max");
-        int shade = 0;
+        List<String> flapped = new ArrayList<>();
         for (ControlSurface cs : wing.main().controls()) {
-            if (cs.kind() != ControlKind.AILERON) {
-                continue;
-            }
-            for (double side : new double[] {1, -1}) {
-                double a = side * cs.from() / u.metres();
-                double b = side * cs.to() / u.metres();
-                XYSeries area = c.addSeries(shade == 0 ? "aileron span" : "aileron span " + (shade + 1),
-                        new double[] {Math.min(a, b), Math.max(a, b)}, new double[] {band, band});
-                area.setXYSeriesRenderStyle(XYSeriesRenderStyle.Area);
-                area.setFillColor(Palette.AILERON_FILL);
-                area.setLineColor(Palette.AILERON_FILL);
-                area.setMarker(SeriesMarkers.NONE);
-                area.setShowInLegend(shade == 0);
-                shade++;
+            double deflection = context.deflection(cs.name());
+            if (cs.kind() == ControlKind.AILERON) {
+                shadeSpan(c, AILERON_SPAN, cs, u, band, Palette.AILERON_FILL);
+            } else if (cs.kind() == ControlKind.FLAP && deflection != 0) {
+                shadeSpan(c, FLAP_SPAN, cs, u, band, Palette.FLAP_FILL);
+                flapped.add(cs.name() + " at " + FigureContext.number(Math.toDegrees(deflection)) + " degrees");
             }
         }
         double fuselage = wing.main().fuselageHalfWidth() / u.metres();
@@ -251,59 +303,121 @@ public final class Plots {
             body.setLineColor(Palette.FUSELAGE_FILL);
             body.setMarker(SeriesMarkers.NONE);
         }
-        // With a fuselage each half gets its own line, so that none is drawn across it (no strips there).
+        double[][] max = clMaxAlongSpan(stall, u);
+        halves(c, clMaxName(stall), max[0], max[1], fuselage > 0, Palette.VERMILLION, Palette.line(1, 2.0f),
+                SeriesMarkers.NONE);
+        halves(c, "section cl at stall onset", y, cl, fuselage > 0, Palette.BLUE, Palette.line(0, 2.2f),
+                SeriesMarkers.CIRCLE);
+        double yOnset = stall.y() / u.metres();
+        double clOnset = stall.onsetStrip().clMax();
+        XYSeries mark = c.addSeries(String.format(Locale.ROOT, "stall starts: y = \u00b1%.3f %s", yOnset, u.symbol()),
+                new double[] {-yOnset, yOnset}, new double[] {clOnset, clOnset});
+        mark.setXYSeriesRenderStyle(XYSeriesRenderStyle.Scatter);
+        mark.setMarker(new OnsetMarker());
+        mark.setMarkerColor(Palette.INK);
+        c.getStyler().setYAxisMin(0.0);
+        c.getStyler().setYAxisMax(band);
+        List<String> shaded = new ArrayList<>();
+        if (wing.main().controls().stream().anyMatch(cs -> cs.kind() == ControlKind.AILERON)) {
+            shaded.add("the aileron span");
+        }
+        if (!flapped.isEmpty()) {
+            shaded.add("the span of the deflected " + (flapped.size() == 1 ? "flap (" : "flaps (")
+                    + String.join(", ", flapped) + ")");
+        }
+        if (fuselage > 0) {
+            shaded.add("the fuselage, inside which no station is a stall candidate");
+        }
+        String desc = context.sentence() + String.format(Locale.ROOT, " Section lift coefficient along the span of %s "
+                + "at the wing CL where the first station reaches its section cl_max (%.3f, at %.2f degrees), beside "
+                + "the cl_max of each station%s. Critical-section method in linear theory.%s",
+                surfaceLabel(wing), stall.lift(), Math.toDegrees(stall.alpha()),
+                shaded.isEmpty() ? "" : "; shaded: " + String.join("; ", shaded),
+                stall.assumedClMax() ? " Some sections give no cl-max: an assumed value is used." : "");
+        return new ChartFigure(PlotKind.STALL.figureId(), desc, c, context.text());
+    }
+
+    /** The legend entry of the sections' cl_max, flagged when some is assumed. */
+    static String clMaxName(StallEstimate e) {
+        return "section cl_max" + (e.assumedClMax() ? " (partly assumed)" : "");
+    }
+
+    /** Each strip's y (display unit) and cl_max, from a stall estimate. */
+    private static double[][] clMaxAlongSpan(StallEstimate e, LengthUnit u) {
+        List<StallEstimate.StripStall> strips = e.strips();
+        double[] y = new double[strips.size()];
+        double[] v = new double[strips.size()];
+        for (int i = 0; i < y.length; i++) {
+            y[i] = strips.get(i).y() / u.metres();
+            v[i] = strips.get(i).clMax();
+        }
+        return new double[][] {y, v};
+    }
+
+    /**
+     * A spanwise series (y ascending); with a fuselage, one line per half so that none is drawn across it
+     * (no strip there is a stall candidate), the legend naming the first.
+     */
+    private static void halves(XYChart c, String name, double[] y, double[] v, boolean split, Color colour,
+            BasicStroke stroke, org.knowm.xchart.style.markers.Marker marker) {
         int right = 0;
-        while (fuselage > 0 && right < n && y[right] < 0) {
+        while (split && right < y.length && y[right] < 0) {
             right++;
         }
-        String maxName = "section cl_max" + (stall.assumedClMax() ? " (partly assumed)" : "");
-        String atName = "section cl at stall onset";
-        for (int[] half : new int[][] {{0, right}, {right, n}}) {
+        for (int[] half : new int[][] {{0, right}, {right, y.length}}) {
             if (half[1] == half[0]) {
                 continue;
             }
             boolean first = half[0] == 0;
-            XYSeries max = c.addSeries(first ? maxName : maxName + ", right half",
-                    Arrays.copyOfRange(y, half[0], half[1]), Arrays.copyOfRange(clMax, half[0], half[1]));
-            style(max, Palette.VERMILLION, Palette.line(1, 2.0f), SeriesMarkers.NONE);
-            max.setShowInLegend(first);
-            XYSeries at = c.addSeries(first ? atName : atName + ", right half",
-                    Arrays.copyOfRange(y, half[0], half[1]), Arrays.copyOfRange(cl, half[0], half[1]));
-            style(at, Palette.BLUE, Palette.line(0, 2.2f), SeriesMarkers.CIRCLE);
-            at.setShowInLegend(first);
+            XYSeries s = c.addSeries(first ? name : name + ", right half", Arrays.copyOfRange(y, half[0], half[1]),
+                    Arrays.copyOfRange(v, half[0], half[1]));
+            style(s, colour, stroke, marker);
+            s.setShowInLegend(first);
         }
-        double yOnset = stall.y() / u.metres();
-        double clOnset = strips.stream().filter(st -> Math.abs(Math.abs(st.y()) - stall.y()) < 1e-12)
-                .mapToDouble(StallEstimate.StripStall::clMax).findFirst().orElse(top);
-        XYSeries mark = c.addSeries(String.format(Locale.ROOT, "stall starts: y = \u00b1%.3f %s", yOnset, u.symbol()),
-                new double[] {-yOnset, yOnset}, new double[] {clOnset, clOnset});
-        mark.setXYSeriesRenderStyle(XYSeriesRenderStyle.Scatter);
-        mark.setMarker(SeriesMarkers.DIAMOND);
-        mark.setMarkerColor(Palette.INK);
-        c.getStyler().setYAxisMin(0.0);
-        c.getStyler().setYAxisMax(band);
-        String desc = String.format(Locale.ROOT, "Section lift coefficient along the span of %s at the wing CL where "
-                + "the first station reaches its section cl_max (%.3f, at %.2f degrees), beside the cl_max of each "
-                + "station; the aileron span is shaded%s. Critical-section method in linear theory.%s",
-                surfaceLabel(wing), stall.lift(), Math.toDegrees(stall.alpha()),
-                fuselage > 0 ? ", and so is the fuselage, inside which no station is a stall candidate" : "",
-                stall.assumedClMax() ? " Some sections give no cl-max: an assumed value is used." : "");
-        return new ChartFigure("stall-map", desc, c);
+    }
+
+    /**
+     * Shades a control's span on both halves, full height; the legend names the first band of a name only
+     * (the others get numbered series names, which the chart requires to be unique).
+     */
+    private static void shadeSpan(XYChart c, String name, ControlSurface cs, LengthUnit u, double height, Color fill) {
+        for (double side : new double[] {1, -1}) {
+            double a = side * cs.from() / u.metres();
+            double b = side * cs.to() / u.metres();
+            boolean first = !c.getSeriesMap().containsKey(name);
+            String key = name;
+            for (int k = 2; c.getSeriesMap().containsKey(key); k++) {
+                key = name + " " + k;
+            }
+            XYSeries area = c.addSeries(key, new double[] {Math.min(a, b), Math.max(a, b)},
+                    new double[] {height, height});
+            area.setXYSeriesRenderStyle(XYSeriesRenderStyle.Area);
+            area.setFillColor(fill);
+            area.setLineColor(fill);
+            area.setMarker(SeriesMarkers.NONE);
+            area.setShowInLegend(first);
+        }
     }
 
     // ---------------------------------------------------------------- several wings
 
-    /** Outlines of several wings overlaid to scale, each in its own file's axes. */
-    public static PlanformFigure planformOverlay(List<Wing> wings, List<String> labels, LengthUnit unit) {
+    /**
+     * Outlines of several wings overlaid to scale, each in its own file's axes.
+     *
+     * @param keys     each wing's short key (A, B, ...), for the configurations line
+     * @param contexts each wing's configuration
+     */
+    public static PlanformFigure planformOverlay(List<Wing> wings, List<String> labels, List<String> keys,
+            List<FigureContext> contexts, LengthUnit unit) {
         List<PlanformFigure.Layer> layers = new ArrayList<>();
         for (int i = 0; i < wings.size(); i++) {
             layers.add(new PlanformFigure.Layer(legendLabel(labels.get(i), wings.size()), WingGeometry.outlines(wings.get(i)), List.of(), Map.of(),
                     Palette.series(i), Palette.line(i, 2f)));
         }
-        String desc = "Top views of " + wings.size() + " wings overlaid to scale, each in its own file's axes "
-                + "(leading edge up, centreline dash-dotted); outlines only.";
-        return new PlanformFigure("compare-planform", "Planforms overlaid", "outlines to scale, each wing in its "
-                + "own file's axes", desc, layers, unit);
+        String desc = FigureContext.sentence(keys, contexts) + " Top views of " + wings.size() + " wings overlaid "
+                + "to scale, each in its own file's axes (leading edge up, centreline dash-dotted); outlines only.";
+        return new PlanformFigure("compare-planform", "Planforms overlaid", List.of("outlines to scale, each wing in "
+                + "its own file's axes", FigureContext.text(keys, contexts)), desc, layers, unit, OptionalDouble.empty());
     }
 
     /**
@@ -311,7 +425,7 @@ public final class Plots {
      * encloses the same area and the elliptic load is 4 / pi sqrt(1 - eta^2).
      */
     public static ChartFigure spanLoadOverlay(List<Wing> wings, List<Solution> solutions, List<String> labels,
-            double commonCl) {
+            List<String> keys, List<FigureContext> contexts, double commonCl) {
         XYChart c = chart(String.format(Locale.ROOT, "Span-load shapes at CL = %.2f", commonCl),
                 "2y / b  (fraction of the semi-span, right tip at 1)", "c\u00b7cl / (CL \u00b7 S / b)");
         for (int i = 0; i < wings.size(); i++) {
@@ -340,18 +454,22 @@ public final class Plots {
         }
         XYSeries e = c.addSeries("elliptic", eta, v);
         style(e, Palette.MUTED, Palette.referenceLine(), SeriesMarkers.NONE);
-        c.getStyler().setYAxisMin(0.0);
+        if (c.getSeriesMap().values().stream().allMatch(series -> min(series.getYData()) >= 0)) {
+            c.getStyler().setYAxisMin(0.0);
+        }
         c.getStyler().setXAxisMin(-1.0);
         c.getStyler().setXAxisMax(1.0);
         c.getStyler().setMarkerSize(5);
-        String desc = String.format(Locale.ROOT, "Span-load shapes of %d wings at CL %.2f, each normalized by its own "
+        String desc = FigureContext.sentence(keys, contexts) + String.format(Locale.ROOT, " Span-load shapes of %d "
+                + "wings at CL %.2f, each normalized by its own "
                 + "mean load CL S / b and plotted against the fraction of its semi-span, with the elliptic shape.",
                 wings.size(), commonCl);
-        return new ChartFigure("compare-span-load", desc, c);
+        return new ChartFigure("compare-span-load", desc, c, FigureContext.text(keys, contexts));
     }
 
-    /** Lift curves of several wings on common axes. */
-    public static ChartFigure liftOverlay(List<WingAnalysis> analyses, List<String> labels, List<Double> alphasDeg) {
+    /** Lift curves of several wings on common axes, each at the deflections of its configuration. */
+    public static ChartFigure liftOverlay(List<WingAnalysis> analyses, List<String> labels, List<String> keys,
+            List<FigureContext> contexts, List<Double> alphasDeg) {
         XYChart c = chart("Lift curves", "angle of attack \u03b1 [deg]", "CL  (inviscid linear theory: no stall)");
         double[] a = toArray(alphasDeg);
         for (int i = 0; i < analyses.size(); i++) {
@@ -364,14 +482,14 @@ public final class Plots {
             XYSeries s = c.addSeries(legendLabel(labels.get(i), analyses.size()), a, cl);
             style(s, Palette.series(i), Palette.line(i, 2f), Palette.marker(i));
         }
-        String desc = "Lift coefficient against angle of attack for " + analyses.size()
-                + " wings, each on its own reference area, with the deflections of its file.";
-        return new ChartFigure("compare-lift", desc, c);
+        String desc = FigureContext.sentence(keys, contexts) + " Lift coefficient against angle of attack for "
+                + analyses.size() + " wings, each on its own reference area, with the deflections of its file.";
+        return new ChartFigure("compare-lift", desc, c, FigureContext.text(keys, contexts));
     }
 
     // ---------------------------------------------------------------- helpers
 
-    /** A chart in Spanlift's style: white, light grid, outline text, legend under the plot. */
+    /** A chart in Spanlift's style: white, light grid, outline text; {@link ChartFigure} adds title and legend. */
     static XYChart chart(String title, String xTitle, String yTitle) {
         XYChart c = new XYChart(CHART_WIDTH, CHART_HEIGHT);
         c.setTitle(title);
@@ -386,18 +504,13 @@ public final class Plots {
         st.setPlotBorderColor(Palette.MUTED);
         st.setPlotGridLinesColor(Palette.GRID);
         st.setPlotGridLinesStroke(new BasicStroke(0.8f));
-        st.setChartTitleFont(Palette.font(Font.BOLD, 16f));
-        st.setChartTitleBoxVisible(false);
+        // the title, subtitle and legend are ChartFigure's (the legend wraps into rows)
+        st.setChartTitleVisible(false);
+        st.setLegendVisible(false);
         st.setAxisTitleFont(Palette.font(Font.PLAIN, 13f));
         st.setAxisTickLabelsFont(Palette.font(Font.PLAIN, 12f));
         st.setAxisTickLabelsColor(Palette.INK);
         st.setAxisTickMarksColor(Palette.MUTED);
-        st.setLegendFont(Palette.font(Font.PLAIN, 12f));
-        st.setLegendPosition(LegendPosition.OutsideS);
-        st.setLegendLayout(LegendLayout.Horizontal);
-        st.setLegendBorderColor(Palette.PAPER);
-        st.setLegendBackgroundColor(Palette.PAPER);
-        st.setLegendSeriesLineLength(34);
         st.setMarkerSize(6);
         st.setChartPadding(14);
         st.setPlotContentSize(0.94);

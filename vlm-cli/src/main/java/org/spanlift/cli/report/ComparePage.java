@@ -2,10 +2,12 @@ package org.spanlift.cli.report;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.spanlift.cli.output.DisplayUnits;
 import org.spanlift.cli.plot.Figure;
+import org.spanlift.cli.plot.FigureContext;
 import org.spanlift.cli.plot.Plots;
 import org.spanlift.cli.plot.SvgWriter;
 import org.spanlift.geometry.Wing;
@@ -82,9 +84,11 @@ public final class ComparePage {
         }
         List<Solution> atCl = wings.stream().map(WingSummary::spanLoadAtCl).toList();
         List<WingAnalysis> analyses = wings.stream().map(WingSummary::analysis).toList();
-        figure(h, Plots.planformOverlay(ws, keyed, u.length()));
-        figure(h, Plots.spanLoadOverlay(ws, atCl, keyed, cmp.cl()));
-        figure(h, Plots.liftOverlay(analyses, keyed, rangeDeg));
+        List<FigureContext> contexts = wings.stream()
+                .map(w -> FigureContext.of(w.wing(), w.deflections(), Optional.empty())).toList();
+        figure(h, Plots.planformOverlay(ws, keyed, labels, contexts, u.length()));
+        figure(h, Plots.spanLoadOverlay(ws, atCl, keyed, labels, contexts, cmp.cl()));
+        figure(h, Plots.liftOverlay(analyses, keyed, labels, contexts, rangeDeg));
         h.line("<footer>");
         h.text("Made by " + version + ". Every wing on its own reference values; the same files and options give "
                 + "the same page.");

@@ -18,6 +18,7 @@ import org.spanlift.vocabulary.ResultKey;
 import org.spanlift.vocabulary.Vocabulary;
 import org.spanlift.vocabulary.WingResult;
 import org.spanlift.cli.plot.Figure;
+import org.spanlift.cli.plot.FigureContext;
 import org.spanlift.cli.plot.PlotKind;
 import org.spanlift.cli.plot.Plots;
 import org.spanlift.cli.plot.SvgWriter;
@@ -47,6 +48,7 @@ public final class ReportPage {
      * @param unavailable why there is no stall study, else empty
      * @param condition the flight condition given, if any
      * @param reynolds  the Reynolds-number rule of the profile drag
+     * @param context   the configuration the figures draw (deflections and flight condition)
      * @param alphasDeg the angles of the results table
      * @param rangeDeg  the angles of the lift curve and polar
      * @param units     the units of the tables
@@ -54,7 +56,8 @@ public final class ReportPage {
      */
     public record Inputs(WingSummary clean, Optional<WingSummary> flaps, WingSummary fine, Optional<StallStudy> stall,
             Optional<StallStudy> stallFine, String unavailable, Optional<FlightCondition> condition,
-            ReynoldsRule reynolds, List<Double> alphasDeg, List<Double> rangeDeg, DisplayUnits units, String version) {
+            ReynoldsRule reynolds, FigureContext context, List<Double> alphasDeg, List<Double> rangeDeg,
+            DisplayUnits units, String version) {
 
         /** The configuration the figures draw: with flaps when asked, else clean. */
         WingSummary drawn() {
@@ -88,7 +91,7 @@ public final class ReportPage {
                 + deflectionText(wing, in.drawn().deflections()) + ")." : "The figures show the wing clean.";
         h.el("p", "class=\"meta\"", drawn);
         for (PlotKind kind : PlotKind.values()) {
-            Figure f = figure(kind, in.drawn(), in.drawnStall(), in.rangeDeg(), in.reynolds());
+            Figure f = figure(kind, in.drawn(), in.drawnStall(), in.rangeDeg(), in.reynolds(), in.context());
             if (f == null) {
                 h.el("p", "class=\"missing\"", "No stall map: " + in.unavailable());
                 continue;
@@ -142,14 +145,15 @@ public final class ReportPage {
      * map needs section cl-max data and is null without it.
      */
     static Figure figure(PlotKind kind, WingSummary s, Optional<StallStudy.Configuration> stall, List<Double> rangeDeg,
-            ReynoldsRule reynolds) {
+            ReynoldsRule reynolds, FigureContext context) {
+        Optional<StallEstimate> estimate = stall.map(StallStudy.Configuration::estimate);
         return switch (kind) {
-            case STALL -> stall.map(c -> (Figure) Plots.stallMap(s.analysis(), c.estimate())).orElse(null);
-            case PLANFORM -> Plots.planform(s.analysis(), stall
-                    .map(c -> OptionalDouble.of(c.estimate().y())).orElse(OptionalDouble.empty()));
-            case SPAN_LOAD -> Plots.spanLoad(s.analysis(), s.spanLoadAtCl());
-            case LIFT -> Plots.liftCurve(s.analysis(), s.deflections(), rangeDeg);
-            case POLAR -> Plots.polar(s.analysis(), s.deflections(), rangeDeg, reynolds);
+            case STALL -> estimate.map(e -> (Figure) Plots.stallMap(s.analysis(), e, context)).orElse(null);
+            case PLANFORM -> Plots.planform(s.analysis(), estimate
+                    .map(e -> OptionalDouble.of(e.y())).orElse(OptionalDouble.empty()), context);
+            case SPAN_LOAD -> Plots.spanLoad(s.analysis(), s.spanLoadAtCl(), estimate, context);
+            case LIFT -> Plots.liftCurve(s.analysis(), s.deflections(), rangeDeg, estimate, context);
+            case POLAR -> Plots.polar(s.analysis(), s.deflections(), rangeDeg, reynolds, context);
         };
     }
 
