@@ -9,12 +9,14 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.concurrent.Callable;
 
 import org.spanlift.atmosphere.Airspeed;
 import org.spanlift.atmosphere.AtmosphereState;
+import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OffersFormats;
@@ -45,6 +47,10 @@ import org.spanlift.loads.SpanwiseLoads;
 import org.spanlift.io.StructureReader;
 import org.spanlift.structure.WingStructure;
 import org.spanlift.solve.WingAnalysis;
+import org.spanlift.stall.MissingSectionDataException;
+import org.spanlift.stall.StallAnalysis;
+import org.spanlift.stall.StallEstimate;
+import org.spanlift.stall.StripLimits;
 import org.spanlift.vocabulary.ResultKey;
 import org.spanlift.vocabulary.ResultUnit;
 import org.spanlift.vocabulary.Vocabulary;
@@ -68,8 +74,18 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
     static final Set<Format> FORMATS = Collections.unmodifiableSet(EnumSet.of(Format.TABLE, Format.JSON, Format.CSV));
 
     /** Linear theory carries any CL: the user must check the cases against the wing's maximum lift. */
-    static final String NO_STALL = "Linear theory has no stall: check each case's CL against the wing's maximum "
-            + "(spanlift stall); a case beyond it cannot be flown at that speed.";
+    static final String STALL_CHECK = "Each case's wing CL is checked against the stall onset (critical-section "
+            + "estimate at the case's Reynolds number, positive load factors); a case beyond it cannot be flown at "
+            + "that speed and is refused unless --beyond-stall is given, then flagged.";
+
+    static final String DEFINITION = "The load factor is the aerodynamic force normal to the airplane's longitudinal "
+            + "axis over the weight (14 CFR 23.321(a), text before the 2017 rewrite): each case is solved for "
+            + "CN = CL cos(a) + CD sin(a) = n W / (q S), a the angle of attack of that axis, and the inertia relief "
+            + "acts along the normal axis. The air load includes the induced drag (Trefftz plane, per strip) and, "
+            + "where every section gives a polar, the profile drag, resolved in the beam axes.";
+
+    static final String NO_TAIL = "The tail's load is not included: the wing carries n W alone (a balancing tail's "
+            + "download would add to it).";
 
     static final String ENVELOPE_NOTE = "The envelope's corner points are an aid to exploring loads, not a statement "
             + "of compliance with any airworthiness standard.";
@@ -114,8 +130,34 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
     @Spec
     CommandSpec spec;
 
+    @Option(names = "--beyond-stall", description = "Compute load cases whose wing CL lies above the stall onset "
+            + "(critical-section estimate) instead of refusing them; they are flagged in the output.")
+    boolean beyondStallAllowed;
+
+    @Mixin
+    ClMaxOptions clMax;
+
     /** The load case of --weight, --load-factor and --speed, when given that way. */
     private LoadCase commandLineCase;
+
+    /** Each case's stall-onset CL at its Reynolds number, where the sections give cl_max. */
+    private final List<OptionalDouble> onsets = new ArrayList<>();
+
+    /** Why the cases are not checked against the stall, or null when they are. */
+    private String stallNote;
+
+    /** True when case i needs more lift than the wing's stall onset gives (positive load factors only). */
+    private boolean beyondStall(int i, List<SpanwiseLoads> results) {
+        OptionalDouble onset = onsets.get(i);
+        SpanwiseLoads l = results.get(i);
+        return onset.isPresent() && l.loadCase().loadFactor() > 0
+                && l.liftCoefficient() > onset.getAsDouble() * (1 + 1e-9);
+    }
+
+    /** Where the cases came from, for messages. */
+    private String caseSource() {
+        return casesFile != null ? casesFile.toString() : envelopeFile != null ? envelopeFile.toString() : "loads";
+    }
 
     @Override
     public Integer call() {
@@ -146,6 +188,13 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         double[] deflections = analysis.deflections(flight.deflections(wing));
         LoadsAnalysis loads = LoadsAnalysis.of(analysis, structure, deflections);
 
+        Optional<StripLimits> limits;
+        try {
+            limits = Optional.of(StripLimits.of(wing, analysis.lattice(), deflections, clMax.assumed()));
+        } catch (MissingSectionDataException e) {
+            limits = Optional.empty();
+            stallNote = "The cases are not checked against the wing's stall: " + e.getMessage() + ".";
+        }
         List<Envelope.Point> envelope = null;
         List<LoadCase> cases;
         AtmosphereState atmosphere = flight.atmosphere();
@@ -163,7 +212,14 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         } else if (envelopeFile != null) {
             EnvelopeSpec es = EnvelopeReader.read(envelopeFile);
             double area = wing.reference().area();
-            envelope = Envelope.points(es, area, area / wing.reference().span(), loads.liftCurve().slope());
+            OptionalDouble maxNormal = OptionalDouble.empty();
+            if (limits.isPresent()) {
+                // the stall line at the onset of VA's Reynolds number (the first weight's)
+                double re = new LoadCase("VA", es.weights().get(0), 1, es.va(), es.altitude(), "").reynoldsPerMetre();
+                StallEstimate onset = StallAnalysis.estimate(analysis, deflections, limits.get(), re);
+                maxNormal = OptionalDouble.of(loads.normalCoefficient(onset.alpha(), re));
+            }
+            envelope = Envelope.points(es, area, area / wing.reference().span(), loads.liftCurve().slope(), maxNormal);
             cases = envelope.stream().map(Envelope.Point::loadCase).toList();
         } else {
             if (weight.isEmpty()) {
@@ -181,6 +237,18 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         double f = safetyFactor == null ? 1 : safetyFactor;
         for (SpanwiseLoads l : loads.loads(cases)) {
             results.add(f == 1 ? l : l.scaled(f));
+            onsets.add(limits.isPresent() ? OptionalDouble.of(StallAnalysis.estimate(analysis, deflections,
+                    limits.get(), l.loadCase().reynoldsPerMetre()).lift()) : OptionalDouble.empty());
+        }
+        for (int i = 0; i < results.size(); i++) {
+            if (beyondStall(i, results) && !beyondStallAllowed) {
+                SpanwiseLoads l = results.get(i);
+                throw new InputException(caseSource(), 0, l.loadCase().name(), String.format(Locale.ROOT,
+                        "the case needs a wing CL of %.3f, above the wing's stall-onset CL %.3f at its Reynolds number: "
+                                + "it cannot be flown at that speed; lower the load factor or raise the speed, or give "
+                                + "--beyond-stall to compute it anyway (flagged)", l.liftCoefficient(),
+                        onsets.get(i).getAsDouble()));
+            }
         }
         Governing governing = Governing.of(results);
         String text = switch (format) {
@@ -226,7 +294,12 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         units.put("altitude", "m, pressure altitude (geopotential, standard atmosphere)");
         root.put("units", units);
         root.put("caution", Cautions.LOADS);
-        root.put("note", NO_STALL);
+        root.put("load_factor_definition", DEFINITION);
+        root.put("longitudinal_axis_deg", Math.toDegrees(loads.axisAngle()));
+        root.put("longitudinal_axis", loads.structure().longitudinalAxis().isPresent() ? "given in the structure section"
+                : "the wing's root chord line");
+        root.put("tail", NO_TAIL);
+        root.put("stall_check", stallNote == null ? STALL_CHECK : stallNote);
         root.put("safety_factor", safetyFactor);
         root.put("loads_are", factorNote());
         root.put("sign_conventions", SIGNS);
@@ -260,7 +333,10 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
             m.put("load_factor", c.loadFactor());
             m.put("speed", c.equivalentSpeed());
             m.put("altitude", c.altitude());
-            Results.put(m, Vocabulary.select(Vocabulary.LOADS, "dynamic_pressure", "CL", "alpha_deg"), l);
+            Results.put(m, Vocabulary.select(Vocabulary.LOADS, "dynamic_pressure", "CN", "CL", "CD", "CC", "alpha_deg"), l);
+            int index = results.indexOf(l);
+            m.put("stall_onset_CL", onsets.get(index).isPresent() ? (Object) onsets.get(index).getAsDouble() : null);
+            m.put("beyond_stall", onsets.get(index).isPresent() ? (Object) beyondStall(index, results) : null);
             m.put("y", l.y());
             m.put("shear", l.shear());
             m.put("bending", l.bending());
@@ -268,7 +344,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
             m.put("chord_shear", l.chordShear());
             m.put("chord_bending", l.chordBending());
             Results.put(m, Vocabulary.select(Vocabulary.LOADS, "root.shear", "root.bending", "root.torsion",
-                    "root.chord_shear", "root.chord_bending", "root.load_along_lift"), l);
+                    "root.chord_shear", "root.chord_bending", "root.normal_load"), l);
             cs.add(m);
         }
         root.put("cases", cs);
@@ -311,7 +387,8 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
 
     private String csv(List<SpanwiseLoads> results) {
         Csv c = new Csv(List.of("case", "name", "load_factor", "speed_eas_m_s", "y_m", "shear_N", "bending_N_m",
-                "torsion_N_m", "chord_shear_N", "chord_bending_N_m"));
+                "torsion_N_m", "chord_shear_N", "chord_bending_N_m", "loads_are", "caution"));
+        String caution = Cautions.LOADS + " " + NO_TAIL;
         for (int i = 0; i < results.size(); i++) {
             SpanwiseLoads l = results.get(i);
             double[] y = l.y();
@@ -322,15 +399,12 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
             double[] chordBending = l.chordBending();
             for (int k = 0; k < l.stations(); k++) {
                 c.row(i, l.loadCase().name(), l.loadCase().loadFactor(), l.loadCase().equivalentSpeed(), y[k],
-                        shear[k], bending[k], torsion[k], chordShear[k], chordBending[k]);
+                        shear[k], bending[k], torsion[k], chordShear[k], chordBending[k], factorNote(), caution);
             }
         }
-        return "# " + Cautions.LOADS + " " + capitalized(factorNote()) + ".\n" + c;
+        return c.toString();
     }
 
-    private static String capitalized(String s) {
-        return Character.toUpperCase(s.charAt(0)) + s.substring(1);
-    }
 
     private String table(Wing wing, LoadsAnalysis loads, List<SpanwiseLoads> results, Governing g,
             List<Envelope.Point> envelope, DisplayUnits du) {
@@ -352,20 +426,30 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
             b.append("  NOTE: no wing mass given: no inertia relief (larger loads in magnitude).\n");
         }
         b.append("  signs: shear up +, bending up-bending +, torsion nose-up + (about the spar line; see the README)\n\n");
-        List<ResultKey<SpanwiseLoads>> keys = Vocabulary.select(Vocabulary.LOADS, "CL", "alpha_deg", "root.shear",
+        List<ResultKey<SpanwiseLoads>> keys = Vocabulary.select(Vocabulary.LOADS, "CN", "CL", "alpha_deg", "root.shear",
                 "root.bending", "root.torsion");
         List<String> header = new ArrayList<>(List.of("#", "case", "n", "EAS [kt]"));
         keys.forEach(key -> header.add(Results.label(key, du)));
+        header.add(3 + 3, "onset CL");
         TextTable cases = new TextTable(header);
+        boolean anyBeyond = false;
         for (int i = 0; i < results.size(); i++) {
             SpanwiseLoads l = results.get(i);
             List<String> row = new ArrayList<>(List.of(String.valueOf(i), caseName(l.loadCase(), envelope, du),
                     TextTable.fixed(l.loadCase().loadFactor(), 2),
                     TextTable.fixed(Airspeed.knots(l.loadCase().equivalentSpeed()), 1)));
             keys.forEach(key -> row.add(Results.cell(key, l, du)));
+            boolean beyond = beyondStall(i, results);
+            anyBeyond |= beyond;
+            row.add(3 + 3, onsets.get(i).isPresent() ? TextTable.fixed(onsets.get(i).getAsDouble(), 3)
+                    + (beyond ? " *" : "") : "-");
             cases.row(row);
         }
-        b.append(cases.render()).append('\n');
+        b.append(cases.render());
+        if (anyBeyond) {
+            b.append("  * beyond the stall onset: computed because --beyond-stall was given; the wing cannot fly that case.\n");
+        }
+        b.append('\n');
         b.append("  governing case at each station: value (case #)\n");
         String f = du.symbol(ResultUnit.NEWTON);
         String mo = du.symbol(ResultUnit.NEWTON_METRE);
@@ -394,7 +478,11 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
                     + String.format(Locale.ROOT, "%.3f", loads.liftCurve().slope()) + " per rad (the wing's own unless the "
                     + "envelope file gives lift-slope), c = S/b. " + ENVELOPE_NOTE)).append('\n');
         }
-        b.append('\n').append(TextTable.wrap(NO_STALL)).append('\n');
+        b.append('\n').append(TextTable.wrap(stallNote == null ? STALL_CHECK : stallNote)).append('\n');
+        b.append(TextTable.wrap(String.format(Locale.ROOT, "%s The longitudinal axis is %s, %.2f deg above the file's "
+                + "x axis.", DEFINITION, loads.structure().longitudinalAxis().isPresent() ? "given in the structure "
+                        + "section" : "the wing's root chord line", Math.toDegrees(loads.axisAngle())))).append('\n');
+        b.append(TextTable.wrap(NO_TAIL)).append('\n');
         b.append('\n').append(TextTable.wrap(Cautions.LOADS)).append('\n');
         return b.toString();
     }

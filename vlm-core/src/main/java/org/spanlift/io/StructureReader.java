@@ -7,6 +7,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import java.util.Set;
 
 import org.spanlift.geometry.Planform;
@@ -26,6 +27,7 @@ import org.spanlift.input.YamlValue;
  *   spar: 0.35              # chord fraction of the spar line (default 0.35)
  *   mass: 95kg              # the whole wing, both halves, spread in proportion to local chord
  *   mass-centre: 0.40       # chord fraction of the distributed mass's centre line (default 0.40)
+ *   longitudinal-axis: 1.5  # degrees nose-up from the file's x axis (default: the root chord line)
  *   mass-table:             # instead of mass: one half's mass per unit span, linear between rows
  *     - {y: 0.0, mass-per-span: 14kg/m}
  *     - {y: 4.9, mass-per-span: 4kg/m}
@@ -36,7 +38,8 @@ import org.spanlift.input.YamlValue;
 public final class StructureReader {
 
     /** Keys of the {@code structure} section. */
-    public static final Set<String> KEYS = Set.of("spar", "mass", "mass-centre", "mass-table", "point-masses");
+    public static final Set<String> KEYS = Set.of("spar", "mass", "mass-centre", "mass-table", "point-masses",
+            "longitudinal-axis");
     public static final Set<String> TABLE_KEYS = Set.of("y", "mass-per-span");
     public static final Set<String> POINT_KEYS = Set.of("name", "mass", "y", "x", "chord-fraction");
 
@@ -126,6 +129,8 @@ public final class StructureReader {
                 points.add(new PointMass(name, m, x, y));
             }
         });
-        return new WingStructure(spar, centre, mass, table, points);
+        OptionalDouble axis = f.optional("longitudinal-axis").map(a -> OptionalDouble.of(Math.toRadians(a.inRange(-30, 30))))
+                .orElse(OptionalDouble.empty());
+        return new WingStructure(spar, centre, mass, table, points, axis);
     }
 }

@@ -4,6 +4,7 @@ import org.spanlift.structure.EnvelopeSpec;
 import org.spanlift.structure.LoadCase;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.OptionalDouble;
 import java.util.Locale;
 
 import org.spanlift.atmosphere.StandardAtmosphere;
@@ -41,13 +42,34 @@ public final class Envelope {
      * @param liftSlope  the wing's lift-curve slope per radian (used unless the spec gives one)
      */
     public static List<Point> points(EnvelopeSpec spec, double area, double meanChord, double liftSlope) {
+        return points(spec, area, meanChord, liftSlope, OptionalDouble.empty());
+    }
+
+    /**
+     * As {@link #points(EnvelopeSpec, double, double, double)}, with the positive stall line n = CNmax q S / W:
+     * where it lies below n1 at VA, the manoeuvre corner at VA is replaced by the stall line's point at VA and
+     * the point where the stall line meets n1 (the corner of the envelope the standards draw, 14 CFR 23.333(b)
+     * pre-2017 text).
+     *
+     * @param maxNormal the wing's maximum normal-force coefficient, when known
+     */
+    public static List<Point> points(EnvelopeSpec spec, double area, double meanChord, double liftSlope,
+            OptionalDouble maxNormal) {
         double a = spec.liftSlope().orElse(liftSlope);
         double h = spec.altitude();
         double rho = StandardAtmosphere.at(h, 0).density();
         List<Point> out = new ArrayList<>();
         for (double w : spec.weights()) {
             String wt = String.format(Locale.ROOT, "%.0f N", w);
-            manoeuvre(out, "VA", spec.va(), spec.positive(), w, h, wt);
+            double stallAtVa = maxNormal.isPresent()
+                    ? maxNormal.getAsDouble() * 0.5 * LoadCase.RHO0 * spec.va() * spec.va() * area / w : Double.POSITIVE_INFINITY;
+            if (stallAtVa < spec.positive()) {
+                manoeuvre(out, "VA on the stall line", spec.va(), stallAtVa, w, h, wt);
+                double corner = Math.sqrt(2 * spec.positive() * w / (LoadCase.RHO0 * area * maxNormal.getAsDouble()));
+                manoeuvre(out, "the stall line", corner, spec.positive(), w, h, wt);
+            } else {
+                manoeuvre(out, "VA", spec.va(), spec.positive(), w, h, wt);
+            }
             manoeuvre(out, "VD", spec.vd(), spec.positive(), w, h, wt);
             if (spec.minimumLift().isPresent()) {
                 double v = Math.sqrt(2 * -spec.negative() * w / (LoadCase.RHO0 * area * -spec.minimumLift().getAsDouble()));

@@ -17,6 +17,7 @@ import org.spanlift.geometry.Surface;
 import org.spanlift.lattice.Lattice;
 import org.spanlift.lattice.Strip;
 import org.spanlift.results.PanelForces;
+import org.spanlift.results.ProfileDrag;
 import org.spanlift.results.Solution;
 import org.spanlift.solve.BasisSolutions;
 import org.spanlift.solve.WingAnalysis;
@@ -34,6 +35,9 @@ import org.spanlift.solve.WingAnalysis;
  * half is reported, and the left half with deflection d is the right half with -d.
  */
 public final class LoadsAnalysis {
+
+    /** Newton steps allowed to find a case's angle of attack. */
+    private static final int MAX_ITERATIONS = 50;
 
     private static final double[] GAUSS_X = {-0.9061798459386640, -0.5384693101056831, 0.0, 0.5384693101056831,
         0.9061798459386640};
@@ -153,22 +157,60 @@ public final class LoadsAnalysis {
         return wingLine;
     }
 
-    /** The loads of one case (limit loads: no safety factor). */
+    /**
+     * The longitudinal axis's angle above the wing file's x axis, nose-up positive, rad: the structure's, else
+     * the root chord line of the wing (its twist at the root).
+     */
+    public double axisAngle() {
+        Planform p = analysis.wing().main().planform();
+        return structure.longitudinalAxis().orElse(p.twist(p.yStart()));
+    }
+
+    /**
+     * The loads of one case (limit loads: no safety factor). The case's load factor is the aerodynamic force
+     * normal to the longitudinal axis over the weight (14 CFR 23.321(a), text before the 2017 rewrite), so the
+     * angle of attack is solved for CN = CL cos(a) + CD sin(a) = n W / (q S) with a the angle of attack of the
+     * longitudinal axis and CD the wing's induced plus profile drag; the inertia relief acts along the normal
+     * axis. The air load of every strip is its panels' Kutta-Joukowski force plus its induced drag (from the
+     * Trefftz-plane downwash, so the strips sum to the induced drag) and its profile drag (from the section
+     * polars at the case's Reynolds number, where every section gives one), along the freestream.
+     *
+     * @throws RefusedException when no angle in the linear range carries the case
+     */
     public SpanwiseLoads loads(LoadCase c) {
         double area = analysis.wing().reference().area();
         double q = c.dynamicPressure();
-        double cl = c.liftCoefficient(area);
+        double target = c.liftCoefficient(area);
+        double theta = axisAngle();
+        double reynoldsPerMetre = c.reynoldsPerMetre();
         double alpha;
         try {
-            alpha = wingLine.alphaFor(cl);
+            alpha = wingLine.alphaFor(target);
         } catch (RefusedException e) {
-            throw new RefusedException("load case '" + c.name() + "' needs CL " + String.format(Locale.ROOT,
-                    "%.3f", cl) + ", beyond the wing's linear range; check its weight, load factor and speed");
+            throw beyondRange(c, target);
         }
-        Solution s = analysis.solve(alpha, deflections);
+        Aero aero = aero(alpha, reynoldsPerMetre);
+        for (int k = 0; k < MAX_ITERATIONS && Math.abs(aero.normal(theta) - target) > 1e-13 * Math.max(1, Math.abs(target)); k++) {
+            double h = 1e-6;
+            double slope = (aero(alpha + h, reynoldsPerMetre).normal(theta) - aero(alpha - h, reynoldsPerMetre).normal(theta))
+                    / (2 * h);
+            double next = alpha - (aero.normal(theta) - target) / slope;
+            if (!Double.isFinite(next) || Math.abs(next) > Math.toRadians(LiftCurve.MAX_TARGET_ALPHA_DEG)) {
+                throw beyondRange(c, target);
+            }
+            alpha = next;
+            aero = aero(alpha, reynoldsPerMetre);
+        }
+        if (!(Math.abs(aero.normal(theta) - target) <= 1e-9 * Math.max(1, Math.abs(target)))) {
+            throw beyondRange(c, target);
+        }
+        Solution s = aero.solution();
         PanelForces pf = s.panelForces();
-        double[] lift = {-Math.sin(alpha), 0, Math.cos(alpha)};
+        double[] drag = {Math.cos(alpha), 0, Math.sin(alpha)};
+        double[] normal = {Math.sin(theta), 0, Math.cos(theta)};
         double ng = c.loadFactor() * StandardAtmosphere.G0;
+        Lattice lattice = analysis.lattice();
+        Planform p = analysis.wing().main().planform();
         int n = strips.size();
         double[][] force = new double[n + 1][3];
         double[][] moment = new double[n + 1][3];
@@ -181,8 +223,13 @@ public final class LoadsAnalysis {
                 double[] fi = {q * pf.fx(i), q * pf.fy(i), q * pf.fz(i)};
                 add(f, g, new double[] {pf.x(i), pf.y(i), pf.z(i)}, fi);
             }
+            int k = lattice.stripOf(st.firstPanel());
+            double d = q * (aero.induced()[k] + aero.profile()[k]);
+            double ym = 0.5 * (st.yLeft() + st.yRight());
+            add(f, g, new double[] {p.noseX(ym) + 0.25 * p.chord(ym), ym, p.noseZ(ym)},
+                    new double[] {d * drag[0], d * drag[1], d * drag[2]});
             double w = -ng * stripMass[j];
-            add(f, g, massPoint[j], new double[] {w * lift[0], w * lift[1], w * lift[2]});
+            add(f, g, massPoint[j], new double[] {w * normal[0], w * normal[1], w * normal[2]});
             for (int a = 0; a < 3; a++) {
                 f[a] += force[j + 1][a];
                 g[a] += moment[j + 1][a];
@@ -193,16 +240,15 @@ public final class LoadsAnalysis {
         double[] torsion = new double[n + 1];
         double[] chordShear = new double[n + 1];
         double[] chordBending = new double[n + 1];
-        double loadAlongLift = 0;
+        double normalLoad = 0;
         for (int k = 0; k <= n; k++) {
             double[] f = force[k].clone();
             double[] g = moment[k].clone();
             for (PointMass pm : structure.pointMasses()) {
                 if (pm.y() > edges[k]) {
                     double w = -ng * pm.mass();
-                    Planform p = analysis.wing().main().planform();
                     add(f, g, new double[] {pm.x(), pm.y(), p.noseZ(pm.y())},
-                            new double[] {w * lift[0], w * lift[1], w * lift[2]});
+                            new double[] {w * normal[0], w * normal[1], w * normal[2]});
                 }
             }
             double[] m = minus(g, cross(spar[k], f));
@@ -216,11 +262,52 @@ public final class LoadsAnalysis {
             torsion[k] = dot(m, es);
             chordBending[k] = -dot(m, nw);
             if (k == 0) {
-                loadAlongLift = dot(f, lift);
+                normalLoad = dot(f, normal);
             }
         }
-        return new SpanwiseLoads(c, alpha, cl, q, edges, shear, bending, torsion, chordShear, chordBending,
-                loadAlongLift, 1);
+        double a = alpha + theta;
+        double cl = aero.lift();
+        double cd = aero.drag();
+        return new SpanwiseLoads(c, alpha, cl, cd, cl * Math.cos(a) + cd * Math.sin(a), cd * Math.cos(a) - cl * Math.sin(a),
+                theta, q, edges, shear, bending, torsion, chordShear, chordBending, normalLoad, 1);
+    }
+
+    private RefusedException beyondRange(LoadCase c, double target) {
+        return new RefusedException("load case '" + c.name() + "' needs CN " + String.format(Locale.ROOT, "%.3f",
+                target) + ", beyond the wing's linear range; check its weight, load factor and speed");
+    }
+
+    /**
+     * The wing's normal-force coefficient about the longitudinal axis at angle of attack {@code alpha} (rad), with
+     * the profile drag read at {@code reynoldsPerMetre}: the stall line of an envelope at the stall-onset angle.
+     */
+    public double normalCoefficient(double alpha, double reynoldsPerMetre) {
+        return aero(alpha, reynoldsPerMetre).normal(axisAngle());
+    }
+
+    /** The wing's (first surface's) aerodynamics at one angle: its solution, CL, CD and per-strip drag areas. */
+    private record Aero(Solution solution, double lift, double drag, double[] induced, double[] profile) {
+
+        /** CN about a longitudinal axis {@code theta} above x. */
+        double normal(double theta) {
+            double a = solution.alpha() + theta;
+            return lift * Math.cos(a) + drag * Math.sin(a);
+        }
+    }
+
+    private Aero aero(double alpha, double reynoldsPerMetre) {
+        Solution s = analysis.solve(alpha, deflections);
+        double[] induced = s.stripInducedDrag();
+        double[] profile = ProfileDrag.stripDragAreas(s, analysis.wing(), reynoldsPerMetre);
+        List<Strip> all = analysis.lattice().strips();
+        double dragArea = 0;
+        for (int k = 0; k < all.size(); k++) {
+            if (all.get(k).surface() == 0) {
+                dragArea += induced[k] + profile[k];
+            }
+        }
+        double area = analysis.wing().reference().area();
+        return new Aero(s, s.coefficients(0).lift(), dragArea / area, induced, profile);
     }
 
     /** The loads of every case, in order. */

@@ -9,8 +9,15 @@ import org.spanlift.structure.LoadCase;
  * copied on the way in and every array accessor returns a copy.
  *
  * @param loadCase       the case
- * @param alpha          angle of attack, rad
- * @param liftCoefficient the wing's CL, n W / (q S)
+ * @param alpha          angle of attack, rad (of the wing file's x axis)
+ * @param liftCoefficient the wing's CL at that angle
+ * @param dragCoefficient the wing's CD there: induced (Trefftz plane) plus profile (section polars, where
+ *                        every section gives one)
+ * @param normalCoefficient the wing's normal-force coefficient CN = CL cos(a) + CD sin(a), a the angle of
+ *                        attack of the longitudinal axis: n W / (q S), the case's definition
+ * @param chordCoefficient the wing's chordwise-force coefficient CC = CD cos(a) - CL sin(a), positive aft along
+ *                        the longitudinal axis
+ * @param axisAngle      the longitudinal axis's angle above the wing file's x axis, nose-up positive, rad
  * @param dynamicPressure q, Pa
  * @param y              stations, m
  * @param shear          N
@@ -18,13 +25,14 @@ import org.spanlift.structure.LoadCase;
  * @param torsion        N m
  * @param chordShear     N
  * @param chordBending   N m
- * @param loadAlongLift  the root's outboard resultant along the lift direction, N: the half-wing's lift less
- *                       n g times its mass
+ * @param normalLoad     the root's outboard resultant normal to the longitudinal axis, N: the half-wing's
+ *                       normal force less n g times its mass
  * @param factor         the factor the loads carry: 1 for limit loads, the safety factor for ultimate
  */
-public record SpanwiseLoads(LoadCase loadCase, double alpha, double liftCoefficient, double dynamicPressure,
+public record SpanwiseLoads(LoadCase loadCase, double alpha, double liftCoefficient, double dragCoefficient,
+        double normalCoefficient, double chordCoefficient, double axisAngle, double dynamicPressure,
         double[] y, double[] shear, double[] bending, double[] torsion, double[] chordShear, double[] chordBending,
-        double loadAlongLift, double factor) {
+        double normalLoad, double factor) {
 
     public SpanwiseLoads {
         int n = y.length;
@@ -88,9 +96,9 @@ public record SpanwiseLoads(LoadCase loadCase, double alpha, double liftCoeffici
 
     /** Every load times {@code f} (limit to ultimate with a safety factor); stations and case unchanged. */
     public SpanwiseLoads scaled(double f) {
-        return new SpanwiseLoads(loadCase, alpha, liftCoefficient, dynamicPressure, y, times(shear, f),
-                times(bending, f), times(torsion, f), times(chordShear, f), times(chordBending, f), loadAlongLift * f,
-                factor * f);
+        return new SpanwiseLoads(loadCase, alpha, liftCoefficient, dragCoefficient, normalCoefficient,
+                chordCoefficient, axisAngle, dynamicPressure, y, times(shear, f), times(bending, f), times(torsion, f),
+                times(chordShear, f), times(chordBending, f), normalLoad * f, factor * f);
     }
 
     private static double[] times(double[] v, double f) {

@@ -35,9 +35,26 @@ public final class ProfileDrag {
         if (!available(wing)) {
             return OptionalDouble.empty();
         }
-        double[] g = solution.stripCirculations();
-        List<Strip> strips = solution.lattice().strips();
         double sum = 0;
+        for (double a : stripDragAreas(solution, wing, reynoldsPerMetre)) {
+            sum += a;
+        }
+        return OptionalDouble.of(sum / wing.reference().area());
+    }
+
+    /**
+     * Each strip's profile drag over dynamic pressure, cd c w in m^2, in lattice strip order, acting along the
+     * freestream; zeros when some section has no polar (see {@link #available}).
+     *
+     * @param reynoldsPerMetre rho V / mu at the true speed (0 reads every polar at its lowest Reynolds number)
+     */
+    public static double[] stripDragAreas(Solution solution, Wing wing, double reynoldsPerMetre) {
+        List<Strip> strips = solution.lattice().strips();
+        double[] out = new double[strips.size()];
+        if (!available(wing)) {
+            return out;
+        }
+        double[] g = solution.stripCirculations();
         for (int k = 0; k < strips.size(); k++) {
             Strip st = strips.get(k);
             Surface surface = wing.surfaces().get(st.surface());
@@ -48,9 +65,9 @@ public final class ProfileDrag {
             double cl = 2 * g[k] / st.chord();
             double re = reynoldsPerMetre * st.chord();
             double cd = (1 - blend.weight()) * inner.cd(cl, re) + blend.weight() * outer.cd(cl, re);
-            sum += cd * st.chord() * st.width();
+            out[k] = cd * st.chord() * st.width();
         }
-        return OptionalDouble.of(sum / wing.reference().area());
+        return out;
     }
 
     private static ProfileDragPolar polar(Section s) {

@@ -173,6 +173,20 @@ public final class Solution {
         return new SpanLoad(y, chord, cl, clc, gamma, induced, left, right);
     }
 
+    /**
+     * Each strip's induced drag over dynamic pressure, m^2, in lattice strip order: -G (v . n) w from the
+     * Trefftz-plane normalwash, so the strips sum exactly to the induced drag of {@link #coefficients()} times
+     * the reference area. The force acts along the freestream.
+     */
+    public double[] stripInducedDrag() {
+        List<Strip> strips = lattice.strips();
+        double[] out = new double[strips.size()];
+        for (int k = 0; k < out.length; k++) {
+            out[k] = -stripCirculation[k] * normalwash[k] * strips.get(k).width();
+        }
+        return out;
+    }
+
     /** Strip circulations per unit speed in lattice strip order (a copy). */
     public double[] stripCirculations() {
         return Arrays.copyOf(stripCirculation, stripCirculation.length);

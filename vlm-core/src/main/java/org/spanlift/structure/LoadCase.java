@@ -37,6 +37,13 @@ public record LoadCase(String name, double weight, double loadFactor, double equ
     }
 
     /** The wing lift coefficient that carries n W on the reference area {@code area}. */
+    /** rho V / mu at the case's true speed and pressure altitude (standard day), 1/m, for the section data. */
+    public double reynoldsPerMetre() {
+        org.spanlift.atmosphere.AtmosphereState air = org.spanlift.atmosphere.StandardAtmosphere.at(altitude, 0);
+        return org.spanlift.atmosphere.Airspeed.trueFromEquivalent(equivalentSpeed, air) / air.kinematicViscosity();
+    }
+
+    /** n W / (q S): the normal-force coefficient the case needs on reference area {@code area}, m^2. */
     public double liftCoefficient(double area) {
         return loadFactor * weight / (dynamicPressure() * area);
     }

@@ -2,6 +2,7 @@ package org.spanlift.structure;
 
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalDouble;
 
 /**
  * The structural description of the wing (the first surface) that the loads need: where the spar line is,
@@ -14,9 +15,12 @@ import java.util.Optional;
  *                           proportion to the local chord; empty when a mass table is given instead
  * @param table              mass per unit span of one half instead of {@code wingMass}
  * @param pointMasses        concentrated masses on the right half, mirrored on the left
+ * @param longitudinalAxis   the angle of the airplane's longitudinal axis above the wing file's x axis, nose-up
+ *                           positive, rad; empty for the wing's root chord line (the default). The load factor
+ *                           is the aerodynamic force normal to this axis over the weight
  */
 public record WingStructure(double sparFraction, double massCentreFraction, Optional<Double> wingMass,
-        Optional<MassTable> table, List<PointMass> pointMasses) {
+        Optional<MassTable> table, List<PointMass> pointMasses, OptionalDouble longitudinalAxis) {
 
     /** Default chord fraction of the spar line. */
     public static final double DEFAULT_SPAR = 0.35;
@@ -26,6 +30,12 @@ public record WingStructure(double sparFraction, double massCentreFraction, Opti
     /** No masses, spar and mass centre at their defaults. */
     public static final WingStructure NONE = new WingStructure(DEFAULT_SPAR, DEFAULT_MASS_CENTRE, Optional.empty(),
             Optional.empty(), List.of());
+
+    /** A structure whose longitudinal axis is the wing's root chord line. */
+    public WingStructure(double sparFraction, double massCentreFraction, Optional<Double> wingMass,
+            Optional<MassTable> table, List<PointMass> pointMasses) {
+        this(sparFraction, massCentreFraction, wingMass, table, pointMasses, OptionalDouble.empty());
+    }
 
     public WingStructure {
         if (!(sparFraction >= 0 && sparFraction <= 1) || !(massCentreFraction >= 0 && massCentreFraction <= 1)) {
@@ -40,11 +50,15 @@ public record WingStructure(double sparFraction, double massCentreFraction, Opti
             }
         });
         pointMasses = List.copyOf(pointMasses);
+        if (longitudinalAxis.isPresent() && !(Math.abs(longitudinalAxis.getAsDouble()) <= Math.toRadians(30))) {
+            throw new IllegalArgumentException("the longitudinal axis must lie within 30 degrees of the x axis");
+        }
     }
 
     /** A copy whose distributed mass is {@code kg} for the whole wing, spread by chord (the table dropped). */
     public WingStructure withWingMass(double kg) {
-        return new WingStructure(sparFraction, massCentreFraction, Optional.of(kg), Optional.empty(), pointMasses);
+        return new WingStructure(sparFraction, massCentreFraction, Optional.of(kg), Optional.empty(), pointMasses,
+                longitudinalAxis);
     }
 
     /** True when some mass (distributed or point) is given. */

@@ -168,9 +168,15 @@ public final class Vocabulary {
     public static final List<ResultKey<SpanwiseLoads>> LOADS = List.of(
             key("dynamic_pressure", PASCAL, "dynamic pressure", "q = rho0 Ve^2 / 2 of the case", 0,
                     SpanwiseLoads::dynamicPressure),
-            key("CL", NONE, "wing CL", "the wing CL that carries the case, n W / (q S)", 3,
-                    SpanwiseLoads::liftCoefficient),
-            key("alpha_deg", DEGREE, "alpha", "the angle of attack of the case", 2, l -> Math.toDegrees(l.alpha())),
+            key("CN", NONE, "wing CN", "normal-force coefficient about the longitudinal axis, n W / (q S)", 3,
+                    SpanwiseLoads::normalCoefficient),
+            key("CL", NONE, "wing CL", "the wing's lift coefficient in the case", 3, SpanwiseLoads::liftCoefficient),
+            key("CD", NONE, "wing CD", "the wing's drag coefficient in the case, induced plus profile", 4,
+                    SpanwiseLoads::dragCoefficient),
+            key("CC", NONE, "wing CC", "chordwise-force coefficient along the longitudinal axis, positive aft", 4,
+                    SpanwiseLoads::chordCoefficient),
+            key("alpha_deg", DEGREE, "alpha", "the angle of attack of the case (of the file's x axis)", 2,
+                    l -> Math.toDegrees(l.alpha())),
             key("root.shear", NEWTON, "root shear", "shear at the root of one half-wing, positive up", 0,
                     SpanwiseLoads::rootShear),
             key("root.bending", NEWTON_METRE, "root bending", "bending at the root of one half-wing, positive "
@@ -181,9 +187,9 @@ public final class Vocabulary {
                     l -> l.chordShear()[0]),
             key("root.chord_bending", NEWTON_METRE, "root chord bending",
                     "in-plane bending at the root, positive for an aft load outboard", 0, l -> l.chordBending()[0]),
-            key("root.load_along_lift", NEWTON, "root load along the lift",
-                    "the half-wing's lift less n g times its mass, along the lift direction", 0,
-                    SpanwiseLoads::loadAlongLift));
+            key("root.normal_load", NEWTON, "root normal load",
+                    "the half-wing's normal force less n g times its mass, normal to the longitudinal axis", 0,
+                    SpanwiseLoads::normalLoad));
 
     /** A control's geometry. */
     public static final List<ResultKey<ControlGeometry>> CONTROL = List.of(

@@ -1,6 +1,7 @@
 package org.spanlift.validation.loads;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.Optional;
@@ -45,9 +46,11 @@ class StaticsTest {
             """;
 
     /**
-     * Each half's root resultant along the lift direction equals n (W/2 - g m_half), m_half the half-wing's
-     * mass with its point masses, to 1e-6 relative, for up and down load factors, with a mass table and with
-     * a chord-spread wing mass. The half-wing mass is computed here independently (trapezoids of the table).
+     * Each half's root resultant normal to the longitudinal axis equals n (W/2 - g m_half), m_half the
+     * half-wing's mass with its point masses, to 1e-6 relative, for up and down load factors, with a mass table
+     * and with a chord-spread wing mass: the load factor is the aerodynamic force normal to that axis over the
+     * weight (14 CFR 23.321(a), text before the 2017 rewrite) and the inertia acts along it. The half-wing mass
+     * is computed here independently (trapezoids of the table).
      */
     @Test
     void rootCarriesTheHalfLiftLessTheInertia() {
@@ -67,29 +70,72 @@ class StaticsTest {
             for (double[] nv : new double[][] {{1, 40}, {3.8, 55}, {-1.5, 60}, {4.4, 70}}) {
                 SpanwiseLoads l = la.loads(new LoadCase("n", w, nv[0], nv[1], 0, "given"));
                 double expected = nv[0] * (w / 2 - G * halfMass[s]);
-                assertEquals(expected, l.loadAlongLift(), 1e-6 * Math.abs(expected), "n " + nv[0]);
+                assertEquals(expected, l.normalLoad(), 1e-6 * Math.abs(expected), "n " + nv[0]);
             }
         }
     }
 
     /**
-     * On a flat wing (no dihedral) the whole load is normal to the freestream, so the beam shear at the root
-     * (normal to the wing plane) is n (W/2 - g m_half) cos alpha and the chord shear -n (W/2 - g m_half)
-     * sin alpha (forward), to 1e-6 relative. The spar is the quarter-chord line, unswept on this trapezoid,
-     * so the chord axis is x (on a swept spar line, part of the chordwise force is axial along the spar).
+     * On a flat wing (no dihedral, no twist) whose longitudinal axis is its chord line, the beam axes are the
+     * airplane's: the root beam shear (normal to the wing plane) is n (W/2 - g m_half) and the chord shear is
+     * the chordwise air force CC q S / 2 (positive aft, CC = CD cos alpha - CL sin alpha), both to 1e-6
+     * relative, for any angle of attack; the case's coefficients reproduce CN = CL cos alpha + CD sin alpha =
+     * n W / (q S) to 1e-9. The spar is the quarter-chord line, unswept on this trapezoid, so the chord axis is
+     * x (on a swept spar line, part of the chordwise force is axial along the spar).
      */
     @Test
-    void flatWingRootShearIsTheNetLiftResolvedOnTheWingPlane() {
+    void flatWingRootShearIsTheNormalLoadAndTheChordShearTheChordwiseAirLoad() {
         Wing wing = LoadsFixtures.trapezoid(10, 1.6, 0.5, 24);
         WingAnalysis a = WingAnalysis.of(wing);
         WingStructure st = new WingStructure(0.25, 0.40, Optional.of(80.0), Optional.empty(),
                 List.of(new PointMass("tank", 30, 0.6, 1.5)));
         LoadsAnalysis la = LoadsAnalysis.of(a, st, a.fileDeflections());
         double w = 900 * G;
-        SpanwiseLoads l = la.loads(new LoadCase("pull-up", w, 3.8, 50, 0, "given"));
-        double net = 3.8 * (w / 2 - G * (40 + 30));
-        assertEquals(net * Math.cos(l.alpha()), l.rootShear(), 1e-6 * net);
-        assertEquals(-net * Math.sin(l.alpha()), l.chordShear()[0], 1e-6 * net);
+        for (double[] nv : new double[][] {{3.8, 50}, {1.0, 70}, {-1.5, 60}}) {
+            SpanwiseLoads l = la.loads(new LoadCase("case", w, nv[0], nv[1], 0, "given"));
+            double net = nv[0] * (w / 2 - G * (40 + 30));
+            assertEquals(net, l.rootShear(), 1e-6 * Math.abs(net), "shear, n " + nv[0]);
+            double q = l.dynamicPressure();
+            double area = wing.reference().area();
+            double cn = l.liftCoefficient() * Math.cos(l.alpha()) + l.dragCoefficient() * Math.sin(l.alpha());
+            double cc = l.dragCoefficient() * Math.cos(l.alpha()) - l.liftCoefficient() * Math.sin(l.alpha());
+            assertEquals(nv[0] * w / (q * area), cn, 1e-9 * Math.abs(cn), "CN, n " + nv[0]);
+            assertEquals(cn, l.normalCoefficient(), 1e-12 * Math.abs(cn));
+            assertEquals(cc, l.chordCoefficient(), 1e-12 * Math.max(1e-3, Math.abs(cc)));
+            assertEquals(cc * q * area / 2, l.chordShear()[0], 1e-6 * Math.abs(net), "chord shear, n " + nv[0]);
+        }
+    }
+
+    /**
+     * At the dive speed with n near 1 (small CL) the chordwise load is aft (the drag outweighs the forward tilt
+     * of the lift) and equals CC q S / 2 on each half, CC > 0: the case of 14 CFR 23.349-type chordwise loads
+     * the old lift-only loads missed. The wing has drag polars so profile drag enters.
+     */
+    @Test
+    void chordwiseLoadAtTheDiveSpeedIsAft() {
+        Wing wing = WingFileReader.parse("""
+                name: polar wing
+                units: m
+                surfaces:
+                  - name: wing
+                    section: s
+                    trapezoid: {span: 10, root-chord: 1.6, taper: 0.5}
+                    lattice: {strips: 24, rows: 6}
+                sections:
+                  s:
+                    camber: NACA 2412
+                    drag-polar: {reynolds: [1.0e6, 6.0e6], cl: [-0.5, 0, 0.5, 1.0, 1.4],
+                                 cd: [[0.012, 0.008, 0.009, 0.013, 0.022], [0.009, 0.006, 0.007, 0.010, 0.017]]}
+                """, "polar.wing.yaml");
+        WingAnalysis a = WingAnalysis.of(wing);
+        // the spar on the quarter-chord line, unswept on this trapezoid, so the chord axis is x
+        WingStructure massless = new WingStructure(0.25, 0.40, Optional.empty(), Optional.empty(), List.of());
+        LoadsAnalysis la = LoadsAnalysis.of(a, massless, a.fileDeflections());
+        SpanwiseLoads l = la.loads(new LoadCase("dive", 900 * G, 1.0, 85, 0, "given"));
+        assertTrue(l.chordCoefficient() > 0, "aft at VD: CC " + l.chordCoefficient());
+        double area = wing.reference().area();
+        assertEquals(l.chordCoefficient() * l.dynamicPressure() * area / 2, l.chordShear()[0],
+                1e-6 * Math.abs(l.chordShear()[0]));
     }
 
     /** Nothing is outboard of the tip: shear, bending and torsion are zero there (to round-off). */
