@@ -26,7 +26,7 @@ class LoadsCommandTest {
     @Test
     void singleCaseJsonCarriesTheContractKeysAndTheCaution() throws IOException {
         String wing = trainerWithStructure();
-        CliRun r = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "102kt",
+        CliRun r = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "110kt",
                 "--format", "json");
         assertEquals(0, r.exitCode(), r.err());
         for (String key : List.of("\"cases\"", "\"load_factor\"", "\"speed\"", "\"y\"", "\"shear\"", "\"bending\"",
@@ -63,14 +63,16 @@ class LoadsCommandTest {
     @Test
     void safetyFactorMultipliesAndSaysSo() throws IOException {
         String wing = trainerWithStructure();
-        CliRun limit = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "102kt", "-f", "csv");
-        CliRun ult = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "102kt", "-f", "csv",
+        CliRun limit = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "110kt", "-f", "csv");
+        CliRun ult = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "110kt", "-f", "csv",
                 "--safety-factor", "1.5");
         assertEquals(0, ult.exitCode(), ult.err());
-        assertTrue(ult.out().startsWith("# Caution"));
-        assertTrue(ult.out().contains("safety factor 1.50"));
-        double m0 = Double.parseDouble(limit.out().lines().toList().get(2).split(",")[6]);
-        double m1 = Double.parseDouble(ult.out().lines().toList().get(2).split(",")[6]);
+        // the CSV is data from its first line: the caution and the factor are columns of every row
+        assertTrue(ult.out().startsWith("case,name,"), ult.out().lines().findFirst().orElse(""));
+        String row = ult.out().lines().toList().get(1);
+        assertTrue(row.contains("safety factor 1.50") && row.contains("Caution:"), row);
+        double m0 = Double.parseDouble(limit.out().lines().toList().get(1).split(",")[6]);
+        double m1 = Double.parseDouble(ult.out().lines().toList().get(1).split(",")[6]);
         assertEquals(1.5 * m0, m1, 1e-6 * m1);
     }
 
@@ -108,5 +110,26 @@ class LoadsCommandTest {
         CliRun noSpeed = CliRun.of("loads", wing, "--weight", "750kg");
         assertEquals(2, noSpeed.exitCode());
         assertTrue(noSpeed.err().contains("--speed"), noSpeed.err());
+    }
+
+    @Test
+    void aCaseBeyondTheStallOnsetIsRefusedUnlessAskedForAndThenFlagged() {
+        String wing = CliRun.demo("trainer.wing.yaml");
+        CliRun refused = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "95kt");
+        assertEquals(2, refused.exitCode(), refused.out());
+        assertTrue(refused.err().contains("above the wing's stall-onset CL") && refused.err().contains("--beyond-stall"),
+                refused.err());
+        assertEquals(1, refused.err().lines().count(), refused.err());
+        CliRun flagged = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "95kt",
+                "--beyond-stall", "-f", "json");
+        assertEquals(0, flagged.exitCode(), flagged.err());
+        assertTrue(flagged.out().contains("\"beyond_stall\": true"), flagged.out());
+        CliRun table = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "95kt",
+                "--beyond-stall");
+        assertTrue(table.out().contains("* beyond the stall onset"), table.out());
+        CliRun fine = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "110kt", "-f",
+                "json");
+        assertTrue(fine.out().contains("\"beyond_stall\": false"), fine.out());
+        assertTrue(fine.out().contains("\"tail\": \"The tail's load is not included"), "the tail load is stated");
     }
 }
