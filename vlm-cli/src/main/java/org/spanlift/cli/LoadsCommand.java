@@ -328,6 +328,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
             LoadCase c = l.loadCase();
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("name", c.name());
+            m.put("side", l.side().name().toLowerCase(Locale.ROOT));
             m.put("origin", c.origin());
             m.put("weight", c.weight());
             m.put("load_factor", c.loadFactor());
@@ -386,7 +387,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
     }
 
     private String csv(List<SpanwiseLoads> results) {
-        Csv c = new Csv(List.of("case", "name", "load_factor", "speed_eas_m_s", "y_m", "shear_N", "bending_N_m",
+        Csv c = new Csv(List.of("case", "name", "side", "load_factor", "speed_eas_m_s", "y_m", "shear_N", "bending_N_m",
                 "torsion_N_m", "chord_shear_N", "chord_bending_N_m", "loads_are", "caution"));
         String caution = Cautions.LOADS + " " + NO_TAIL;
         for (int i = 0; i < results.size(); i++) {
@@ -398,7 +399,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
             double[] chordShear = l.chordShear();
             double[] chordBending = l.chordBending();
             for (int k = 0; k < l.stations(); k++) {
-                c.row(i, l.loadCase().name(), l.loadCase().loadFactor(), l.loadCase().equivalentSpeed(), y[k],
+                c.row(i, l.loadCase().name(), l.side().name().toLowerCase(Locale.ROOT), l.loadCase().loadFactor(), l.loadCase().equivalentSpeed(), y[k],
                         shear[k], bending[k], torsion[k], chordShear[k], chordBending[k], factorNote(), caution);
             }
         }
@@ -435,7 +436,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         boolean anyBeyond = false;
         for (int i = 0; i < results.size(); i++) {
             SpanwiseLoads l = results.get(i);
-            List<String> row = new ArrayList<>(List.of(String.valueOf(i), caseName(l.loadCase(), envelope, du),
+            List<String> row = new ArrayList<>(List.of(String.valueOf(i), caseName(l, envelope, du),
                     TextTable.fixed(l.loadCase().loadFactor(), 2),
                     TextTable.fixed(Airspeed.knots(l.loadCase().equivalentSpeed()), 1)));
             keys.forEach(key -> row.add(Results.cell(key, l, du)));
@@ -491,6 +492,15 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
      * A case's name in the table's units: the command line's case and the envelope's points are named from their
      * values; a case from a cases file keeps its own name.
      */
+    private String caseName(SpanwiseLoads l, List<Envelope.Point> envelope, DisplayUnits du) {
+        String half = switch (l.side()) {
+            case RIGHT -> " (right half)";
+            case LEFT -> " (left half)";
+            case BOTH -> "";
+        };
+        return caseName(l.loadCase(), envelope, du) + half;
+    }
+
     private String caseName(LoadCase c, List<Envelope.Point> envelope, DisplayUnits du) {
         if (c == commandLineCase) {
             return String.format(Locale.ROOT, "n %.2f at %s EAS", c.loadFactor(), du.speed(c.equivalentSpeed()));

@@ -71,8 +71,8 @@ class LoadsCommandTest {
         assertTrue(ult.out().startsWith("case,name,"), ult.out().lines().findFirst().orElse(""));
         String row = ult.out().lines().toList().get(1);
         assertTrue(row.contains("safety factor 1.50") && row.contains("Caution:"), row);
-        double m0 = Double.parseDouble(limit.out().lines().toList().get(1).split(",")[6]);
-        double m1 = Double.parseDouble(ult.out().lines().toList().get(1).split(",")[6]);
+        double m0 = Double.parseDouble(limit.out().lines().toList().get(1).split(",")[7]);
+        double m1 = Double.parseDouble(ult.out().lines().toList().get(1).split(",")[7]);
         assertEquals(1.5 * m0, m1, 1e-6 * m1);
     }
 

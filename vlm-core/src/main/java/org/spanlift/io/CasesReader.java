@@ -4,6 +4,8 @@ import org.spanlift.structure.LoadCase;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.OptionalDouble;
+import java.util.Optional;
 import java.util.Set;
 
 import org.spanlift.atmosphere.StandardAtmosphere;
@@ -17,6 +19,10 @@ import org.spanlift.input.quantity.QuantityKind;
  * Reads a cases file ({@code .cases.yaml}): a list of load cases, each with its weight, load factor and
  * equivalent airspeed, altitude optional.
  *
+ * <p>An unsymmetrical (rolling) case adds {@code aileron} (the right aileron's deflection, degrees, trailing
+ * edge down) or {@code other-side} (the left half's share of the right half's air load, 0 to 1): the
+ * fraction of the load factor and the deflection or share are the user's, from the applicable standard.
+ *
  * <pre>
  * cases:
  *   - {name: pull-up at VA, weight: 1100kg, load-factor: 3.8, speed: 105kt}
@@ -26,7 +32,8 @@ import org.spanlift.input.quantity.QuantityKind;
 public final class CasesReader {
 
     public static final Set<String> TOP_KEYS = Set.of("cases");
-    public static final Set<String> CASE_KEYS = Set.of("name", "weight", "load-factor", "speed", "altitude");
+    public static final Set<String> CASE_KEYS = Set.of("name", "weight", "load-factor", "speed", "altitude",
+            "aileron", "other-side");
     /** Load factors accepted, both signs. */
     public static final double MAX_LOAD_FACTOR = 15;
     /** Most cases in one file. */
@@ -60,7 +67,19 @@ public final class CasesReader {
                     .inRange(-MAX_LOAD_FACTOR, MAX_LOAD_FACTOR);
             double v = Quantities.speed(c.required("speed", "the equivalent airspeed with a unit, such as 105kt"));
             double h = c.optional("altitude").map(a -> altitude(a)).orElse(0.0);
-            out.add(new LoadCase(name, w, n, v, h, "given"));
+            if (c.has("aileron") && c.has("other-side")) {
+                throw c.error("an unsymmetrical case takes either aileron (degrees, the right one trailing edge down) "
+                        + "or other-side (the left half's share of the air load), not both");
+            }
+            Optional<LoadCase.Asymmetry> asymmetry = Optional.empty();
+            if (c.has("aileron")) {
+                asymmetry = Optional.of(new LoadCase.Asymmetry(OptionalDouble.of(Math.toRadians(
+                        c.required("aileron", "").inRange(-45, 45))), OptionalDouble.empty()));
+            } else if (c.has("other-side")) {
+                asymmetry = Optional.of(new LoadCase.Asymmetry(OptionalDouble.empty(),
+                        OptionalDouble.of(c.required("other-side", "").inRange(0, 1))));
+            }
+            out.add(new LoadCase(name, w, n, v, h, "given", asymmetry));
         }
         return out;
     }

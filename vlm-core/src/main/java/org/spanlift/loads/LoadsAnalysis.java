@@ -12,6 +12,8 @@ import java.util.TreeSet;
 import java.util.Locale;
 
 import org.spanlift.atmosphere.StandardAtmosphere;
+import org.spanlift.geometry.ControlKind;
+import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Planform;
 import org.spanlift.geometry.Surface;
 import org.spanlift.lattice.Lattice;
@@ -178,6 +180,43 @@ public final class LoadsAnalysis {
      * @throws RefusedException when no angle in the linear range carries the case
      */
     public SpanwiseLoads loads(LoadCase c) {
+        return loads(c, deflections, 1, SpanwiseLoads.Side.BOTH);
+    }
+
+    /**
+     * The loads of a case on each half: one entry for a symmetric case; the right and then the left half for
+     * an unsymmetrical one. With an aileron deflection the angle of attack carries the whole normal force
+     * with the ailerons deflected (antisymmetric, so the lift curve is the symmetric one) and the left half is
+     * the mirror of the right with the deflection reversed; with a share, the left half carries that share of
+     * the right half's air load and its full inertia.
+     */
+    public List<SpanwiseLoads> halves(LoadCase c) {
+        if (c.asymmetry().isEmpty()) {
+            return List.of(loads(c));
+        }
+        LoadCase.Asymmetry a = c.asymmetry().get();
+        if (a.otherSide().isPresent()) {
+            return List.of(loads(c, deflections, 1, SpanwiseLoads.Side.RIGHT),
+                    loads(c, deflections, a.otherSide().getAsDouble(), SpanwiseLoads.Side.LEFT));
+        }
+        double[] right = deflections.clone();
+        double[] left = deflections.clone();
+        List<ControlSurface> controls = analysis.wing().controls();
+        boolean any = false;
+        for (int k = 0; k < controls.size(); k++) {
+            if (controls.get(k).kind() == ControlKind.AILERON) {
+                right[k] = a.aileron().getAsDouble();
+                left[k] = -a.aileron().getAsDouble();
+                any = true;
+            }
+        }
+        if (!any) {
+            throw new RefusedException("load case '" + c.name() + "' deflects the ailerons, but the wing has none");
+        }
+        return List.of(loads(c, right, 1, SpanwiseLoads.Side.RIGHT), loads(c, left, 1, SpanwiseLoads.Side.LEFT));
+    }
+
+    private SpanwiseLoads loads(LoadCase c, double[] deflections, double airShare, SpanwiseLoads.Side side) {
         double area = analysis.wing().reference().area();
         double q = c.dynamicPressure();
         double target = c.liftCoefficient(area);
@@ -189,17 +228,17 @@ public final class LoadsAnalysis {
         } catch (RefusedException e) {
             throw beyondRange(c, target);
         }
-        Aero aero = aero(alpha, reynoldsPerMetre);
+        Aero aero = aero(alpha, reynoldsPerMetre, deflections);
         for (int k = 0; k < MAX_ITERATIONS && Math.abs(aero.normal(theta) - target) > 1e-13 * Math.max(1, Math.abs(target)); k++) {
             double h = 1e-6;
-            double slope = (aero(alpha + h, reynoldsPerMetre).normal(theta) - aero(alpha - h, reynoldsPerMetre).normal(theta))
-                    / (2 * h);
+            double slope = (aero(alpha + h, reynoldsPerMetre, deflections).normal(theta)
+                    - aero(alpha - h, reynoldsPerMetre, deflections).normal(theta)) / (2 * h);
             double next = alpha - (aero.normal(theta) - target) / slope;
             if (!Double.isFinite(next) || Math.abs(next) > Math.toRadians(LiftCurve.MAX_TARGET_ALPHA_DEG)) {
                 throw beyondRange(c, target);
             }
             alpha = next;
-            aero = aero(alpha, reynoldsPerMetre);
+            aero = aero(alpha, reynoldsPerMetre, deflections);
         }
         if (!(Math.abs(aero.normal(theta) - target) <= 1e-9 * Math.max(1, Math.abs(target)))) {
             throw beyondRange(c, target);
@@ -220,11 +259,11 @@ public final class LoadsAnalysis {
             double[] g = moment[j];
             for (int r = 0; r < st.rows(); r++) {
                 int i = st.firstPanel() + r;
-                double[] fi = {q * pf.fx(i), q * pf.fy(i), q * pf.fz(i)};
+                double[] fi = {airShare * q * pf.fx(i), airShare * q * pf.fy(i), airShare * q * pf.fz(i)};
                 add(f, g, new double[] {pf.x(i), pf.y(i), pf.z(i)}, fi);
             }
             int k = lattice.stripOf(st.firstPanel());
-            double d = q * (aero.induced()[k] + aero.profile()[k]);
+            double d = airShare * q * (aero.induced()[k] + aero.profile()[k]);
             double ym = 0.5 * (st.yLeft() + st.yRight());
             add(f, g, new double[] {p.noseX(ym) + 0.25 * p.chord(ym), ym, p.noseZ(ym)},
                     new double[] {d * drag[0], d * drag[1], d * drag[2]});
@@ -269,7 +308,7 @@ public final class LoadsAnalysis {
         double cl = aero.lift();
         double cd = aero.drag();
         return new SpanwiseLoads(c, alpha, cl, cd, cl * Math.cos(a) + cd * Math.sin(a), cd * Math.cos(a) - cl * Math.sin(a),
-                theta, q, edges, shear, bending, torsion, chordShear, chordBending, normalLoad, 1);
+                theta, q, edges, shear, bending, torsion, chordShear, chordBending, normalLoad, 1, side);
     }
 
     private RefusedException beyondRange(LoadCase c, double target) {
@@ -282,7 +321,7 @@ public final class LoadsAnalysis {
      * the profile drag read at {@code reynoldsPerMetre}: the stall line of an envelope at the stall-onset angle.
      */
     public double normalCoefficient(double alpha, double reynoldsPerMetre) {
-        return aero(alpha, reynoldsPerMetre).normal(axisAngle());
+        return aero(alpha, reynoldsPerMetre, deflections).normal(axisAngle());
     }
 
     /** The wing's (first surface's) aerodynamics at one angle: its solution, CL, CD and per-strip drag areas. */
@@ -295,7 +334,7 @@ public final class LoadsAnalysis {
         }
     }
 
-    private Aero aero(double alpha, double reynoldsPerMetre) {
+    private Aero aero(double alpha, double reynoldsPerMetre, double[] deflections) {
         Solution s = analysis.solve(alpha, deflections);
         double[] induced = s.stripInducedDrag();
         double[] profile = ProfileDrag.stripDragAreas(s, analysis.wing(), reynoldsPerMetre);
@@ -310,10 +349,10 @@ public final class LoadsAnalysis {
         return new Aero(s, s.coefficients(0).lift(), dragArea / area, induced, profile);
     }
 
-    /** The loads of every case, in order. */
+    /** The loads of every case, in order, each unsymmetrical case as its right and then its left half. */
     public List<SpanwiseLoads> loads(List<LoadCase> cases) {
         List<SpanwiseLoads> out = new ArrayList<>();
-        cases.forEach(c -> out.add(loads(c)));
+        cases.forEach(c -> out.addAll(halves(c)));
         return out;
     }
 

@@ -28,11 +28,19 @@ import org.spanlift.structure.LoadCase;
  * @param normalLoad     the root's outboard resultant normal to the longitudinal axis, N: the half-wing's
  *                       normal force less n g times its mass
  * @param factor         the factor the loads carry: 1 for limit loads, the safety factor for ultimate
+ * @param side           which half: both (a symmetric case, the right half standing for its mirror), or the
+ *                       right or left half of an unsymmetrical case (the left given in its own mirror axes:
+ *                       y outboard, the same sign conventions)
  */
 public record SpanwiseLoads(LoadCase loadCase, double alpha, double liftCoefficient, double dragCoefficient,
         double normalCoefficient, double chordCoefficient, double axisAngle, double dynamicPressure,
         double[] y, double[] shear, double[] bending, double[] torsion, double[] chordShear, double[] chordBending,
-        double normalLoad, double factor) {
+        double normalLoad, double factor, Side side) {
+
+    /** Which half the loads are of. */
+    public enum Side {
+        BOTH, RIGHT, LEFT
+    }
 
     public SpanwiseLoads {
         int n = y.length;
@@ -98,7 +106,7 @@ public record SpanwiseLoads(LoadCase loadCase, double alpha, double liftCoeffici
     public SpanwiseLoads scaled(double f) {
         return new SpanwiseLoads(loadCase, alpha, liftCoefficient, dragCoefficient, normalCoefficient,
                 chordCoefficient, axisAngle, dynamicPressure, y, times(shear, f), times(bending, f), times(torsion, f),
-                times(chordShear, f), times(chordBending, f), normalLoad * f, factor * f);
+                times(chordShear, f), times(chordBending, f), normalLoad * f, factor * f, side);
     }
 
     private static double[] times(double[] v, double f) {
