@@ -389,7 +389,8 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
     private String csv(List<SpanwiseLoads> results) {
         Csv c = new Csv(List.of("case", "name", "side", "load_factor", "speed_eas_m_s", "y_m", "shear_N", "bending_N_m",
                 "torsion_N_m", "chord_shear_N", "chord_bending_N_m", "loads_are", "caution"));
-        String caution = Cautions.LOADS + " " + NO_TAIL;
+        String caution = Cautions.LOADS + " " + NO_TAIL + " n is the aerodynamic force normal to the longitudinal axis "
+                + "over the weight (14 CFR 23.321(a), pre-2017 text); see the table or JSON output for the axis.";
         for (int i = 0; i < results.size(); i++) {
             SpanwiseLoads l = results.get(i);
             double[] y = l.y();
