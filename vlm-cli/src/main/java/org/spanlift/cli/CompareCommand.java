@@ -17,6 +17,7 @@ import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.CommonLift;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.InputFiles;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.options.UnitsOption;
@@ -94,6 +95,7 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
     @Override
     public Integer call() {
         Format format = output.format(FORMATS);
+        output.check(InputFiles.wings(files));
         units.check(format);
         if (files.size() > MAX_WINGS) {
             throw new InputException("compare", 0, "", "at most " + MAX_WINGS + " wings at once, got " + files.size());

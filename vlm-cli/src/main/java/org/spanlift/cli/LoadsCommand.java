@@ -9,6 +9,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
@@ -19,6 +20,7 @@ import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.InputFiles;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.options.UnitsOption;
@@ -162,6 +164,10 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
     @Override
     public Integer call() {
         Format format = output.format(FORMATS);
+        List<Path> inputs = new ArrayList<>(InputFiles.wing(file));
+        inputs.addAll(Arrays.asList(casesFile, envelopeFile));
+        inputs.removeIf(Objects::isNull);
+        output.check(inputs);
         units.check(format);
         if (safetyFactor != null && !(safetyFactor >= 1 && safetyFactor <= 3)) {
             throw new InputException("--safety-factor", 0, "", "expected a factor from 1 to 3, got " + safetyFactor);

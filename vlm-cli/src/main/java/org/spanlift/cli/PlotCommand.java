@@ -13,6 +13,7 @@ import org.spanlift.cli.options.AlphaList;
 import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.InputFiles;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.plot.Figure;
@@ -85,6 +86,7 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
     public Integer call() {
         PlotKind kind = PlotKind.parse(what);
         Format format = FigureOutput.format(output, FORMATS);
+        output.check(InputFiles.wing(file));
         Wing wing = WingFileReader.read(file);
         WingAnalysis analysis = WingAnalysis.of(wing);
         double[] deflections = analysis.deflections(flight.deflections(wing));

@@ -13,6 +13,7 @@ import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.CommonLift;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.InputFiles;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.options.UnitsOption;
@@ -78,6 +79,7 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
     @Override
     public Integer call() {
         Format format = FigureOutput.format(output, FORMATS);
+        output.check(InputFiles.wing(file));
         List<Double> alphas = AlphaList.parse(alpha);
         List<Double> curve = AlphaList.parse(range);
         CommonLift.check(cl);

@@ -20,8 +20,10 @@ import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.AlphaList;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.InputFiles;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
+import org.spanlift.cli.options.OutputTarget;
 import org.spanlift.cli.options.UnitsOption;
 import org.spanlift.cli.output.Csv;
 import org.spanlift.cli.output.DisplayUnits;
@@ -124,6 +126,8 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
     @Override
     public Integer call() {
         Format format = output.format(FORMATS);
+        OutputTarget spanLoadTarget = output.check(InputFiles.wing(file), OutputOptions.also("--span-load", spanLoadFile))
+                .get("--span-load");
         units.check(format);
         if (!spec.commandLine().getParseResult().hasMatchedOption("--weight")) {
             FlightOptions.refuse(spec, "the load factor sets the CL required by --weight at --speed; give --weight",
@@ -161,7 +165,7 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         String loads = spanLoadFile == null ? null : spanLoadCsv(wing, points, dims);
         output.write(text, spec.commandLine().getOut());
         if (loads != null) {
-            OutputOptions.writeAtomically(spanLoadFile, loads.getBytes(StandardCharsets.UTF_8));
+            spanLoadTarget.write(loads.getBytes(StandardCharsets.UTF_8));
         }
         return 0;
     }

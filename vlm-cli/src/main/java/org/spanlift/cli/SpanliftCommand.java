@@ -17,13 +17,13 @@ import picocli.CommandLine.Command;
         subcommands = {SolveCommand.class, StallCommand.class, LoadsCommand.class, SweepCommand.class,
                 MergeCommand.class, PlotCommand.class, ReportCommand.class, CompareCommand.class,
                 ValidateCommand.class},
-        footer = {"", "Exit codes: 0 success; 1 the run finished but some case failed; 2 bad input or usage;"
-                + " 3 internal error."})
+        footer = {"", "Exit codes: 0 success; 1 the run finished but some case failed; 2 bad input, usage, or an"
+                + " environment the run cannot proceed in (a full disk); 3 internal error."})
 public final class SpanliftCommand implements Runnable {
 
     /** Exit code for a run that finished with failed cases. */
     public static final int EXIT_FAILED_CASES = 1;
-    /** Exit code for bad input or usage. */
+    /** Exit code for bad input, usage, or an environment the run cannot proceed in (a full disk). */
     public static final int EXIT_BAD_INPUT = 2;
     /** Exit code for an internal error (a bug: please report it). */
     public static final int EXIT_INTERNAL = 3;

@@ -17,6 +17,7 @@ import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
+import org.spanlift.cli.options.InputFiles;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.options.UnitsOption;
@@ -74,6 +75,7 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
     @Override
     public Integer call() {
         Format format = output.format(FORMATS);
+        output.check(InputFiles.wing(file));
         units.check(format);
         FlightOptions.refuse(spec, "stall finds the stall speed itself; give --weight (and --altitude) for it",
                 "--speed", "--true-speed");

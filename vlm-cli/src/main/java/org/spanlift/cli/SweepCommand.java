@@ -1,19 +1,28 @@
 package org.spanlift.cli;
 
+import java.io.IOException;
+import java.io.OutputStream;
 import java.io.PrintWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
 import org.spanlift.io.SweepFileReader;
+import org.spanlift.cli.sweep.Manifest;
 import org.spanlift.cli.sweep.Progress;
 import org.spanlift.cli.sweep.Ranker;
 import org.spanlift.cli.sweep.ResultsFile;
 import org.spanlift.cli.sweep.RowFormat;
 import org.spanlift.cli.sweep.Shard;
 import org.spanlift.cli.sweep.SweepRunner;
+import org.spanlift.cli.options.InputFiles;
 import org.spanlift.cli.options.OutputOptions;
+import org.spanlift.cli.options.OutputTarget;
 import org.spanlift.cli.output.Cautions;
 import org.spanlift.input.InputException;
 import org.spanlift.sweep.Ranking;
@@ -60,25 +69,41 @@ public final class SweepCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         RowFormat format = RowFormat.CSV;
+        OutputTarget target = null;
         if (output != null) {
-            OutputOptions.requireFolder(output);
+            target = OutputTarget.resolve("--output", output);
             format = RowFormat.of(output.getFileName().toString());
+            if (format == null && target.kind() == OutputTarget.Kind.STREAM) {
+                format = RowFormat.CSV;
+            }
             if (format == null) {
                 throw new InputException("--output", 0, "", "expected a .csv or .jsonl file, got " + output);
             }
         }
+        boolean toFile = target != null && target.kind() == OutputTarget.Kind.FILE;
         int threads = jobs == null ? Runtime.getRuntime().availableProcessors() : jobs;
         if (threads < 1 || threads > 1024) {
             throw new InputException("--jobs", 0, "", "expected 1 to 1024 threads, got " + threads);
         }
         Shard slice = shard == null ? Shard.ALL : Shard.parse(shard);
-        if (resume && output == null) {
-            throw new InputException("--resume", 0, "", "needs --output: the file to finish");
+        if (resume && !toFile) {
+            throw new InputException("--resume", 0, "", output == null ? "needs --output: the file to finish"
+                    : "needs a results file to finish; " + output + " is a device or FIFO");
         }
-        if (!slice.whole() && output == null) {
-            throw new InputException("--shard", 0, "", "needs --output: spanlift merge joins the shard files");
+        if (!slice.whole() && !toFile) {
+            throw new InputException("--shard", 0, "", output == null
+                    ? "needs --output: spanlift merge joins the shard files"
+                    : "needs a results file for spanlift merge to join; " + output + " is a device or FIFO");
         }
         Sweep sweep = SweepFileReader.read(file, force);
+        List<Path> inputs = new ArrayList<>(List.of(file, sweep.basePath()));
+        inputs.addAll(InputFiles.coordinateFiles(sweep.baseTree(), sweep.basePath()));
+        List<OutputOptions.Named> outputs = new ArrayList<>(List.of(OutputOptions.also("--output", output)));
+        if (toFile) {
+            outputs.add(OutputOptions.also("the manifest of --output", Manifest.pathFor(target.base())));
+            outputs.add(OutputOptions.also("the ranked summary of --output", Ranker.pathFor(target.base(), format)));
+        }
+        OutputOptions.checkAll(inputs, outputs);
         long n = sweep.design().count();
         long first = slice.first(n);
         long end = slice.end(n);
@@ -86,47 +111,77 @@ public final class SweepCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         boolean terminal = System.console() != null;
         long started = System.nanoTime();
-        if (output == null) {
-            PrintWriter out = spec.commandLine().getOut();
-            out.print(format.header(names));
-            out.flush();
-            Progress progress = new Progress(err, terminal, end - first, 0, System::nanoTime);
-            RowFormat f = format;
-            SweepRunner.Outcome o = SweepRunner.run(sweep, first, end, threads, r -> f.row(names, sweep, r), (r, row) -> {
-                out.print(row);
-                out.flush();
+        RowFormat f = format;
+        if (!toFile) {
+            return stream(target, sweep, f, names, first, end, threads, err, terminal, started);
+        }
+        Ranking ranking = sweep.ranking().orElse(null);
+        Ranker tally = new Ranker(names, ranking == null || !slice.whole() ? null : ranking.by(),
+                ranking != null && ranking.highestFirst(), ranking == null ? 1 : ranking.keep());
+        Path ranked = null;
+        try (ResultsFile results = ResultsFile.open(target, sweep, slice, format, resume, tally)) {
+            Progress progress = new Progress(err, terminal, end - first, results.next() - first, System::nanoTime);
+            SweepRunner.run(sweep, results.next(), end, threads, r -> f.row(names, sweep, r), (r, row) -> {
+                results.write(row);
+                String line = row.substring(0, row.length() - 1);
+                tally.add(f.parse(names, line), line, output.toString(), 0);
                 progress.step(r.failed());
             });
             progress.finish();
-            summary(err, sweep, o.cases(), o.failed(), started, threads, null, null);
-            return o.failed() > 0 ? SpanliftCommand.EXIT_FAILED_CASES : 0;
+            if (ranking != null && slice.whole()) {
+                ranked = Ranker.write(target.base(), format, names, tally.tally().ranked());
+            }
         }
-        ResultsFile results = ResultsFile.open(output, sweep, slice, format, resume);
-        Progress progress = new Progress(err, terminal, end - first, results.next() - first, System::nanoTime);
-        RowFormat f = format;
-        SweepRunner.Outcome o;
-        try {
-            o = SweepRunner.run(sweep, results.next(), end, threads, r -> f.row(names, sweep, r), (r, row) -> {
-                results.write(row);
-                progress.step(r.failed());
-            });
-        } finally {
-            results.close();
-        }
-        progress.finish();
-        Ranking ranking = sweep.ranking().orElse(null);
-        Ranker.Tally tally = Ranker.scan(output, format, names, ranking == null || !slice.whole() ? null : ranking.by(),
-                ranking != null && ranking.highestFirst(), ranking == null ? 1 : ranking.keep());
-        Path ranked = null;
-        if (ranking != null && slice.whole()) {
-            ranked = Ranker.write(output, format, names, tally.ranked());
-        }
-        summary(err, sweep, tally.cases(), tally.failed(), started, threads, ranked, tally);
+        Ranker.Tally counts = tally.tally();
+        summary(err, sweep, counts.cases(), counts.failed(), started, threads, ranked, counts);
         if (ranking != null && !slice.whole()) {
             err.println("  shard " + slice + " of the cases; join the shards with spanlift merge for the ranked summary");
         }
         err.flush();
-        return tally.failed() > 0 ? SpanliftCommand.EXIT_FAILED_CASES : 0;
+        return counts.failed() > 0 ? SpanliftCommand.EXIT_FAILED_CASES : 0;
+    }
+
+    /** Rows streamed to standard output or into a device or FIFO: no manifest, no ranked summary. */
+    private Integer stream(OutputTarget target, Sweep sweep, RowFormat f, List<String> names, long first, long end,
+            int threads, PrintWriter err, boolean terminal, long started) {
+        Progress progress = new Progress(err, terminal, end - first, 0, System::nanoTime);
+        SweepRunner.Outcome o;
+        if (target == null) {
+            PrintWriter out = spec.commandLine().getOut();
+            String header = f.header(names);
+            if (header != null) {
+                out.print(header);
+                out.flush();
+            }
+            o = SweepRunner.run(sweep, first, end, threads, r -> f.row(names, sweep, r), (r, row) -> {
+                out.print(row);
+                out.flush();
+                progress.step(r.failed());
+            });
+        } else {
+            try (OutputStream out = Files.newOutputStream(target.file(), StandardOpenOption.WRITE,
+                    StandardOpenOption.APPEND)) {
+                String header = f.header(names);
+                if (header != null) {
+                    out.write(header.getBytes(StandardCharsets.UTF_8));
+                    out.flush();
+                }
+                o = SweepRunner.run(sweep, first, end, threads, r -> f.row(names, sweep, r), (r, row) -> {
+                    try {
+                        out.write(row.getBytes(StandardCharsets.UTF_8));
+                        out.flush();
+                    } catch (IOException e) {
+                        throw OutputTarget.cannotWrite(target.option(), target.given(), e);
+                    }
+                    progress.step(r.failed());
+                });
+            } catch (IOException e) {
+                throw OutputTarget.cannotWrite(target.option(), target.given(), e);
+            }
+        }
+        progress.finish();
+        summary(err, sweep, o.cases(), o.failed(), started, threads, null, null);
+        return o.failed() > 0 ? SpanliftCommand.EXIT_FAILED_CASES : 0;
     }
 
     private void summary(PrintWriter err, Sweep sweep, long cases, long failed, long started, int threads,

@@ -50,6 +50,7 @@ public final class ValidateCommand implements Callable<Integer>, OffersFormats {
     @Override
     public Integer call() {
         Format format = output.format(FORMATS);
+        output.check(List.of());
         List<ReferenceCase> cases = ReferenceCases.all();
         if (caseName != null) {
             cases = cases.stream().filter(c -> c.name().equals(caseName)).toList();

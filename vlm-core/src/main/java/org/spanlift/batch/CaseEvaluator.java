@@ -72,12 +72,22 @@ public final class CaseEvaluator {
         return cache.reuses();
     }
 
-    /** Evaluates case {@code index} of the design; a failure is recorded in the result, never thrown. */
+    /**
+     * Evaluates case {@code index} of the design; a failure is recorded in the result, never thrown. A case
+     * whose results include a number that is not finite (an infinity or NaN from degenerate values, such as a
+     * reference area of 1e-300) fails with the first such column named: no row holds a non-finite number.
+     */
     public CaseResult evaluate(long index) {
         String[] values = sweep.design().values(index);
         String id = CaseResult.id(sweep.parameters(), values);
         try {
             Object[] results = compute(values);
+            for (int k = 0; k < results.length; k++) {
+                if (results[k] instanceof Double d && !Double.isFinite(d)) {
+                    return failed(index, id, values, "the result " + columns.get(k).name() + " is " + d
+                            + ", not a finite number: the wing with these values is degenerate");
+                }
+            }
             Boolean feasible = null;
             if (!sweep.constraints().isEmpty()) {
                 feasible = true;

@@ -28,10 +28,18 @@ public record CaseResult(long index, String id, String[] values, Object[] result
      * so it depends on the parameter values alone (not on the case's index or the design).
      */
     public static String id(List<Parameter> parameters, String[] values) {
+        return id(parameters.stream().map(p -> p.path().text()).toArray(String[]::new), values);
+    }
+
+    /**
+     * The same id from the parameters' paths as written ({@code surfaces.wing.trapezoid.taper}), for a reader
+     * that has a results file's columns but not the sweep.
+     */
+    public static String id(String[] paths, String[] values) {
         try {
             MessageDigest md = MessageDigest.getInstance("SHA-256");
-            for (int p = 0; p < parameters.size(); p++) {
-                md.update((parameters.get(p).path().text() + "=" + values[p] + "\n").getBytes(StandardCharsets.UTF_8));
+            for (int p = 0; p < paths.length; p++) {
+                md.update((paths[p] + "=" + values[p] + "\n").getBytes(StandardCharsets.UTF_8));
             }
             return HexFormat.of().formatHex(md.digest()).substring(0, ID_LENGTH);
         } catch (NoSuchAlgorithmException e) {

@@ -152,4 +152,29 @@ class CaseEvaluatorTest {
         CaseResult good = ev.evaluate(1);
         assertNull(good.error());
     }
+
+    @Test
+    void aCaseWithAResultThatIsNotFiniteFailsWithTheColumnNamedAndTheNextOneRuns() {
+        Sweep s = sweep("""
+                  reference.area: [100, 1e-300, 50]
+                """);
+        CaseEvaluator ev = new CaseEvaluator(s);
+        CaseResult before = ev.evaluate(0);
+        assertNull(before.error());
+        CaseResult degenerate = ev.evaluate(1);
+        assertTrue(degenerate.failed());
+        assertTrue(degenerate.error().contains("not a finite number"), degenerate.error());
+        String column = s.columns().stream().map(c -> c.name()).filter(n -> degenerate.error().startsWith("the result " + n + " is "))
+                .findFirst().orElseThrow(() -> new AssertionError("no column named in: " + degenerate.error()));
+        assertTrue(degenerate.error().contains("NaN") || degenerate.error().contains("Infinity"), degenerate.error());
+        assertTrue(java.util.Arrays.stream(degenerate.results()).allMatch(o -> o == null), column);
+        assertNull(degenerate.feasible());
+        CaseResult after = ev.evaluate(2);
+        assertNull(after.error());
+        assertEquals(2 * value(s, before, "lift_slope_per_rad"), value(s, after, "lift_slope_per_rad"), 1e-12,
+                "half the reference area doubles the coefficients' slope");
+        for (Object o : after.results()) {
+            assertTrue(!(o instanceof Double d) || Double.isFinite(d), String.valueOf(o));
+        }
+    }
 }

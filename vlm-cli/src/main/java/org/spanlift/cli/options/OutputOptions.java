@@ -1,15 +1,15 @@
 package org.spanlift.cli.options;
 
-import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.FileAlreadyExistsException;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.EnumSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
 import java.util.Set;
-import java.util.concurrent.ThreadLocalRandom;
 
 import org.spanlift.input.InputException;
 
@@ -19,7 +19,8 @@ import picocli.CommandLine.Option;
 
 /**
  * The output options every command shares: where to write and in which format. A file is written whole
- * or not at all (a temporary file beside it, moved into place when complete).
+ * or not at all (a temporary file beside it, moved into place when complete); a device or FIFO is streamed
+ * into; see {@link OutputTarget}. Every command calls {@link #check} with its inputs before it computes.
  */
 public final class OutputOptions {
 
@@ -33,6 +34,10 @@ public final class OutputOptions {
     @Option(names = {"-f", FORMAT_OPTION}, paramLabel = "FORMAT",
             description = "Output format. Default: from the output file's extension, else table.")
     Format format;
+
+    /** The output file once checked (null for standard output). */
+    private OutputTarget target;
+    private boolean checked;
 
     /**
      * Replaces the help text of a command's {@code --format} with one that lists the formats it writes and its
@@ -74,61 +79,79 @@ public final class OutputOptions {
         return String.join(", ", EnumSet.copyOf(formats).stream().map(Format::toString).toList());
     }
 
-    /** Writes the text to the output file atomically, or to {@code stdout}. */
+    /** Another output of a command, by the option (or the role) that names it; a null path is none. */
+    public record Named(String option, Path path) {
+    }
+
+    /** Another output of a command: {@code also("--span-load", file)}. */
+    public static Named also(String option, Path path) {
+        return new Named(option, path);
+    }
+
+    /**
+     * Checks every output of the command before anything is computed or written, and must be called before
+     * {@link #write}: each output must be a file in an existing folder (or a device, a FIFO, a descriptor),
+     * not a folder; none may be the same file as one of the command's inputs (writing it would destroy the
+     * input), nor the same file as another output.
+     *
+     * @param inputs the files the command reads (those that do not exist are left to their readers)
+     * @param others the command's other outputs
+     * @return every output given, by option
+     */
+    public Map<String, OutputTarget> check(List<Path> inputs, Named... others) {
+        List<Named> all = new ArrayList<>();
+        all.add(new Named("--output", output));
+        all.addAll(Arrays.asList(others));
+        Map<String, OutputTarget> targets = checkAll(inputs, all);
+        target = targets.get("--output");
+        checked = true;
+        return targets;
+    }
+
+    /** The check of {@link #check} for any list of outputs (a sweep's results and the files beside them). */
+    public static Map<String, OutputTarget> checkAll(List<Path> inputs, List<Named> outputs) {
+        Map<String, OutputTarget> targets = new LinkedHashMap<>();
+        for (Named n : outputs) {
+            if (n.path() == null) {
+                continue;
+            }
+            OutputTarget t = OutputTarget.resolve(n.option(), n.path());
+            for (OutputTarget other : targets.values()) {
+                if (t.sameFileAs(other)) {
+                    throw new InputException(n.option(), 0, "", n.path() + " is also the " + other.option() + " file "
+                            + other.given() + "; expected a different file for each output");
+                }
+            }
+            for (Path in : inputs) {
+                if (t.isInput(in)) {
+                    throw new InputException(n.option(), 0, "", n.path() + " is the input file " + in
+                            + "; writing it would destroy that input; expected another file");
+                }
+            }
+            targets.put(n.option(), t);
+        }
+        return targets;
+    }
+
+    /** Writes the text to the output (see {@link OutputTarget}), or to {@code stdout}. */
     public void write(String text, PrintWriter stdout) {
         if (output == null) {
             stdout.print(text);
             stdout.flush();
             return;
         }
-        writeAtomically(output, text.getBytes(StandardCharsets.UTF_8));
+        write(text.getBytes(StandardCharsets.UTF_8));
     }
 
-    /** Writes bytes to a file via a temporary file in the same folder, then moves it into place. */
-    public static void writeAtomically(Path target, byte[] bytes) {
-        Path absolute = target.toAbsolutePath();
-        requireFolder(target);
-        try {
-            Path tmp = temporarySibling(absolute);
-            try {
-                Files.write(tmp, bytes);
-                Files.move(tmp, absolute, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-            } finally {
-                Files.deleteIfExists(tmp);
-            }
-        } catch (IOException e) {
-            throw new InputException(target.toString(), 0, "", "cannot write the output file ("
-                    + e.getClass().getSimpleName() + (e.getMessage() == null ? "" : ": " + e.getMessage()) + ")");
+    /** Writes bytes to the output file (an output file must be given). */
+    public void write(byte[] bytes) {
+        if (!checked) {
+            throw new IllegalStateException("the command did not check its outputs before writing");
         }
-    }
-
-    /**
-     * Creates an empty temporary file beside the target, to be moved onto it when complete. Unlike a
-     * temporary file of the platform's, it gets the permissions any new file in that folder gets (the
-     * user's umask), so the output, once moved into place, is as readable as the user expects.
-     */
-    public static Path temporarySibling(Path target) throws IOException {
-        Path absolute = target.toAbsolutePath();
-        for (int attempt = 1; ; attempt++) {
-            Path tmp = absolute.resolveSibling("." + absolute.getFileName() + "."
-                    + Long.toHexString(ThreadLocalRandom.current().nextLong()) + ".part");
-            try {
-                return Files.createFile(tmp);
-            } catch (FileAlreadyExistsException e) {
-                if (attempt == 100) {
-                    throw e;
-                }
-            }
+        if (target == null) {
+            throw new IllegalStateException("no output file to write bytes to");
         }
-    }
-
-    /** Refuses an output path whose folder does not exist, before anything is computed or written. */
-    public static void requireFolder(Path target) {
-        Path dir = target.toAbsolutePath().getParent();
-        if (dir != null && !Files.isDirectory(dir)) {
-            throw new InputException(target.toString(), 0, "", "the folder " + dir + " does not exist; expected an "
-                    + "output path in an existing folder");
-        }
+        target.write(bytes);
     }
 
     public Path outputFile() {

@@ -1,6 +1,5 @@
 package org.spanlift.cli.plot;
 
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.EnumSet;
 import java.util.Set;
@@ -9,7 +8,7 @@ import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.input.InputException;
 
-/** Writing figures and pages: the checks on the output file name and the atomic write. */
+/** Writing figures and pages: the checks on the output file name, and the write through {@link OutputOptions}. */
 public final class FigureOutput {
 
     private FigureOutput() {
@@ -42,14 +41,9 @@ public final class FigureOutput {
             if (output.outputFile() == null) {
                 throw new InputException("--output", 0, "", "a PNG image needs an output file (--output F.png)");
             }
-            OutputOptions.writeAtomically(output.outputFile(), PngWriter.bytes(figure));
+            output.write(PngWriter.bytes(figure));
             return;
         }
-        String svg = SvgWriter.document(figure);
-        if (output.outputFile() == null) {
-            output.write(svg, stdout);
-        } else {
-            OutputOptions.writeAtomically(output.outputFile(), svg.getBytes(StandardCharsets.UTF_8));
-        }
+        output.write(SvgWriter.document(figure), stdout);
     }
 }

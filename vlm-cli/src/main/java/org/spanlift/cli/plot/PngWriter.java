@@ -7,7 +7,12 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 
+import java.util.Iterator;
+
 import javax.imageio.ImageIO;
+import javax.imageio.ImageWriter;
+import javax.imageio.stream.ImageOutputStream;
+import javax.imageio.stream.MemoryCacheImageOutputStream;
 
 /**
  * Paints a {@link Figure} into a bitmap and encodes it as PNG with the JDK's encoder (no time stamp, so the
@@ -36,14 +41,24 @@ public final class PngWriter {
         return image;
     }
 
+    /**
+     * The PNG file's bytes, encoded in memory: the image library's default would buffer through a
+     * temporary file in the system's temporary folder, which may be missing, full or shared.
+     */
     public static byte[] bytes(Figure figure) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
-        try {
-            if (!ImageIO.write(image(figure), "png", out)) {
-                throw new IllegalStateException("no PNG encoder in this Java runtime");
-            }
+        Iterator<ImageWriter> writers = ImageIO.getImageWritersByFormatName("png");
+        if (!writers.hasNext()) {
+            throw new IllegalStateException("no PNG encoder in this Java runtime");
+        }
+        ImageWriter writer = writers.next();
+        try (ImageOutputStream stream = new MemoryCacheImageOutputStream(out)) {
+            writer.setOutput(stream);
+            writer.write(image(figure));
         } catch (IOException e) {
             throw new UncheckedIOException(e);
+        } finally {
+            writer.dispose();
         }
         return out.toByteArray();
     }

@@ -1,9 +1,6 @@
 package org.spanlift.cli.sweep;
 
-import java.io.BufferedReader;
-import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -12,13 +9,14 @@ import java.util.List;
 import java.util.Map;
 import java.util.PriorityQueue;
 
-import org.spanlift.cli.options.OutputOptions;
+import org.spanlift.cli.options.OutputTarget;
 import org.spanlift.input.InputException;
 
 /**
- * Reads a finished results file once, streaming: counts its cases, failures and feasible cases, and keeps
- * the best {@code keep} rows by the ranking column (successful, feasible where there are constraints, with
- * a value), ties in case order. The ranked summary has the results' columns after a {@code rank} column.
+ * Tallies a results file's rows as they are written or read back: counts the cases, failures and feasible
+ * cases, and keeps the best {@code keep} rows by the ranking column (successful, feasible where there are
+ * constraints, with a value), ties in case order. The ranked summary has the results' columns after a
+ * {@code rank} column.
  */
 public final class Ranker {
 
@@ -29,60 +27,72 @@ public final class Ranker {
     private record Candidate(double value, long index, String line) {
     }
 
-    private Ranker() {
+    private final String rankBy;
+    private final boolean constrained;
+    private final int keep;
+    private final Comparator<Candidate> better;
+    private final PriorityQueue<Candidate> best;
+    private long cases;
+    private long failed;
+    private long feasible;
+
+    /**
+     * @param names        the results' columns
+     * @param rankBy       the column to rank by, or null for counting only
+     * @param highestFirst the order
+     */
+    public Ranker(List<String> names, String rankBy, boolean highestFirst, int keep) {
+        this.rankBy = rankBy;
+        this.constrained = names.contains("feasible");
+        this.keep = keep;
+        Comparator<Candidate> order = Comparator.comparingDouble(Candidate::value);
+        if (highestFirst) {
+            order = order.reversed();
+        }
+        this.better = order.thenComparingLong(Candidate::index);
+        this.best = new PriorityQueue<>(better.reversed());
     }
 
     /**
-     * @param rankBy      the column to rank by, or null for counting only
-     * @param highestFirst the order
+     * Counts one row (its cells by column, as {@link RowFormat#parse} gives them) and keeps it if it ranks.
+     *
+     * @param line the row as written, without its line end
+     * @param file the file and line the row comes from, for a message about a bad ranking value
      */
-    public static Tally scan(Path results, RowFormat format, List<String> names, String rankBy, boolean highestFirst,
-            int keep) {
-        boolean constrained = names.contains("feasible");
-        Comparator<Candidate> better = Comparator.comparingDouble(Candidate::value);
-        if (highestFirst) {
-            better = better.reversed();
+    public void add(Map<String, String> row, String line, String file, int lineNumber) {
+        cases++;
+        if (row.get("error") != null) {
+            failed++;
+            return;
         }
-        better = better.thenComparingLong(Candidate::index);
-        PriorityQueue<Candidate> best = new PriorityQueue<>(better.reversed());
-        long cases = 0;
-        long failed = 0;
-        long feasible = 0;
-        try (BufferedReader r = Files.newBufferedReader(results, StandardCharsets.UTF_8)) {
-            if (format.header(names) != null) {
-                r.readLine();
-            }
-            String line;
-            while ((line = r.readLine()) != null) {
-                Map<String, String> row;
-                try {
-                    row = format.parse(names, line);
-                } catch (IllegalArgumentException e) {
-                    throw new InputException(results.toString(), 0, "", "a row cannot be read (" + e.getMessage() + ")");
-                }
-                cases++;
-                if (row.get("error") != null) {
-                    failed++;
-                    continue;
-                }
-                boolean ok = !constrained || "true".equals(row.get("feasible"));
-                if (constrained && ok) {
-                    feasible++;
-                }
-                if (rankBy == null || !ok || row.get(rankBy) == null) {
-                    continue;
-                }
-                Candidate c = new Candidate(Double.parseDouble(row.get(rankBy)), Long.parseLong(row.get("case")), line);
-                if (best.size() < keep) {
-                    best.add(c);
-                } else if (better.compare(c, best.peek()) < 0) {
-                    best.poll();
-                    best.add(c);
-                }
-            }
-        } catch (IOException e) {
-            throw new InputException(results.toString(), 0, "", "cannot read the results (" + e.getMessage() + ")");
+        boolean ok = !constrained || "true".equals(row.get("feasible"));
+        if (constrained && ok) {
+            feasible++;
         }
+        String cell = rankBy == null ? null : row.get(rankBy);
+        if (!ok || cell == null) {
+            return;
+        }
+        double value;
+        try {
+            value = Double.parseDouble(cell);
+        } catch (NumberFormatException e) {
+            value = Double.NaN;
+        }
+        if (!Double.isFinite(value)) {
+            throw new InputException(file, lineNumber, rankBy, "expected a finite number to rank by, got '" + cell + "'");
+        }
+        Candidate c = new Candidate(value, Long.parseLong(row.get("case")), line);
+        if (best.size() < keep) {
+            best.add(c);
+        } else if (better.compare(c, best.peek()) < 0) {
+            best.poll();
+            best.add(c);
+        }
+    }
+
+    /** The counts so far and the best rows, best first. */
+    public Tally tally() {
         Candidate[] sorted = best.toArray(new Candidate[0]);
         Arrays.sort(sorted, better);
         List<String> lines = new ArrayList<>();
@@ -97,7 +107,7 @@ public final class Ranker {
         return Manifest.beside(results, ".ranked" + format.extension());
     }
 
-    /** Writes the ranked summary atomically. */
+    /** Writes the ranked summary beside the results (whole or not at all). */
     public static Path write(Path results, RowFormat format, List<String> names, List<String> ranked) {
         StringBuilder b = new StringBuilder();
         if (format == RowFormat.CSV) {
@@ -112,7 +122,7 @@ public final class Ranker {
             }
         }
         Path p = pathFor(results, format);
-        OutputOptions.writeAtomically(p, b.toString().getBytes(StandardCharsets.UTF_8));
+        OutputTarget.resolve("ranked summary", p).write(b.toString().getBytes(StandardCharsets.UTF_8));
         return p;
     }
 }

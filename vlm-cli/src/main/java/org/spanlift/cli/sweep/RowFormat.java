@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.regex.Pattern;
 
+import org.spanlift.cli.output.Csv;
 import org.spanlift.cli.output.Json;
 import org.spanlift.batch.CaseResult;
 import org.spanlift.sweep.ResultColumn;
@@ -16,8 +17,10 @@ import org.spanlift.sweep.Sweep;
  * How sweep rows are written and read back: CSV (a header line, then one line per case) or JSON Lines (one
  * flat object per case). Columns: {@code case} (index from 0 in the whole design), {@code id}, the parameter
  * paths, the result columns, {@code feasible} (with constraints) and {@code error}. Numbers are written in
- * full precision (Java's shortest round-trip form); an absent value is an empty cell or null. Every row is
- * one line, so a row is complete exactly when its newline is there.
+ * full precision (Java's shortest round-trip form); an absent value is an empty cell or null. A row ends
+ * with a line feed: in JSON Lines every row is one line; in CSV a text cell holding a comma, a quote or a
+ * line break is quoted (RFC 4180), so a row is complete when its line feed outside quotes is there
+ * ({@link RowReader}).
  */
 public enum RowFormat {
     CSV, JSONL;
@@ -128,10 +131,7 @@ public enum RowFormat {
     }
 
     private static String csvText(String s) {
-        if (s.contains(",") || s.contains("\"") || s.contains("\n") || s.contains("\r")) {
-            return '"' + s.replace("\"", "\"\"").replace('\n', ' ').replace('\r', ' ') + '"';
-        }
-        return s;
+        return Csv.text(s);
     }
 
     private static void jsonCell(Object v, StringBuilder b) {
@@ -158,69 +158,21 @@ public enum RowFormat {
      * else is the cell's text (a JSON string unescaped, a number or boolean as written).
      */
     public Map<String, String> parse(List<String> names, String line) {
-        List<String> cells = this == CSV ? splitCsv(line) : null;
         Map<String, String> out = new LinkedHashMap<>();
         if (this == CSV) {
+            List<String> cells = Csv.cells(line);
             if (cells.size() != names.size()) {
-                throw new IllegalArgumentException("a row has " + cells.size() + " cells, the header " + names.size());
+                throw new IllegalArgumentException("the row has " + cells.size() + " cells, the header " + names.size());
             }
             for (int i = 0; i < names.size(); i++) {
                 out.put(names.get(i), cells.get(i).isEmpty() ? null : cells.get(i));
             }
             return out;
         }
-        return FlatJson.parse(line);
-    }
-
-    /** The case index at the start of a row, read without parsing the rest. */
-    public long caseIndex(String line) {
-        int start;
-        if (this == CSV) {
-            start = 0;
-        } else {
-            String prefix = "{\"case\":";
-            if (!line.startsWith(prefix)) {
-                throw new IllegalArgumentException("a row does not start with its case");
-            }
-            start = prefix.length();
+        out = FlatJson.parse(line);
+        if (!List.copyOf(out.keySet()).equals(names)) {
+            throw new IllegalArgumentException("the row's keys are not the sweep's columns in order");
         }
-        int end = start;
-        while (end < line.length() && Character.isDigit(line.charAt(end))) {
-            end++;
-        }
-        if (end == start) {
-            throw new IllegalArgumentException("a row does not start with its case");
-        }
-        return Long.parseLong(line.substring(start, end));
-    }
-
-    private static List<String> splitCsv(String line) {
-        List<String> out = new ArrayList<>();
-        StringBuilder cell = new StringBuilder();
-        boolean quoted = false;
-        for (int i = 0; i < line.length(); i++) {
-            char c = line.charAt(i);
-            if (quoted) {
-                if (c == '"') {
-                    if (i + 1 < line.length() && line.charAt(i + 1) == '"') {
-                        cell.append('"');
-                        i++;
-                    } else {
-                        quoted = false;
-                    }
-                } else {
-                    cell.append(c);
-                }
-            } else if (c == '"') {
-                quoted = true;
-            } else if (c == ',') {
-                out.add(cell.toString());
-                cell.setLength(0);
-            } else {
-                cell.append(c);
-            }
-        }
-        out.add(cell.toString());
         return out;
     }
 }

@@ -25,7 +25,7 @@ class OutputFileTest {
         assumeTrue(FileSystems.getDefault().supportedFileAttributeViews().contains("posix"), "POSIX permissions");
         Path plain = Files.createFile(dir.resolve("plain.txt"));
         Path written = dir.resolve("written.txt");
-        OutputOptions.writeAtomically(written, "x".getBytes(StandardCharsets.UTF_8));
+        OutputTarget.resolve("--output", written).write("x".getBytes(StandardCharsets.UTF_8));
         assertEquals(Files.getPosixFilePermissions(plain), Files.getPosixFilePermissions(written));
     }
 
@@ -33,7 +33,7 @@ class OutputFileTest {
     void replacingAFileLeavesOnlyTheNewContentAndNoTemporaryFile() throws IOException {
         Path out = dir.resolve("out.csv");
         Files.writeString(out, "old");
-        OutputOptions.writeAtomically(out, "new".getBytes(StandardCharsets.UTF_8));
+        OutputTarget.resolve("--output", out).write("new".getBytes(StandardCharsets.UTF_8));
         assertArrayEquals("new".getBytes(StandardCharsets.UTF_8), Files.readAllBytes(out));
         try (Stream<Path> files = Files.list(dir)) {
             assertEquals(List.of(out), files.toList());

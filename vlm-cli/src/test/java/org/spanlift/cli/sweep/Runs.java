@@ -9,9 +9,9 @@ import java.nio.file.Path;
 import org.spanlift.cli.CliRun;
 
 /** In-process runs of the command line, and the files of the test scenarios (invented wings). */
-final class Runs {
+public final class Runs {
 
-    static final String WING = """
+    public static final String WING = """
             name: Test trapezoid
             units: m
             surfaces:
@@ -27,7 +27,7 @@ final class Runs {
             """;
 
     /** A sweep of 6 x 7 = 42 cases; taper 0.0 fails (zero tip chord is accepted, so use a negative span). */
-    static final String SWEEP = """
+    public static final String SWEEP = """
             base: w.wing.yaml
             parameters:
               surfaces.wing.trapezoid.taper: {from: 0.5, to: 1.0, step: 0.1}
@@ -42,11 +42,11 @@ final class Runs {
     private Runs() {
     }
 
-    static CliRun of(String... args) {
+    public static CliRun of(String... args) {
         return CliRun.of(args);
     }
 
-    static Path write(Path dir, String name, String text) {
+    public static Path write(Path dir, String name, String text) {
         try {
             Path p = dir.resolve(name);
             Files.writeString(p, text, StandardCharsets.UTF_8);
@@ -56,7 +56,7 @@ final class Runs {
         }
     }
 
-    static String read(Path p) {
+    public static String read(Path p) {
         try {
             return Files.readString(p, StandardCharsets.UTF_8);
         } catch (IOException e) {
@@ -64,8 +64,23 @@ final class Runs {
         }
     }
 
+    /** Copies a test resource ({@code /hostile/NAME} on the class path) into the folder under its own name. */
+    public static Path resource(Path dir, String name) {
+        String where = "/hostile/" + name;
+        try (var in = Runs.class.getResourceAsStream(where)) {
+            if (in == null) {
+                throw new IllegalStateException("no test resource " + where);
+            }
+            Path p = dir.resolve(Path.of(name).getFileName().toString());
+            Files.write(p, in.readAllBytes());
+            return p;
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
     /** Writes the test wing and a sweep; returns the sweep file. */
-    static Path scenario(Path dir, String sweep) {
+    public static Path scenario(Path dir, String sweep) {
         write(dir, "w.wing.yaml", WING);
         return write(dir, "s.sweep.yaml", sweep);
     }

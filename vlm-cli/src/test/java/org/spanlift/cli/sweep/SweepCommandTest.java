@@ -162,7 +162,7 @@ class SweepCommandTest {
             assertEquals(1, r.err().lines().count(), r.err());
             assertTrue(r.err().contains(c[2]), r.err());
             assertFalse(Files.exists(out));
-            assertFalse(Files.exists(dir.resolve("never.manifest.json")));
+            assertFalse(Files.exists(Manifest.pathFor(out)));
         }
         Runs.scenario(dir, Runs.SWEEP);
         Runs.write(dir, "w.wing.yaml", Runs.WING.replace(", cl-max: 1.45", ""));
