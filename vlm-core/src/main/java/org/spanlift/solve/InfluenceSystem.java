@@ -50,6 +50,7 @@ public final class InfluenceSystem {
 
     /** Assembles and factorizes the system of the given symmetry. */
     public static InfluenceSystem of(Lattice lattice, Symmetry symmetry) {
+        SolveBudget.require(symmetry == Symmetry.FULL ? lattice.panelCount() : lattice.halfCount(), 1);
         return new InfluenceSystem(symmetry, assemble(lattice, symmetry));
     }
 
@@ -66,6 +67,7 @@ public final class InfluenceSystem {
             throw new IllegalArgumentException("a symmetric pair of systems needs a mirrored lattice");
         }
         int n = lattice.halfCount();
+        SolveBudget.require(n, 2);
         DMatrixRMaj sym = new DMatrixRMaj(n, n);
         DMatrixRMaj anti = new DMatrixRMaj(n, n);
         double[] row = new double[lattice.panelCount()];
