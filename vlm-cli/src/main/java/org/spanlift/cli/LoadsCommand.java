@@ -34,9 +34,8 @@ import org.spanlift.geometry.LengthUnit;
 import org.spanlift.geometry.Wing;
 import org.spanlift.input.InputException;
 import org.spanlift.io.WingFileReader;
-import org.spanlift.input.quantity.Quantity;
+import org.spanlift.input.quantity.PhysicalRange;
 import org.spanlift.input.quantity.QuantityFormatException;
-import org.spanlift.input.quantity.QuantityKind;
 import org.spanlift.io.CasesReader;
 import org.spanlift.loads.Envelope;
 import org.spanlift.io.EnvelopeReader;
@@ -181,12 +180,9 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         if (wingMass != null) {
             double m;
             try {
-                m = Quantity.parse(wingMass, QuantityKind.MASS).value();
+                m = PhysicalRange.MASS.parse(wingMass);
             } catch (QuantityFormatException e) {
                 throw new InputException("--wing-mass", 0, "", e.getMessage());
-            }
-            if (m < 0) {
-                throw new InputException("--wing-mass", 0, "", "a mass must not be negative, got " + wingMass);
             }
             structure = structure.withWingMass(m);
         }

@@ -1,6 +1,9 @@
 package org.spanlift.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OutputOptions;
@@ -33,7 +36,7 @@ public final class SpanliftCommand implements Runnable {
 
     @Override
     public void run() {
-        throw new CommandLine.ParameterException(spec.commandLine(), "a command is required (see --help)");
+        throw new CommandLine.ParameterException(spec.commandLine(), "a command is required");
     }
 
     /** A configured command line (used by {@link #main} and by tests). */
@@ -52,28 +55,85 @@ public final class SpanliftCommand implements Runnable {
                 return EXIT_BAD_INPUT;
             }
             if (e instanceof SingularSystemException) {
-                err.println("spanlift: cannot solve this geometry: " + e.getMessage());
+                err.println("spanlift: " + inputFile(parse) + "cannot solve this geometry: " + e.getMessage());
                 return EXIT_BAD_INPUT;
             }
             if (e instanceof RefusedException) {
-                err.println("spanlift: " + e.getMessage());
+                err.println("spanlift: " + inputFile(parse) + e.getMessage());
                 return EXIT_BAD_INPUT;
             }
-            err.println("spanlift: internal error (" + e.getClass().getSimpleName()
-                    + (e.getMessage() == null ? "" : ": " + e.getMessage()) + "); please report it");
-            return EXIT_INTERNAL;
+            if (e.getCause() instanceof Error error) {
+                return internalError(error, err);
+            }
+            return internalError(e, err);
         });
         cl.setParameterExceptionHandler((e, args) -> {
             PrintWriter err = e.getCommandLine().getErr();
-            err.println("spanlift: " + e.getMessage().lines().findFirst().orElse("bad usage"));
-            err.println("Try '" + e.getCommandLine().getCommandSpec().qualifiedName() + " --help'.");
+            err.println(InputException.oneLine("spanlift: " + e.getMessage().lines().findFirst().orElse("bad usage")
+                    + " (see '" + e.getCommandLine().getCommandSpec().qualifiedName() + " --help')"));
             return EXIT_BAD_INPUT;
+        });
+        // picocli hands only Exceptions to the handler above; an Error (out of memory, say) would escape with
+        // a stack trace. Caught here, it ends the run like any other bug: one line, exit code 3.
+        CommandLine.IExecutionStrategy run = new CommandLine.RunLast();
+        cl.setExecutionStrategy(parse -> {
+            try {
+                return run.execute(parse);
+            } catch (Error e) {
+                return internalError(e, parse.commandSpec().commandLine().getErr());
+            }
         });
         return cl;
     }
 
+    /**
+     * Reports a bug in one line and returns {@link #EXIT_INTERNAL}. Running out of memory is named as such:
+     * the inputs are checked against limits that should prevent it.
+     */
+    static int internalError(Throwable e, PrintWriter err) {
+        if (e instanceof OutOfMemoryError) {
+            err.println(InputException.oneLine("spanlift: internal error: ran out of memory" + (e.getMessage() == null
+                    ? "" : " (" + e.getMessage() + ")") + "; please report it, with the input that caused it"));
+        } else {
+            err.println(InputException.oneLine("spanlift: internal error (" + e.getClass().getSimpleName()
+                    + (e.getMessage() == null ? "" : ": " + firstLine(e.getMessage())) + "); please report it"));
+        }
+        err.flush();
+        return EXIT_INTERNAL;
+    }
+
+    private static String firstLine(String s) {
+        return s.lines().findFirst().orElse("");
+    }
+
+    /**
+     * The input file of the command that ran, as {@code "FILE: "}, for a refusal that comes from the engine
+     * without a file name; empty when the command did not take exactly one file.
+     */
+    private static String inputFile(CommandLine.ParseResult parse) {
+        CommandLine.ParseResult last = parse;
+        while (last.hasSubcommand()) {
+            last = last.subcommand();
+        }
+        List<Path> files = new ArrayList<>();
+        for (CommandLine.Model.PositionalParamSpec p : last.matchedPositionals()) {
+            Object value = p.getValue();
+            if (value instanceof Path path) {
+                files.add(path);
+            }
+        }
+        return files.size() == 1 ? files.get(0) + ": " : "";
+    }
+
     public static void main(String[] args) {
         System.setProperty("java.awt.headless", "true");
-        System.exit(commandLine().execute(args));
+        int code;
+        try {
+            code = commandLine().execute(args);
+        } catch (Error e) {
+            // Beyond the execution strategy's reach (while the command line was being parsed, say).
+            code = internalError(e, new PrintWriter(System.err, true));
+        }
+        System.exit(code);
     }
 }

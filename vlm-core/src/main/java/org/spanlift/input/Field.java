@@ -1,12 +1,15 @@
 package org.spanlift.input;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
-import java.util.regex.Pattern;
 
+import org.spanlift.input.quantity.Decimal;
+import org.spanlift.input.quantity.PhysicalRange;
 import org.spanlift.input.quantity.Quantity;
 import org.spanlift.input.quantity.QuantityFormatException;
 import org.spanlift.input.quantity.QuantityKind;
@@ -16,11 +19,6 @@ import org.spanlift.input.quantity.QuantityKind;
  * that fail with an {@link InputException} naming that place and what was expected.
  */
 public final class Field {
-
-    private static final Pattern NON_FINITE = Pattern.compile("[-+]?(\\.?nan|\\.?inf|infinity)",
-            Pattern.CASE_INSENSITIVE);
-    /** A decimal number as written in a file: no hexadecimal, no type suffix, no digit separators. */
-    private static final Pattern DECIMAL = Pattern.compile("[-+]?([0-9]+(\\.[0-9]*)?|\\.[0-9]+)([eE][-+]?[0-9]+)?");
 
     private final String file;
     private final String path;
@@ -68,9 +66,17 @@ public final class Field {
         return path.isEmpty() ? key : path + "." + key;
     }
 
+    /**
+     * The value as a mapping. A whole document that is not a mapping is refused without showing any of its
+     * text: it may be any file at all, and its content is not for a message to echo.
+     */
     public YamlValue.Mapping mapping() {
         if (value instanceof YamlValue.Mapping m) {
             return m;
+        }
+        if (path.isEmpty() && value instanceof YamlValue.Scalar) {
+            throw error("the file holds plain text rather than keys with values; expected a mapping of keys (is "
+                    + "this the right file?)");
         }
         throw error("expected a mapping of keys, got " + value.describe());
     }
@@ -151,25 +157,27 @@ public final class Field {
         throw error("expected a text value, got " + value.describe());
     }
 
-    /** A finite number. */
+    /**
+     * A finite number, in the one syntax of every file ({@link Decimal}: a decimal number with an exponent
+     * of at most three digits; no hexadecimal, type suffix or digit separator).
+     */
     public double number() {
         if (!(value instanceof YamlValue.Scalar s) || s.isNull()) {
             throw error("expected a number, got " + value.describe());
         }
         String t = s.text().trim();
-        if (NON_FINITE.matcher(t).matches()) {
-            throw error("expected a finite number, got " + t);
-        }
+        Optional<String> problem = Decimal.problem(t);
         if (!s.plain()) {
             throw error("expected a number, got " + s.describe()
-                    + (DECIMAL.matcher(t).matches() ? "; write numbers without quotes" : ""));
+                    + (problem.isEmpty() ? "; write numbers without quotes" : ""));
         }
-        if (!DECIMAL.matcher(t).matches()) {
-            throw error("expected a decimal number (such as 1.25 or 3e-2), got " + s.describe());
+        if (problem.isPresent()) {
+            // A word for infinity or NaN is shown as written; anything else as the file has it, cut short.
+            throw error(problem.get() + ", got " + (problem.get().equals(Decimal.NOT_FINITE) ? t : s.describe()));
         }
         double d = Double.parseDouble(t);
         if (!Double.isFinite(d)) {
-            throw error("expected a finite number, got " + t);
+            throw error("expected a finite number, got " + t + " (beyond the range of numbers, about 1.8e308)");
         }
         return d;
     }
@@ -219,7 +227,7 @@ public final class Field {
     public String choice(List<String> words) {
         String t = text().trim().toLowerCase(Locale.ROOT);
         if (!words.contains(t)) {
-            throw error("expected one of " + String.join(", ", words) + ", got '" + text() + "'");
+            throw error("expected one of " + String.join(", ", words) + ", got '" + shown(text()) + "'");
         }
         return t;
     }
@@ -251,7 +259,21 @@ public final class Field {
     }
 
     /**
-     * A weight: a force (N, kN, kgf, lbf, lb) or a mass (kg, g) under standard gravity; positive, newtons.
+     * A quantity within its physical range ({@code 102kt}, {@code 40kg}), in SI.
+     *
+     * @throws InputException at this field, with the units accepted or the range
+     */
+    public double quantity(PhysicalRange range) {
+        try {
+            return range.parse(text());
+        } catch (QuantityFormatException e) {
+            throw error(e.getMessage());
+        }
+    }
+
+    /**
+     * A weight: a force (N, kN, kgf, lbf, lb) or a mass (kg, g) under standard gravity; newtons, within
+     * {@link PhysicalRange#WEIGHT}.
      *
      * @throws InputException at this field
      */
@@ -261,6 +283,34 @@ public final class Field {
         } catch (QuantityFormatException e) {
             throw error(e.getMessage());
         }
+    }
+
+    /**
+     * A number for a message, short whatever its size: four significant digits at most, plain from 1e-4 to
+     * 1e7 ({@code 0.003281}, {@code 4.9}), with an exponent beyond, in the files' own syntax ({@code 1e200},
+     * {@code 4.941e-324}).
+     */
+    public static String brief(double d) {
+        if (!Double.isFinite(d)) {
+            return String.valueOf(d);
+        }
+        if (d == 0) {
+            return "0";
+        }
+        double a = Math.abs(d);
+        if (a >= 1e-4 && a < 1e7) {
+            return new BigDecimal(d).round(new MathContext(4)).stripTrailingZeros().toPlainString();
+        }
+        String[] parts = String.format(Locale.ROOT, "%.3e", d).split("e");
+        String mantissa = parts[0].replaceAll("0+$", "").replaceAll("\\.$", "");
+        return mantissa + "e" + Integer.parseInt(parts[1]);
+    }
+
+    /**
+     * Text of a file for a message, cut short: at most 40 characters, the rest replaced by an ellipsis.
+     */
+    public static String shown(String text) {
+        return text.length() > 40 ? text.substring(0, 37) + "..." : text;
     }
 
     public static String format(double d) {

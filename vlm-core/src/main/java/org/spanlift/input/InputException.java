@@ -10,6 +10,9 @@ public class InputException extends RuntimeException {
 
     private static final long serialVersionUID = 1L;
 
+    /** The longest field path a message shows; a longer one (a key of a file's own making) is cut short. */
+    private static final int MAX_FIELD = 120;
+
     private final String file;
     private final int line;
     private final String field;
@@ -30,7 +33,7 @@ public class InputException extends RuntimeException {
         }
         b.append(": ");
         if (field != null && !field.isEmpty()) {
-            b.append(field).append(": ");
+            b.append(field.length() > MAX_FIELD ? field.substring(0, MAX_FIELD - 3) + "..." : field).append(": ");
         }
         return oneLine(b.append(problem).toString());
     }

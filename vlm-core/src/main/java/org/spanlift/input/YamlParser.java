@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.Deque;
 import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
@@ -18,6 +19,7 @@ import org.snakeyaml.engine.v2.events.Event;
 import org.snakeyaml.engine.v2.events.NodeEvent;
 import org.snakeyaml.engine.v2.exceptions.Mark;
 import org.snakeyaml.engine.v2.exceptions.MarkedYamlEngineException;
+import org.snakeyaml.engine.v2.exceptions.ReaderException;
 import org.snakeyaml.engine.v2.exceptions.YamlEngineException;
 import org.snakeyaml.engine.v2.nodes.MappingNode;
 import org.snakeyaml.engine.v2.nodes.Node;
@@ -29,64 +31,133 @@ import org.snakeyaml.engine.v2.nodes.Tag;
 /**
  * Reads YAML text into a {@link YamlValue} tree with line marks. Safe: only the node graph is composed (no
  * object construction); explicit tags other than the standard scalar, list and mapping ones are refused;
- * duplicate keys are refused; nesting deeper than {@link #MAX_DEPTH} and aliases that refer to a list or
- * mapping from inside it are refused before the node graph is built.
+ * duplicate keys are refused. Before the node graph is built, one pass over the parser's events refuses
+ * nesting deeper than {@link #MAX_DEPTH}, aliases that refer to a list or mapping from inside it, more than
+ * {@link #MAX_ALIASES} aliases, and a document whose tree, with every alias expanded, would hold more than
+ * {@link #MAX_NODES} values: a few hundred bytes of nested aliases can otherwise stand for billions of
+ * values. Each refusal names the line where the limit is passed.
  */
 public final class YamlParser {
 
     private static final Set<Tag> STANDARD_TAGS = Set.of(Tag.STR, Tag.INT, Tag.FLOAT, Tag.BOOL, Tag.NULL, Tag.MAP,
             Tag.SEQ);
-    private static final int MAX_CODE_POINTS = 8 * 1024 * 1024;
+    /** The longest text parsed, in characters: as long as the longest file {@link TextFile} reads. */
+    public static final int MAX_CHARACTERS = TextFile.MAX_BYTES;
 
     /** Deepest nesting of lists and mappings accepted (a wing file needs five levels). */
     public static final int MAX_DEPTH = 32;
+
+    /** Most aliases ({@code *name}) in one document. */
+    public static final int MAX_ALIASES = 50;
+
+    /**
+     * Most values (scalars, lists and mappings, keys included) in the tree of one document with every alias
+     * expanded: a wing of 400 stations with measured section tables holds a few thousand.
+     */
+    public static final int MAX_NODES = 100_000;
+
+    /** What a wing file is expected to hold, for messages about a document that holds nothing. */
+    private static final String WING = "a wing description (a mapping with at least 'units' and 'surfaces')";
 
     private YamlParser() {
     }
 
     /**
-     * Parses one YAML document.
+     * Parses one YAML document of a wing file.
      *
      * @param file the file name for messages
      * @throws InputException for a syntax error, an empty document, a tag, a duplicate key, too deep a
-     *         nesting or a self-referring alias
+     *         nesting, a self-referring alias, too many aliases or too large an expanded tree
      */
     public static YamlValue parse(String text, String file) {
-        LoadSettings settings = LoadSettings.builder().setLabel(file).setCodePointLimit(MAX_CODE_POINTS)
-                .setMaxAliasesForCollections(50).build();
+        return parse(text, file, WING);
+    }
+
+    /**
+     * Parses one YAML document.
+     *
+     * @param file     the file name for messages
+     * @param expected what the document should hold, for the message about an empty one ({@code "a list of
+     *                 load cases under 'cases'"})
+     * @throws InputException for a syntax error, an empty document, a tag, a duplicate key, too deep a
+     *         nesting, a self-referring alias, too many aliases or too large an expanded tree
+     */
+    public static YamlValue parse(String text, String file, String expected) {
+        if (text.length() > MAX_CHARACTERS) {
+            throw new InputException(file, lineOf(text, MAX_CHARACTERS), "", "the text goes on past "
+                    + MAX_CHARACTERS + " characters (the limit is reached on this line); expected at most "
+                    + MAX_CHARACTERS);
+        }
+        LoadSettings settings = LoadSettings.builder().setLabel(file).setCodePointLimit(MAX_CHARACTERS + 1)
+                .setMaxAliasesForCollections(MAX_ALIASES).build();
         Optional<Node> root;
         try {
             checkStructure(new Parse(settings).parseString(text), file);
             root = new Compose(settings).composeString(text);
         } catch (MarkedYamlEngineException e) {
             throw syntaxError(e, text, file);
+        } catch (ReaderException e) {
+            throw new InputException(file, lineOf(text, e.getPosition()), "", String.format(Locale.ROOT,
+                    "a character U+%04X that YAML does not allow; expected printable text", e.getCodePoint()));
         } catch (YamlEngineException e) {
             throw new InputException(file, 0, "", "not valid YAML: " + firstLine(e.getMessage())
-                    + "; expected a YAML mapping of wing keys");
+                    + "; expected " + expected);
         }
         if (root.isEmpty()) {
             throw new InputException(file, 1, "", (text.isBlank() ? "the file is empty" : "the file holds only comments")
-                    + "; expected a wing description (a mapping with at least 'units' and 'surfaces')");
+                    + "; expected " + expected);
         }
         return convert(root.get(), file, "");
     }
 
+    /** The 1-based line of the character at {@code index} (CR LF counts as one line break). */
+    private static int lineOf(String text, int index) {
+        int line = 1;
+        for (int i = 0; i < index && i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c == '\n' || (c == '\r' && (i + 1 >= text.length() || text.charAt(i + 1) != '\n'))) {
+                line++;
+            }
+        }
+        return line;
+    }
+
     /**
-     * Walks the event stream (no recursion, so any depth is safe) and refuses too deep a nesting and an
-     * alias to a list or mapping that is still open (which would make the tree contain itself).
+     * Walks the event stream (no recursion, so any depth is safe) and refuses too deep a nesting, an alias to
+     * a list or mapping that is still open (which would make the tree contain itself), too many aliases, and
+     * a tree that would grow past {@link #MAX_NODES} values once its aliases are expanded. The expanded size
+     * is counted as the events go by: each scalar, list and mapping counts one, each alias the size of what
+     * its anchor names, so the count stays exact and the pass stops at the first value past the limit.
      */
     private static void checkStructure(Iterable<Event> events, String file) {
         Deque<Optional<Anchor>> open = new ArrayDeque<>();
+        Deque<Long> openedAt = new ArrayDeque<>();
+        Map<Anchor, Long> sizes = new HashMap<>();
+        long nodes = 0;
+        int aliases = 0;
         for (Event e : events) {
+            long before = nodes;
             switch (e.getEventId()) {
                 case SequenceStart, MappingStart -> {
                     open.push(((NodeEvent) e).getAnchor());
+                    openedAt.push(nodes);
+                    nodes++;
                     if (open.size() > MAX_DEPTH) {
                         throw new InputException(file, line(e.getStartMark()), "", "lists and mappings nested "
                                 + open.size() + " deep; expected at most " + MAX_DEPTH + " levels");
                     }
                 }
-                case SequenceEnd, MappingEnd -> open.pop();
+                case SequenceEnd, MappingEnd -> {
+                    Optional<Anchor> anchor = open.pop();
+                    long start = openedAt.pop();
+                    if (anchor.isPresent()) {
+                        sizes.put(anchor.get(), nodes - start);
+                    }
+                }
+                case Scalar -> {
+                    nodes++;
+                    ((NodeEvent) e).getAnchor().ifPresent(a -> sizes.put(a, 1L));
+                }
                 case Alias -> {
                     Anchor a = ((AliasEvent) e).getAlias();
                     if (open.stream().anyMatch(o -> o.isPresent() && o.get().equals(a))) {
@@ -94,9 +165,21 @@ public final class YamlParser {
                                 + " refers to the list or mapping that contains it; expected a value that does "
                                 + "not contain itself");
                     }
+                    if (++aliases > MAX_ALIASES) {
+                        throw new InputException(file, line(e.getStartMark()), "", "more than " + MAX_ALIASES
+                                + " aliases (*name); expected at most " + MAX_ALIASES + ", or the values written out");
+                    }
+                    // An alias to an anchor not yet defined is left for the composer to refuse.
+                    nodes += sizes.getOrDefault(a, 1L);
                 }
                 default -> {
                 }
+            }
+            if (nodes > MAX_NODES) {
+                throw new InputException(file, line(e.getStartMark()), "", (nodes - before > 1
+                        ? "with its aliases expanded, the document grows past " + MAX_NODES + " values here"
+                        : "the document holds more than " + MAX_NODES + " values")
+                        + "; expected at most " + MAX_NODES + " values, aliases expanded");
             }
         }
     }
@@ -108,6 +191,15 @@ public final class YamlParser {
         if (problem.contains("(TAB)")) {
             return new InputException(file, line, "", "a tab character where YAML expects indentation or a value; "
                     + "expected spaces (YAML is indented with spaces, never tabs)");
+        }
+        if (problem.startsWith("found undefined alias ")) {
+            String name = Field.shown(problem.substring("found undefined alias ".length()).trim());
+            return new InputException(file, Math.min(line, last), "", "the alias *" + name + " names no anchor; "
+                    + "expected an anchor &" + name + " given earlier in the file");
+        }
+        if (problem.startsWith("but found another document")) {
+            return new InputException(file, Math.min(line, last), "", "a second document starts here (after ---); "
+                    + "expected a single document");
         }
         if (line > last && e.getContextMark().isPresent()) {
             // The file ended inside something left open: point at where that began.

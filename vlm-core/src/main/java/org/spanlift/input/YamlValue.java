@@ -22,7 +22,7 @@ public sealed interface YamlValue permits YamlValue.Scalar, YamlValue.Mapping, Y
     record Scalar(String text, boolean plain, int line) implements YamlValue {
         @Override
         public String describe() {
-            String shown = text.length() > 40 ? text.substring(0, 37) + "..." : text;
+            String shown = Field.shown(text);
             return plain ? "'" + shown + "'" : "the quoted text \"" + shown + "\"";
         }
 

@@ -48,7 +48,7 @@ public final class CasesReader {
     }
 
     public static List<LoadCase> parse(String text, String file) {
-        YamlValue tree = YamlParser.parse(text, file);
+        YamlValue tree = YamlParser.parse(text, file, "a list of load cases under the key cases");
         Field root = new Field(file, "", tree);
         root.mapping();
         root.allowOnly(TOP_KEYS);

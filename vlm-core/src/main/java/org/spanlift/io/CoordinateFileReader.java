@@ -4,11 +4,13 @@ import org.spanlift.section.CoordinateMeanLine;
 import org.spanlift.section.CubicSpline;
 import org.spanlift.input.InputException;
 import org.spanlift.input.TextFile;
+import org.spanlift.input.quantity.Decimal;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
+import java.util.regex.Pattern;
 
 /**
  * Reads a plain two-column x/y airfoil coordinate file and extracts its mean line.
@@ -34,12 +36,16 @@ public final class CoordinateFileReader {
     static final double X_MAX = 1.1;
     /** Accepted raw |y|, in chords. */
     static final double Y_LIMIT = 0.5;
+    /** The longest section name accepted on the first line. */
+    static final int MAX_NAME = 100;
     /** A step in x larger than this (in chords) separates two surface blocks. */
     static final double BLOCK_JUMP = 0.5;
     /** Upper below lower by more than this (in chords) counts as crossing surfaces. */
     static final double CROSSING_TOLERANCE = 5e-5;
     /** Largest accepted distance between the two trailing-edge ends, in chords. */
     static final double MAX_TRAILING_EDGE_GAP = 0.1;
+
+    private static final Pattern NON_FINITE = Pattern.compile("[-+]?(?:nan|inf|infinity)", Pattern.CASE_INSENSITIVE);
 
     private static final String EXPECT_CONTOUR = "one contour round the leading edge (trailing edge, upper surface, "
             + "leading edge, lower surface, trailing edge) or two surface blocks, one per surface";
@@ -80,28 +86,34 @@ public final class CoordinateFileReader {
             }
             String[] tokens = Arrays.stream(text.split("[\\s,;]+")).filter(t -> !t.isEmpty()).toArray(String[]::new);
             double[] values = new double[tokens.length];
-            boolean numeric = true;
-            for (int k = 0; k < tokens.length; k++) {
-                try {
+            int notNumber = -1;
+            for (int k = 0; k < tokens.length && notNumber < 0; k++) {
+                if (Decimal.matches(tokens[k])) {
                     values[k] = Double.parseDouble(tokens[k]);
-                } catch (NumberFormatException e) {
-                    numeric = false;
-                    break;
+                } else if (NON_FINITE.matcher(tokens[k]).matches()) {
+                    values[k] = Double.NaN;
+                } else {
+                    notNumber = k;
                 }
             }
-            if (!numeric) {
+            if (notNumber >= 0) {
                 if (!sawContent) {
+                    if (text.length() > MAX_NAME) {
+                        throw refuse(file, lineNo, "a first line of " + text.length() + " characters that is not a "
+                                + "pair of numbers", "the section's name (at most " + MAX_NAME + " characters) or "
+                                + "two numbers x y");
+                    }
                     name = text;
                     sawContent = true;
                     continue;
                 }
-                throw refuse(file, lineNo, "'" + abbreviate(text) + "' is not a pair of numbers",
-                        "two numbers x y per line (a name is allowed on the first line only)");
+                throw refuse(file, lineNo, "value " + (notNumber + 1) + " on the line" + shown(tokens[notNumber])
+                        + " is not a number", "two decimal numbers x y per line, such as 0.25 -0.0123 (a name is "
+                        + "allowed on the first line only)");
             }
             sawContent = true;
             if (tokens.length == 1) {
-                throw refuse(file, lineNo, "only one column (" + abbreviate(tokens[0]) + ")",
-                        "two columns x y");
+                throw refuse(file, lineNo, "only one column (" + tokens[0] + ")", "two columns x y");
             }
             if (tokens.length > 2) {
                 throw refuse(file, lineNo, tokens.length + " columns", "two columns x y");
@@ -398,7 +410,11 @@ public final class CoordinateFileReader {
         }
     }
 
-    private static String abbreviate(String text) {
-        return text.length() <= 40 ? text : text.substring(0, 37) + "...";
+    /**
+     * A token for a message, quoted, only when it looks like a mistyped number (number characters, at most
+     * 20): the file may be any file given by mistake, and its words are not for a message to echo.
+     */
+    private static String shown(String token) {
+        return token.length() <= 20 && token.matches("[-+0-9.eEdDfFxXpP_]+") ? " ('" + token + "')" : "";
     }
 }

@@ -44,7 +44,8 @@ public final class EnvelopeReader {
     }
 
     public static EnvelopeSpec parse(String text, String file) {
-        YamlValue tree = YamlParser.parse(text, file);
+        YamlValue tree = YamlParser.parse(text, file,
+                "an envelope description (weight, load-factors, speeds and gusts)");
         Field root = new Field(file, "", tree);
         root.mapping();
         root.allowOnly(TOP_KEYS);

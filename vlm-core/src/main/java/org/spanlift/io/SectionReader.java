@@ -3,6 +3,7 @@ package org.spanlift.io;
 import org.spanlift.input.Field;
 import org.spanlift.input.InputException;
 import org.spanlift.input.YamlValue;
+import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -44,7 +45,13 @@ public final class SectionReader {
         }
         CamberLine camber = f.optional("camber").map(SectionReader::camber).orElseGet(() -> f.optional("camber-file").<CamberLine>map(c -> {
             Path folder = wingFile.toAbsolutePath().getParent();
-            Path coordinates = folder == null ? Path.of(c.text()) : folder.resolve(c.text());
+            Path coordinates;
+            try {
+                coordinates = (folder == null ? Path.of(c.text()) : folder.resolve(c.text())).normalize();
+            } catch (InvalidPathException e) {
+                throw c.error("not a path this system accepts (" + e.getReason() + "); expected the path of a text "
+                        + "file of x y section coordinates, relative to the wing file");
+            }
             try {
                 return CoordinateFileReader.read(coordinates);
             } catch (InputException e) {
@@ -70,13 +77,13 @@ public final class SectionReader {
         // A four-digit designation with camber but with its position digit 0 puts the highest camber at the
         // leading edge: not a defined mean line of that family.
         if (compact.matches("NACA[1-9]0\\d\\d")) {
-            throw c.error("the camber designation '" + text + "' has camber but no camber position (its second "
+            throw c.error("the camber designation '" + Field.shown(text) + "' has camber but no camber position (its second "
                     + "digit is 0); expected a position digit from 1 to 9, or 00 for a symmetric section");
         }
         try {
             return CamberLines.parse(text);
         } catch (IllegalArgumentException e) {
-            throw c.error("unknown camber designation '" + text + "'; expected " + CamberLines.ACCEPTED);
+            throw c.error("unknown camber designation '" + Field.shown(text) + "'; expected " + CamberLines.ACCEPTED);
         }
     }
 

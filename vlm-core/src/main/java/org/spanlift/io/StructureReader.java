@@ -108,6 +108,10 @@ public final class StructureReader {
         });
         List<PointMass> points = new ArrayList<>();
         f.optional("point-masses").ifPresent(list -> {
+            if (list.items().isEmpty()) {
+                throw list.error("an empty list; expected at least one point mass {name, mass, y, x}, or leave "
+                        + "point-masses out");
+            }
             for (Field pf : list.items()) {
                 pf.allowOnly(POINT_KEYS);
                 String name = pf.optional("name").map(Field::text).orElse("point mass " + (points.size() + 1));
@@ -124,7 +128,7 @@ public final class StructureReader {
                 if (hasX == hasFraction) {
                     throw pf.error("give its chordwise position as x (wing axes, aft) or chord-fraction, one of them");
                 }
-                double x = hasX ? pf.required("x", "").number() * k
+                double x = hasX ? chordwise(pf.required("x", ""), k)
                         : p.noseX(y) + pf.required("chord-fraction", "").inRange(0, 1) * p.chord(y);
                 points.add(new PointMass(name, m, x, y));
             }
@@ -132,5 +136,15 @@ public final class StructureReader {
         OptionalDouble axis = f.optional("longitudinal-axis").map(a -> OptionalDouble.of(Math.toRadians(a.inRange(-30, 30))))
                 .orElse(OptionalDouble.empty());
         return new WingStructure(spar, centre, mass, table, points, axis);
+    }
+
+    /** A point mass's x in metres, within the lengths a wing file accepts. */
+    private static double chordwise(Field f, double k) {
+        double x = f.number() * k;
+        if (!(Math.abs(x) <= WingFileReader.MAX_LENGTH_M)) {
+            throw f.error("is " + Field.brief(f.number()) + ", beyond any wing; expected an x within "
+                    + Field.brief(WingFileReader.MAX_LENGTH_M / k) + " of the origin, in the file's units");
+        }
+        return x;
     }
 }

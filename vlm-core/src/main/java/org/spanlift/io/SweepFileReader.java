@@ -1,8 +1,10 @@
 package org.spanlift.io;
 
 import java.math.BigDecimal;
+import java.math.MathContext;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
+import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
@@ -28,6 +30,7 @@ import org.spanlift.input.YamlParser;
 import org.spanlift.input.YamlValue;
 import org.spanlift.input.quantity.Quantity;
 import org.spanlift.input.quantity.QuantityFormatException;
+import org.spanlift.input.quantity.PhysicalRange;
 import org.spanlift.input.quantity.QuantityKind;
 import org.spanlift.lattice.LatticeBuilder;
 import org.spanlift.sweep.Constraint;
@@ -59,6 +62,17 @@ public final class SweepFileReader {
     static final Set<String> POINT_KEYS = Set.of("alpha", "CL");
     static final Set<String> RANK_KEYS = Set.of("by", "order", "keep");
 
+    /**
+     * Bounds on the size of a range's from, to and step (each may also be 0): every value a wing file holds
+     * lies well inside, and exact decimal arithmetic on them stays cheap.
+     */
+    static final double MIN_RANGE_MAGNITUDE = 1e-12;
+    static final double MAX_RANGE_MAGNITUDE = 1e12;
+    /** Most values one range may give (far more than any sweep can run, with or without --force). */
+    static final long MAX_RANGE_VALUES = 1_000_000_000L;
+    /** Most angles or lift coefficients under points. */
+    static final int MAX_POINTS = 100;
+
     private SweepFileReader() {
     }
 
@@ -70,16 +84,27 @@ public final class SweepFileReader {
     public static Sweep read(Path path, boolean force) {
         String file = path.toString();
         String text = TextFile.read(path, "sweep file");
-        Field root = new Field(file, "", YamlParser.parse(text, file));
+        Field root = new Field(file, "",
+                YamlParser.parse(text, file, "a sweep description (base, parameters and columns)"));
         root.mapping();
         root.allowOnly(TOP_KEYS);
 
         Field baseField = root.required("base", "the base wing file, relative to the sweep file");
         String baseName = baseField.text();
         Path folder = path.toAbsolutePath().getParent();
-        Path basePath = path.getParent() == null ? Path.of(baseName) : path.getParent().resolve(baseName);
+        Path basePath;
+        try {
+            basePath = path.getParent() == null ? Path.of(baseName) : path.getParent().resolve(baseName);
+        } catch (InvalidPathException e) {
+            throw baseField.error("not a path this system accepts (" + e.getReason() + "); expected the base wing "
+                    + "file, relative to the sweep file");
+        }
+        if (Files.exists(basePath) && !Files.isRegularFile(basePath)) {
+            throw baseField.error("'" + Field.shown(baseName) + "' is not a regular file (a folder or a device); expected the "
+                    + "base wing file, relative to the sweep file");
+        }
         if (!Files.isRegularFile(basePath)) {
-            throw baseField.error("no wing file '" + baseName + "' beside the sweep file (in " + folder + ")");
+            throw baseField.error("no wing file '" + Field.shown(baseName) + "' beside the sweep file (in " + folder + ")");
         }
         String baseText = TextFile.read(basePath, "wing file");
         YamlValue baseTree = YamlParser.parse(baseText, basePath.toString());
@@ -101,10 +126,9 @@ public final class SweepFileReader {
         flight.ifPresent(f -> f.allowOnly(FLIGHT_KEYS));
         OptionalDouble weight = flight.flatMap(f -> f.optional("weight")).map(Field::weight)
                 .map(OptionalDouble::of).orElse(OptionalDouble.empty());
-        double altitude = flight.flatMap(f -> f.optional("altitude")).map(f -> f.quantity(QuantityKind.LENGTH))
-                .orElse(0.0);
+        double altitude = flight.flatMap(f -> f.optional("altitude")).map(CasesReader::altitude).orElse(0.0);
         double isaOffset = flight.flatMap(f -> f.optional("isa-offset"))
-                .map(f -> f.quantity(QuantityKind.TEMPERATURE_DIFFERENCE)).orElse(0.0);
+                .map(f -> f.quantity(PhysicalRange.TEMPERATURE_OFFSET)).orElse(0.0);
         double loadFactor = flight.flatMap(f -> f.optional("load-factor")).map(f -> f.inRange(0.1, 15)).orElse(1.0);
         OptionalDouble flaps = flight.flatMap(f -> f.optional("flaps")).map(f -> OptionalDouble.of(f.inRange(-45, 45)))
                 .orElse(OptionalDouble.empty());
@@ -115,7 +139,7 @@ public final class SweepFileReader {
             try {
                 atm = StandardAtmosphere.at(altitude, isaOffset);
             } catch (IllegalArgumentException e) {
-                throw at.optional("altitude").orElse(at).error(e.getMessage());
+                throw at.optional("isa-offset").orElse(at).error(e.getMessage());
             }
             condition = Optional.of(new FlightCondition(weight.getAsDouble(), loadFactor, atm, OptionalDouble.empty()));
         }
@@ -127,6 +151,9 @@ public final class SweepFileReader {
         List<Double> lifts = new ArrayList<>();
         root.optional("points").ifPresent(p -> {
             p.allowOnly(POINT_KEYS);
+            if (p.mapping().entries().isEmpty()) {
+                throw p.error("expected alpha or CL (a list or a range {from, to, step}), or leave points out");
+            }
             p.optional("alpha").ifPresent(a -> alphas.addAll(numbers(a, -30, 30)));
             p.optional("CL").ifPresent(c -> lifts.addAll(numbers(c, -4, 4)));
         });
@@ -156,6 +183,9 @@ public final class SweepFileReader {
 
         List<Constraint> constraints = new ArrayList<>();
         root.optional("constraints").ifPresent(cs -> {
+            if (cs.items().isEmpty()) {
+                throw cs.error("an empty list; expected at least one constraint, or leave constraints out");
+            }
             for (Field c : cs.items()) {
                 Constraint k;
                 try {
@@ -254,6 +284,11 @@ public final class SweepFileReader {
                             + ": expected a " + (to.compareTo(from) > 0 ? "positive" : "negative") + " step, got "
                             + stepField.text());
                 }
+                if (!countAtMost(from, to, step, MAX_RANGE_VALUES)) {
+                    throw stepField.error("the range from " + fromField.text() + " to " + toField.text() + " by "
+                            + stepField.text() + " has more than " + MAX_RANGE_VALUES + " values; expected a "
+                            + "coarser step");
+                }
             } else if (to.compareTo(from) < 0) {
                 throw toField.error("must not be below 'from' (" + fromField.text() + ") in a range without a step");
             }
@@ -271,9 +306,34 @@ public final class SweepFileReader {
         return parameter;
     }
 
+    /**
+     * A range's from, to or step as an exact decimal. The number's syntax (at most 40 characters, an exponent
+     * of at most three digits) and size are checked before any decimal arithmetic.
+     */
     private static BigDecimal decimal(Field f) {
         f.number();
-        return new BigDecimal(f.text().trim().replace("_", ""));
+        BigDecimal d = new BigDecimal(f.text().trim());
+        BigDecimal size = d.abs();
+        if (d.signum() != 0 && (size.compareTo(BigDecimal.valueOf(MIN_RANGE_MAGNITUDE)) < 0
+                || size.compareTo(BigDecimal.valueOf(MAX_RANGE_MAGNITUDE)) > 0)) {
+            throw f.error("is " + f.text().trim() + "; expected 0 or a number from " + Field.brief(MIN_RANGE_MAGNITUDE)
+                    + " to " + Field.brief(MAX_RANGE_MAGNITUDE) + " in size (either sign), as every value of a wing "
+                    + "file is");
+        }
+        return d;
+    }
+
+    /**
+     * Whether the range from, to, step (the step non-zero and leading from one to the other) has at most
+     * {@code limit} values; bounded work whatever the numbers, so that the exact count
+     * ({@link Parameter#rangeCount}) is taken only of a range known to be small enough.
+     */
+    static boolean countAtMost(BigDecimal from, BigDecimal to, BigDecimal step, long limit) {
+        BigDecimal steps = to.subtract(from).divide(step, MathContext.DECIMAL64).abs();
+        if (steps.compareTo(BigDecimal.valueOf(limit)) >= 0) {
+            return false;
+        }
+        return Parameter.rangeCount(from, to, step) <= limit;
     }
 
     private static Design design(Field root, Field paramsField, List<Parameter> parameters, boolean force) {
@@ -354,15 +414,21 @@ public final class SweepFileReader {
                 throw stepField.error("the step must be non-zero and lead from " + fromField.text() + " to "
                         + toField.text());
             }
-            long n = Parameter.rangeCount(from, to, step);
-            if (n > 100) {
-                throw f.error("at most 100 points, got " + n);
+            if (!countAtMost(from, to, step, MAX_POINTS)) {
+                throw stepField.error("the range from " + fromField.text() + " to " + toField.text() + " by "
+                        + stepField.text() + " gives more than " + MAX_POINTS + " points; expected at most "
+                        + MAX_POINTS);
             }
+            long n = Parameter.rangeCount(from, to, step);
             for (long i = 0; i < n; i++) {
                 out.add(from.add(step.multiply(BigDecimal.valueOf(i))).doubleValue());
             }
         } else {
-            for (Field item : f.items()) {
+            List<Field> items = f.items();
+            if (items.isEmpty() || items.size() > MAX_POINTS) {
+                throw f.error("expected from 1 to " + MAX_POINTS + " values, got " + items.size());
+            }
+            for (Field item : items) {
                 out.add(item.inRange(lo, hi));
             }
         }

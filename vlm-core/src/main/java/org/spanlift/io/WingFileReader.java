@@ -29,6 +29,9 @@ import org.spanlift.geometry.Surface;
 import org.spanlift.geometry.Trapezoid;
 import org.spanlift.geometry.Vec3;
 import org.spanlift.geometry.Wing;
+import org.spanlift.lattice.Lattice;
+import org.spanlift.lattice.LatticeBuilder;
+import org.spanlift.lattice.Strip;
 import org.spanlift.section.CamberLines;
 
 /**
@@ -65,6 +68,17 @@ public final class WingFileReader {
      * areas and integrals of the geometry stay finite.
      */
     public static final double MAX_LENGTH_M = 10_000;
+
+    /**
+     * Smallest length accepted where a length must be positive (a span, a chord, a reference length),
+     * metres (1 mm): any smaller and the lattice's panels, or ratios such as the aspect ratio, stop being
+     * numbers.
+     */
+    public static final double MIN_LENGTH_M = 0.001;
+
+    /** Range of a reference area, m^2: from 1 mm by 1 mm to 10 km by 10 km. */
+    public static final double MIN_AREA_M2 = MIN_LENGTH_M * MIN_LENGTH_M;
+    public static final double MAX_AREA_M2 = MAX_LENGTH_M * MAX_LENGTH_M;
 
     /** Name of the section a station gets when neither it nor its surface names one: a flat plate. */
     public static final String FLAT_SECTION = "flat";
@@ -129,7 +143,7 @@ public final class WingFileReader {
         for (Field sf : surfaceFields) {
             Surface surface = readSurface(sf, k, sections, controlNames);
             if (!surfaceNames.add(surface.name())) {
-                throw sf.required("name", "a name").error("another surface has the name '" + surface.name()
+                throw sf.required("name", "a name").error("another surface has the name '" + Field.shown(surface.name())
                         + "'; expected a name no other surface has");
             }
             int own = (surface.mirrored() ? 2 : 1) * surface.lattice().strips() * surface.lattice().rows();
@@ -145,7 +159,40 @@ public final class WingFileReader {
         root.optional("structure").ifPresent(st -> StructureReader.read(st, k, surfaces.get(0)));
         Reference defaults = Wing.defaultReference(surfaces.get(0));
         Reference reference = root.optional("reference").map(r -> readReference(r, k, defaults)).orElse(defaults);
-        return new Wing(name, unit, reference, surfaces, sections);
+        Wing wing = new Wing(name, unit, reference, surfaces, sections);
+        checkFuselageSides(wing, surfaceFields, k);
+        return wing;
+    }
+
+    /**
+     * Refuses a fuselage half-width that leaves no strip of its surface outboard of the fuselage side: such a
+     * surface would have no station that can stall. Strips are as the lattice places them.
+     */
+    private static void checkFuselageSides(Wing wing, List<Field> surfaceFields, double k) {
+        Lattice lattice = null;
+        for (int s = 0; s < wing.surfaces().size(); s++) {
+            Surface surface = wing.surfaces().get(s);
+            if (surface.fuselageHalfWidth() <= 0) {
+                continue;
+            }
+            if (lattice == null) {
+                lattice = LatticeBuilder.build(wing);
+            }
+            double outermost = 0;
+            boolean outboard = false;
+            for (Strip strip : lattice.strips()) {
+                if (strip.surface() == s) {
+                    outermost = Math.max(outermost, Math.abs(strip.y()));
+                    outboard |= !surface.insideFuselage(strip.y());
+                }
+            }
+            if (!outboard) {
+                Field at = surfaceFields.get(s).required("fuselage-half-width", "");
+                throw at.error("leaves no strip of the lattice outboard of the fuselage side (the outermost strip's "
+                        + "centre is at y " + Field.brief(outermost / k) + "); expected a half-width below that, "
+                        + "so that some of the span can stall, or more strips");
+            }
+        }
     }
 
     private static LengthUnit readUnit(Field f) {
@@ -157,8 +204,21 @@ public final class WingFileReader {
     private static double length(Field f, double value, double k) {
         double m = value * k;
         if (!(Math.abs(m) <= MAX_LENGTH_M)) {
-            throw f.error("is " + Field.format(value) + ", beyond any wing; expected a length within "
-                    + Field.format(MAX_LENGTH_M / k) + " " + unitName(k));
+            throw f.error("is " + Field.brief(value) + ", beyond any wing; expected a length within "
+                    + Field.brief(MAX_LENGTH_M / k) + " " + unitName(k));
+        }
+        return m;
+    }
+
+    /**
+     * A length that must be positive: from {@link #MIN_LENGTH_M} to {@link #MAX_LENGTH_M} once in metres.
+     */
+    private static double positiveLength(Field f, double k) {
+        double value = f.positive();
+        double m = length(f, value, k);
+        if (!(m >= MIN_LENGTH_M)) {
+            throw f.error("is " + Field.brief(value) + ", smaller than any part of a wing; expected a length of at "
+                    + "least " + Field.brief(MIN_LENGTH_M / k) + " " + unitName(k) + " (1 mm)");
         }
         return m;
     }
@@ -175,7 +235,7 @@ public final class WingFileReader {
     private static String name(Field f, String what) {
         String name = f.text().trim();
         if (name.isEmpty() || name.contains("=") || name.contains(",")) {
-            throw f.error("'" + f.text() + "' cannot name " + what + "; expected a name that is not blank and "
+            throw f.error("'" + Field.shown(f.text()) + "' cannot name " + what + "; expected a name that is not blank and "
                     + "holds neither '=' nor ','");
         }
         return name;
@@ -185,11 +245,16 @@ public final class WingFileReader {
         f.allowOnly(REFERENCE_KEYS);
         double area = f.optional("area").map(a -> {
             double v = a.positive();
-            length(a, Math.sqrt(v), k);
-            return v * k * k;
+            double m2 = v * k * k;
+            if (!(m2 >= MIN_AREA_M2 && m2 <= MAX_AREA_M2)) {
+                throw a.error("is " + Field.brief(v) + " " + unitName(k) + "^2; expected an area from "
+                        + Field.brief(MIN_AREA_M2 / (k * k)) + " to " + Field.brief(MAX_AREA_M2 / (k * k)) + " "
+                        + unitName(k) + "^2 (1 mm by 1 mm to 10 km by 10 km)");
+            }
+            return m2;
         }).orElse(defaults.area());
-        double span = f.optional("span").map(a -> length(a, a.positive(), k)).orElse(defaults.span());
-        double chord = f.optional("chord").map(a -> length(a, a.positive(), k)).orElse(defaults.chord());
+        double span = f.optional("span").map(a -> positiveLength(a, k)).orElse(defaults.span());
+        double chord = f.optional("chord").map(a -> positiveLength(a, k)).orElse(defaults.chord());
         Vec3 point = f.optional("moment-point").map(p -> {
             double[] v = p.numbers(3);
             return new Vec3(length(p, v[0], k), length(p, v[1], k), length(p, v[2], k));
@@ -225,12 +290,18 @@ public final class WingFileReader {
         };
 
         List<ControlSurface> controls = new ArrayList<>();
-        List<Field> controlFields = f.optional("controls").map(Field::items).orElse(List.of());
+        List<Field> controlFields = f.optional("controls").map(c -> {
+            if (c.items().isEmpty()) {
+                throw c.error("an empty list; expected at least one control {name, kind, from, to, chord-fraction}, "
+                        + "or leave controls out");
+            }
+            return c.items();
+        }).orElse(List.of());
         for (Field cf : controlFields) {
             ControlSurface c = readControl(cf, k, mirrored, planform, controls);
             if (!controlNames.add(c.name())) {
                 throw cf.required("name", "a name for the control").error("another control has the name '"
-                        + c.name() + "'; expected a name no other control in the file has");
+                        + Field.shown(c.name()) + "'; expected a name no other control in the file has");
             }
             controls.add(c);
         }
@@ -286,7 +357,7 @@ public final class WingFileReader {
         String name = f.text();
         if (!sections.containsKey(name)) {
             List<String> known = sections.keySet().stream().filter(s -> !s.equals(FLAT_SECTION)).toList();
-            throw f.error("unknown section '" + name + "'; expected " + (known.isEmpty()
+            throw f.error("unknown section '" + Field.shown(name) + "'; expected " + (known.isEmpty()
                     ? "flat, or a section defined under 'sections' (the file defines none)"
                     : "flat or one of the file's sections: " + String.join(", ", known)));
         }
@@ -323,6 +394,11 @@ public final class WingFileReader {
                         : "must be positive, got " + Field.format(chord / k) + "; expected a chord above 0 (only "
                         + "the tip station may have zero chord)");
             }
+            if (chord > 0 && chord < MIN_LENGTH_M) {
+                throw chordField.error("is " + Field.brief(chordField.number()) + ", smaller than any part of a wing; "
+                        + "expected a chord of at least " + Field.brief(MIN_LENGTH_M / k) + " " + unitName(k)
+                        + " (1 mm)" + (tip ? ", or 0 for a pointed tip" : ""));
+            }
             double noseX = s.optional("nose-x").map(n -> length(n, n.number(), k)).orElse(0.0);
             double noseZ = s.optional("nose-z").map(n -> length(n, n.number(), k)).orElse(0.0);
             double twist = Math.toRadians(s.optional("twist").map(t -> t.inRange(-45, 45)).orElse(0.0));
@@ -335,10 +411,8 @@ public final class WingFileReader {
     private static Planform readTrapezoid(Field f, double k, boolean mirrored, String section) {
         f.allowOnly(TRAPEZOID_KEYS);
         requireMirrored(f, mirrored);
-        Field spanField = f.required("span", "the tip-to-tip span");
-        double span = length(spanField, spanField.positive(), k);
-        Field rootField = f.required("root-chord", "the root chord");
-        double rootChord = length(rootField, rootField.positive(), k);
+        double span = positiveLength(f.required("span", "the tip-to-tip span"), k);
+        double rootChord = positiveLength(f.required("root-chord", "the root chord"), k);
         double taper = f.optional("taper").map(t -> t.inRange(0, 10)).orElse(1.0);
         double sweep = Math.toRadians(f.optional("sweep").map(t -> t.inRange(-60, 60)).orElse(0.0));
         double dihedral = Math.toRadians(f.optional("dihedral").map(t -> t.inRange(-30, 30)).orElse(0.0));
@@ -352,10 +426,8 @@ public final class WingFileReader {
     private static Planform readElliptic(Field f, double k, boolean mirrored, String section) {
         f.allowOnly(ELLIPTIC_KEYS);
         requireMirrored(f, mirrored);
-        Field spanField = f.required("span", "the tip-to-tip span");
-        double semi = length(spanField, spanField.positive(), k) / 2;
-        Field rootField = f.required("root-chord", "the root chord");
-        double rootChord = length(rootField, rootField.positive(), k);
+        double semi = positiveLength(f.required("span", "the tip-to-tip span"), k) / 2;
+        double rootChord = positiveLength(f.required("root-chord", "the root chord"), k);
         double dihedral = Math.toRadians(f.optional("dihedral").map(t -> t.inRange(-30, 30)).orElse(0.0));
         double washout = Math.toRadians(f.optional("washout").map(t -> t.inRange(-20, 20)).orElse(0.0));
         double rootTwist = Math.toRadians(f.optional("root-twist").map(t -> t.inRange(-45, 45)).orElse(0.0));
@@ -409,7 +481,7 @@ public final class WingFileReader {
         for (ControlSurface c : earlier) {
             if (from < c.to() - tol && to > c.from() + tol) {
                 throw fromField.error("the span from " + Field.format(from / k) + " to " + Field.format(to / k)
-                        + " overlaps control '" + c.name() + "' (y from " + Field.format(c.from() / k) + " to "
+                        + " overlaps control '" + Field.shown(c.name()) + "' (y from " + Field.format(c.from() / k) + " to "
                         + Field.format(c.to() / k) + "); expected controls that do not overlap");
             }
         }

@@ -10,6 +10,8 @@ import org.spanlift.geometry.Section;
 import org.spanlift.geometry.SectionBlend;
 import org.spanlift.geometry.Surface;
 import org.spanlift.geometry.Wing;
+import org.spanlift.input.Field;
+import org.spanlift.input.RefusedException;
 import org.spanlift.lattice.Lattice;
 import org.spanlift.lattice.Strip;
 import org.spanlift.section.Table;
@@ -73,6 +75,7 @@ public final class StripLimits {
      *
      * @param assumedClMax a cl_max for sections that give none, or empty to refuse them
      * @throws MissingSectionDataException when a section has no cl_max and none is assumed
+     * @throws RefusedException when no strip of the wing lies outboard of the fuselage side
      */
     public static StripLimits of(Wing wing, Lattice lattice, double[] deflections, OptionalDouble assumedClMax) {
         Surface main = wing.main();
@@ -85,6 +88,11 @@ public final class StripLimits {
             }
         }
         int n = ids.size();
+        if (n == 0) {
+            throw new RefusedException("no strip of the wing lies outboard of the fuselage side (fuselage "
+                    + "half-width " + Field.brief(main.fuselageHalfWidth()) + " m), so no station can stall; check "
+                    + "the fuselage half-width against the semi-span and the strips");
+        }
         Table[] inner = new Table[n];
         Table[] outer = new Table[n];
         double[] w = new double[n];

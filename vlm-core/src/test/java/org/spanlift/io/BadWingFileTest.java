@@ -32,72 +32,123 @@ class BadWingFileTest {
 
     /** file | line | field path (empty: the fault is in the YAML itself) | fragment of the message. */
     private static final String TABLE = """
-            missing-units               | 2  | units                                   | missing key; expected the length unit of the file: m, ft or in
-            missing-surfaces            | 1  | surfaces                                | missing key; expected a list of surfaces
-            missing-station-y           | 6  | surfaces[0].stations[1].y               | missing key; expected the station's spanwise position
-            missing-station-chord       | 7  | surfaces[0].stations[1].chord           | missing key; expected the local chord
-            missing-control-kind        | 6  | surfaces[0].controls[0].kind            | missing key; expected flap or aileron
-            empty-required-value        | 6  | surfaces[0].stations[0].chord           | the key has no value; expected the local chord
-            empty-optional-value        | 7  | surfaces[0].trapezoid.washout           | the key has no value; expected a value, or leave the key out
-            unknown-top-key             | 2  | colour                                  | unknown key; expected one of name, reference, sections, structure, surfaces, units
-            unknown-surface-key         | 4  | surfaces[0].mirrored                    | unknown key; expected one of controls, elliptic, fuselage-half-width, lattice, mirror,
-            unknown-station-key         | 6  | surfaces[0].stations[1].incidence       | unknown key; expected one of chord, nose-x, nose-z, section, twist, y
-            unknown-trapezoid-key       | 7  | surfaces[0].trapezoid.tip-chord         | unknown key; expected one of dihedral, root-chord, root-nose,
-            unknown-control-key         | 11 | surfaces[0].controls[0].hinge           | unknown key; expected one of chord-fraction, deflection, from, kind,
-            unknown-lattice-key         | 5  | surfaces[0].lattice.columns             | unknown key; expected one of row-spacing, rows, strip-spacing, strips
-            unknown-section-key         | 9  | sections.main.thickness                 | unknown key; expected one of camber
-            unknown-reference-key       | 2  | reference.mac                           | unknown key; expected one of area, chord, moment-point, span
-            chord-is-list               | 5  | surfaces[0].stations[0].chord           | expected a number, got a list
-            span-is-text                | 4  | surfaces[0].trapezoid.span              | expected a decimal number (such as 1.25 or 3e-2), got 'wide'
-            quoted-number               | 4  | surfaces[0].trapezoid.root-chord        | expected a number, got the quoted text "1.2"; write numbers without quotes
-            number-with-suffix          | 4  | surfaces[0].trapezoid.root-chord        | expected a decimal number (such as 1.25 or 3e-2), got '1.2f'
-            mirror-not-boolean          | 4  | surfaces[0].mirror                      | expected true or false, got 'yes'
-            fuselage-negative           | 4  | surfaces[0].fuselage-half-width         | must not be negative, got -0.3
-            fuselage-beyond-tip         | 4  | surfaces[0].fuselage-half-width         | must be less than the semi-span (4.5), got 4.5
-            fuselage-unmirrored         | 5  | surfaces[0].fuselage-half-width         | applies to a mirrored surface only; expected mirror: true
-            negative-chord              | 6  | surfaces[0].stations[1].chord           | must not be negative, got -0.2; expected a tip chord of 0 or more
-            zero-chord-inner-station    | 6  | surfaces[0].stations[1].chord           | must be positive, got 0; expected a chord above 0 (only the tip station may have zero chord)
-            stations-not-increasing     | 7  | surfaces[0].stations[2].y               | is 2.5, after a station at 3; expected stations in increasing y
-            mirrored-root-below-zero    | 6  | surfaces[0].stations[0].y               | the root is at -0.5, but a mirrored surface is described on its right half; expected a root y of 0 or more
-            absurd-length               | 4  | surfaces[0].trapezoid.span              | beyond any wing; expected a length within 10000 m
-            control-outside-span        | 6  | surfaces[0].controls[0].to              | 6 lies outside the surface; expected a y from 0 to 4.5
-            control-from-not-below-to   | 6  | surfaces[0].controls[0].to              | is 2.5, not beyond 'from' (2.5); expected the outer end, greater than 'from'
-            controls-overlap            | 7  | surfaces[0].controls[1].from            | overlaps control 'flap' (y from 0.5 to 2.5); expected controls that do not overlap
-            duplicate-control-name      | 7  | surfaces[0].controls[1].name            | another control has the name 'flap'; expected a name no other control
-            duplicate-surface-name      | 5  | surfaces[1].name                        | another surface has the name 'wing'; expected a name no other surface has
-            chord-fraction-zero         | 6  | surfaces[0].controls[0].chord-fraction  | is 0; expected a fraction of the local chord between 0 and 1, both excluded
-            chord-fraction-one          | 6  | surfaces[0].controls[0].chord-fraction  | is 1; expected a fraction of the local chord between 0 and 1, both excluded
-            chord-fraction-above-one    | 6  | surfaces[0].controls[0].chord-fraction  | is 1.3; expected a fraction of the local chord between 0 and 1, both excluded
-            aileron-unmirrored          | 9  | surfaces[0].controls[0].kind            | an aileron deflects antisymmetrically and needs a mirrored surface; expected kind flap
-            unknown-section-name        | 4  | surfaces[0].section                     | unknown section 'main'; expected flat or one of the file's sections: inner
-            unknown-station-section     | 8  | surfaces[0].stations[1].section         | unknown section 'outer'; expected flat or one of the file's sections: inner
-            flat-section-redefined      | 6  | sections.flat                           | the section name 'flat' is built in
-            unknown-units               | 1  | units                                   | expected one of m, ft, in, got 'furlong'
-            newline-in-text             | 1  | units                                   | expected one of m, ft, in, got 'm\\nft'
-            unknown-camber              | 7  | sections.main.camber                    | unknown camber designation 'NACA 24x2'; expected flat, NACA MPTT (four-digit
-            camber-without-position     | 7  | sections.main.camber                    | the camber designation 'NACA 4012' has camber but no camber position (its second digit is 0)
-            strips-zero                 | 5  | surfaces[0].lattice.strips              | must be from 1 to 400, got 0
-            strips-huge                 | 5  | surfaces[0].lattice.strips              | must be from 1 to 400, got 100000
-            rows-huge                   | 5  | surfaces[0].lattice.rows                | must be from 1 to 64, got 500
-            strips-fractional           | 5  | surfaces[0].lattice.strips              | expected a whole number, got 12.5
-            too-few-strips-for-cuts     | 8  | surfaces[0].lattice.strips              | 3 strips cannot place a strip edge on each of the surface's 4 control ends and stations; expected at least 5 strips
-            one-row-with-controls       | 7  | surfaces[0].lattice.rows                | is 1, but the surface has controls; expected at least 2 rows
-            too-many-panels             | 5  | surfaces[0].lattice                     | the lattice would have 51200 panels over the whole wing; expected at most 12000
-            stations-and-trapezoid      | 7  | surfaces[0].trapezoid                   | the surface already has 'stations' (line 4); expected only one of stations, trapezoid or elliptic
-            no-planform                 | 3  | surfaces[0]                             | missing the planform; expected one of the keys stations, trapezoid or elliptic
-            no-surfaces-listed          | 2  | surfaces                                | expected at least one surface
-            nan-dot                     | 4  | surfaces[0].trapezoid.span              | expected a finite number, got .nan
-            nan-word                    | 4  | surfaces[0].trapezoid.root-chord        | expected a finite number, got NaN
-            infinity                    | 6  | surfaces[0].stations[1].y               | expected a finite number, got .inf
-            duplicate-key               | 7  | surfaces[0].trapezoid.span              | duplicate key (first given on line 5); expected each key once
-            type-tag                    | 3  | surfaces[0].name                        | type tags such as !!python/object:os.system are not accepted; expected a plain value
-            not-a-mapping               | 1  |                                         | expected a mapping of keys, got a list
-            empty                       | 1  |                                         | the file is empty; expected a wing description
-            comment-only                | 1  |                                         | the file holds only comments; expected a wing description
-            unbalanced-brackets         | 4  |                                         | not valid YAML: the file ends inside the flow sequence that starts on this line; expected ',' or ']'
-            tab-indented                | 5  |                                         | a tab character where YAML expects indentation or a value; expected spaces
-            recursive-alias             | 5  |                                         | the alias *loop refers to the list or mapping that contains it
-            deep-nesting                | 2  |                                         | lists and mappings nested 33 deep; expected at most 32 levels
+            missing-units                | 2  | units                                  | missing key; expected the length unit of the file: m, ft or in
+            missing-surfaces             | 1  | surfaces                               | missing key; expected a list of surfaces
+            missing-station-y            | 6  | surfaces[0].stations[1].y              | missing key; expected the station's spanwise position
+            missing-station-chord        | 7  | surfaces[0].stations[1].chord          | missing key; expected the local chord
+            missing-control-kind         | 6  | surfaces[0].controls[0].kind           | missing key; expected flap or aileron
+            empty-required-value         | 6  | surfaces[0].stations[0].chord          | the key has no value; expected the local chord
+            empty-optional-value         | 7  | surfaces[0].trapezoid.washout          | the key has no value; expected a value, or leave the key out
+            unknown-top-key              | 2  | colour                                 | unknown key; expected one of name, reference, sections, structure, surfaces, units
+            unknown-surface-key          | 4  | surfaces[0].mirrored                   | unknown key; expected one of controls, elliptic, fuselage-half-width, lattice, mirror,
+            unknown-station-key          | 6  | surfaces[0].stations[1].incidence      | unknown key; expected one of chord, nose-x, nose-z, section, twist, y
+            unknown-trapezoid-key        | 7  | surfaces[0].trapezoid.tip-chord        | unknown key; expected one of dihedral, root-chord, root-nose,
+            unknown-control-key          | 11 | surfaces[0].controls[0].hinge          | unknown key; expected one of chord-fraction, deflection, from, kind,
+            unknown-lattice-key          | 5  | surfaces[0].lattice.columns            | unknown key; expected one of row-spacing, rows, strip-spacing, strips
+            unknown-section-key          | 9  | sections.main.thickness                | unknown key; expected one of camber
+            unknown-reference-key        | 2  | reference.mac                          | unknown key; expected one of area, chord, moment-point, span
+            chord-is-list                | 5  | surfaces[0].stations[0].chord          | expected a number, got a list
+            span-is-text                 | 4  | surfaces[0].trapezoid.span             | expected a decimal number (such as 1.25 or 3e-2), got 'wide'
+            quoted-number                | 4  | surfaces[0].trapezoid.root-chord       | expected a number, got the quoted text "1.2"; write numbers without quotes
+            number-with-suffix           | 4  | surfaces[0].trapezoid.root-chord       | expected a decimal number (such as 1.25 or 3e-2), got '1.2f'
+            mirror-not-boolean           | 4  | surfaces[0].mirror                     | expected true or false, got 'yes'
+            fuselage-negative            | 4  | surfaces[0].fuselage-half-width        | must not be negative, got -0.3
+            fuselage-beyond-tip          | 4  | surfaces[0].fuselage-half-width        | must be less than the semi-span (4.5), got 4.5
+            fuselage-unmirrored          | 5  | surfaces[0].fuselage-half-width        | applies to a mirrored surface only; expected mirror: true
+            negative-chord               | 6  | surfaces[0].stations[1].chord          | must not be negative, got -0.2; expected a tip chord of 0 or more
+            zero-chord-inner-station     | 6  | surfaces[0].stations[1].chord          | must be positive, got 0; expected a chord above 0 (only the tip station may have zero chord)
+            stations-not-increasing      | 7  | surfaces[0].stations[2].y              | is 2.5, after a station at 3; expected stations in increasing y
+            mirrored-root-below-zero     | 6  | surfaces[0].stations[0].y              | the root is at -0.5, but a mirrored surface is described on its right half; expected a root y of 0 or more
+            absurd-length                | 4  | surfaces[0].trapezoid.span             | beyond any wing; expected a length within 10000 m
+            control-outside-span         | 6  | surfaces[0].controls[0].to             | 6 lies outside the surface; expected a y from 0 to 4.5
+            control-from-not-below-to    | 6  | surfaces[0].controls[0].to             | is 2.5, not beyond 'from' (2.5); expected the outer end, greater than 'from'
+            controls-overlap             | 7  | surfaces[0].controls[1].from           | overlaps control 'flap' (y from 0.5 to 2.5); expected controls that do not overlap
+            duplicate-control-name       | 7  | surfaces[0].controls[1].name           | another control has the name 'flap'; expected a name no other control
+            duplicate-surface-name       | 5  | surfaces[1].name                       | another surface has the name 'wing'; expected a name no other surface has
+            chord-fraction-zero          | 6  | surfaces[0].controls[0].chord-fraction | is 0; expected a fraction of the local chord between 0 and 1, both excluded
+            chord-fraction-one           | 6  | surfaces[0].controls[0].chord-fraction | is 1; expected a fraction of the local chord between 0 and 1, both excluded
+            chord-fraction-above-one     | 6  | surfaces[0].controls[0].chord-fraction | is 1.3; expected a fraction of the local chord between 0 and 1, both excluded
+            aileron-unmirrored           | 9  | surfaces[0].controls[0].kind           | an aileron deflects antisymmetrically and needs a mirrored surface; expected kind flap
+            unknown-section-name         | 4  | surfaces[0].section                    | unknown section 'main'; expected flat or one of the file's sections: inner
+            unknown-station-section      | 8  | surfaces[0].stations[1].section        | unknown section 'outer'; expected flat or one of the file's sections: inner
+            flat-section-redefined       | 6  | sections.flat                          | the section name 'flat' is built in
+            unknown-units                | 1  | units                                  | expected one of m, ft, in, got 'furlong'
+            newline-in-text              | 1  | units                                  | expected one of m, ft, in, got 'm\\nft'
+            unknown-camber               | 7  | sections.main.camber                   | unknown camber designation 'NACA 24x2'; expected flat, NACA MPTT (four-digit
+            camber-without-position      | 7  | sections.main.camber                   | the camber designation 'NACA 4012' has camber but no camber position (its second digit is 0)
+            strips-zero                  | 5  | surfaces[0].lattice.strips             | must be from 1 to 400, got 0
+            strips-huge                  | 5  | surfaces[0].lattice.strips             | must be from 1 to 400, got 100000
+            rows-huge                    | 5  | surfaces[0].lattice.rows               | must be from 1 to 64, got 500
+            strips-fractional            | 5  | surfaces[0].lattice.strips             | expected a whole number, got 12.5
+            too-few-strips-for-cuts      | 8  | surfaces[0].lattice.strips             | 3 strips cannot place a strip edge on each of the surface's 4 control ends and stations; expected at least 5 strips
+            one-row-with-controls        | 7  | surfaces[0].lattice.rows               | is 1, but the surface has controls; expected at least 2 rows
+            too-many-panels              | 5  | surfaces[0].lattice                    | the lattice would have 51200 panels over the whole wing; expected at most 12000
+            stations-and-trapezoid       | 7  | surfaces[0].trapezoid                  | the surface already has 'stations' (line 4); expected only one of stations, trapezoid or elliptic
+            no-planform                  | 3  | surfaces[0]                            | missing the planform; expected one of the keys stations, trapezoid or elliptic
+            no-surfaces-listed           | 2  | surfaces                               | expected at least one surface
+            nan-dot                      | 4  | surfaces[0].trapezoid.span             | expected a finite number, got .nan
+            nan-word                     | 4  | surfaces[0].trapezoid.root-chord       | expected a finite number, got NaN
+            infinity                     | 6  | surfaces[0].stations[1].y              | expected a finite number, got .inf
+            duplicate-key                | 7  | surfaces[0].trapezoid.span             | duplicate key (first given on line 5); expected each key once
+            type-tag                     | 3  | surfaces[0].name                       | type tags such as !!python/object:os.system are not accepted; expected a plain value
+            not-a-mapping                | 1  |                                        | expected a mapping of keys, got a list
+            empty                        | 1  |                                        | the file is empty; expected a wing description
+            comment-only                 | 1  |                                        | the file holds only comments; expected a wing description
+            unbalanced-brackets          | 4  |                                        | not valid YAML: the file ends inside the flow sequence that starts on this line; expected ',' or ']'
+            tab-indented                 | 5  |                                        | a tab character where YAML expects indentation or a value; expected spaces
+            recursive-alias              | 5  |                                        | the alias *loop refers to the list or mapping that contains it
+            deep-nesting                 | 2  |                                        | lists and mappings nested 33 deep; expected at most 32 levels
+            alias-bomb                   | 12 |                                        | with its aliases expanded, the document grows past 100000 values here; expected at most 100000
+            alias-wide                   | 4  |                                        | with its aliases expanded, the document grows past 100000 values here
+            too-many-aliases             | 3  |                                        | more than 50 aliases (*name); expected at most 50, or the values written out
+            alias-undefined              | 4  |                                        | the alias *nothing names no anchor; expected an anchor &nothing given earlier in the file
+            merge-key                    | 6  | surfaces[0].trapezoid.<<               | merge keys are not supported; expected the keys written out
+            two-documents                | 5  |                                        | a second document starts here (after ---); expected a single document
+            key-is-list                  | 2  |                                        | a key that is a list, a mapping or tagged; expected plain names as keys
+            binary-noise                 | 1  |                                        | the file is not UTF-8 text (byte 0xE9 on this line is not UTF-8); expected a wing file saved as UTF-8
+            latin1-on-line-3             | 3  |                                        | the file is not UTF-8 text (byte 0xE9 on this line is not UTF-8); expected a wing file saved as UTF-8
+            utf16-with-bom               | 1  |                                        | the file starts with a UTF-16 or UTF-32 byte-order mark; expected a wing file saved as UTF-8
+            utf16-without-bom            | 1  |                                        | a NUL character on this line: the file holds binary data or UTF-16 text without a byte-order mark
+            nul-byte                     | 2  |                                        | a NUL character on this line
+            control-character            | 2  |                                        | a control character U+0007 on this line; expected a wing file of plain text
+            not-a-wing-paragraph         | 1  |                                        | the file holds plain text rather than keys with values; expected a mapping of keys
+            camber-file-dev-zero         | 7  | sections.main.camber-file              | /dev/zero:1: the file goes on past 16 MiB (the limit is reached on this line); expected a text file of x y section coordinates of at most 16 MiB
+            camber-file-dev-urandom      | 7  | sections.main.camber-file              | the file goes on past 16 MiB (the limit is reached on this line)
+            camber-file-prose            | 7  | sections.main.camber-file              | bad-coordinates/prose.dat:2: value 1 on the line is not a number; expected two decimal numbers x y per line
+            camber-file-hexadecimal      | 7  | sections.main.camber-file              | bad-coordinates/hexadecimal.dat:5: value 1 on the line is not a number
+            camber-file-is-folder        | 7  | sections.main.camber-file              | bad-coordinates: is a folder; expected the path of a text file of x y section coordinates
+            camber-file-nul-in-path      | 7  | sections.main.camber-file              | not a path this system accepts (Nul character not allowed); expected the path of a text file
+            number-hexadecimal           | 4  | surfaces[0].trapezoid.span             | expected a decimal number (such as 1.25 or 3e-2), got '0x10'
+            number-double-suffix         | 4  | surfaces[0].trapezoid.root-chord       | expected a decimal number (such as 1.25 or 3e-2), got '1.5d'
+            number-octal                 | 5  | surfaces[0].lattice.strips             | expected a decimal number (such as 1.25 or 3e-2), got '0o17'
+            number-underscore            | 4  | surfaces[0].trapezoid.span             | expected a decimal number (such as 1.25 or 3e-2), got '1_000'
+            strips-hexadecimal           | 5  | surfaces[0].lattice.strips             | expected a decimal number (such as 1.25 or 3e-2), got '0x20'
+            number-exponent-long         | 4  | surfaces[0].trapezoid.span             | expected a decimal number (such as 1.25 or 3e-2) with an exponent of at most 3 digits, got '1e-10000000'
+            number-exponent-overflow     | 4  | surfaces[0].trapezoid.span             | expected a finite number, got 1e999 (beyond the range of numbers, about 1.8e308)
+            number-too-long              | 4  | surfaces[0].trapezoid.span             | expected a decimal number (such as 1.25 or 3e-2) of at most 40 characters, got '9.00000000000000000000000000000000000...'
+            number-plus-infinity         | 6  | surfaces[0].stations[1].twist          | expected a finite number, got +.inf
+            deflection-overflow          | 6  | surfaces[0].controls[0].deflection     | expected a finite number, got 1e999
+            reynolds-overflow            | 8  | sections.main.cl-max.reynolds[1]       | expected a finite number, got 1e999
+            cl-max-exponent-long         | 7  | sections.main.cl-max                   | with an exponent of at most 3 digits, got '1e-99999'
+            reference-area-tiny          | 5  | reference.area                         | is 1e-300 m^2; expected an area from 1e-6 to 1e8 m^2 (1 mm by 1 mm to 10 km by 10 km)
+            reference-area-huge          | 5  | reference.area                         | is 1e12 m^2; expected an area from 1e-6 to 1e8 m^2
+            reference-span-tiny          | 5  | reference.span                         | is 1e-300, smaller than any part of a wing; expected a length of at least 0.001 m (1 mm)
+            reference-chord-tiny         | 5  | reference.chord                        | is 1e-9, smaller than any part of a wing; expected a length of at least 0.001 m (1 mm)
+            moment-point-far             | 5  | reference.moment-point                 | is 1e300, beyond any wing; expected a length within 10000 m
+            span-tiny                    | 4  | surfaces[0].trapezoid.span             | is 1e-300, smaller than any part of a wing; expected a length of at least 0.001 m (1 mm)
+            root-chord-tiny              | 4  | surfaces[0].trapezoid.root-chord       | is 0.0001, smaller than any part of a wing; expected a length of at least 0.001 m (1 mm)
+            elliptic-span-subnormal      | 4  | surfaces[0].elliptic.span              | is 4.9e-324, smaller than any part of a wing; expected a length of at least 0.001 m (1 mm)
+            station-chord-tiny           | 5  | surfaces[0].stations[0].chord          | is 1e-9, smaller than any part of a wing; expected a chord of at least 0.001 m (1 mm)
+            tip-chord-tiny               | 6  | surfaces[0].stations[1].chord          | is 1e-7, smaller than any part of a wing; expected a chord of at least 0.003281 ft (1 mm), or 0 for a pointed tip
+            fuselage-covers-every-strip  | 5  | surfaces[0].fuselage-half-width        | leaves no strip of the lattice outboard of the fuselage side (the outermost strip's centre is at y 4.899); expected a half-width below that
+            controls-empty               | 5  | surfaces[0].controls                   | an empty list; expected at least one control {name, kind, from, to, chord-fraction}, or leave controls out
+            structure-mass-huge          | 6  | structure.mass                         | a mass must be from 0 kg to 1e6 kg (0 lb to 2.2e6 lb), got "1e307kg"
+            structure-mass-exponent-long | 6  | structure.mass                         | got "1e-99999kg": expected a decimal number (such as 1.25 or 3e-2) with an exponent of at most 3 digits before the unit
+            point-mass-huge              | 7  | structure.point-masses[0].mass         | a mass must be from 0 kg to 1e6 kg (0 lb to 2.2e6 lb), got "1e300kg"
+            point-mass-x-far             | 7  | structure.point-masses[0].x            | is 1e300, beyond any wing; expected an x within 10000 of the origin, in the file's units
+            point-masses-empty           | 6  | structure.point-masses                 | an empty list; expected at least one point mass {name, mass, y, x}, or leave point-masses out
+            mass-per-span-huge           | 7  | structure.mass-table[0].mass-per-span  | a mass per unit span must be from 0 to 100000 kg/m (a thousand tonnes over ten metres), got '1e300kg/m'
+            units-very-long              | 1  | units                                  | expected one of m, ft, in, got 'metremetremetremetremetremetremetreme...'
             """;
 
     @ParameterizedTest(name = "{0}")
@@ -147,11 +198,24 @@ class BadWingFileTest {
     }
 
     @Test
-    void fileThatIsNotUtf8IsRefusedAsSuch(@TempDir Path dir) throws IOException {
+    void fileThatIsNotUtf8IsRefusedAsSuchOnTheLineOfTheFirstBadByte(@TempDir Path dir) throws IOException {
         Path path = dir.resolve("latin1.wing.yaml");
-        Files.write(path, new byte[] {'n', 'a', 'm', 'e', ':', ' ', (byte) 0xE9, '\n'});
+        Files.write(path, new byte[] {'u', 'n', 'i', 't', 's', ':', ' ', 'm', '\n', 'n', 'a', 'm', 'e', ':', ' ',
+            (byte) 0xE9, '\n'});
         InputException e = assertThrows(InputException.class, () -> WingFileReader.read(path));
-        assertEquals(path + ": the file is not UTF-8 text; expected a wing file saved as UTF-8", e.getMessage());
+        assertEquals(path + ":2: the file is not UTF-8 text (byte 0xE9 on this line is not UTF-8); expected a wing "
+                + "file saved as UTF-8", e.getMessage());
+    }
+
+    @Test
+    void aKeyOfThousandsOfCharactersIsCutShortInTheMessage(@TempDir Path dir) throws IOException {
+        Path path = dir.resolve("long-key.wing.yaml");
+        // A plain key is at most 1024 characters in YAML; an explicit key (?) may be longer.
+        Files.writeString(path, "units: m\n? " + "k".repeat(5000) + "\n: 1\n");
+        InputException e = assertThrows(InputException.class, () -> WingFileReader.read(path));
+        assertEquals(5000, e.field().length(), "the exception keeps the whole path");
+        assertTrue(e.getMessage().length() < path.toString().length() + 300, e.getMessage());
+        assertTrue(e.getMessage().startsWith(path + ":2: " + "k".repeat(117) + "...: unknown key"), e.getMessage());
     }
 
     @Test

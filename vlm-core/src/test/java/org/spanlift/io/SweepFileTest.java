@@ -148,4 +148,27 @@ class SweepFileTest {
                 constraints: ["lift_slope_per_rad = 4"]
                 """).problem().contains("'A < B'"));
     }
+
+    @Test
+    void aRangeIsCountedWithBoundedWorkWhateverItsStep() {
+        // 4 / 1e-999 steps: an exact count would build a thousand-digit integer; the bound is checked first.
+        java.math.BigDecimal four = java.math.BigDecimal.valueOf(4);
+        assertTrue(org.junit.jupiter.api.Assertions.assertTimeoutPreemptively(java.time.Duration.ofSeconds(5),
+                () -> !SweepFileReader.countAtMost(java.math.BigDecimal.ZERO, four, new java.math.BigDecimal("1e-999"),
+                        100)));
+        assertTrue(SweepFileReader.countAtMost(java.math.BigDecimal.ZERO, four, java.math.BigDecimal.ONE, 5));
+        assertTrue(!SweepFileReader.countAtMost(java.math.BigDecimal.ZERO, four, java.math.BigDecimal.ONE, 4),
+                "0, 1, 2, 3, 4: five values");
+    }
+
+    @Test
+    void aGridWithACoarseEnoughRangeStillReads() {
+        Sweep s = read("""
+                base: t.wing.yaml
+                parameters:
+                  surfaces.wing.trapezoid.washout: {from: -1e-12, to: 1e12, step: 1e4}
+                columns: [lift_slope_per_rad]
+                """, true);
+        assertEquals(100_000_001L, s.design().count());
+    }
 }

@@ -7,7 +7,7 @@ import org.spanlift.input.InputException;
 
 /**
  * Angles of attack in degrees, from a list {@code 0,2,4} or a range {@code from:to:step}, each number in the
- * one angle syntax of {@link Angles}.
+ * one angle syntax of {@link Angles}; at most {@value #MAX_POINTS} angles, counted before any is made.
  */
 public final class AlphaList {
 
@@ -45,7 +45,11 @@ public final class AlphaList {
                 out.add(from + i * step);
             }
         } else {
-            for (String s : t.split(",", -1)) {
+            String[] items = t.split(",", -1);
+            if (items.length > MAX_POINTS) {
+                throw new InputException("--alpha", 0, "", "at most " + MAX_POINTS + " angles, got " + items.length);
+            }
+            for (String s : items) {
                 out.add(number(s, text));
             }
         }
@@ -67,7 +71,8 @@ public final class AlphaList {
     }
 
     private static InputException bad(String text) {
+        String shown = text.length() > 40 ? text.substring(0, 37) + "..." : text;
         return new InputException("--alpha", 0, "", "expected degrees as a list (0,2,4) or a range from:to:step "
-                + "(-4:12:2), got '" + text + "'");
+                + "(-4:12:2), each a decimal number, got '" + shown + "'");
     }
 }

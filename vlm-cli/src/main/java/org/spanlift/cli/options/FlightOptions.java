@@ -14,7 +14,10 @@ import org.spanlift.flight.ReynoldsRule;
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Wing;
+import org.spanlift.input.Field;
 import org.spanlift.input.InputException;
+import org.spanlift.input.quantity.Decimal;
+import org.spanlift.input.quantity.PhysicalRange;
 import org.spanlift.input.quantity.Quantity;
 import org.spanlift.input.quantity.QuantityFormatException;
 import org.spanlift.input.quantity.QuantityKind;
@@ -62,7 +65,7 @@ public final class FlightOptions {
 
     @Option(names = "--load-factor", paramLabel = "N", defaultValue = "1",
             description = "Load factor n (lift over weight). Default: ${DEFAULT-VALUE}.")
-    double loadFactor;
+    String loadFactor;
 
     @Option(names = "--deflect", paramLabel = "NAME=DEG",
             description = "Deflect one control by DEG degrees (trailing edge down; an aileron's is the right "
@@ -112,14 +115,28 @@ public final class FlightOptions {
                 : OptionalDouble.of(Angles.parse("--flaps", flaps, "a flap deflection", MAX_DEFLECTION));
     }
 
-    /** The atmosphere at the given pressure altitude and offset. */
+    /**
+     * The atmosphere at the given pressure altitude and offset, each checked against its range (the
+     * standard atmosphere's altitudes; {@link PhysicalRange#TEMPERATURE_OFFSET}) and refused under its own
+     * option.
+     */
     public AtmosphereState atmosphere() {
         double h = quantity("--altitude", altitude, QuantityKind.LENGTH);
-        double dt = quantity("--isa-offset", isaOffset, QuantityKind.TEMPERATURE_DIFFERENCE);
+        if (!(h >= StandardAtmosphere.MIN_ALTITUDE && h <= StandardAtmosphere.MAX_ALTITUDE)) {
+            throw new InputException("--altitude", 0, "", "a pressure altitude must be from "
+                    + Field.brief(StandardAtmosphere.MIN_ALTITUDE) + " m to "
+                    + Field.brief(StandardAtmosphere.MAX_ALTITUDE) + " m (geopotential, the standard atmosphere's range), got " + Field.brief(h) + " m");
+        }
+        double dt;
+        try {
+            dt = PhysicalRange.TEMPERATURE_OFFSET.parse(isaOffset);
+        } catch (QuantityFormatException e) {
+            throw new InputException("--isa-offset", 0, "", e.getMessage());
+        }
         try {
             return StandardAtmosphere.at(h, dt);
         } catch (IllegalArgumentException e) {
-            throw new InputException("--altitude", 0, "", e.getMessage());
+            throw new InputException("--isa-offset", 0, "", e.getMessage());
         }
     }
 
@@ -129,32 +146,46 @@ public final class FlightOptions {
             return OptionalDouble.empty();
         }
         try {
-            return OptionalDouble.of(Quantity.weight(weight));
+            return OptionalDouble.of(Quantity.weight(weight)); // within PhysicalRange.WEIGHT
         } catch (QuantityFormatException e) {
             throw new InputException("--weight", 0, "", e.getMessage());
         }
     }
 
-    /** The equivalent airspeed in m/s, if a speed was given (a true speed is converted). */
+    /**
+     * The equivalent airspeed in m/s, if a speed was given (a true speed is converted); the speed typed must
+     * lie within {@link PhysicalRange#SPEED}.
+     */
     public OptionalDouble equivalentSpeed(AtmosphereState atmosphere) {
         if (speed == null) {
             return OptionalDouble.empty();
         }
-        double v = speed.equivalent != null ? quantity("--speed", speed.equivalent, QuantityKind.SPEED)
-                : Airspeed.equivalentFromTrue(quantity("--true-speed", speed.trueSpeed, QuantityKind.SPEED), atmosphere);
-        if (!(v > 0)) {
-            throw new InputException(speed.equivalent != null ? "--speed" : "--true-speed", 0, "", "must be positive");
-        }
+        double v = speed.equivalent != null ? speed("--speed", speed.equivalent)
+                : Airspeed.equivalentFromTrue(speed("--true-speed", speed.trueSpeed), atmosphere);
         return OptionalDouble.of(v);
     }
 
-    /** The load factor, checked. */
-    public double loadFactor() {
-        if (!Double.isFinite(loadFactor) || loadFactor <= 0 || loadFactor > 15) {
-            throw new InputException("--load-factor", 0, "", "expected a load factor above 0 and up to 15, got "
-                    + loadFactor);
+    private static double speed(String option, String text) {
+        try {
+            return PhysicalRange.SPEED.parse(text);
+        } catch (QuantityFormatException e) {
+            throw new InputException(option, 0, "", e.getMessage());
         }
-        return loadFactor;
+    }
+
+    /** The load factor, checked: a decimal number above 0 and up to 15. */
+    public double loadFactor() {
+        double n;
+        try {
+            n = Decimal.parse(loadFactor);
+        } catch (QuantityFormatException e) {
+            throw new InputException("--load-factor", 0, "", e.getMessage());
+        }
+        if (!(n > 0 && n <= 15)) {
+            throw new InputException("--load-factor", 0, "", "expected a load factor above 0 and up to 15, got "
+                    + loadFactor.strip());
+        }
+        return n;
     }
 
     /** The flight condition when a weight is given. */

@@ -2,7 +2,7 @@ package org.spanlift.input.quantity;
 
 import java.util.Arrays;
 import java.util.List;
-import java.util.regex.Matcher;
+import java.util.Optional;
 import java.util.regex.Pattern;
 import java.util.stream.Collectors;
 
@@ -15,9 +15,9 @@ import java.util.stream.Collectors;
  */
 public record Quantity(double value, QuantityKind kind, String text) {
 
-    private static final Pattern NUMBER =
-            Pattern.compile("[+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?");
     private static final Pattern NON_FINITE = Pattern.compile("[+-]?(?i:nan|inf)");
+    /** The most characters of a text a message shows. */
+    private static final int SHOWN = 40;
 
     /** Refuses a missing kind or text and a value that is not finite. */
     public Quantity {
@@ -32,7 +32,8 @@ public record Quantity(double value, QuantityKind kind, String text) {
     /**
      * Reads a number followed by a unit symbol of the given kind, such as {@code 6000N},
      * {@code 1350lb} or {@code 1e3 N}: at most one space between number and unit, surrounding
-     * white space ignored, decimal point and exponent allowed, no sign restriction.
+     * white space ignored, the number in the one syntax of {@link Decimal} (decimal point and an exponent
+     * of at most three digits allowed), no sign restriction.
      *
      * @param text the quantity as typed
      * @param kind what it must measure
@@ -49,15 +50,19 @@ public record Quantity(double value, QuantityKind kind, String text) {
         if (NON_FINITE.matcher(body).lookingAt()) {
             throw new QuantityFormatException(given + ": the number must be finite");
         }
-        Matcher number = NUMBER.matcher(body);
-        if (!number.lookingAt()) {
+        Optional<String> number = Decimal.leading(body);
+        if (number.isEmpty()) {
             throw new QuantityFormatException(given + ": it does not start with a number");
         }
-        double magnitude = Double.parseDouble(number.group());
+        Optional<String> syntax = Decimal.problem(number.get());
+        if (syntax.isPresent()) {
+            throw new QuantityFormatException(given + ": " + syntax.get() + " before the unit");
+        }
+        double magnitude = Double.parseDouble(number.get());
         if (!Double.isFinite(magnitude)) {
             throw new QuantityFormatException(given + ": the number must be finite");
         }
-        String rest = body.substring(number.end());
+        String rest = body.substring(number.get().length());
         String unit = rest.startsWith(" ") ? rest.substring(1) : rest;
         if (unit.isEmpty()) {
             throw new QuantityFormatException(given);
@@ -80,7 +85,7 @@ public record Quantity(double value, QuantityKind kind, String text) {
      * Reads a weight: a force ({@code N, kN, kgf, lbf, lb}) or a mass ({@code kg, g}) under standard gravity.
      *
      * @param text the weight as typed, such as {@code 1100kg} or {@code 2400lb}
-     * @return the weight in newtons, positive
+     * @return the weight in newtons, positive and within {@link PhysicalRange#WEIGHT}
      * @throws QuantityFormatException with a one-line message saying what was expected
      */
     public static double weight(String text) {
@@ -97,7 +102,7 @@ public record Quantity(double value, QuantityKind kind, String text) {
         if (!(newtons > 0)) {
             throw new QuantityFormatException("a weight must be positive, got " + quote(text));
         }
-        return newtons;
+        return PhysicalRange.WEIGHT.check(newtons, text);
     }
 
     /**
@@ -134,10 +139,14 @@ public record Quantity(double value, QuantityKind kind, String text) {
                 .orElse(reason);
     }
 
-    /** Quotes text for a one-line message, escaping line breaks and other control characters. */
+    /**
+     * Quotes text for a one-line message, escaping line breaks and other control characters; text longer
+     * than {@value #SHOWN} characters is cut short with an ellipsis.
+     */
     static String quote(String text) {
         StringBuilder quoted = new StringBuilder("\"");
-        for (char c : text.toCharArray()) {
+        String shown = text.length() > SHOWN ? text.substring(0, SHOWN - 3) : text;
+        for (char c : shown.toCharArray()) {
             if (c == '\n') {
                 quoted.append("\\n");
             } else if (c == '\r') {
@@ -150,6 +159,6 @@ public record Quantity(double value, QuantityKind kind, String text) {
                 quoted.append(c);
             }
         }
-        return quoted.append('"').toString();
+        return quoted.append(shown.length() < text.length() ? "...\"" : "\"").toString();
     }
 }
