@@ -71,7 +71,10 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
 
     @Option(names = "--cl", paramLabel = "CL", defaultValue = "0.5",
             description = "The common lift coefficient of e, CDi and the span loads. Default: ${DEFAULT-VALUE}.")
-    double cl;
+    String commonLift;
+
+    /** The common CL, read from {@link #commonLift}. */
+    private double cl;
 
     @Option(names = "--range", paramLabel = "FROM:TO:STEP", defaultValue = AlphaList.DEFAULT_CURVE,
             description = "Angles of the lift curves on the HTML page, degrees. Default: ${DEFAULT-VALUE}.")
@@ -100,7 +103,7 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
         if (files.size() > MAX_WINGS) {
             throw new InputException("compare", 0, "", "at most " + MAX_WINGS + " wings at once, got " + files.size());
         }
-        CommonLift.check(cl);
+        cl = CommonLift.parse(commonLift);
         List<Double> curve = AlphaList.parse(range);
         // Stall speeds are the 1 g ones; the load factor belongs to the load case of the root loads.
         AtmosphereState atmosphere = flight.atmosphere();

@@ -22,6 +22,7 @@ import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.InputFiles;
 import org.spanlift.cli.options.OffersFormats;
+import org.spanlift.cli.options.OptionNumber;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.options.UnitsOption;
 import org.spanlift.cli.output.Cautions;
@@ -117,7 +118,10 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
 
     @Option(names = "--safety-factor", paramLabel = "F", description = "Multiply the limit loads by F (such as 1.5) "
             + "to give ultimate loads, and say so. Default: none (limit loads).")
-    Double safetyFactor;
+    String safetyFactorText;
+
+    /** The safety factor asked for, read from {@link #safetyFactorText}, or null. */
+    private Double safetyFactor;
 
     @Mixin
     OutputOptions output;
@@ -168,8 +172,10 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         inputs.removeIf(Objects::isNull);
         output.check(inputs);
         units.check(format);
+        safetyFactor = safetyFactorText == null ? null : OptionNumber.parse("--safety-factor", safetyFactorText);
         if (safetyFactor != null && !(safetyFactor >= 1 && safetyFactor <= 3)) {
-            throw new InputException("--safety-factor", 0, "", "expected a factor from 1 to 3, got " + safetyFactor);
+            throw new InputException("--safety-factor", 0, "", "expected a factor from 1 to 3, got "
+                    + safetyFactorText.strip());
         }
         Wing wing = WingFileReader.read(file);
         if (!wing.main().mirrored()) {

@@ -59,7 +59,10 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
 
     @Option(names = "--cl", paramLabel = "CL", defaultValue = "0.5",
             description = "The lift coefficient of the span load, e and CDi. Default: ${DEFAULT-VALUE}.")
-    double cl;
+    String commonLift;
+
+    /** The common CL, read from {@link #commonLift}. */
+    private double cl;
 
     @Mixin
     OutputOptions output;
@@ -82,7 +85,7 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
         output.check(InputFiles.wing(file));
         List<Double> alphas = AlphaList.parse(alpha);
         List<Double> curve = AlphaList.parse(range);
-        CommonLift.check(cl);
+        cl = CommonLift.parse(commonLift);
         Wing wing = WingFileReader.read(file);
         WingAnalysis analysis = WingAnalysis.of(wing);
         double[] asked = analysis.deflections(flight.deflections(wing));

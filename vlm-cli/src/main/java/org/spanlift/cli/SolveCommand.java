@@ -22,6 +22,7 @@ import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.InputFiles;
 import org.spanlift.cli.options.OffersFormats;
+import org.spanlift.cli.options.OptionNumber;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.options.OutputTarget;
 import org.spanlift.cli.options.UnitsOption;
@@ -74,7 +75,7 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
     @Option(names = "--cl", paramLabel = "LIST", split = ",",
             description = "Solve at these wing lift coefficients (alpha from the lift line), such as 0.3,0.5. "
                     + "Without --alpha, only these.")
-    List<Double> targetLift = List.of();
+    List<String> targetLift = List.of();
 
     @Option(names = "--span-load", paramLabel = "FILE.csv",
             description = "Also write the per-strip span load of every point to this CSV file (SI units).")
@@ -147,7 +148,8 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         for (double a : alphas) {
             points.add(analysis.solve(Math.toRadians(a), deflections));
         }
-        for (double cl : targetLift) {
+        for (String text : targetLift) {
+            double cl = OptionNumber.parse("--cl", text);
             points.add(analysis.solve(alphaFor(line, cl, "--cl"), deflections));
         }
         Optional<Level> level = Optional.empty();

@@ -60,4 +60,16 @@ class OptionsThatDoNotApplyTest {
         refused(CliRun.of("solve", TRAINER, "--alpha", "0:1:1e-300"), "--alpha", "at most");
         refused(CliRun.of("solve", TRAINER, "--alpha", "0:1e308:1e-308"), "--alpha");
     }
+
+    @Test
+    void plainNumberOptionsTakeTheFilesNumberSyntax() {
+        for (String bad : new String[] {"0x1p0", "1d", "0.5f", "NaN"}) {
+            refused(CliRun.of("solve", TRAINER, "--cl", bad), "--cl");
+            refused(CliRun.of("compare", TRAINER, TRAINER, "--cl", bad), "--cl");
+            refused(CliRun.of("stall", TRAINER, "--assume-cl-max=" + bad), "--assume-cl-max");
+            refused(CliRun.of("loads", TRAINER, "--weight", "750kg", "--speed", "110kt", "--safety-factor", bad),
+                    "--safety-factor");
+        }
+        assertEquals(0, CliRun.of("solve", TRAINER, "--cl", "5e-1").exitCode());
+    }
 }

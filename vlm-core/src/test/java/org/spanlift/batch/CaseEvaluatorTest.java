@@ -154,7 +154,7 @@ class CaseEvaluatorTest {
     }
 
     @Test
-    void aCaseWithAResultThatIsNotFiniteFailsWithTheColumnNamedAndTheNextOneRuns() {
+    void aDegenerateCaseFailsInItsOwnRowAndTheNextOneRuns() {
         Sweep s = sweep("""
                   reference.area: [100, 1e-300, 50]
                 """);
@@ -163,11 +163,10 @@ class CaseEvaluatorTest {
         assertNull(before.error());
         CaseResult degenerate = ev.evaluate(1);
         assertTrue(degenerate.failed());
-        assertTrue(degenerate.error().contains("not a finite number"), degenerate.error());
-        String column = s.columns().stream().map(c -> c.name()).filter(n -> degenerate.error().startsWith("the result " + n + " is "))
-                .findFirst().orElseThrow(() -> new AssertionError("no column named in: " + degenerate.error()));
-        assertTrue(degenerate.error().contains("NaN") || degenerate.error().contains("Infinity"), degenerate.error());
-        assertTrue(java.util.Arrays.stream(degenerate.results()).allMatch(o -> o == null), column);
+        // refused as input (the physical range of an area), before any result could be non-finite
+        assertTrue(degenerate.error().contains("reference.area") && degenerate.error().contains("expected an area"),
+                degenerate.error());
+        assertTrue(java.util.Arrays.stream(degenerate.results()).allMatch(o -> o == null));
         assertNull(degenerate.feasible());
         CaseResult after = ev.evaluate(2);
         assertNull(after.error());

@@ -10,9 +10,21 @@ public final class CommonLift {
     }
 
     /**
-     * Checks a common CL given with {@code --cl}.
+     * A common CL given with {@code --cl}, read and checked.
      *
-     * @throws InputException unless 0.05 <= |CL| <= 3 (e is defined only away from zero lift)
+     * @throws InputException unless it is a decimal number with 0.05 <= |CL| <= 3 (e is defined only away from
+     *         zero lift)
+     */
+    public static double parse(String text) {
+        double cl = OptionNumber.parse("--cl", text);
+        check(cl);
+        return cl;
+    }
+
+    /**
+     * Checks a common CL.
+     *
+     * @throws InputException unless 0.05 <= |CL| <= 3
      */
     public static void check(double cl) {
         if (!Double.isFinite(cl) || Math.abs(cl) < Coefficients.SPAN_EFFICIENCY_MIN_LIFT || Math.abs(cl) > 3) {
