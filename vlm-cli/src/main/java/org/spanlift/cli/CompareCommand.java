@@ -11,6 +11,7 @@ import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.concurrent.Callable;
 
+import org.spanlift.cli.options.LongSolveNotice;
 import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.AlphaList;
 import org.spanlift.cli.options.ClMaxOptions;
@@ -147,7 +148,7 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
      */
     private Comparison.Entry entry(Path file, Optional<FlightCondition> condition, Optional<LoadCase> loadCase) {
         Wing wing = WingFileReader.read(file);
-        WingAnalysis analysis = WingAnalysis.of(wing);
+        WingAnalysis analysis = LongSolveNotice.analyse(wing, spec.commandLine().getErr());
         double[] asked = analysis.deflections(flight.deflections(wing));
         double[] clean = StallStudy.cleanDeflections(wing, asked);
         if (!(Math.abs(cl) < analysis.liftCurve(clean).slope())) {

@@ -15,6 +15,7 @@ import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.concurrent.Callable;
 
+import org.spanlift.cli.options.LongSolveNotice;
 import org.spanlift.atmosphere.Airspeed;
 import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.ClMaxOptions;
@@ -192,7 +193,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
             }
             structure = structure.withWingMass(m);
         }
-        WingAnalysis analysis = WingAnalysis.of(wing);
+        WingAnalysis analysis = LongSolveNotice.analyse(wing, spec.commandLine().getErr());
         double[] deflections = analysis.deflections(flight.deflections(wing));
         LoadsAnalysis loads = LoadsAnalysis.of(analysis, structure, deflections);
 

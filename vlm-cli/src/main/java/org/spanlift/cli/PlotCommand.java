@@ -9,6 +9,7 @@ import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.concurrent.Callable;
 
+import org.spanlift.cli.options.LongSolveNotice;
 import org.spanlift.cli.options.AlphaList;
 import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
@@ -88,7 +89,7 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
         Format format = FigureOutput.format(output, FORMATS);
         output.check(InputFiles.wing(file));
         Wing wing = WingFileReader.read(file);
-        WingAnalysis analysis = WingAnalysis.of(wing);
+        WingAnalysis analysis = LongSolveNotice.analyse(wing, spec.commandLine().getErr());
         double[] deflections = analysis.deflections(flight.deflections(wing));
         Optional<FlightCondition> condition = flight.condition();
         FigureContext context = FigureContext.of(wing, deflections, condition);

@@ -8,6 +8,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
 
+import org.spanlift.cli.options.LongSolveNotice;
 import org.spanlift.cli.options.AlphaList;
 import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.CommonLift;
@@ -87,7 +88,7 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
         List<Double> curve = AlphaList.parse(range);
         cl = CommonLift.parse(commonLift);
         Wing wing = WingFileReader.read(file);
-        WingAnalysis analysis = WingAnalysis.of(wing);
+        WingAnalysis analysis = LongSolveNotice.analyse(wing, spec.commandLine().getErr());
         double[] asked = analysis.deflections(flight.deflections(wing));
         double[] clean = StallStudy.cleanDeflections(wing, asked);
         Optional<FlightCondition> condition = flight.condition();
@@ -95,7 +96,7 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
         Optional<WingSummary> flaps = StallStudy.anyFlapDeflected(wing, asked)
                 ? Optional.of(WingSummary.of(file, wing, analysis, asked, cl)) : Optional.empty();
         Wing fineWing = WingSummary.doubledStrips(wing);
-        WingAnalysis fineAnalysis = WingAnalysis.of(fineWing);
+        WingAnalysis fineAnalysis = LongSolveNotice.analyse(fineWing, spec.commandLine().getErr());
         WingSummary fine = WingSummary.of(file, fineWing, fineAnalysis, clean, cl);
         Optional<StallStudy> stall = Optional.empty();
         Optional<StallStudy> stallFine = Optional.empty();

@@ -14,6 +14,7 @@ import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.concurrent.Callable;
 
+import org.spanlift.cli.options.LongSolveNotice;
 import org.spanlift.solve.LiftCurve;
 import org.spanlift.atmosphere.Airspeed;
 import org.spanlift.atmosphere.AtmosphereState;
@@ -141,7 +142,7 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         AtmosphereState atmosphere = flight.atmosphere();
         OptionalDouble eas = flight.equivalentSpeed(atmosphere);
         Optional<FlightCondition> condition = flight.condition();
-        WingAnalysis analysis = WingAnalysis.of(wing);
+        WingAnalysis analysis = LongSolveNotice.analyse(wing, spec.commandLine().getErr());
         double[] deflections = analysis.deflections(overrides);
         LiftCurve line = analysis.liftCurve(deflections);
         List<Solution> points = new ArrayList<>();

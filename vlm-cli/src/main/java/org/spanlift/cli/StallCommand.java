@@ -12,6 +12,7 @@ import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.Callable;
 
+import org.spanlift.cli.options.LongSolveNotice;
 import org.spanlift.atmosphere.Airspeed;
 import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.ClMaxOptions;
@@ -83,7 +84,7 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         Map<String, Double> overrides = flight.deflections(wing);
         Optional<FlightCondition> condition = flight.condition();
         AtmosphereState atmosphere = flight.atmosphere();
-        WingAnalysis analysis = WingAnalysis.of(wing);
+        WingAnalysis analysis = LongSolveNotice.analyse(wing, spec.commandLine().getErr());
         double[] asked = analysis.deflections(overrides);
         StallStudy study;
         try {
