@@ -173,6 +173,8 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         inputs.removeIf(Objects::isNull);
         output.check(inputs);
         units.check(format);
+        FlightOptions.refuse(spec, "load cases are at equivalent airspeeds on a standard day, where the loads do "
+                + "not depend on the temperature", "--isa-offset");
         safetyFactor = safetyFactorText == null ? null : OptionNumber.parse("--safety-factor", safetyFactorText);
         if (safetyFactor != null && !(safetyFactor >= 1 && safetyFactor <= 3)) {
             throw new InputException("--safety-factor", 0, "", "expected a factor from 1 to 3, got "

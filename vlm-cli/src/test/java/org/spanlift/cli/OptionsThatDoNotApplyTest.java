@@ -30,6 +30,12 @@ class OptionsThatDoNotApplyTest {
     }
 
     @Test
+    void loadsRefuseATemperatureOffset() {
+        refused(CliRun.of("loads", TRAINER, "--weight", "750kg", "--speed", "110kt", "--isa-offset", "15K"),
+                "--isa-offset", "does not apply");
+    }
+
+    @Test
     void solveRefusesALoadFactorWithoutAWeight() {
         refused(CliRun.of("solve", TRAINER, "--load-factor", "2"), "--load-factor", "--weight");
     }
