@@ -37,19 +37,6 @@ class ConcurrentRunsTest {
             columns: [lift_slope_per_rad, e@CL=0.5, stall.CL]
             """;
 
-    private static long newlines(Path p) throws IOException {
-        if (!Files.exists(p)) {
-            return 0;
-        }
-        long n = 0;
-        for (byte b : Files.readAllBytes(p)) {
-            if (b == '\n') {
-                n++;
-            }
-        }
-        return n;
-    }
-
     @Test
     void aSecondSweepIntoTheSameOutputIsRefusedWhileTheFirstRuns() throws Exception {
         Path sweep = Runs.scenario(dir, LONG_SWEEP);
@@ -64,11 +51,11 @@ class ConcurrentRunsTest {
         CliRun second;
         long before;
         try {
-            while (child.isAlive() && newlines(out) < 3) {
+            while (child.isAlive() && Runs.newlines(out) < 3) {
                 Thread.sleep(20);
             }
             assertTrue(child.isAlive(), "the first run is still writing: " + Runs.read(dir.resolve("child.log")));
-            before = newlines(out);
+            before = Runs.newlines(out);
             second = Runs.of("sweep", sweep.toString(), "-o", out.toString(), "--jobs", "1");
             assertTrue(child.isAlive(), "the first run was still writing during the second");
         } finally {
@@ -79,11 +66,11 @@ class ConcurrentRunsTest {
         assertEquals(1, second.err().lines().count(), second.err());
         assertTrue(second.err().startsWith("spanlift: --output: " + out + " is being written by another spanlift run"),
                 second.err());
-        assertTrue(newlines(out) >= before, "the refused run did not cut the first run's rows");
+        assertTrue(Runs.newlines(out) >= before, "the refused run did not cut the first run's rows");
         String text = Runs.read(out);
         List<String> lines = text.lines().toList();
         assertTrue(lines.get(0).startsWith("case,id,"), lines.get(0));
-        long complete = newlines(out) - 1;
+        long complete = Runs.newlines(out) - 1;
         for (int i = 1; i <= complete; i++) {
             assertTrue(lines.get(i).startsWith((i - 1) + ","), "row " + i + " is the first run's: " + lines.get(i));
         }

@@ -36,19 +36,6 @@ class KillAndResumeTest {
             rank: {by: stall.CL, order: max, keep: 10}
             """;
 
-    private static long rows(Path p) throws IOException {
-        if (!Files.exists(p)) {
-            return 0;
-        }
-        long n = 0;
-        for (byte b : Files.readAllBytes(p)) {
-            if (b == '\n') {
-                n++;
-            }
-        }
-        return n;
-    }
-
     @Test
     void aKilledSweepResumesToTheSameBytes() throws Exception {
         Path sweep = Runs.scenario(dir, LONG_SWEEP);
@@ -60,14 +47,14 @@ class KillAndResumeTest {
         pb.redirectOutput(dir.resolve("child.log").toFile());
         Process child = pb.start();
         try {
-            while (child.isAlive() && rows(killed) < 200) {
+            while (child.isAlive() && Runs.newlines(killed) < 200) {
                 Thread.sleep(20);
             }
         } finally {
             child.destroyForcibly();
             child.waitFor();
         }
-        long before = rows(killed);
+        long before = Runs.newlines(killed);
         assertTrue(before >= 1, "the child wrote its header: " + Runs.read(dir.resolve("child.log")));
         Files.write(killed, "1234,0123456789ab".getBytes(StandardCharsets.UTF_8), StandardOpenOption.APPEND);
 

@@ -84,4 +84,18 @@ public final class Runs {
         write(dir, "w.wing.yaml", WING);
         return write(dir, "s.sweep.yaml", sweep);
     }
+
+    /** The newlines in a file (its complete rows), 0 when it does not exist yet. */
+    static long newlines(java.nio.file.Path p) throws java.io.IOException {
+        if (!java.nio.file.Files.exists(p)) {
+            return 0;
+        }
+        long n = 0;
+        for (byte b : java.nio.file.Files.readAllBytes(p)) {
+            if (b == '\n') {
+                n++;
+            }
+        }
+        return n;
+    }
 }
