@@ -21,7 +21,7 @@ fi
 if ! command -v chromium >/dev/null 2>&1; then
     export DEBIAN_FRONTEND=noninteractive
     apt-get update -qq
-    apt-get install -y -qq chromium fonts-dejavu-core >/dev/null
+    apt-get install -y -qq --no-install-recommends chromium fonts-dejavu-core >/dev/null
 fi
 
 rm -rf "$out"
