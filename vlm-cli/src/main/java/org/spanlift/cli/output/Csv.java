@@ -29,11 +29,7 @@ public final class Csv {
             return "";
         }
         if (v instanceof Double d) {
-            if (!Double.isFinite(d)) {
-                throw new IllegalStateException("a result is not a finite number");
-            }
-            return String.format(Locale.ROOT, "%.10g", d).replaceAll("(\\.\\d*?)0+(e|$)", "$1$2").replace(".e", "e")
-                    .replaceAll("\\.$", "");
+            return Numbers.shortest(d);
         }
         return text(String.valueOf(v));
     }

@@ -88,14 +88,7 @@ public final class Json {
     }
 
     private static void number(double d, StringBuilder b) {
-        if (!Double.isFinite(d)) {
-            throw new IllegalStateException("a result is not a finite number");
-        }
-        if (d == Math.rint(d) && Math.abs(d) < 1e15) {
-            b.append((long) d);
-        } else {
-            b.append(d);
-        }
+        b.append(Numbers.shortest(d));
     }
 
     /** Appends the JSON string literal of {@code s} (quoted and escaped) to {@code b}. */

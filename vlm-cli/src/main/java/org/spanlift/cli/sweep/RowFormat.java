@@ -9,6 +9,7 @@ import java.util.regex.Pattern;
 
 import org.spanlift.cli.output.Csv;
 import org.spanlift.cli.output.Json;
+import org.spanlift.cli.output.Numbers;
 import org.spanlift.batch.CaseResult;
 import org.spanlift.sweep.ResultColumn;
 import org.spanlift.sweep.Sweep;
@@ -108,13 +109,7 @@ public enum RowFormat {
     }
 
     static String number(double d) {
-        if (!Double.isFinite(d)) {
-            throw new IllegalStateException("a result is not a finite number");
-        }
-        if (d == Math.rint(d) && Math.abs(d) < 1e15) {
-            return Long.toString((long) d);
-        }
-        return Double.toString(d);
+        return Numbers.shortest(d);
     }
 
     private static String csvCell(Object v) {
