@@ -15,6 +15,7 @@ import java.util.concurrent.Callable;
 import org.spanlift.io.SweepFileReader;
 import org.spanlift.cli.sweep.Manifest;
 import org.spanlift.cli.sweep.Progress;
+import org.spanlift.cli.sweep.ProgressMode;
 import org.spanlift.cli.sweep.Ranker;
 import org.spanlift.cli.sweep.ResultsFile;
 import org.spanlift.cli.sweep.RowFormat;
@@ -59,6 +60,11 @@ public final class SweepCommand implements Callable<Integer> {
     @Option(names = "--shard", paramLabel = "i/n",
             description = "Run only the i-th of n disjoint slices of the cases (join them with spanlift merge).")
     String shard;
+
+    @Option(names = "--progress", paramLabel = "MODE", defaultValue = "auto",
+            description = "Progress on standard error: auto (a bar when standard error is a terminal, else a line "
+                    + "every ten seconds), bar, lines or none. Default: ${DEFAULT-VALUE}.")
+    ProgressMode progressMode;
 
     @Option(names = "--force", description = "Run a design of more than 10 000 000 cases.")
     boolean force;
@@ -109,7 +115,7 @@ public final class SweepCommand implements Callable<Integer> {
         long end = slice.end(n);
         List<String> names = RowFormat.columnNames(sweep);
         PrintWriter err = spec.commandLine().getErr();
-        boolean terminal = System.console() != null;
+        boolean terminal = progressMode.bar();
         long started = System.nanoTime();
         RowFormat f = format;
         if (!toFile) {
@@ -120,7 +126,8 @@ public final class SweepCommand implements Callable<Integer> {
                 ranking != null && ranking.highestFirst(), ranking == null ? 1 : ranking.keep());
         Path ranked = null;
         try (ResultsFile results = ResultsFile.open(target, sweep, slice, format, resume, tally)) {
-            Progress progress = new Progress(err, terminal, end - first, results.next() - first, System::nanoTime);
+            Progress progress = new Progress(progressErr(err), terminal, end - first, results.next() - first,
+                    System::nanoTime);
             SweepRunner.run(sweep, results.next(), end, threads, r -> f.row(names, sweep, r), (r, row) -> {
                 results.write(row);
                 String line = row.substring(0, row.length() - 1);
@@ -144,7 +151,7 @@ public final class SweepCommand implements Callable<Integer> {
     /** Rows streamed to standard output or into a device or FIFO: no manifest, no ranked summary. */
     private Integer stream(OutputTarget target, Sweep sweep, RowFormat f, List<String> names, long first, long end,
             int threads, PrintWriter err, boolean terminal, long started) {
-        Progress progress = new Progress(err, terminal, end - first, 0, System::nanoTime);
+        Progress progress = new Progress(progressErr(err), terminal, end - first, 0, System::nanoTime);
         SweepRunner.Outcome o;
         if (target == null) {
             PrintWriter out = spec.commandLine().getOut();
@@ -210,5 +217,10 @@ public final class SweepCommand implements Callable<Integer> {
             err.println("  " + Cautions.SWEEP);
         }
         err.flush();
+    }
+
+    /** Where progress goes: standard error, or nowhere with {@code --progress none}. */
+    private PrintWriter progressErr(PrintWriter err) {
+        return progressMode == ProgressMode.NONE ? new PrintWriter(java.io.Writer.nullWriter()) : err;
     }
 }
