@@ -65,6 +65,7 @@ public final class SvgWriter {
         Element root = g.getRoot();
         g.dispose();
         styleToSortedCss(root);
+        escapeControlCharacters(root);
         prefixIds(root, figure.id());
         root.removeAttribute("contentScriptType");
         root.removeAttribute("contentStyleType");
@@ -76,10 +77,10 @@ public final class SvgWriter {
         root.setAttribute("class", "spanlift-figure");
         Element title = doc.createElementNS(SVG_NS, "title");
         title.setAttribute("id", figure.id() + "-title");
-        title.setTextContent(figure.title());
+        title.setTextContent(xmlSafe(figure.title()));
         Element desc = doc.createElementNS(SVG_NS, "desc");
         desc.setAttribute("id", figure.id() + "-desc");
-        desc.setTextContent(figure.description());
+        desc.setTextContent(xmlSafe(figure.description()));
         root.insertBefore(desc, root.getFirstChild());
         root.insertBefore(title, desc);
         return root;
@@ -116,6 +117,32 @@ public final class SvgWriter {
             if (c instanceof Element child) {
                 styleToSortedCss(child);
             }
+        }
+    }
+
+    /**
+     * Text as XML 1.0 allows it: control characters other than tab, line feed and carriage return (a wing or
+     * control name may hold one) are written as visible escapes such as {@code \u0001}.
+     */
+    static String xmlSafe(String text) {
+        StringBuilder b = new StringBuilder(text.length());
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if ((c < 0x20 && c != '\t' && c != '\n' && c != '\r') || c == 0xFFFE || c == 0xFFFF) {
+                b.append(String.format("\\u%04x", (int) c));
+            } else {
+                b.append(c);
+            }
+        }
+        return b.toString();
+    }
+
+    private static void escapeControlCharacters(Node n) {
+        if (n.getNodeType() == Node.TEXT_NODE) {
+            n.setNodeValue(xmlSafe(n.getNodeValue()));
+        }
+        for (Node c = n.getFirstChild(); c != null; c = c.getNextSibling()) {
+            escapeControlCharacters(c);
         }
     }
 
