@@ -132,12 +132,12 @@ public final class NonlinearLiftingLineSolver {
     /**
      * Finds the largest CL on the branch that continues the attached-flow solution upward in angle of
      * attack. From {@code fromAlpha} the branch is followed in steps of {@code step} while no station is
-     * past its section's peak (and the step converges); from the last such point on, in steps of {@link #FINE_STEP} (halved at most
-     * three times where Newton fails or lands far from the prediction), until CL falls (a maximum inside the
-     * branch, bracketed by the two points around the best one, 0.04 degree apart) or the branch ends: no
-     * solution continues it, at the smallest step (a fold, past which the lift jumps to another branch, or a
-     * failure of the iteration). The first station to pass its peak is found on the fine steps (to 0.02
-     * degree).
+     * past its section's peak (and the step converges); from the last such point on, in steps of
+     * {@link #FINE_STEP} (halved at most three times where Newton fails or lands far from the prediction),
+     * until CL falls (a maximum inside the branch, bracketed by the points around the best one, at most
+     * 0.04 degree apart) or the branch ends: no solution continues it, at the smallest step (a fold, past
+     * which the lift jumps to another branch, or a failure of the iteration). The first station to pass
+     * its peak is found on the fine steps (to 0.02 degree).
      *
      * @param fromAlpha first angle of attack [rad], where the sweep starts from zero circulation (below
      *     any section's peak)
@@ -176,7 +176,7 @@ public final class NonlinearLiftingLineSolver {
         Converged best = lastClean;
         Converged firstStalled = null;
         String end = null;
-        Converged beforeBest = branch.size() > 1 ? branch.get(branch.size() - 2) : null;
+        Converged beforeBest = null; // CL rises while every station is below its peak: lastClean bounds the maximum
         Converged afterBest = null;
         while (afterBest == null) {
             if (current.alpha >= toAlpha) {
@@ -218,10 +218,10 @@ public final class NonlinearLiftingLineSolver {
      * Solves on a grid of angles twice: continuing upward from zero circulation at {@code fromAlpha}, and
      * downward from zero circulation at {@code toAlpha}. Between grid angles the step is halved (down to
      * 1/64 of the grid step) on a failure or a suspected jump; a jump that persists at the smallest step
-     * is followed (the lift jumps there). After a failure the next angle starts again from zero
-     * circulation. Where both directions converge to different solutions, the equation has several
-     * solutions at that angle (hysteresis between branches, or the close solutions past the peak that the
-     * class comment describes).
+     * is followed (the lift jumps there). After a failure the next angle starts again: upward from zero
+     * circulation, downward from the upward solution at that angle if there is one. Where both directions
+     * converge to different solutions, the equation has several solutions at that angle (hysteresis
+     * between branches, or the close solutions past the peak that the class comment describes).
      *
      * @param step grid spacing [rad], positive; the grid runs from fromAlpha to toAlpha
      */
@@ -241,8 +241,8 @@ public final class NonlinearLiftingLineSolver {
         }
         grid[count - 1] = Math.min(grid[count - 1], toAlpha);
         Problem p = new Problem(wing, terms);
-        NonlinearPoint[] up = p.continuation(grid, step, false);
-        NonlinearPoint[] down = p.continuation(grid, step, true);
+        NonlinearPoint[] up = p.continuation(grid, step, false, null);
+        NonlinearPoint[] down = p.continuation(grid, step, true, up);
         List<LiftSweep.Row> rows = new ArrayList<>();
         for (int i = 0; i < count; i++) {
             rows.add(new LiftSweep.Row(grid[i], up[i], down[i], distinct(up[i], down[i])));
@@ -664,17 +664,20 @@ public final class NonlinearLiftingLineSolver {
         }
 
         /**
-         * Continuation over a grid, upward or (reversed) downward: the first angle, and the angle after any
-         * failure, start from zero circulation; the others continue from the previous angle's solution.
+         * Continuation over a grid, upward or (reversed) downward: the first angle starts from zero
+         * circulation, the angle after a failure from the other direction's solution there if it has one
+         * (else from zero circulation); the others continue from the previous angle's solution.
          */
-        NonlinearPoint[] continuation(double[] grid, double step, boolean downward) {
+        NonlinearPoint[] continuation(double[] grid, double step, boolean downward, NonlinearPoint[] other) {
             int count = grid.length;
             NonlinearPoint[] out = new NonlinearPoint[count];
             Converged current = null;
             for (int s = 0; s < count; s++) {
                 int i = downward ? count - 1 - s : s;
                 if (current == null) {
-                    Outcome o = newton(grid[i], new double[n]);
+                    double[] start = other != null && other[i] instanceof NonlinearSolution o
+                            ? o.fourierCoefficients() : new double[n];
+                    Outcome o = newton(grid[i], start);
                     out[i] = o.point();
                     current = o.converged;
                     continue;

@@ -34,7 +34,8 @@ package org.spanlift.validation.nonlinear;
  *     stands for the theta interval half-way to its neighbours (the outermost one out to the tip)
  * @param index +1, -1 or 0 (above)
  * @param iterations Newton iterations taken
- * @param residual largest residual left, relative to the tolerance's scale (below 1)
+ * @param residual largest residual left, relative to the residuals' scale (at most
+ *     {@link NonlinearLiftingLineSolver#TOLERANCE})
  */
 public record NonlinearSolution(
         double alpha,

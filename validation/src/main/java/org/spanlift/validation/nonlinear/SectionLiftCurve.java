@@ -11,26 +11,29 @@ import java.util.Arrays;
  *   <li>{@link #tableDegrees}: points (alpha in degrees, cl) joined by straight lines, as section data are
  *       used in the step-by-step method of Sivells and Neely (NACA TN 1269, 1947);</li>
  *   <li>{@link #synthetic}: a straight line of slope a0 through alpha0, a parabolic cap that joins it with
- *       the same slope and reaches cl_max with zero slope, and beyond the peak the post-stall lift of
- *       Viterna and Corrigan (1982).</li>
+ *       the same slope and reaches cl_max with zero slope, and beyond the peak, after a smooth blend, the
+ *       post-stall lift of Viterna and Corrigan (1982).</li>
  * </ul>
  *
  * <p>The synthetic curve, with Delta the width of the cap (an angle), has its peak at
  * alpha_s = alpha0 + cl_max / a0 + Delta / 2 and is
  * <pre>
- *   cl = a0 (alpha - alpha0)                                   alpha &lt;= alpha_s - Delta
- *   cl = cl_max - (a0 / (2 Delta)) (alpha_s - alpha)^2             alpha_s - Delta &lt;= alpha &lt;= alpha_s
- *   cl = (CD_max / 2) sin(2 alpha) + K_L cos^2(alpha) / sin(alpha)    alpha_s &lt;= alpha &lt;= 90 deg
+ *   cl = a0 (alpha - alpha0)                                alpha &lt;= alpha_s - Delta
+ *   cl = cl_max - (a0 / (2 Delta)) (alpha_s - alpha)^2          alpha_s - Delta &lt;= alpha &lt;= alpha_s
+ *   cl = cl_max + w(t) (V(alpha) - cl_max), w = 3 t^2 - 2 t^3,  alpha_s &lt;= alpha &lt;= alpha_b,
+ *        t = (alpha - alpha_s) / (alpha_b - alpha_s),  alpha_b = min(alpha_s + Delta, (alpha_s + 90 deg) / 2)
+ *   cl = V(alpha) = (CD_max / 2) sin(2 alpha) + K_L cos^2(alpha) / sin(alpha)     alpha_b &lt;= alpha &lt;= 90 deg
  *   K_L = (cl_max - CD_max sin(alpha_s) cos(alpha_s)) sin(alpha_s) / cos^2(alpha_s)
  * </pre>
- * The parabolic cap is this project's construction (a smooth, C1 rounding of the corner; not a published
- * model). The post-stall branch is Viterna and Corrigan's lift equation (L. A. Viterna and R. D. Corrigan,
- * "Fixed pitch rotor performance of large horizontal axis wind turbines", DOE/NASA Workshop on Large
- * Horizontal Axis Wind Turbines, Cleveland, NASA CP-2230, 1982), which passes through the stall point and
- * falls to zero at 90 degrees; their maximum drag coefficient is CD_max = 1.11 + 0.018 AR with the aspect
- * ratio taken as 50 for a two-dimensional section, so CD_max = 2.01 ({@link #VITERNA_CD_MAX_2D}). These
- * formulas are quoted from memory of the paper (the search tool held no copy of it). The curve has a corner
- * at the peak: slope 0 on the left, the post-stall branch's negative slope on the right.
+ * The parabolic cap and the blend are this project's construction, not a published model: they make
+ * the curve and its slope continuous (Newton's method needs the slope), with zero slope at the peak. V is
+ * Viterna and Corrigan's lift equation (L. A. Viterna and R. D. Corrigan, "Fixed pitch rotor performance
+ * of large horizontal axis wind turbines", DOE/NASA Workshop on Large Horizontal Axis Wind Turbines,
+ * Cleveland, NASA CP-2230, 1982), which passes through the stall point (alpha_s, cl_max) and falls to zero
+ * at 90 degrees; their maximum drag coefficient is CD_max = 1.11 + 0.018 AR with the aspect ratio taken as
+ * 50 for a two-dimensional section, so CD_max = 2.01 ({@link #VITERNA_CD_MAX_2D}). These formulas are
+ * quoted from memory of the paper (the search tool held no copy of it). With Delta = 0 there is neither
+ * cap nor blend: the curve has a corner at the peak, which Newton's method handles badly.
  *
  * <p>Each curve has a domain of effective angles; the solver reports a station whose angle falls outside
  * it instead of extrapolating: a table's first to last point, the synthetic curve's alpha0 - cl_max / a0
@@ -136,8 +139,8 @@ public final class SectionLiftCurve {
                 peak = i;
             }
         }
-        return new SectionLiftCurve(Kind.TABLE, Double.NaN, Double.NaN, Double.NaN, a[peak], c[peak], 0.0, Double.NaN, a, c,
-                a[0], a[n - 1]);
+        return new SectionLiftCurve(Kind.TABLE, Double.NaN, Double.NaN, Double.NaN, a[peak], c[peak], 0.0,
+                Double.NaN, a, c, a[0], a[n - 1]);
     }
 
     /**
