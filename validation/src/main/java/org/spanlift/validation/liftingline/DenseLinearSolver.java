@@ -5,9 +5,10 @@ package org.spanlift.validation.liftingline;
  * lifting-line check shares no linear-algebra code with the vortex-lattice engine.
  *
  * <p>The matrix is factorized once in the constructor; {@link #solve(double[])} then costs O(n^2) per
- * right-hand side.
+ * right-hand side. Public so that the nonlinear lifting-line check ({@code validation.nonlinear}) uses the
+ * same routine for its Newton steps.
  */
-final class DenseLinearSolver {
+public final class DenseLinearSolver {
 
     /** Relative pivot size below which the matrix is treated as singular. */
     private static final double SINGULAR_PIVOT = 1e-14;
@@ -15,6 +16,7 @@ final class DenseLinearSolver {
     private final int n;
     private final double[][] lu;
     private final int[] permutation;
+    private final int determinantSign;
 
     /**
      * Factorizes a copy of {@code matrix} (left untouched).
@@ -22,7 +24,7 @@ final class DenseLinearSolver {
      * @throws IllegalArgumentException if the matrix is not square, holds a non-finite entry, or is
      *     singular to working precision
      */
-    DenseLinearSolver(double[][] matrix) {
+    public DenseLinearSolver(double[][] matrix) {
         n = matrix.length;
         if (n == 0) {
             throw new IllegalArgumentException("empty matrix");
@@ -49,6 +51,7 @@ final class DenseLinearSolver {
         for (int i = 0; i < n; i++) {
             permutation[i] = i;
         }
+        int sign = 1;
         for (int col = 0; col < n; col++) {
             int pivotRow = col;
             double pivotAbs = Math.abs(lu[col][col]);
@@ -69,8 +72,12 @@ final class DenseLinearSolver {
                 int p = permutation[col];
                 permutation[col] = permutation[pivotRow];
                 permutation[pivotRow] = p;
+                sign = -sign;
             }
             double pivot = lu[col][col];
+            if (pivot < 0.0) {
+                sign = -sign;
+            }
             for (int row = col + 1; row < n; row++) {
                 double factor = lu[row][col] / pivot;
                 lu[row][col] = factor;
@@ -83,6 +90,15 @@ final class DenseLinearSolver {
                 }
             }
         }
+        determinantSign = sign;
+    }
+
+    /**
+     * The sign of the matrix's determinant, +1 or -1 (the product of the pivots' signs and the parity of the
+     * row exchanges); a matrix singular to working precision was refused by the constructor.
+     */
+    public int determinantSign() {
+        return determinantSign;
     }
 
     /**
@@ -90,7 +106,7 @@ final class DenseLinearSolver {
      *
      * @throws IllegalArgumentException if {@code rhs} has the wrong length or a non-finite entry
      */
-    double[] solve(double[] rhs) {
+    public double[] solve(double[] rhs) {
         if (rhs.length != n) {
             throw new IllegalArgumentException("right-hand side has " + rhs.length + " entries, expected " + n);
         }
