@@ -39,7 +39,6 @@ import org.spanlift.io.WingFileReader;
 import org.spanlift.loads.LoadsAnalysis;
 import org.spanlift.loads.SpanwiseLoads;
 import org.spanlift.solve.WingAnalysis;
-import org.spanlift.stall.StallAnalysis;
 import org.spanlift.stall.StallStudy;
 import org.spanlift.stall.StripLimits;
 import org.spanlift.structure.LoadCase;
@@ -175,12 +174,11 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
                     notes.add("no structure section: root loads are the air load alone, without inertia relief");
                 }
                 try {
-                    SpanwiseLoads l = LoadsAnalysis.of(analysis, structure, clean).loads(loadCase.get());
-                    OptionalDouble onset = stall.map(st -> OptionalDouble.of(StallAnalysis.estimate(analysis, clean,
-                            StripLimits.of(wing, analysis.lattice(), clean, clMax.assumed()),
-                            loadCase.get().reynoldsPerMetre()).lift())).orElse(OptionalDouble.empty());
-                    if (onset.isPresent() && l.loadCase().loadFactor() > 0
-                            && l.liftCoefficient() > onset.getAsDouble() * (1 + 1e-9)) {
+                    LoadsAnalysis la = LoadsAnalysis.of(analysis, structure, clean);
+                    SpanwiseLoads l = la.loads(loadCase.get());
+                    OptionalDouble onset = stall.isPresent() ? OptionalDouble.of(la.stallOnsetLift(loadCase.get(),
+                            StripLimits.of(wing, analysis.lattice(), clean, clMax.assumed()))) : OptionalDouble.empty();
+                    if (onset.isPresent() && LoadsAnalysis.beyondStall(l, onset.getAsDouble())) {
                         notes.add(String.format(Locale.ROOT, "no root loads: the load case needs a wing CL of %.3f, "
                                 + "above the stall onset %.3f: it cannot be flown at that speed (spanlift loads "
                                 + "--beyond-stall computes it)", l.liftCoefficient(), onset.getAsDouble()));

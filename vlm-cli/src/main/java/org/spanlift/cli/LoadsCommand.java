@@ -156,8 +156,7 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
     private boolean beyondStall(int i, List<SpanwiseLoads> results) {
         OptionalDouble onset = onsets.get(i);
         SpanwiseLoads l = results.get(i);
-        return onset.isPresent() && l.loadCase().loadFactor() > 0
-                && l.liftCoefficient() > onset.getAsDouble() * (1 + 1e-9);
+        return onset.isPresent() && LoadsAnalysis.beyondStall(l, onset.getAsDouble());
     }
 
     /** Where the cases came from, for messages. */
@@ -248,8 +247,8 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         double f = safetyFactor == null ? 1 : safetyFactor;
         for (SpanwiseLoads l : loads.loads(cases)) {
             results.add(f == 1 ? l : l.scaled(f));
-            onsets.add(limits.isPresent() ? OptionalDouble.of(StallAnalysis.estimate(analysis, deflections,
-                    limits.get(), l.loadCase().reynoldsPerMetre()).lift()) : OptionalDouble.empty());
+            onsets.add(limits.isPresent() ? OptionalDouble.of(loads.stallOnsetLift(l.loadCase(), limits.get()))
+                    : OptionalDouble.empty());
         }
         for (int i = 0; i < results.size(); i++) {
             if (beyondStall(i, results) && !beyondStallAllowed) {

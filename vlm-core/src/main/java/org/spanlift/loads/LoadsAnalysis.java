@@ -23,6 +23,8 @@ import org.spanlift.results.ProfileDrag;
 import org.spanlift.results.Solution;
 import org.spanlift.solve.BasisSolutions;
 import org.spanlift.solve.WingAnalysis;
+import org.spanlift.stall.StallAnalysis;
+import org.spanlift.stall.StripLimits;
 
 /**
  * Spanwise shear, bending and torsion of the wing (the first surface) for symmetric load cases, at the
@@ -347,6 +349,22 @@ public final class LoadsAnalysis {
         }
         double area = analysis.wing().reference().area();
         return new Aero(s, s.coefficients(0).lift(), dragArea / area, induced, profile);
+    }
+
+    /**
+     * The wing's stall-onset CL at the case's Reynolds number and this analysis's deflections (critical-
+     * section method): the most lift the case may ask for.
+     */
+    public double stallOnsetLift(LoadCase c, StripLimits limits) {
+        return StallAnalysis.estimate(analysis, deflections, limits, c.reynoldsPerMetre()).lift();
+    }
+
+    /**
+     * True when the case needs more wing lift than the stall onset gives: a positive load factor with a CL
+     * above {@code onsetLift} (beyond round-off), so it cannot be flown at that speed.
+     */
+    public static boolean beyondStall(SpanwiseLoads l, double onsetLift) {
+        return l.loadCase().loadFactor() > 0 && l.liftCoefficient() > onsetLift * (1 + 1e-9);
     }
 
     /** The loads of every case, in order, each unsymmetrical case as its right and then its left half. */

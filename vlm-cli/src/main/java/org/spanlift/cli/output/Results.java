@@ -9,7 +9,7 @@ import org.spanlift.vocabulary.ResultKey;
 
 /**
  * Writes vocabulary results: into JSON trees (a dotted key nests, and an object whose values are all
- * absent is written as null), as flat rows, and as table cells in the wing file's length unit. Every
+ * absent is written as null), and as table cells in the wing file's length unit. Every
  * writer that shows a result goes through here, so the key, its unit and its table label come from the
  * vocabulary alone.
  */
@@ -24,24 +24,10 @@ public final class Results {
      * @param tree the JSON object to fill (modified)
      */
     public static <S> void put(Map<String, Object> tree, List<ResultKey<S>> keys, S source) {
-        put(tree, keys, source, "");
-    }
-
-    /** As {@link #put(Map, List, Object)}, each key after {@code prefix} ({@code "stall."}). */
-    public static <S> void put(Map<String, Object> tree, List<ResultKey<S>> keys, S source, String prefix) {
         for (ResultKey<S> k : keys) {
-            nest(tree, prefix + k.key(), k.of(source));
+            nest(tree, k.key(), k.of(source));
         }
         collapse(tree);
-    }
-
-    /** The values as a flat map, dotted key to value (for flat JSON objects and CSV rows). */
-    public static <S> Map<String, Object> flat(List<ResultKey<S>> keys, S source, String prefix) {
-        Map<String, Object> out = new LinkedHashMap<>();
-        for (ResultKey<S> k : keys) {
-            out.put(prefix + k.key(), k.of(source));
-        }
-        return out;
     }
 
     @SuppressWarnings("unchecked")

@@ -47,24 +47,8 @@ public record WingSummary(Path file, Wing wing, WingAnalysis analysis, double[] 
         return new FlightPoint(spanLoadAtCl, OptionalDouble.empty());
     }
 
-    public double area() {
-        return wing.reference().area();
-    }
-
-    public double span() {
-        return wing.reference().span();
-    }
-
-    public double aspectRatio() {
-        return wing.reference().aspectRatio();
-    }
-
     public double liftSlope() {
         return line.slope();
-    }
-
-    public double zeroLiftAngle() {
-        return line.zeroLiftAngle();
     }
 
     public OptionalDouble spanEfficiency() {
