@@ -1,9 +1,13 @@
 package org.spanlift.geometry;
 
+import java.util.Collections;
+import java.util.NavigableMap;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.TreeMap;
 
 import org.spanlift.section.CamberLine;
+import org.spanlift.section.MeasuredLiftCurve;
 import org.spanlift.section.ProfileDragPolar;
 import org.spanlift.section.Table;
 
@@ -21,10 +25,27 @@ import org.spanlift.section.Table;
  * @param flapClMaxIncrement  increase of cl_max against flap deflection in degrees on flapped stations,
  *                            absent when not given (a handbook default then applies)
  * @param dragPolar           profile drag polar, absent when not given
+ * @param measuredZeroLiftAngle the measured zero-lift angle, rad, absent when not given
+ * @param liftCurve           the measured lift curve through the stall, absent when not given
+ * @param flapLiftCurves      measured lift curves of the section with its flap deflected, by deflection in
+ *                            degrees (empty when none)
  */
 public record Section(String name, CamberLine camber, double incidenceCorrection, double liftSlope,
         Optional<Table> clMax, Optional<Table> flapClMaxIncrement, Optional<ProfileDragPolar> dragPolar,
-        OptionalDouble measuredZeroLiftAngle) {
+        OptionalDouble measuredZeroLiftAngle, Optional<MeasuredLiftCurve> liftCurve,
+        NavigableMap<Double, MeasuredLiftCurve> flapLiftCurves) {
+
+    public Section {
+        flapLiftCurves = Collections.unmodifiableNavigableMap(new TreeMap<>(flapLiftCurves));
+    }
+
+    /** A section without measured lift curves. */
+    public Section(String name, CamberLine camber, double incidenceCorrection, double liftSlope,
+            Optional<Table> clMax, Optional<Table> flapClMaxIncrement, Optional<ProfileDragPolar> dragPolar,
+            OptionalDouble measuredZeroLiftAngle) {
+        this(name, camber, incidenceCorrection, liftSlope, clMax, flapClMaxIncrement, dragPolar,
+                measuredZeroLiftAngle, Optional.empty(), new TreeMap<>());
+    }
 
     /** Thin-airfoil lift slope, per radian. */
     public static final double THIN_AIRFOIL_SLOPE = 2 * Math.PI;
@@ -37,6 +58,6 @@ public record Section(String name, CamberLine camber, double incidenceCorrection
 
     public Section withClMax(Table table) {
         return new Section(name, camber, incidenceCorrection, liftSlope, Optional.of(table), flapClMaxIncrement,
-                dragPolar, measuredZeroLiftAngle);
+                dragPolar, measuredZeroLiftAngle, liftCurve, flapLiftCurves);
     }
 }

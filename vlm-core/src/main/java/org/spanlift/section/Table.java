@@ -50,4 +50,18 @@ public final class Table {
         return (1 - w) * y[lo] + w * y[hi];
     }
 
+    /** Number of points. */
+    public int size() {
+        return x.length;
+    }
+
+    /** Abscissa of point i. */
+    public double x(int i) {
+        return x[i];
+    }
+
+    /** Value at point i. */
+    public double y(int i) {
+        return y[i];
+    }
 }

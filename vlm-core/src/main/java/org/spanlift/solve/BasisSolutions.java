@@ -1,7 +1,6 @@
 package org.spanlift.solve;
 
 import java.util.List;
-import java.util.Arrays;
 
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
@@ -28,16 +27,6 @@ public final class BasisSolutions {
         this.alongX = alongX;
         this.alongZ = alongZ;
         this.controls = controls;
-    }
-
-    /**
-     * Solves the basis conditions, with symmetric and antisymmetric half-span systems when the lattice is
-     * mirrored and {@code useSymmetry} is set, otherwise with the full system.
-     */
-    public static BasisSolutions solve(Lattice lattice, List<ControlSurface> controlList, boolean useSymmetry) {
-        boolean[] all = new boolean[controlList.size()];
-        Arrays.fill(all, true);
-        return solve(lattice, controlList, InfluenceCache.single().systems(lattice), useSymmetry, all);
     }
 
     /**

@@ -11,7 +11,7 @@ import org.spanlift.lattice.Lattice;
  * the planform only; every right-hand side is then one forward and back substitution.
  *
  * <p>Symmetric and antisymmetric systems have the right-half panels as unknowns and add (subtract) the
- * influence of each panel's mirror image. Not thread-safe: one instance per thread.
+ * influence of each panel's mirror image. A solve holds the instance's lock (EJML's solver keeps work arrays).
  */
 public final class InfluenceSystem {
 
@@ -147,7 +147,7 @@ public final class InfluenceSystem {
      * Solves A x = b. Writes the solution into {@code x} (length {@link #size()}, overwritten);
      * {@code b} is not modified.
      */
-    public void solve(double[] b, double[] x) {
+    public synchronized void solve(double[] b, double[] x) {
         System.arraycopy(b, 0, rhs.data, 0, size);
         solver.solve(rhs, solution);
         System.arraycopy(solution.data, 0, x, 0, size);

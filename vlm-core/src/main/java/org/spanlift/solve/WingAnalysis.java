@@ -1,5 +1,7 @@
 package org.spanlift.solve;
 
+import java.util.Arrays;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
@@ -19,7 +21,7 @@ import org.spanlift.results.Solution;
  * double cl = s.coefficients().lift();
  * </pre>
  *
- * Immutable and safe to share between threads once built.
+ * Safe to share between threads once built (the strip bases it solves on demand are kept under a lock).
  */
 public final class WingAnalysis {
 
@@ -27,12 +29,21 @@ public final class WingAnalysis {
     private final Lattice lattice;
     private final BasisSolutions basis;
     private final List<ControlSurface> controls;
+    private final InfluenceCache.Systems systems;
+    private final boolean halves;
+    private final Map<StripKey, StripBasis> stripBases = new HashMap<>();
 
-    private WingAnalysis(Wing wing, Lattice lattice, BasisSolutions basis) {
+    private WingAnalysis(Wing wing, Lattice lattice, BasisSolutions basis, InfluenceCache.Systems systems,
+            boolean halves) {
         this.wing = wing;
         this.lattice = lattice;
         this.basis = basis;
         this.controls = wing.controls();
+        this.systems = systems;
+        this.halves = halves;
+    }
+
+    private record StripKey(List<Integer> strips, boolean symmetric) {
     }
 
     /** Builds the lattice and solves the basis, with half-span symmetric systems where the wing allows. */
@@ -46,7 +57,12 @@ public final class WingAnalysis {
      */
     public static WingAnalysis of(Wing wing, boolean useSymmetry) {
         Lattice lattice = LatticeBuilder.build(wing);
-        return new WingAnalysis(wing, lattice, BasisSolutions.solve(lattice, wing.controls(), useSymmetry));
+        boolean[] all = new boolean[wing.controls().size()];
+        Arrays.fill(all, true);
+        InfluenceCache.Systems systems = InfluenceCache.single().systems(lattice);
+        return new WingAnalysis(wing, lattice,
+                BasisSolutions.solve(lattice, wing.controls(), systems, useSymmetry, all), systems,
+                useSymmetry && lattice.mirrored());
     }
 
     /**
@@ -63,8 +79,9 @@ public final class WingAnalysis {
                 needed[c] |= set[c] != 0;
             }
         }
-        return new WingAnalysis(wing, lattice,
-                BasisSolutions.solve(lattice, wing.controls(), cache.systems(lattice), true, needed));
+        InfluenceCache.Systems systems = cache.systems(lattice);
+        return new WingAnalysis(wing, lattice, BasisSolutions.solve(lattice, wing.controls(), systems, true, needed),
+                systems, lattice.mirrored());
     }
 
     public Wing wing() {
@@ -77,6 +94,21 @@ public final class WingAnalysis {
 
     public BasisSolutions basis() {
         return basis;
+    }
+
+    /**
+     * The incidence-correction basis of the given strips, solved on the factorization of this wing's
+     * systems on first use and kept.
+     *
+     * @param strips    lattice strip indices; right-half strips only when {@code symmetric}
+     * @param symmetric each correction mirrored (a symmetric condition of a mirrored wing)
+     */
+    public StripBasis stripBasis(List<Integer> strips, boolean symmetric) {
+        StripKey key = new StripKey(List.copyOf(strips), symmetric);
+        synchronized (systems) {
+            return stripBases.computeIfAbsent(key,
+                    k -> StripBasis.solve(lattice, systems, halves, k.strips(), k.symmetric()));
+        }
     }
 
     /** The control deflections of the wing file, rad, in control order. */
