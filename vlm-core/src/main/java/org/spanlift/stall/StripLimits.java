@@ -182,6 +182,16 @@ public final class StripLimits {
         return zeroLiftAngle[i] + cl / liftSlope[i];
     }
 
+    /** The section lift slope of wing strip i, per radian (measured where given, else 2 pi). */
+    public double liftSlope(int i) {
+        return liftSlope[i];
+    }
+
+    /** The section zero-lift angle of wing strip i, rad (measured where given, else thin-airfoil). */
+    public double zeroLiftAngle(int i) {
+        return zeroLiftAngle[i];
+    }
+
     /** The name of the section nearest to wing strip i. */
     public String section(int i) {
         return section[i];

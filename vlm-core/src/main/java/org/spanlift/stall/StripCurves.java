@@ -1,0 +1,123 @@
+package org.spanlift.stall;
+
+import java.util.List;
+
+import org.spanlift.geometry.Section;
+import org.spanlift.geometry.SectionBlend;
+import org.spanlift.geometry.Surface;
+import org.spanlift.geometry.Wing;
+import org.spanlift.input.RefusedException;
+import org.spanlift.lattice.Lattice;
+import org.spanlift.lattice.Strip;
+import org.spanlift.section.ThinAirfoil;
+
+/**
+ * The section lift curve of every strip of {@link StripLimits} (the wing's strips outboard of the fuselage
+ * side), at the strips' Reynolds numbers, and the zero-lift angle that the lattice gives each strip in
+ * thin-airfoil form. A section with a measured lift curve uses it; one without gets a
+ * {@link SyntheticCurve} from its lift slope, zero-lift angle and cl_max (assumed where allowed), and the
+ * curves say so. Between stations the curves are blended as the sections are.
+ */
+public final class StripCurves {
+
+    private final StripLimits limits;
+    private final SectionCurve[] curves;
+    private final double[] latticeZeroLift;
+    private final boolean synthetic;
+
+    private StripCurves(StripLimits limits, SectionCurve[] curves, double[] latticeZeroLift, boolean synthetic) {
+        this.limits = limits;
+        this.curves = curves;
+        this.latticeZeroLift = latticeZeroLift;
+        this.synthetic = synthetic;
+    }
+
+    /**
+     * The curves of the wing's strips at the given deflections (rad, control order).
+     *
+     * @param reynoldsPerMetre rho V / mu at the flight condition (true speed), or 0 when unknown (measured
+     *                         curves and cl_max tables are then read at their lowest Reynolds number)
+     * @throws RefusedException when a control of the wing is deflected (not yet modelled)
+     */
+    public static StripCurves of(Wing wing, Lattice lattice, double[] deflections, StripLimits limits,
+            double reynoldsPerMetre) {
+        for (double d : deflections) {
+            if (d != 0) {
+                throw new RefusedException("maximum lift with a deflected control is not available yet");
+            }
+        }
+        Surface main = wing.main();
+        List<Integer> ids = limits.strips();
+        int n = ids.size();
+        SectionCurve[] curves = new SectionCurve[n];
+        double[] zeta = new double[n];
+        boolean synthetic = false;
+        for (int i = 0; i < n; i++) {
+            Strip st = lattice.strips().get(ids.get(i));
+            SectionBlend blend = main.planform().section(main.mirrored() ? Math.abs(st.y()) : st.y());
+            Section a = wing.sections().get(blend.inner());
+            Section b = wing.sections().get(blend.outer());
+            double w = blend.weight();
+            double re = reynoldsPerMetre * st.chord();
+            zeta[i] = (1 - w) * zeroLift(a) + w * zeroLift(b);
+            if (a.liftCurve().isEmpty() && b.liftCurve().isEmpty()) {
+                synthetic = true;
+                curves[i] = new SyntheticCurve(limits.liftSlope(i), limits.zeroLiftAngle(i),
+                        limits.clMax(i, re) - limits.flapIncrement(i));
+            } else {
+                synthetic |= a.liftCurve().isEmpty() || b.liftCurve().isEmpty();
+                curves[i] = SectionCurve.blend(curve(a, re, limits, i), curve(b, re, limits, i), w);
+            }
+        }
+        return new StripCurves(limits, curves, zeta, synthetic);
+    }
+
+    private static SectionCurve curve(Section s, double re, StripLimits limits, int i) {
+        if (s.liftCurve().isPresent()) {
+            return SectionCurve.table(s.liftCurve().get().at(re));
+        }
+        return new SyntheticCurve(s.liftSlope(), zeroLift(s), limits.clMax(i, re) - limits.flapIncrement(i));
+    }
+
+    /** The section's zero-lift angle as the lattice sees it: measured where given, else thin-airfoil, rad. */
+    private static double zeroLift(Section s) {
+        return s.measuredZeroLiftAngle().isPresent() ? s.measuredZeroLiftAngle().getAsDouble()
+                : ThinAirfoil.zeroLiftAngle(s.camber());
+    }
+
+    /**
+     * Replaces every curve by the thin-airfoil line of its strip, cl = 2 pi (alpha - alpha_0,lattice): the
+     * section curve for which the coupled solution is the linear one.
+     */
+    public StripCurves thinAirfoilLines() {
+        SectionCurve[] lines = new SectionCurve[curves.length];
+        for (int i = 0; i < lines.length; i++) {
+            lines[i] = SectionCurve.line(2 * Math.PI, latticeZeroLift[i]);
+        }
+        return new StripCurves(limits, lines, latticeZeroLift, false);
+    }
+
+    /** The limits whose strips these curves follow. */
+    public StripLimits limits() {
+        return limits;
+    }
+
+    /** The curve of wing strip i (index into {@link StripLimits#strips()}). */
+    public SectionCurve curve(int i) {
+        return curves[i];
+    }
+
+    /**
+     * The zero-lift angle of wing strip i in the lattice's thin-airfoil form, rad: the angle of attack of
+     * the strip's chord line at which its lattice lift would vanish in two dimensions (the section's
+     * measured or thin-airfoil zero-lift angle, less the thin-airfoil effect of a deflected control).
+     */
+    public double latticeZeroLift(int i) {
+        return latticeZeroLift[i];
+    }
+
+    /** True when some strip's curve was built from lift slope, zero-lift angle and cl_max. */
+    public boolean synthetic() {
+        return synthetic;
+    }
+}
