@@ -33,6 +33,7 @@ public final class LiftBranch {
     private final List<CoupledPoint> upward;
     private final List<CoupledPoint> downward;
     private final CoupledPoint maximum;
+    private final boolean peak;
     private final End end;
     private final OptionalDouble jacobianSignChange;
 
@@ -49,11 +50,12 @@ public final class LiftBranch {
     }
 
     private LiftBranch(SectionCoupling coupling, List<CoupledPoint> upward, List<CoupledPoint> downward,
-            CoupledPoint maximum, End end, OptionalDouble jacobianSignChange) {
+            CoupledPoint maximum, boolean peak, End end, OptionalDouble jacobianSignChange) {
         this.coupling = coupling;
         this.upward = List.copyOf(upward);
         this.downward = List.copyOf(downward);
         this.maximum = maximum;
+        this.peak = peak;
         this.end = end;
         this.jacobianSignChange = jacobianSignChange;
     }
@@ -108,10 +110,23 @@ public final class LiftBranch {
             }
             n++;
         }
-        best = indexOfMaximum(up);
-        CoupledPoint maximum = up.get(best);
-        if (best > 0 && best < up.size() - 1) {
-            maximum = refine(coupling, up.get(best - 1), up.get(best + 1).alpha(), maximum);
+        int stableEnd = up.size();
+        for (int i = 1; i < up.size(); i++) {
+            if (up.get(i).stableJacobian() != up.get(0).stableJacobian()) {
+                stableEnd = i;
+                break;
+            }
+        }
+        List<CoupledPoint> stable = up.subList(0, stableEnd);
+        best = indexOfMaximum(stable);
+        CoupledPoint maximum = stable.get(best);
+        boolean peak = false;
+        if (best > 0) {
+            double hi = best + 1 < up.size() ? up.get(best + 1).alpha() : maximum.alpha() + step;
+            maximum = refine(coupling, new ArrayList<>(stable), up.get(best - 1).alpha(), hi, maximum);
+            for (int i = best + 1; i < stableEnd; i++) {
+                peak |= stable.get(i).lift() < maximum.lift();
+            }
         }
         List<CoupledPoint> down = new ArrayList<>();
         CoupledPoint from = up.get(up.size() - 1);
@@ -126,7 +141,7 @@ public final class LiftBranch {
                 break;
             }
         }
-        return new LiftBranch(coupling, up, down, maximum, end, signChange);
+        return new LiftBranch(coupling, up, down, maximum, peak, end, signChange);
     }
 
     private static int indexOfMaximum(List<CoupledPoint> points) {
@@ -139,33 +154,49 @@ public final class LiftBranch {
         return best;
     }
 
-    /** Golden-section search for the maximum between below.alpha and hi, continued from below. */
-    private static CoupledPoint refine(SectionCoupling coupling, CoupledPoint below, double hi, CoupledPoint best) {
-        double lo = below.alpha();
+    /**
+     * Golden-section search for the highest CL between lo and hi on the branch of the given points: each
+     * solve continues from the nearest point below it (else the nearest above) and counts only when it
+     * converges with the branch's sign of the Jacobian's determinant.
+     */
+    private static CoupledPoint refine(SectionCoupling coupling, List<CoupledPoint> known, double lo, double hi,
+            CoupledPoint best) {
+        boolean sign = known.get(0).stableJacobian();
         double g = (Math.sqrt(5) - 1) / 2;
         double tol = Math.toRadians(REFINE_DEG);
         CoupledPoint top = best;
         while (hi - lo > tol) {
             double c = hi - g * (hi - lo);
             double d = lo + g * (hi - lo);
-            CoupledPoint pc = coupling.solve(c, below.corrections());
-            CoupledPoint pd = coupling.solve(d, pc.converged() ? pc.corrections() : below.corrections());
-            if (!pc.converged() || !pd.converged()) {
-                break;
-            }
-            if (pc.lift() > top.lift()) {
-                top = pc;
-            }
-            if (pd.lift() > top.lift()) {
-                top = pd;
-            }
-            if (pc.lift() >= pd.lift()) {
+            double fc = onBranch(coupling, known, c, sign);
+            double fd = onBranch(coupling, known, d, sign);
+            if (fc >= fd) {
                 hi = d;
             } else {
                 lo = c;
             }
         }
+        for (CoupledPoint p : known) {
+            if (p.lift() > top.lift()) {
+                top = p;
+            }
+        }
         return top;
+    }
+
+    private static double onBranch(SectionCoupling coupling, List<CoupledPoint> known, double alpha, boolean sign) {
+        CoupledPoint start = known.get(0);
+        for (CoupledPoint p : known) {
+            if (p.alpha() <= alpha && p.alpha() >= start.alpha()) {
+                start = p;
+            }
+        }
+        CoupledPoint q = coupling.solve(alpha, start.corrections());
+        if (q.converged() && q.stableJacobian() == sign) {
+            known.add(q);
+            return q.lift();
+        }
+        return Double.NEGATIVE_INFINITY;
     }
 
     public SectionCoupling coupling() {
@@ -182,7 +213,10 @@ public final class LiftBranch {
         return downward;
     }
 
-    /** The point of highest CL on the upward trace (refined). */
+    /**
+     * The point of highest CL on the upward trace before the Jacobian's determinant first changes sign
+     * (refined).
+     */
     public CoupledPoint maximum() {
         return maximum;
     }
@@ -193,13 +227,12 @@ public final class LiftBranch {
     }
 
     /**
-     * True when the maximum is a true maximum of the branch (the CL falls beyond it on the same branch),
-     * false when the branch ends at or just after its highest point (a fold or a curve's end) and the
-     * highest converged point is all that can be said.
+     * True when the maximum is a true maximum of the branch (the CL falls beyond it before the Jacobian's
+     * determinant changes sign), false when the branch ends at or just after its highest point (a fold, a
+     * branch point or a curve's end) and the highest converged point on it is all that can be said.
      */
     public boolean maximumIsPeak() {
-        return upward.get(upward.size() - 1).alpha() > maximum.alpha()
-                && upward.get(upward.size() - 1).lift() < maximum.lift();
+        return peak;
     }
 
     /** The first angle of the upward trace where the Jacobian's determinant changed sign, rad. */

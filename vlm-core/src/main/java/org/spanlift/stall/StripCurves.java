@@ -41,17 +41,13 @@ public final class StripCurves {
      */
     public static StripCurves of(Wing wing, Lattice lattice, double[] deflections, StripLimits limits,
             double reynoldsPerMetre) {
-        for (double d : deflections) {
-            if (d != 0) {
-                throw new RefusedException("maximum lift with a deflected control is not available yet");
-            }
-        }
         Surface main = wing.main();
         List<Integer> ids = limits.strips();
         int n = ids.size();
         SectionCurve[] curves = new SectionCurve[n];
         double[] zeta = new double[n];
         boolean synthetic = false;
+        boolean curvesNeedFlapModel = false;
         for (int i = 0; i < n; i++) {
             Strip st = lattice.strips().get(ids.get(i));
             SectionBlend blend = main.planform().section(main.mirrored() ? Math.abs(st.y()) : st.y());
@@ -60,6 +56,13 @@ public final class StripCurves {
             double w = blend.weight();
             double re = reynoldsPerMetre * st.chord();
             zeta[i] = (1 - w) * zeroLift(a) + w * zeroLift(b);
+            int last = st.firstPanel() + st.rows() - 1;
+            int control = lattice.controlOf(last);
+            double delta = control < 0 ? 0 : deflections[control] * lattice.controlSign(last);
+            if (delta != 0) {
+                zeta[i] -= ThinAirfoil.flapEffectiveness(wing.controls().get(control).chordFraction()) * delta;
+            }
+            curvesNeedFlapModel |= delta != 0;
             if (a.liftCurve().isEmpty() && b.liftCurve().isEmpty()) {
                 synthetic = true;
                 curves[i] = new SyntheticCurve(limits.liftSlope(i), limits.zeroLiftAngle(i),
@@ -69,7 +72,7 @@ public final class StripCurves {
                 curves[i] = SectionCurve.blend(curve(a, re, limits, i), curve(b, re, limits, i), w);
             }
         }
-        return new StripCurves(limits, curves, zeta, synthetic);
+        return new StripCurves(limits, curvesNeedFlapModel ? null : curves, zeta, synthetic);
     }
 
     private static SectionCurve curve(Section s, double re, StripLimits limits, int i) {
@@ -90,7 +93,7 @@ public final class StripCurves {
      * section curve for which the coupled solution is the linear one.
      */
     public StripCurves thinAirfoilLines() {
-        SectionCurve[] lines = new SectionCurve[curves.length];
+        SectionCurve[] lines = new SectionCurve[latticeZeroLift.length];
         for (int i = 0; i < lines.length; i++) {
             lines[i] = SectionCurve.line(2 * Math.PI, latticeZeroLift[i]);
         }
@@ -104,6 +107,9 @@ public final class StripCurves {
 
     /** The curve of wing strip i (index into {@link StripLimits#strips()}). */
     public SectionCurve curve(int i) {
+        if (curves == null) {
+            throw new RefusedException("maximum lift with a deflected control is not available yet");
+        }
         return curves[i];
     }
 
