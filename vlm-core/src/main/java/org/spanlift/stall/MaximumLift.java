@@ -1,0 +1,209 @@
+package org.spanlift.stall;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Optional;
+import java.util.OptionalDouble;
+
+import org.spanlift.atmosphere.Airspeed;
+import org.spanlift.flight.FlightCondition;
+import org.spanlift.geometry.ControlKind;
+import org.spanlift.geometry.ControlSurface;
+import org.spanlift.geometry.Wing;
+import org.spanlift.input.RefusedException;
+import org.spanlift.results.Coefficients;
+import org.spanlift.results.Solution;
+import org.spanlift.solve.WingAnalysis;
+
+/**
+ * The wing's maximum lift from its section lift curves (the lattice coupled with them, {@link SectionCoupling},
+ * traced through the stall, {@link LiftBranch}), how the stall spreads on the way there, and whether the
+ * aileron stations are still below their section peak at the maximum. Angles in radians, lengths in metres.
+ *
+ * @param lift                 the highest CL of the branch (whole lattice)
+ * @param alpha                its angle of attack
+ * @param peak                 true when it is a maximum inside the branch; false when the branch ends (a fold,
+ *                             a branch point, a curve's end) at or just after it
+ * @param end                  how the traced branch ended
+ * @param stalledSpanFraction  the share of the wing's span (outboard of the fuselage side) past its section
+ *                             peak at the maximum
+ * @param firstStall           where and when the first strip passes its section peak on the branch
+ * @param aileron              the aileron stations at the maximum, when the wing has ailerons
+ * @param synthetic            true when some strip's section curve was synthetic (built from cl_max)
+ * @param multipleSolutions    the range of angles [from, to] where a second solution was found, if any
+ * @param strips               every strip with its own correction at the maximum, y ascending
+ * @param curve                the coupled lift curve, alpha ascending, up to the end of the branch
+ * @param speed                the stall speed at this maximum, with a flight condition
+ */
+public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.End end, double stalledSpanFraction,
+        Optional<FirstStall> firstStall, Optional<AileronState> aileron, boolean synthetic,
+        Optional<double[]> multipleSolutions, List<StripState> strips, List<CurvePoint> curve,
+        Optional<Speed> speed) {
+
+    /** Relative change of the stall speed below which the Reynolds-number iteration stops. */
+    public static final double SPEED_TOLERANCE = 1e-7;
+    private static final int MAX_ITERATIONS = 50;
+
+    public MaximumLift {
+        strips = List.copyOf(strips);
+        curve = List.copyOf(curve);
+        multipleSolutions = multipleSolutions.map(double[]::clone);
+    }
+
+    /** The first strip past its peak on the branch: its y (right-hand), eta, and the wing's alpha and CL. */
+    public record FirstStall(double y, double eta, double alpha, double lift) {
+    }
+
+    /**
+     * The aileron stations at the maximum.
+     *
+     * @param belowPeak true when every aileron strip is below its section peak
+     * @param margin    the least (section peak cl - cl) over the aileron strips
+     * @param y         where that least margin is
+     */
+    public record AileronState(boolean belowPeak, double margin, double y) {
+    }
+
+    /** One strip at the maximum: cl, its section curve's peak, the effective angle and the peak's angle. */
+    public record StripState(double y, double eta, double cl, double peakCl, double sectionAngle, double peakAngle) {
+        public boolean pastPeak() {
+            return sectionAngle > peakAngle;
+        }
+    }
+
+    /** One converged point of the coupled lift curve. */
+    public record CurvePoint(double alpha, double lift, double inducedDrag, double pitchingMoment,
+            double stalledSpanFraction) {
+    }
+
+    /** The stall speed at the maximum lift, with the Reynolds numbers iterated together with it. */
+    public record Speed(double equivalent, double trueSpeed) {
+    }
+
+    /**
+     * The maximum lift at the given deflections (rad, control order).
+     *
+     * @param reynoldsPerMetre rho V / mu (true speed), or 0 to read tables at their lowest Reynolds number
+     */
+    public static MaximumLift of(WingAnalysis analysis, double[] deflections, StripLimits limits,
+            double reynoldsPerMetre) {
+        StripCurves curves = StripCurves.of(analysis.wing(), analysis.lattice(), deflections, limits,
+                reynoldsPerMetre);
+        SectionCoupling coupling = SectionCoupling.of(analysis, deflections, curves);
+        LiftBranch branch = LiftBranch.trace(coupling, analysis.liftCurve(deflections).zeroLiftAngle());
+        return from(analysis, branch, Optional.empty());
+    }
+
+    /**
+     * The maximum lift and the stall speed it gives in a flight condition, the strips' Reynolds numbers
+     * iterated with the speed until it changes by less than {@value #SPEED_TOLERANCE} of itself.
+     */
+    public static MaximumLift atStall(WingAnalysis analysis, double[] deflections, StripLimits limits,
+            FlightCondition condition) {
+        double nu = condition.atmosphere().kinematicViscosity();
+        double vt = 30;
+        for (int k = 1; k <= MAX_ITERATIONS; k++) {
+            MaximumLift m = of(analysis, deflections, limits, vt / nu);
+            double ve = condition.equivalentSpeedFor(m.lift(), analysis.wing().reference());
+            double next = Airspeed.trueFromEquivalent(ve, condition.atmosphere());
+            if (Math.abs(next - vt) <= SPEED_TOLERANCE * next) {
+                MaximumLift settled = of(analysis, deflections, limits, next / nu);
+                double veSettled = condition.equivalentSpeedFor(settled.lift(), analysis.wing().reference());
+                Speed speed = new Speed(veSettled, Airspeed.trueFromEquivalent(veSettled, condition.atmosphere()));
+                return settled.withSpeed(speed);
+            }
+            vt = next;
+        }
+        throw new RefusedException("the stall speed at maximum lift and the Reynolds numbers did not settle; "
+                + "check the section data against Reynolds number");
+    }
+
+    private MaximumLift withSpeed(Speed s) {
+        return new MaximumLift(lift, alpha, peak, end, stalledSpanFraction, firstStall, aileron, synthetic,
+                multipleSolutions, strips, curve, Optional.of(s));
+    }
+
+    private static MaximumLift from(WingAnalysis analysis, LiftBranch branch, Optional<Speed> speed) {
+        SectionCoupling c = branch.coupling();
+        CoupledPoint top = branch.maximum();
+        Wing wing = analysis.wing();
+        double semi = wing.main().mirrored() ? wing.main().planform().yEnd()
+                : 0.5 * (wing.main().planform().yEnd() - wing.main().planform().yStart());
+        List<StripState> states = new ArrayList<>();
+        for (int i = 0; i < c.size(); i++) {
+            SectionCurve f = c.curves().curve(c.wingIndex(i));
+            double y = c.strip(i).y();
+            states.add(new StripState(y, Math.abs(y) / semi, top.cl(i), f.peakLift(), top.sectionAngle(i),
+                    f.peakAngle()));
+        }
+        states.sort(Comparator.comparingDouble(StripState::y));
+        List<CurvePoint> curve = new ArrayList<>();
+        for (CoupledPoint p : branch.upward()) {
+            Coefficients co = c.solution(p).coefficients();
+            curve.add(new CurvePoint(p.alpha(), p.lift(), co.inducedDrag(), co.pitchingMoment(), stalledFraction(c, p)));
+        }
+        return new MaximumLift(top.lift(), top.alpha(), branch.maximumIsPeak(), branch.end(),
+                stalledFraction(c, top), firstStall(c, branch, semi), aileron(wing, c, top), c.curves().synthetic(),
+                branch.multipleSolutions(), states, curve, speed);
+    }
+
+    /** The share of the span (by strip width) past its section peak. */
+    static double stalledFraction(SectionCoupling c, CoupledPoint p) {
+        double total = 0;
+        double past = 0;
+        for (int i = 0; i < c.size(); i++) {
+            double w = c.strip(i).width();
+            total += w;
+            if (c.pastPeak(p, i)) {
+                past += w;
+            }
+        }
+        return past / total;
+    }
+
+    private static Optional<FirstStall> firstStall(SectionCoupling c, LiftBranch branch, double semi) {
+        for (CoupledPoint p : branch.upward()) {
+            int first = -1;
+            double most = 0;
+            for (int i = 0; i < c.size(); i++) {
+                double over = p.sectionAngle(i) - c.curves().curve(c.wingIndex(i)).peakAngle();
+                if (over > 0 && (first < 0 || over > most)) {
+                    first = i;
+                    most = over;
+                }
+            }
+            if (first >= 0) {
+                double y = Math.abs(c.strip(first).y());
+                return Optional.of(new FirstStall(y, y / semi, p.alpha(), p.lift()));
+            }
+        }
+        return Optional.empty();
+    }
+
+    private static Optional<AileronState> aileron(Wing wing, SectionCoupling c, CoupledPoint top) {
+        AileronState best = null;
+        boolean below = true;
+        for (ControlSurface cs : wing.main().controls()) {
+            if (cs.kind() != ControlKind.AILERON) {
+                continue;
+            }
+            for (int i = 0; i < c.size(); i++) {
+                double y = Math.abs(c.strip(i).y());
+                if (y > cs.from() && y < cs.to()) {
+                    below &= !c.pastPeak(top, i);
+                    double margin = c.curves().curve(c.wingIndex(i)).peakLift() - top.cl(i);
+                    if (best == null || margin < best.margin()) {
+                        best = new AileronState(true, margin, y);
+                    }
+                }
+            }
+        }
+        return best == null ? Optional.empty() : Optional.of(new AileronState(below, best.margin(), best.y()));
+    }
+
+    /** The coupled solution at the maximum is not kept; this re-solves it for span loads. */
+    public static Solution solutionAt(SectionCoupling c, CoupledPoint p) {
+        return c.solution(p);
+    }
+}
