@@ -22,6 +22,8 @@
  * <p>{@link org.spanlift.section.CamberLines} parses designations and reads coordinate files;
  * {@link org.spanlift.section.ThinAirfoil} gives the zero-lift angle, the quarter-chord moment and the
  * ideal angle with its lift coefficient; {@link org.spanlift.section.SectionCoordinates} builds NACA
- * section contours (thickness laid normal to the mean line).
+ * section contours (thickness laid normal to the mean line); {@link org.spanlift.section.PlainFlap} corrects
+ * a plain flap's thin-airfoil lift for viscous losses and large deflections and gives its cl_max increment
+ * (handbook method; its tabulated values are recalled, not read, as its notes say).
  */
 package org.spanlift.section;
