@@ -2,6 +2,7 @@ package org.spanlift.cli;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Collections;
 import java.util.EnumSet;
 import java.util.LinkedHashMap;
@@ -33,7 +34,10 @@ import org.spanlift.input.InputException;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.solve.WingAnalysis;
 import org.spanlift.stall.MissingSectionDataException;
+import org.spanlift.section.PlainFlap;
+import org.spanlift.stall.MaximumLift;
 import org.spanlift.stall.StallEstimate;
+import org.spanlift.stall.SyntheticCurve;
 import org.spanlift.stall.StallStudy;
 import org.spanlift.stall.StallStudy.Configuration;
 import org.spanlift.vocabulary.ResultKey;
@@ -121,6 +125,40 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         return m;
     }
 
+    private static Map<String, Object> maxLiftJson(Configuration c) {
+        MaximumLift m = c.maximumLift();
+        Map<String, Object> o = new LinkedHashMap<>();
+        List<ResultKey<MaximumLift>> keys = m.speed().isPresent() ? Vocabulary.MAX_LIFT
+                : Vocabulary.MAX_LIFT.stream().filter(k -> !k.key().startsWith("stall_speed")).toList();
+        Results.put(o, keys, m);
+        o.put("method", "lattice coupled with the section lift curves (strip incidence corrections), traced "
+                + "through the stall");
+        o.put("section_curves", m.synthetic() ? "synthetic where no lift-curve is given: " + SyntheticCurve.DESCRIPTION
+                : "measured");
+        if (Arrays.stream(c.deflections()).anyMatch(d -> d != 0)) {
+            o.put("flap_model", PlainFlap.source());
+        }
+        List<MaximumLift.StripState> right = m.strips().stream().filter(s -> s.y() > 0).toList();
+        Map<String, Object> strips = new LinkedHashMap<>();
+        strips.put("y", right.stream().mapToDouble(MaximumLift.StripState::y).toArray());
+        strips.put("eta", right.stream().mapToDouble(MaximumLift.StripState::eta).toArray());
+        strips.put("cl", right.stream().mapToDouble(MaximumLift.StripState::cl).toArray());
+        strips.put("cl_peak", right.stream().mapToDouble(MaximumLift.StripState::peakCl).toArray());
+        strips.put("cl_over_cl_peak", right.stream().mapToDouble(s -> s.cl() / s.peakCl()).toArray());
+        strips.put("section_alpha_deg", right.stream().mapToDouble(s -> Math.toDegrees(s.sectionAngle())).toArray());
+        strips.put("past_peak", right.stream().map(MaximumLift.StripState::pastPeak).toList());
+        o.put("strips_at_maximum", strips);
+        Map<String, Object> curve = new LinkedHashMap<>();
+        curve.put("alpha_deg", m.curve().stream().mapToDouble(p -> Math.toDegrees(p.alpha())).toArray());
+        curve.put("CL", m.curve().stream().mapToDouble(MaximumLift.CurvePoint::lift).toArray());
+        curve.put("CDi", m.curve().stream().mapToDouble(MaximumLift.CurvePoint::inducedDrag).toArray());
+        curve.put("Cm", m.curve().stream().mapToDouble(MaximumLift.CurvePoint::pitchingMoment).toArray());
+        curve.put("stalled_span_fraction", m.curve().stream().mapToDouble(MaximumLift.CurvePoint::stalledSpanFraction)
+                .toArray());
+        o.put("progression", curve);
+        return o;
+    }
+
     private static Map<String, Object> json(WingResult wingResult, StallStudy study, AtmosphereState atmosphere) {
         Wing wing = wingResult.analysis().wing();
         Map<String, Object> root = new LinkedHashMap<>();
@@ -144,17 +182,20 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         root.put("atmosphere", atm);
         root.put("fuselage_half_width", wing.main().fuselageHalfWidth());
         root.put("stall", stallJson(study.clean()));
+        root.put("max_lift", maxLiftJson(study.clean()));
         study.flaps().ifPresent(flaps -> {
             Map<String, Object> f = stallJson(flaps);
             f.put("deflections_deg", deflections(wing, flaps.deflections()));
             root.put("stall_flaps", f);
+            root.put("max_lift_flaps", maxLiftJson(flaps));
             Results.put(root, Vocabulary.select(Vocabulary.STUDY, "flap_increment_CL"), study);
         });
         study.condition().ifPresent(fc -> {
             List<ResultKey<StallStudy>> speeds = study.flaps().isPresent()
                     ? Vocabulary.select(Vocabulary.STUDY, "stall_speed.clean_eas", "stall_speed.clean_tas",
-                            "stall_speed.flaps_eas", "stall_speed.flaps_tas")
-                    : Vocabulary.select(Vocabulary.STUDY, "stall_speed.clean_eas", "stall_speed.clean_tas");
+                            "stall_speed.flaps_eas", "stall_speed.flaps_tas", "stall_speed.basis")
+                    : Vocabulary.select(Vocabulary.STUDY, "stall_speed.clean_eas", "stall_speed.clean_tas",
+                            "stall_speed.basis");
             Results.put(root, speeds, study);
             @SuppressWarnings("unchecked")
             Map<String, Object> sp = (Map<String, Object>) root.get("stall_speed");
@@ -201,13 +242,47 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
             t.row(cells(Results.label(key, unit), configs, c -> Results.cell(key, c.estimate(), unit)));
         }
         if (study.condition().isPresent()) {
-            t.row(cells("stall speed EAS [kt]", configs, c -> TextTable.fixed(Airspeed.knots(c.speed().orElseThrow().equivalent()), 1)));
-            t.row(cells("stall speed TAS [kt]", configs, c -> TextTable.fixed(Airspeed.knots(c.speed().orElseThrow().trueSpeed()), 1)));
+            t.row(cells("onset stall speed EAS [kt]", configs, c -> TextTable.fixed(Airspeed.knots(c.speed().orElseThrow().equivalent()), 1)));
+            t.row(cells("onset stall speed TAS [kt]", configs, c -> TextTable.fixed(Airspeed.knots(c.speed().orElseThrow().trueSpeed()), 1)));
             if (!unit.us()) {
-                t.row(cells("stall speed EAS [m/s]", configs, c -> TextTable.fixed(c.speed().orElseThrow().equivalent(), 2)));
+                t.row(cells("onset stall speed EAS [m/s]", configs, c -> TextTable.fixed(c.speed().orElseThrow().equivalent(), 2)));
             }
         }
+        t.row(cells("", configs, c -> ""));
+        t.row(cells("maximum lift (section lift curves)", configs, c -> ""));
+        for (ResultKey<MaximumLift> key : Vocabulary.select(Vocabulary.MAX_LIFT, "CL", "alpha_deg", "is_peak",
+                "stalled_span_fraction", "first_stall.eta", "first_stall.CL", "aileron.below_peak",
+                "aileron.margin_dcl", "synthetic_curves")) {
+            t.row(cells(Results.label(key, unit), configs, c -> Results.cell(key, c.maximumLift(), unit)));
+        }
+        if (study.condition().isPresent()) {
+            t.row(cells("stall speed at max CL EAS [kt]", configs,
+                    c -> TextTable.fixed(Airspeed.knots(c.maximumLift().speed().orElseThrow().equivalent()), 1)));
+            t.row(cells("stall speed at max CL TAS [kt]", configs,
+                    c -> TextTable.fixed(Airspeed.knots(c.maximumLift().speed().orElseThrow().trueSpeed()), 1)));
+        }
         b.append(t.render());
+        study.condition().ifPresent(fc -> b.append('\n').append(TextTable.wrap(String.format(Locale.ROOT,
+                "The headline stall speed is the %s one: %s", study.clean().speedBasis().equals("max-lift")
+                        ? "maximum-lift" : "onset",
+                study.clean().speedBasis().equals("max-lift")
+                        ? "every section gives a measured lift curve."
+                        : "the maximum lift rests on synthetic section curves (built from cl_max), so the linear "
+                                + "onset, which errs safe, stays the headline; the speed at maximum lift is shown "
+                                + "beside it for comparison."))).append('\n'));
+        for (Configuration c : configs) {
+            MaximumLift m = c.maximumLift();
+            if (!m.peak()) {
+                b.append('\n').append(TextTable.wrap(String.format(Locale.ROOT, "NOTE (%s, maximum lift): the coupled lift curve "
+                        + "ends at a fold at alpha %.2f deg: a station stalls abruptly and the solution jumps to "
+                        + "another branch; the maximum shown is the highest lift found before it (conservative).",
+                        c.label(), Math.toDegrees(m.curve().get(m.curve().size() - 1).alpha())))).append('\n');
+            }
+            m.multipleSolutions().ifPresent(r -> b.append(TextTable.wrap(String.format(Locale.ROOT,
+                    "NOTE (%s, maximum lift): a second coupled solution exists from alpha %.2f to %.2f deg (more of the span "
+                            + "stalled): the lift there depends on the way the angle was reached.", c.label(),
+                    Math.toDegrees(r[0]), Math.toDegrees(r[1])))).append('\n'));
+        }
         study.flapIncrement().ifPresent(inc -> b.append(String.format(Locale.ROOT,
                 "%n  flaps raise the stall-onset CL by %.3f%n", inc)));
         for (Configuration c : configs) {

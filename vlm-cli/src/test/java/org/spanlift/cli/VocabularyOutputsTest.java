@@ -62,6 +62,8 @@ class VocabularyOutputsTest {
         Vocabulary.POINT.forEach(k -> columns.add(k.key() + "@CL=" + CL));
         Vocabulary.ONSET.forEach(k -> columns.add(Vocabulary.CLEAN + k.key()));
         Vocabulary.ONSET.forEach(k -> columns.add(Vocabulary.FLAPS + k.key()));
+        Vocabulary.MAX_LIFT.forEach(k -> columns.add(Vocabulary.MAX_CLEAN + k.key()));
+        Vocabulary.MAX_LIFT.forEach(k -> columns.add(Vocabulary.MAX_FLAPS + k.key()));
         Vocabulary.STUDY.forEach(k -> columns.add(k.key()));
         for (ControlSurface c : wing.controls()) {
             Vocabulary.CONTROL.forEach(k -> columns.add(Vocabulary.CONTROLS + c.name() + "." + k.key()));
@@ -109,6 +111,14 @@ class VocabularyOutputsTest {
         for (ResultKey<?> k : Vocabulary.ONSET) {
             same(k, at(stall, "stall." + k.key()), sweepRow.get(Vocabulary.CLEAN + k.key()));
             same(k, at(stall, "stall_flaps." + k.key()), sweepRow.get(Vocabulary.FLAPS + k.key()));
+        }
+    }
+
+    @Test
+    void everyMaximumLiftKeyInTheSweepEqualsStallCleanAndFlapped() {
+        for (ResultKey<?> k : Vocabulary.MAX_LIFT) {
+            same(k, at(stall, "max_lift." + k.key()), sweepRow.get(Vocabulary.MAX_CLEAN + k.key()));
+            same(k, at(stall, "max_lift_flaps." + k.key()), sweepRow.get(Vocabulary.MAX_FLAPS + k.key()));
         }
     }
 
@@ -163,7 +173,7 @@ class VocabularyOutputsTest {
     @Test
     void everyKeyIsDeclaredOnceWithAUnitLabelAndDescription() {
         List<List<? extends ResultKey<?>>> groups = List.of(Vocabulary.WING, Vocabulary.POINT, Vocabulary.ONSET,
-                Vocabulary.STUDY, Vocabulary.LOADS, Vocabulary.CONTROL);
+                Vocabulary.MAX_LIFT, Vocabulary.STUDY, Vocabulary.LOADS, Vocabulary.CONTROL);
         for (List<? extends ResultKey<?>> g : groups) {
             assertEquals(g.size(), g.stream().map(ResultKey::key).distinct().count(), "keys unique in a group");
             for (ResultKey<?> k : g) {

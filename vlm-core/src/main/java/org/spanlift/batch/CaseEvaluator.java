@@ -163,6 +163,8 @@ public final class CaseEvaluator {
                 case POINT -> value(col, point(points, col, analysis, asked, wingResult.curve(), wing, rule));
                 case STALL -> value(col, study.clean().estimate());
                 case STALL_FLAPS -> study.flaps().map(f -> value(col, f.estimate())).orElse(null);
+                case MAX_LIFT -> value(col, study.clean().maximumLift());
+                case MAX_LIFT_FLAPS -> study.flaps().map(f -> value(col, f.maximumLift())).orElse(null);
                 case STUDY -> value(col, study);
                 case CONTROL -> value(col, ControlGeometry.of(wing, wing.control(col.control()).orElseThrow(
                         () -> new InputException(baseFile, 0, "controls", "the wing has no control named '"

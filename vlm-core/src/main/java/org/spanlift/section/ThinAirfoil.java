@@ -32,19 +32,6 @@ public final class ThinAirfoil {
                          OptionalDouble idealAngle, OptionalDouble idealLiftCoefficient) {
     }
 
-    /**
-     * The thin-airfoil effectiveness of a plain flap of the given chord fraction E (Glauert):
-     * tau = -d alpha_L0 / d delta = 1 - (theta_h - sin theta_h) / pi, with cos theta_h = 2 E - 1, so a
-     * deflection delta (positive trailing edge down) moves the zero-lift angle by -tau delta.
-     */
-    public static double flapEffectiveness(double chordFraction) {
-        if (!(chordFraction > 0 && chordFraction <= 1)) {
-            throw new IllegalArgumentException("a flap's chord fraction lies in (0, 1]");
-        }
-        double theta = Math.acos(2 * chordFraction - 1);
-        return 1 - (theta - Math.sin(theta)) / Math.PI;
-    }
-
     /** Zero-lift angle alpha_L0, radians. */
     public static double zeroLiftAngle(CamberLine line) {
         return -integral(line, theta -> Math.cos(theta) - 1.0) / Math.PI;

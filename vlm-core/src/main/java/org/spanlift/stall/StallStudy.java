@@ -30,23 +30,93 @@ import org.spanlift.solve.WingAnalysis;
 public record StallStudy(Configuration clean, Optional<Configuration> flaps, Optional<FlightCondition> condition) {
 
     /**
-     * One configuration.
-     *
-     * @param label       "clean" or "flaps"
-     * @param deflections control deflections, rad, in control order (copied)
-     * @param estimate    the stall onset, at the stall speed's Reynolds numbers when there is a condition
-     * @param speed       the stall speed, with a flight condition
+     * One configuration: its linear stall onset, its stall speed with a flight condition, and, computed
+     * on first use (it traces the coupled lift curve through the stall), its maximum lift from the
+     * section lift curves.
      */
-    public record Configuration(String label, double[] deflections, StallEstimate estimate,
-            Optional<StallSpeed> speed) {
+    public static final class Configuration {
+        private final String label;
+        private final double[] deflections;
+        private final StallEstimate estimate;
+        private final Optional<StallSpeed> speed;
+        private final WingAnalysis analysis;
+        private final StripLimits limits;
+        private final Optional<FlightCondition> condition;
+        private MaximumLift maximumLift;
 
-        public Configuration {
-            deflections = deflections.clone();
+        Configuration(String label, double[] deflections, StallEstimate estimate, Optional<StallSpeed> speed,
+                WingAnalysis analysis, StripLimits limits, Optional<FlightCondition> condition) {
+            this.label = label;
+            this.deflections = deflections.clone();
+            this.estimate = estimate;
+            this.speed = speed;
+            this.analysis = analysis;
+            this.limits = limits;
+            this.condition = condition;
         }
 
-        @Override
+        /** "clean" or "flaps". */
+        public String label() {
+            return label;
+        }
+
+        /** Control deflections, rad, in control order (a copy). */
         public double[] deflections() {
             return deflections.clone();
+        }
+
+        /** The linear stall onset, at the stall speed's Reynolds numbers when there is a condition. */
+        public StallEstimate estimate() {
+            return estimate;
+        }
+
+        /** The stall speed at the onset CL, with a flight condition. */
+        public Optional<StallSpeed> speed() {
+            return speed;
+        }
+
+        /**
+         * The maximum lift from the section lift curves, with its stall speed when there is a flight
+         * condition (the Reynolds numbers iterated with it); without one, curves and tables at their lowest
+         * Reynolds number.
+         */
+        public synchronized MaximumLift maximumLift() {
+            if (maximumLift == null) {
+                maximumLift = condition.isPresent()
+                        ? MaximumLift.atStall(analysis, deflections, limits, condition.get())
+                        : MaximumLift.of(analysis, deflections, limits, 0);
+            }
+            return maximumLift;
+        }
+
+        /**
+         * The basis of the headline stall speed: {@code max-lift} when every section gives a measured lift
+         * curve, else {@code onset} (the linear onset errs safe; a synthetic curve's maximum is shown beside it).
+         */
+        public String speedBasis() {
+            return allMeasured(analysis.wing()) ? "max-lift" : "onset";
+        }
+
+        /** The headline stall speed, equivalent airspeed, m/s, by {@link #speedBasis()}. */
+        public OptionalDouble headlineEquivalent() {
+            if (condition.isEmpty()) {
+                return OptionalDouble.empty();
+            }
+            return OptionalDouble.of(speedBasis().equals("max-lift")
+                    ? maximumLift().speed().orElseThrow().equivalent() : speed.orElseThrow().equivalent());
+        }
+
+        /** The headline stall speed, true airspeed, m/s, by {@link #speedBasis()}. */
+        public OptionalDouble headlineTrue() {
+            if (condition.isEmpty()) {
+                return OptionalDouble.empty();
+            }
+            return OptionalDouble.of(speedBasis().equals("max-lift")
+                    ? maximumLift().speed().orElseThrow().trueSpeed() : speed.orElseThrow().trueSpeed());
+        }
+
+        private static boolean allMeasured(Wing wing) {
+            return wing.sections().values().stream().allMatch(s -> s.liftCurve().isPresent());
         }
     }
 
@@ -83,10 +153,10 @@ public record StallStudy(Configuration clean, Optional<Configuration> flaps, Opt
         StripLimits limits = StripLimits.of(analysis.wing(), analysis.lattice(), deflections, assumedClMax);
         if (condition.isPresent()) {
             StallSpeed s = StallSpeed.of(analysis, deflections, limits, condition.get());
-            return new Configuration(label, deflections, s.estimate(), Optional.of(s));
+            return new Configuration(label, deflections, s.estimate(), Optional.of(s), analysis, limits, condition);
         }
         return new Configuration(label, deflections, StallAnalysis.estimate(analysis, deflections, limits, 0),
-                Optional.empty());
+                Optional.empty(), analysis, limits, condition);
     }
 
     /** The deflections with every flap at zero. */

@@ -1,14 +1,19 @@
 package org.spanlift.stall;
 
 import java.util.List;
+import java.util.Map;
+import java.util.NavigableMap;
 
 import org.spanlift.geometry.Section;
 import org.spanlift.geometry.SectionBlend;
 import org.spanlift.geometry.Surface;
 import org.spanlift.geometry.Wing;
+import org.spanlift.input.Field;
 import org.spanlift.input.RefusedException;
 import org.spanlift.lattice.Lattice;
 import org.spanlift.lattice.Strip;
+import org.spanlift.section.MeasuredLiftCurve;
+import org.spanlift.section.PlainFlap;
 import org.spanlift.section.ThinAirfoil;
 
 /**
@@ -24,12 +29,15 @@ public final class StripCurves {
     private final SectionCurve[] curves;
     private final double[] latticeZeroLift;
     private final boolean synthetic;
+    private final boolean handbookFlap;
 
-    private StripCurves(StripLimits limits, SectionCurve[] curves, double[] latticeZeroLift, boolean synthetic) {
+    private StripCurves(StripLimits limits, SectionCurve[] curves, double[] latticeZeroLift, boolean synthetic,
+            boolean handbookFlap) {
         this.limits = limits;
         this.curves = curves;
         this.latticeZeroLift = latticeZeroLift;
         this.synthetic = synthetic;
+        this.handbookFlap = handbookFlap;
     }
 
     /**
@@ -37,7 +45,8 @@ public final class StripCurves {
      *
      * @param reynoldsPerMetre rho V / mu at the flight condition (true speed), or 0 when unknown (measured
      *                         curves and cl_max tables are then read at their lowest Reynolds number)
-     * @throws RefusedException when a control of the wing is deflected (not yet modelled)
+     * @throws RefusedException when a deflected control lies outside the handbook flap data's range, or
+     *                          beyond a section's measured flapped curves
      */
     public static StripCurves of(Wing wing, Lattice lattice, double[] deflections, StripLimits limits,
             double reynoldsPerMetre) {
@@ -47,7 +56,7 @@ public final class StripCurves {
         SectionCurve[] curves = new SectionCurve[n];
         double[] zeta = new double[n];
         boolean synthetic = false;
-        boolean curvesNeedFlapModel = false;
+        boolean handbookFlap = false;
         for (int i = 0; i < n; i++) {
             Strip st = lattice.strips().get(ids.get(i));
             SectionBlend blend = main.planform().section(main.mirrored() ? Math.abs(st.y()) : st.y());
@@ -59,20 +68,69 @@ public final class StripCurves {
             int last = st.firstPanel() + st.rows() - 1;
             int control = lattice.controlOf(last);
             double delta = control < 0 ? 0 : deflections[control] * lattice.controlSign(last);
+            double chordFraction = control < 0 ? 0 : wing.controls().get(control).chordFraction();
             if (delta != 0) {
-                zeta[i] -= ThinAirfoil.flapEffectiveness(wing.controls().get(control).chordFraction()) * delta;
+                zeta[i] -= PlainFlap.glauertTau(chordFraction) * delta;
             }
-            curvesNeedFlapModel |= delta != 0;
+            SectionCurve clean;
             if (a.liftCurve().isEmpty() && b.liftCurve().isEmpty()) {
                 synthetic = true;
-                curves[i] = new SyntheticCurve(limits.liftSlope(i), limits.zeroLiftAngle(i),
+                clean = new SyntheticCurve(limits.liftSlope(i), limits.zeroLiftAngle(i),
                         limits.clMax(i, re) - limits.flapIncrement(i));
             } else {
                 synthetic |= a.liftCurve().isEmpty() || b.liftCurve().isEmpty();
-                curves[i] = SectionCurve.blend(curve(a, re, limits, i), curve(b, re, limits, i), w);
+                clean = SectionCurve.blend(curve(a, re, limits, i), curve(b, re, limits, i), w);
+            }
+            Section near = w < 0.5 ? a : b;
+            if (delta == 0) {
+                curves[i] = clean;
+            } else if (delta > 0 && !near.flapLiftCurves().isEmpty()) {
+                curves[i] = measuredFlapped(near, clean, Math.toDegrees(delta), re);
+            } else {
+                handbookFlap = true;
+                curves[i] = handbookFlapped(clean, limits, i, chordFraction, delta, near);
             }
         }
-        return new StripCurves(limits, curvesNeedFlapModel ? null : curves, zeta, synthetic);
+        return new StripCurves(limits, curves, zeta, synthetic, handbookFlap);
+    }
+
+    /**
+     * The clean curve moved by a plain flap's handbook lift increment dcl_0 ({@link PlainFlap}) and raised by
+     * its cl_max increment dcl_max: {@code clean(alpha + (dcl_0 - dcl_max) / a0) + dcl_max}, so the straight
+     * part gains dcl_0 and the peak dcl_max, at an angle lower by (dcl_0 - dcl_max) / a0. A deflection up
+     * (an aileron's) lowers both by the same rule (an assumption of the project's: the handbook data are
+     * for deflections down).
+     */
+    private static SectionCurve handbookFlapped(SectionCurve clean, StripLimits limits, int i, double chordFraction,
+            double delta, Section near) {
+        PlainFlap flap = PlainFlap.of(chordFraction);
+        double size = Math.abs(delta);
+        double sign = Math.signum(delta);
+        double lift = sign * flap.liftIncrement(size);
+        double peak = near.flapClMaxIncrement().isPresent() && delta > 0
+                ? near.flapClMaxIncrement().get().at(Math.toDegrees(size))
+                : sign * flap.clMaxIncrement(size);
+        return SectionCurve.shifted(clean, (lift - peak) / limits.liftSlope(i), peak);
+    }
+
+    /**
+     * The measured curves of a flapped section, linear in deflection (degrees) between the given ones and
+     * the clean curve at zero.
+     *
+     * @throws RefusedException beyond the largest deflection measured
+     */
+    private static SectionCurve measuredFlapped(Section near, SectionCurve clean, double deg, double re) {
+        NavigableMap<Double, MeasuredLiftCurve> tables = near.flapLiftCurves();
+        Map.Entry<Double, MeasuredLiftCurve> hi = tables.ceilingEntry(deg);
+        if (hi == null) {
+            throw new RefusedException("section " + near.name() + " gives flapped lift curves up to "
+                    + Field.brief(tables.lastKey()) + " degrees, not " + Field.brief(deg));
+        }
+        SectionCurve upper = SectionCurve.table(hi.getValue().at(re));
+        Map.Entry<Double, MeasuredLiftCurve> lo = tables.lowerEntry(deg);
+        double from = lo == null ? 0 : lo.getKey();
+        SectionCurve lower = lo == null ? clean : SectionCurve.table(lo.getValue().at(re));
+        return SectionCurve.blend(lower, upper, (deg - from) / (hi.getKey() - from));
     }
 
     private static SectionCurve curve(Section s, double re, StripLimits limits, int i) {
@@ -97,7 +155,7 @@ public final class StripCurves {
         for (int i = 0; i < lines.length; i++) {
             lines[i] = SectionCurve.line(2 * Math.PI, latticeZeroLift[i]);
         }
-        return new StripCurves(limits, lines, latticeZeroLift, false);
+        return new StripCurves(limits, lines, latticeZeroLift, false, false);
     }
 
     /** The limits whose strips these curves follow. */
@@ -107,9 +165,6 @@ public final class StripCurves {
 
     /** The curve of wing strip i (index into {@link StripLimits#strips()}). */
     public SectionCurve curve(int i) {
-        if (curves == null) {
-            throw new RefusedException("maximum lift with a deflected control is not available yet");
-        }
         return curves[i];
     }
 
@@ -120,6 +175,11 @@ public final class StripCurves {
      */
     public double latticeZeroLift(int i) {
         return latticeZeroLift[i];
+    }
+
+    /** True when some deflected strip's curve follows the handbook plain-flap correction ({@link PlainFlap}). */
+    public boolean handbookFlap() {
+        return handbookFlap;
     }
 
     /** True when some strip's curve was built from lift slope, zero-lift angle and cl_max. */

@@ -14,6 +14,7 @@ import org.spanlift.input.Field;
 import org.spanlift.input.RefusedException;
 import org.spanlift.lattice.Lattice;
 import org.spanlift.lattice.Strip;
+import org.spanlift.section.PlainFlap;
 import org.spanlift.section.Table;
 import org.spanlift.section.ThinAirfoil;
 
@@ -22,11 +23,11 @@ import org.spanlift.section.ThinAirfoil;
  * linearly between stations, at the strip's Reynolds number, raised on flapped strips by the flap's
  * cl_max increment.
  *
- * <p>Without an increment table, a deflected plain flap raises cl_max by the handbook value for plain flaps,
- * 0.9 at full deflection (Raymer, Aircraft Design: A Conceptual Approach, table of section maximum-lift
- * increments for high-lift devices; value recalled from memory), taken at 60 degrees and scaled linearly
- * below it, and by the flap chord over 25% of the chord where the flap is smaller. That is a conservative
- * reading (real increments rise faster at small deflections), and far below the inviscid lift increment.
+ * <p>Without an increment table, a deflected plain flap raises cl_max by {@link PlainFlap#clMaxIncrement}
+ * (the handbook value 0.9 for a 25% flap at 60 degrees, scaled with the handbook-corrected lift increment)
+ * within the chord fractions and deflections its data cover; beyond them by the handbook value taken at
+ * 60 degrees and scaled linearly below it, and by the flap chord over 25% of the chord where the flap is
+ * smaller. Either is far below the inviscid lift increment.
  */
 public final class StripLimits {
 
@@ -130,8 +131,7 @@ public final class StripLimits {
                     inc[i] = near.flapClMaxIncrement().get().at(deg);
                 } else {
                     defaultIncrement = true;
-                    double chordScale = Math.min(1, controls.get(c).chordFraction() / PLAIN_FLAP_REFERENCE_CHORD);
-                    inc[i] = PLAIN_FLAP_INCREMENT * Math.min(1, deg / PLAIN_FLAP_FULL_DEFLECTION_DEG) * chordScale;
+                    inc[i] = defaultIncrement(controls.get(c).chordFraction(), deflections[c]);
                 }
             }
         }
@@ -140,6 +140,23 @@ public final class StripLimits {
         }
         return new StripLimits(List.copyOf(ids), inner, outer, w, inc, names, slope, alpha0, assumed,
                 defaultIncrement);
+    }
+
+    /**
+     * The handbook cl_max increment of a plain flap ({@link PlainFlap#clMaxIncrement}) within the chord
+     * fractions and deflections its data cover; beyond them the handbook value at full deflection scaled
+     * linearly with deflection and flap chord (the conservative rule of the class notes).
+     */
+    static double defaultIncrement(double chordFraction, double deflection) {
+        if (PlainFlap.coversChordFraction(chordFraction)) {
+            PlainFlap flap = PlainFlap.of(chordFraction);
+            if (flap.covers(deflection)) {
+                return flap.clMaxIncrement(deflection);
+            }
+        }
+        double chordScale = Math.min(1, chordFraction / PLAIN_FLAP_REFERENCE_CHORD);
+        return PLAIN_FLAP_INCREMENT * Math.min(1, Math.toDegrees(deflection) / PLAIN_FLAP_FULL_DEFLECTION_DEG)
+                * chordScale;
     }
 
     /** The section's zero-lift angle: the measured one where given, else thin-airfoil theory's, rad. */

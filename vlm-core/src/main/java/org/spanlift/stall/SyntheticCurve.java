@@ -21,6 +21,10 @@ package org.spanlift.stall;
  */
 public final class SyntheticCurve implements SectionCurve {
 
+    /** What the curve is, for outputs to state. */
+    public static final String DESCRIPTION = "linear to a rounded peak at cl_max, then the post-stall lift of "
+            + "Viterna and Corrigan (1982) with the two-dimensional CD_max 2.0";
+
     /** The width of the rounded peak over cl_max / a0. */
     public static final double ROUNDING = 0.3;
     /** Two-dimensional maximum drag coefficient of the post-stall model. */

@@ -33,6 +33,10 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
         STALL,
         /** {@link Vocabulary#ONSET} with the flaps deflected. */
         STALL_FLAPS,
+        /** {@link Vocabulary#MAX_LIFT} of the clean configuration. */
+        MAX_LIFT,
+        /** {@link Vocabulary#MAX_LIFT} with the flaps deflected. */
+        MAX_LIFT_FLAPS,
         /** {@link Vocabulary#STUDY}: flap increment, stall speeds, the assumed-cl_max flag. */
         STUDY,
         /** {@link Vocabulary#CONTROL}. */
@@ -109,6 +113,16 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
                         false, 0);
             }
         }
+        for (String prefix : List.of(Vocabulary.MAX_CLEAN, Vocabulary.MAX_FLAPS)) {
+            if (n.startsWith(prefix)) {
+                String rest = n.substring(prefix.length());
+                ResultKey<?> k = Vocabulary.lookup(Vocabulary.MAX_LIFT, rest).orElseThrow(() -> new ColumnException(
+                        "unknown maximum-lift result '" + rest + "'; expected " + prefix + " followed by one of "
+                                + String.join(", ", Vocabulary.names(Vocabulary.MAX_LIFT))));
+                return new ResultColumn(n, prefix.equals(Vocabulary.MAX_CLEAN) ? Group.MAX_LIFT : Group.MAX_LIFT_FLAPS,
+                        k, null, false, 0);
+            }
+        }
         Matcher c = CONTROL.matcher(n);
         if (c.matches()) {
             if (!controls.contains(c.group(1))) {
@@ -123,7 +137,8 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
         throw new ColumnException("unknown result '" + n + "'; expected one of "
                 + String.join(", ", Vocabulary.names(Vocabulary.WING)) + "; a point value ("
                 + String.join(", ", pointKeys) + ") with @CL= or @alpha=; stall.* or stall_flaps.* ("
-                + String.join(", ", Vocabulary.names(Vocabulary.ONSET)) + "); "
+                + String.join(", ", Vocabulary.names(Vocabulary.ONSET)) + "); max_lift.* or max_lift_flaps.* ("
+                + String.join(", ", Vocabulary.names(Vocabulary.MAX_LIFT)) + "); "
                 + String.join(", ", Vocabulary.names(Vocabulary.STUDY)) + "; controls.NAME.* ("
                 + String.join(", ", Vocabulary.names(Vocabulary.CONTROL)) + ")");
     }
@@ -135,7 +150,7 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
 
     /** True for columns of the flapped configuration. */
     public boolean needsFlaps() {
-        return group == Group.STALL_FLAPS || key.needs(Need.FLAPS);
+        return group == Group.STALL_FLAPS || group == Group.MAX_LIFT_FLAPS || key.needs(Need.FLAPS);
     }
 
     /** True for columns that need a weight (stall speeds). */

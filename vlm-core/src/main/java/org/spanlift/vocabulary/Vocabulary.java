@@ -24,8 +24,8 @@ import java.util.function.Function;
 import org.spanlift.flight.FlightPoint;
 import org.spanlift.lattice.Lattice;
 import org.spanlift.loads.SpanwiseLoads;
+import org.spanlift.stall.MaximumLift;
 import org.spanlift.stall.StallEstimate;
-import org.spanlift.stall.StallSpeed;
 import org.spanlift.stall.StallStudy;
 
 /**
@@ -40,6 +40,8 @@ import org.spanlift.stall.StallStudy;
  * ({@code e@CL=0.5});</li>
  * <li>{@link #ONSET}: a stall onset, under {@link #CLEAN} ({@code stall.eta}) or {@link #FLAPS}
  * ({@code stall_flaps.CL});</li>
+ * <li>{@link #MAX_LIFT}: a maximum lift from the section lift curves, under {@link #MAX_CLEAN}
+ * ({@code max_lift.CL}) or {@link #MAX_FLAPS};</li>
  * <li>{@link #STUDY}: the clean-and-flapped stall study (flap increment, stall speeds);</li>
  * <li>{@link #LOADS}: one load case's root loads, under {@link #LOAD_CASE} in {@code compare};</li>
  * <li>{@link #CONTROL}: a control's geometry, under {@code controls.NAME.}.</li>
@@ -53,6 +55,10 @@ public final class Vocabulary {
     public static final String CLEAN = "stall.";
     /** The prefix of the flapped configuration's onset keys. */
     public static final String FLAPS = "stall_flaps.";
+    /** The prefix of the clean configuration's maximum-lift keys. */
+    public static final String MAX_CLEAN = "max_lift.";
+    /** The prefix of the flapped configuration's maximum-lift keys. */
+    public static final String MAX_FLAPS = "max_lift_flaps.";
     /** The prefix of the load keys where several groups share one flat row (compare). */
     public static final String LOAD_CASE = "loads.";
     /** The prefix of a control's keys, followed by its name and a dot. */
@@ -143,23 +149,66 @@ public final class Vocabulary {
                     e -> e.besideControlEnd().flatMap(StallEstimate.ControlEnd::firstOnControl)
                             .map(f -> (Object) Math.abs(f.y())).orElse(null)));
 
+    /** A maximum lift from the section lift curves (the lattice coupled with them, traced through the stall). */
+    public static final List<ResultKey<MaximumLift>> MAX_LIFT = List.of(
+            key("CL", NONE, "maximum CL", "the highest wing CL of the coupled lift curve", 3, CL_MAX,
+                    MaximumLift::lift),
+            key("alpha_deg", DEGREE, "alpha at maximum CL", "its angle of attack", 2, CL_MAX,
+                    m -> Math.toDegrees(m.alpha())),
+            key("is_peak", FLAG, "a maximum inside the branch",
+                    "true when the lift falls beyond the maximum on its branch; false when the branch ends at a "
+                            + "fold (a strip's abrupt stall) at or just after it, so the value is the highest found",
+                    0, CL_MAX, MaximumLift::peak),
+            key("stalled_span_fraction", NONE, "span past its section peak",
+                    "share of the span (outboard of the fuselage side) past its section cl peak at the maximum", 3,
+                    CL_MAX, MaximumLift::stalledSpanFraction),
+            key("first_stall.eta", NONE, "first past its peak at eta",
+                    "the station that first passes its section cl peak, over the semi-span", 3, CL_MAX,
+                    m -> m.firstStall().map(f -> (Object) f.eta()).orElse(null)),
+            key("first_stall.CL", NONE, "  at wing CL", "the wing CL when it does", 3, CL_MAX,
+                    m -> m.firstStall().map(f -> (Object) f.lift()).orElse(null)),
+            key("aileron.below_peak", FLAG, "ailerons below their peak",
+                    "true when every aileron station is below its section cl peak at the maximum", 0, CL_MAX,
+                    m -> m.aileron().map(a -> (Object) a.belowPeak()).orElse(null)),
+            key("aileron.margin_dcl", NONE, "aileron margin dcl",
+                    "least section peak cl - cl over the aileron span at the maximum", 3, CL_MAX,
+                    m -> m.aileron().map(a -> (Object) a.margin()).orElse(null)),
+            key("synthetic_curves", FLAG, "synthetic section curves",
+                    "true when some section's lift curve was built from its lift slope, zero-lift angle and cl_max",
+                    0, CL_MAX, MaximumLift::synthetic),
+            key("multiple_solutions.from_deg", DEGREE, "second solutions from alpha",
+                    "lowest angle of attack where a second coupled solution was found", 2, CL_MAX,
+                    m -> m.multipleSolutions().map(r -> (Object) Math.toDegrees(r[0])).orElse(null)),
+            key("multiple_solutions.to_deg", DEGREE, "  to alpha", "highest such angle", 2, CL_MAX,
+                    m -> m.multipleSolutions().map(r -> (Object) Math.toDegrees(r[1])).orElse(null)),
+            key("stall_speed_eas", METRE_PER_SECOND, "stall speed at maximum CL EAS",
+                    "stall speed at the maximum CL, equivalent airspeed (wing alone)", 2,
+                    Set.of(Need.CL_MAX, Need.WEIGHT), m -> m.speed().map(v -> (Object) v.equivalent()).orElse(null)),
+            key("stall_speed_tas", METRE_PER_SECOND, "stall speed at maximum CL TAS",
+                    "stall speed at the maximum CL, true airspeed", 2, Set.of(Need.CL_MAX, Need.WEIGHT),
+                    m -> m.speed().map(v -> (Object) v.trueSpeed()).orElse(null)));
+
     /** The clean-and-flapped stall study. */
     public static final List<ResultKey<StallStudy>> STUDY = List.of(
             key("flap_increment_CL", NONE, "flap increment of onset CL",
                     "how much the flaps raise the stall-onset CL", 3, Set.of(Need.CL_MAX, Need.FLAPS),
                     s -> boxed(s.flapIncrement())),
             key("stall_speed.clean_eas", METRE_PER_SECOND, "stall speed clean EAS",
-                    "stall speed clean, equivalent airspeed, at the onset CL (wing alone)", 2,
-                    Set.of(Need.CL_MAX, Need.WEIGHT), s -> speed(Optional.of(s.clean()), StallSpeed::equivalent)),
+                    "stall speed clean, equivalent airspeed, by stall_speed.basis (wing alone)", 2,
+                    Set.of(Need.CL_MAX, Need.WEIGHT), s -> boxed(s.clean().headlineEquivalent())),
             key("stall_speed.clean_tas", METRE_PER_SECOND, "stall speed clean TAS",
                     "stall speed clean, true airspeed", 2, Set.of(Need.CL_MAX, Need.WEIGHT),
-                    s -> speed(Optional.of(s.clean()), StallSpeed::trueSpeed)),
+                    s -> boxed(s.clean().headlineTrue())),
             key("stall_speed.flaps_eas", METRE_PER_SECOND, "stall speed flaps EAS",
-                    "stall speed with flaps, equivalent airspeed, at the onset CL (wing alone)", 2,
-                    Set.of(Need.CL_MAX, Need.FLAPS, Need.WEIGHT), s -> speed(s.flaps(), StallSpeed::equivalent)),
+                    "stall speed with flaps, equivalent airspeed, by stall_speed.basis (wing alone)", 2,
+                    Set.of(Need.CL_MAX, Need.FLAPS, Need.WEIGHT),
+                    s -> s.flaps().map(f -> boxed(f.headlineEquivalent())).orElse(null)),
             key("stall_speed.flaps_tas", METRE_PER_SECOND, "stall speed flaps TAS",
                     "stall speed with flaps, true airspeed", 2, Set.of(Need.CL_MAX, Need.FLAPS, Need.WEIGHT),
-                    s -> speed(s.flaps(), StallSpeed::trueSpeed)),
+                    s -> s.flaps().map(f -> boxed(f.headlineTrue())).orElse(null)),
+            key("stall_speed.basis", TEXT, "stall speed basis",
+                    "max-lift (every section gives a measured lift curve) or onset (the linear onset, which errs "
+                            + "safe)", 0, Set.of(Need.CL_MAX, Need.WEIGHT), s -> s.clean().speedBasis()),
             key("assumed_cl_max", FLAG, "cl_max assumed",
                     "true when some section's cl_max was assumed, clean or with flaps", 0, CL_MAX,
                     StallStudy::assumedClMax));
@@ -243,9 +292,6 @@ public final class Vocabulary {
         return v.isPresent() ? (Object) v.getAsDouble() : null;
     }
 
-    private static Object speed(Optional<StallStudy.Configuration> c, Function<StallSpeed, Double> f) {
-        return c.flatMap(StallStudy.Configuration::speed).map(s -> (Object) f.apply(s)).orElse(null);
-    }
 
     private static <S> ResultKey<S> key(String key, ResultUnit unit, String label, String description, int decimals,
             Function<S, Object> value) {
