@@ -75,7 +75,7 @@ public final class BasisSolutions {
      * Solves one right-hand side; on a half-span system fills the left half as the mirror of the right,
      * with the given sign.
      */
-    private static double[] expand(Lattice lattice, InfluenceSystem system, double[] rhs, double sign) {
+    static double[] expand(Lattice lattice, InfluenceSystem system, double[] rhs, double sign) {
         if (system.symmetry() == Symmetry.FULL) {
             double[] all = new double[lattice.panelCount()];
             system.solve(rhs, all);

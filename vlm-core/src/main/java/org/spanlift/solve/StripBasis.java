@@ -63,12 +63,12 @@ public final class StripBasis {
             for (int r = 0; r < st.rows(); r++) {
                 rhs[first + r] = -1;
             }
-            double[] sym = mirrored(systems.symmetric(), rhs, half, 1);
+            double[] sym = BasisSolutions.expand(lattice, systems.symmetric(), rhs, 1);
             if (symmetric) {
                 g[k] = sym;
                 continue;
             }
-            double[] anti = mirrored(systems.antisymmetric(), rhs, half, -1);
+            double[] anti = BasisSolutions.expand(lattice, systems.antisymmetric(), rhs, -1);
             double side = st.right() ? 1 : -1;
             g[k] = new double[n];
             for (int i = 0; i < n; i++) {
@@ -76,17 +76,6 @@ public final class StripBasis {
             }
         }
         return new StripBasis(List.copyOf(strips), symmetric, g);
-    }
-
-    private static double[] mirrored(InfluenceSystem system, double[] rhs, int half, double sign) {
-        double[] right = new double[half];
-        system.solve(rhs, right);
-        double[] all = new double[2 * half];
-        for (int i = 0; i < half; i++) {
-            all[i] = right[i];
-            all[i + half] = sign * right[i];
-        }
-        return all;
     }
 
     /** The lattice strip indices of the unknowns. */
