@@ -103,7 +103,7 @@ public final class SweepCommand implements Callable<Integer> {
         }
         Sweep sweep = SweepFileReader.read(file, force);
         List<Path> inputs = new ArrayList<>(List.of(file, sweep.basePath()));
-        inputs.addAll(InputFiles.coordinateFiles(sweep.baseTree(), sweep.basePath()));
+        inputs.addAll(InputFiles.sectionFiles(sweep.baseTree(), sweep.basePath()));
         List<OutputOptions.Named> outputs = new ArrayList<>(List.of(OutputOptions.also("--output", output)));
         if (toFile) {
             outputs.add(OutputOptions.also("the manifest of --output", Manifest.pathFor(target.base())));

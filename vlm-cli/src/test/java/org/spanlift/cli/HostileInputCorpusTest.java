@@ -19,9 +19,10 @@ import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * Every file of the hostile-input corpus (vlm-core's test resources {@code bad-wings}, {@code bad-cases},
- * {@code bad-envelopes}, {@code bad-sweeps} and {@code bad-coordinates}) is refused by the command line: run
- * as the wing file of {@code solve}, {@code stall} and {@code loads}, and as what it is (a cases or envelope
- * file of {@code loads}, a sweep file, the coordinate file of a wing's section), each run ends with exit code 2,
+ * {@code bad-envelopes}, {@code bad-sweeps}, {@code bad-coordinates} and {@code bad-lift-curves}) is refused by
+ * the command line: run as the wing file of {@code solve}, {@code stall} and {@code loads}, and as what it is (a
+ * cases or envelope file of {@code loads}, a sweep file, the coordinate file or the lift-curve file of a wing's
+ * section), each run ends with exit code 2,
  * exactly one line on standard error and no output file, well within a time limit. Why each file is refused is
  * pinned by vlm-core's {@code BadWingFileTest} and {@code HostileFilesTest}.
  */
@@ -29,7 +30,7 @@ class HostileInputCorpusTest {
 
     private static final Path RESOURCES = Path.of("..", "vlm-core", "src", "test", "resources");
     private static final List<String> FOLDERS = List.of("bad-wings", "bad-cases", "bad-envelopes", "bad-sweeps",
-            "bad-coordinates");
+            "bad-coordinates", "bad-lift-curves");
     /** Generous: a refusal takes milliseconds, the runs with the demo wing a second or so. */
     private static final Duration LIMIT = Duration.ofSeconds(20);
     private static final String TRAINER = CliRun.demo("trainer.wing.yaml");
@@ -59,6 +60,13 @@ class HostileInputCorpusTest {
             Files.writeString(wing, "units: m\nsurfaces:\n  - name: wing\n    section: main\n"
                     + "    trapezoid: {span: 9, root-chord: 1.2}\nsections:\n  main: {camber-file: \""
                     + file.toAbsolutePath().normalize() + "\", cl-max: 1.4}\n");
+            wings.add(wing.toString());
+        }
+        if (folder.equals("bad-lift-curves")) {
+            Path wing = work.resolve("lift-curve-from-" + file.getFileName() + ".wing.yaml");
+            Files.writeString(wing, "units: m\nsurfaces:\n  - name: wing\n    section: main\n"
+                    + "    trapezoid: {span: 9, root-chord: 1.2}\nsections:\n  main: {lift-curve: {file: \""
+                    + file.toAbsolutePath().normalize() + "\"}}\n");
             wings.add(wing.toString());
         }
         for (String wing : wings) {

@@ -80,6 +80,22 @@ class OutputsAreNotInputsTest {
     }
 
     @Test
+    void aLiftCurveFileTheWingReadsIsAnInputToo() throws IOException {
+        String curve = "alpha_deg,cl\n-4,-0.2\n-2,0\n0,0.2\n2,0.4\n4,0.55\n6,0.5\n";
+        Path clean = Files.writeString(dir.resolve("clean.csv"), curve);
+        Path flap = Files.writeString(dir.resolve("flap.csv"), curve.replace("4,0.55", "4,0.7"));
+        Path wing = Files.writeString(dir.resolve("w.wing.yaml"), String.join("\n", "units: m", "surfaces:",
+                "  - name: wing", "    section: a", "    trapezoid: {span: 9, root-chord: 1.2}", "sections:",
+                "  a:", "    lift-curve: {file: clean.csv}", "    flap-lift-curves: [{deflection: 20, file: flap.csv}]",
+                ""));
+        for (Path input : new Path[] {clean, flap}) {
+            byte[] before = Files.readAllBytes(input);
+            refused(CliRun.of("solve", wing.toString(), "--output", input.toString()), "--output", input);
+            unchanged(input, before);
+        }
+    }
+
+    @Test
     void twoOutputsOfOneRunMustBeTwoFiles() {
         String wing = CliRun.demo("rectangular.wing.yaml");
         Path points = dir.resolve("o.csv");

@@ -22,12 +22,14 @@ import org.spanlift.section.ThinAirfoil;
 /**
  * Reads one entry of a wing file's {@code sections} mapping: the mean line ({@code camber} or
  * {@code camber-file}) and the measured data ({@code zero-lift-angle}, {@code lift-slope}, {@code cl-max},
- * {@code flap-cl-max}, {@code drag-polar}).
+ * {@code flap-cl-max}, {@code drag-polar}) and the measured lift curves ({@code lift-curve},
+ * {@code flap-lift-curves}, read by {@link SectionLiftCurveReader}, which also takes the zero-lift angle, lift
+ * slope, cl_max and flap increments from them where the section gives none).
  */
 public final class SectionReader {
 
     public static final Set<String> KEYS = Set.of("camber", "camber-file", "zero-lift-angle", "lift-slope", "cl-max",
-            "flap-cl-max", "drag-polar");
+            "flap-cl-max", "drag-polar", "lift-curve", "flap-lift-curves");
     public static final Set<String> CL_MAX_TABLE_KEYS = Set.of("reynolds", "values");
     public static final Set<String> FLAP_KEYS = Set.of("deflection", "increment");
     public static final Set<String> POLAR_KEYS = Set.of("reynolds", "cl", "cd");
@@ -59,16 +61,24 @@ public final class SectionReader {
             }
         }).orElseGet(() -> CamberLines.parse("flat")));
 
-        OptionalDouble measuredZeroLift = f.optional("zero-lift-angle")
-                .map(z -> OptionalDouble.of(Math.toRadians(z.inRange(-15, 15)))).orElse(OptionalDouble.empty());
-        double correction = measuredZeroLift.isPresent()
-                ? ThinAirfoil.zeroLiftAngle(camber) - measuredZeroLift.getAsDouble() : 0;
-        double liftSlope = f.optional("lift-slope").map(s -> Math.toDegrees(s.inRange(0.03, 0.13)))
-                .orElse(Section.THIN_AIRFOIL_SLOPE);
+        OptionalDouble zeroLiftDeg = f.optional("zero-lift-angle")
+                .map(z -> OptionalDouble.of(z.inRange(-15, 15))).orElse(OptionalDouble.empty());
+        OptionalDouble slopePerDeg = f.optional("lift-slope")
+                .map(s -> OptionalDouble.of(s.inRange(0.03, 0.13))).orElse(OptionalDouble.empty());
         Optional<Table> clMax = f.optional("cl-max").map(SectionReader::clMax);
         Optional<Table> flap = f.optional("flap-cl-max").map(SectionReader::flapIncrement);
         Optional<ProfileDragPolar> polar = f.optional("drag-polar").map(SectionReader::polar);
-        return new Section(name, camber, correction, liftSlope, clMax, flap, polar, measuredZeroLift);
+        // The measured curves, and the values the section takes from them where it gives none.
+        SectionLiftCurveReader.Result curves = SectionLiftCurveReader.read(f, wingFile, zeroLiftDeg, slopePerDeg,
+                clMax, flap);
+        OptionalDouble measuredZeroLift = curves.zeroLiftDeg().isPresent()
+                ? OptionalDouble.of(Math.toRadians(curves.zeroLiftDeg().getAsDouble())) : OptionalDouble.empty();
+        double correction = measuredZeroLift.isPresent()
+                ? ThinAirfoil.zeroLiftAngle(camber) - measuredZeroLift.getAsDouble() : 0;
+        double liftSlope = curves.slopePerDeg().isPresent() ? Math.toDegrees(curves.slopePerDeg().getAsDouble())
+                : Section.THIN_AIRFOIL_SLOPE;
+        return new Section(name, camber, correction, liftSlope, curves.clMax(), curves.flapClMax(), polar,
+                measuredZeroLift, curves.curve(), curves.flapCurves());
     }
 
     private static CamberLine camber(Field c) {

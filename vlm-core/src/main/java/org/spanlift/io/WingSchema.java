@@ -36,8 +36,17 @@ public final class WingSchema {
                 false);
         Node polar = YamlSchema.mapping(SectionReader.POLAR_KEYS, Map.of("reynolds", Node.NUMBERS, "cl", Node.NUMBERS,
                 "cd", new Node(Kind.INDEXED_LIST, Map.of(), Node.NUMBERS, true)), false);
+        // A curve's cl is one list of numbers, or with reynolds a list of such lists: cl[3] names a value of
+        // the first form, cl[0][3] one of the second.
+        Node clRows = new Node(Kind.INDEXED_LIST, Map.of(), Node.VALUE, true);
+        Node curveCl = new Node(Kind.INDEXED_LIST, Map.of(), clRows, false);
+        Node liftCurve = YamlSchema.mapping(SectionLiftCurveReader.LIFT_CURVE_KEYS, Map.of("reynolds", Node.NUMBERS,
+                "alpha", Node.NUMBERS, "cl", curveCl), false);
+        Node flapCurve = YamlSchema.mapping(SectionLiftCurveReader.FLAP_CURVE_KEYS, Map.of("reynolds", Node.NUMBERS,
+                "alpha", Node.NUMBERS, "cl", curveCl), false);
         Node section = YamlSchema.mapping(WingFileReader.SECTION_KEYS, Map.of("cl-max", clMaxTable, "flap-cl-max", flap,
-                "drag-polar", polar), false);
+                "drag-polar", polar, "lift-curve", liftCurve,
+                "flap-lift-curves", new Node(Kind.INDEXED_LIST, Map.of(), flapCurve, false)), false);
         ROOT = YamlSchema.mapping(WingFileReader.TOP_KEYS, Map.of(
                 "reference", reference,
                 "surfaces", new Node(Kind.NAMED_LIST, Map.of(), surface, false),

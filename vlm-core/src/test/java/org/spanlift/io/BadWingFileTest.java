@@ -149,6 +149,54 @@ class BadWingFileTest {
             point-masses-empty           | 6  | structure.point-masses                 | an empty list; expected at least one point mass {name, mass, y, x}, or leave point-masses out
             mass-per-span-huge           | 7  | structure.mass-table[0].mass-per-span  | a mass per unit span must be from 0 to 100000 kg/m (a thousand tonnes over ten metres), got '1e300kg/m'
             units-very-long              | 1  | units                                  | expected one of m, ft, in, got 'metremetremetremetremetremetremetreme...'
+            lift-curve-angles-not-increasing        | 8  | sections.main.lift-curve.alpha[4]      | the values must increase strictly; 0 follows 0
+            lift-curve-angle-beyond-90              | 8  | sections.main.lift-curve.alpha[0]      | must be from -90 to 90, got -95
+            lift-curve-angle-exponent-long          | 9  | sections.main.lift-curve.alpha[6]      | with an exponent of at most 3 digits, got '6e-99999999'
+            lift-curve-too-few-angles               | 8  | sections.main.lift-curve.alpha         | expected from 4 to 1000 angles (through zero lift and past the maximum), got 3
+            lift-curve-too-many-angles              | 9  | sections.main.lift-curve.alpha         | expected from 4 to 1000 angles (through zero lift and past the maximum), got 1001
+            lift-curve-cl-beyond-5                  | 8  | sections.main.lift-curve.cl[5]         | must be from -5 to 5, got 6.5
+            lift-curve-cl-infinite                  | 10 | sections.main.lift-curve.cl[5]         | expected a finite number, got .inf
+            lift-curve-cl-hexadecimal               | 10 | sections.main.lift-curve.cl[3]         | expected a decimal number (such as 1.25 or 3e-2), got '0x1'
+            lift-curve-row-too-short                | 10 | sections.main.lift-curve.cl            | expected 7 values of cl, one per angle, got 6
+            lift-curve-rows-per-reynolds            | 11 | sections.main.lift-curve.cl            | expected one list of cl per Reynolds number (2), got 3
+            lift-curve-reynolds-row-too-long        | 12 | sections.main.lift-curve.cl[1]         | expected 13 values of cl, one per angle, got 14
+            lift-curve-reynolds-not-increasing      | 9  | sections.main.lift-curve.reynolds[1]   | the values must increase strictly; 1000000 follows 3000000
+            lift-curve-reynolds-tiny                | 9  | sections.main.lift-curve.reynolds[0]   | must be from 1000 to 1000000000, got 100
+            lift-curve-too-many-reynolds            | 9  | sections.main.lift-curve.reynolds      | expected from 1 to 50 Reynolds numbers, got 51
+            lift-curve-no-zero-lift                 | 8  | sections.main.lift-curve.cl[0]         | does not rise through zero lift below its maximum (no angle below 8 degrees has cl at or below 0 with cl above 0 at the next); expected the curve to start at or below zero lift
+            lift-curve-ends-at-maximum              | 8  | sections.main.lift-curve.cl[5]         | the curve ends without falling past its maximum (its highest cl, 0.8 at 6 degrees, has no lower cl after it); expected the curve to reach past its maximum
+            lift-curve-reynolds-row-ends-at-maximum | 13 | sections.main.lift-curve.cl[1][12]     | the curve at Reynolds number 3000000 ends without falling past its maximum
+            lift-curve-zero-lift-disagrees          | 8  | sections.main.zero-lift-angle          | is -3 degrees, but the lift curve (line 9) crosses zero lift at -2 degrees; expected the two within 0.5 degree
+            lift-curve-slope-disagrees              | 8  | sections.main.lift-slope               | is 0.11 per degree, but the lift curve (line 9) rises at 0.1 per degree over its linear part (least squares from -2 to 6 degrees); expected the two within 5%
+            lift-curve-cl-max-disagrees             | 8  | sections.main.cl-max                   | is 1.5, but the lift curve (line 9) reaches at most 1.4; expected the two within 0.02
+            lift-curve-cl-max-table-disagrees       | 8  | sections.main.cl-max                   | is 1.6 at Reynolds number 3000000, but the lift curve (line 9) reaches at most 1.52 there; expected the two within 0.02
+            lift-curve-zero-lift-beyond-15          | 8  | sections.main.lift-curve.cl[1]         | the curve crosses zero lift at -20.67 degrees; expected a zero-lift angle from -15 to 15 degrees
+            lift-curve-slope-too-steep              | 8  | sections.main.lift-curve.cl[3]         | the curve rises at 0.2 per degree over its linear part (least squares from -2 to 2 degrees); expected a lift slope from 0.03 to 0.13 per degree
+            lift-curve-maximum-too-low              | 8  | sections.main.lift-curve.cl[4]         | the curve's maximum cl is 0.2; expected a maximum from 0.3 to 4 (the range of cl-max)
+            lift-curve-file-and-table               | 8  | sections.main.lift-curve               | both a file and a table; expected either file or the table
+            lift-curve-unknown-key                  | 8  | sections.main.lift-curve.cd            | unknown key; expected one of alpha, cl, file, reynolds
+            lift-curve-missing-cl                   | 8  | sections.main.lift-curve.cl            | missing key; expected the lift coefficients, one per angle
+            lift-curve-not-a-mapping                | 8  | sections.main.lift-curve               | expected a mapping of keys, got a list
+            lift-curve-file-dev-zero                | 8  | sections.main.lift-curve.file          | /dev/zero:1: the file goes on past 16 MiB (the limit is reached on this line); expected a CSV file of a section lift curve of at most 16 MiB
+            lift-curve-file-missing                 | 8  | sections.main.lift-curve.file          | bad-wings/no-such-curve.csv: no such file; expected the path of a CSV file of a section lift curve
+            lift-curve-file-is-folder               | 8  | sections.main.lift-curve.file          | bad-lift-curves: is a folder; expected the path of a CSV file of a section lift curve
+            lift-curve-file-nul-in-path             | 8  | sections.main.lift-curve.file          | not a path this system accepts (Nul character not allowed); expected the path of a CSV file of a section lift curve
+            lift-curve-file-prose                   | 8  | sections.main.lift-curve.file          | bad-lift-curves/prose.csv:1: column 1 of the header is not one of alpha_deg, cl, cd, cm
+            lift-curve-file-ends-at-maximum         | 8  | sections.main.lift-curve.file          | bad-lift-curves/ends-at-maximum.csv:8: cl: the curve ends without falling past its maximum
+            lift-curve-file-not-a-number            | 8  | sections.main.lift-curve.file          | bad-lift-curves/not-a-number.csv:4: cl: not a number ('0x1p-1'); expected a decimal number
+            lift-curve-file-coordinates             | 8  | sections.main.lift-curve.file          | section/valid-commented.dat:2: column 1 of the header is not one of alpha_deg, cl, cd, cm
+            flap-lift-curves-without-clean          | 8  | sections.main.flap-lift-curves         | flap lift curves need the clean one; expected lift-curve in this section too
+            flap-lift-curves-empty                  | 9  | sections.main.flap-lift-curves         | an empty list; expected at least one flap curve {deflection, alpha, cl} or {deflection, file}
+            flap-lift-curves-too-many               | 9  | sections.main.flap-lift-curves         | expected at most 20 flap curves, got 21
+            flap-lift-curve-deflection-zero         | 10 | sections.main.flap-lift-curves[0].deflection | must be above 0 and at most 60 degrees, got 0
+            flap-lift-curve-deflection-beyond-60    | 10 | sections.main.flap-lift-curves[0].deflection | must be above 0 and at most 60 degrees, got 70
+            flap-lift-curves-not-increasing         | 11 | sections.main.flap-lift-curves[1].deflection | is 20 degrees, not above the previous curve's 30; expected deflections that increase strictly
+            flap-lift-curve-missing-deflection      | 10 | sections.main.flap-lift-curves[0].deflection | missing key; expected the flap deflection of this curve
+            flap-lift-curve-unknown-key             | 10 | sections.main.flap-lift-curves[0].reynolds-number | unknown key; expected one of alpha, cl, deflection, file, reynolds
+            flap-lift-curve-below-clean             | 10 | sections.main.flap-lift-curves[0].cl[4] | the curve's maximum cl, 1.3, is 0.1 below the clean curve's 1.4; expected a flap curve that raises cl_max by 0 to 3
+            flap-lift-curve-no-zero-lift            | 10 | sections.main.flap-lift-curves[0].cl[0] | does not rise through zero lift below its maximum
+            flap-lift-curve-file-ends-at-maximum    | 10 | sections.main.flap-lift-curves[0].file | bad-lift-curves/ends-at-maximum.csv:8: cl: the curve ends without falling past its maximum
+            flap-cl-max-disagrees-with-flap-curve   | 9  | sections.main.flap-cl-max              | gives an increment of 0.5 at 20 degrees, but the flap curve at 20 degrees (line 11) reaches 1.7, 0.3 above the clean curve's 1.4; expected the two within 0.02
             """;
 
     @ParameterizedTest(name = "{0}")

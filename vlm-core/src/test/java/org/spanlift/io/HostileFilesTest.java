@@ -22,8 +22,8 @@ import org.junit.jupiter.params.provider.CsvSource;
 import org.spanlift.input.InputException;
 
 /**
- * The hostile cases, envelope, sweep and coordinate files beside {@code bad-wings/} (each folder holds one
- * kind) are refused by their reader with one line naming the file, the line, the field and what is expected.
+ * The hostile cases, envelope, sweep, coordinate and lift-curve files beside {@code bad-wings/} (each folder holds
+ * one kind) are refused by their reader with one line naming the file, the line, the field and what is expected.
  * Wing files have their own table in {@link BadWingFileTest}.
  */
 class HostileFilesTest {
@@ -31,7 +31,8 @@ class HostileFilesTest {
     private static final Path RESOURCES = Path.of("src", "test", "resources");
 
     /** The folders of this table and the reader of each. */
-    private static final List<String> FOLDERS = List.of("bad-cases", "bad-envelopes", "bad-sweeps", "bad-coordinates");
+    private static final List<String> FOLDERS = List.of("bad-cases", "bad-envelopes", "bad-sweeps", "bad-coordinates",
+            "bad-lift-curves");
 
     /**
      * folder/file | the file the message names (empty: the file itself) | line | field | fragment of the message.
@@ -93,6 +94,29 @@ class HostileFilesTest {
             bad-coordinates/name-too-long.dat            |                                    | 1  |                     | a first line of 158 characters that is not a pair of numbers; expected the section's name (at most 100 characters)
             bad-coordinates/prose.dat                    |                                    | 2  |                     | value 1 on the line is not a number; expected two decimal numbers x y per line
             bad-coordinates/utf16-without-bom.dat        |                                    | 1  |                     | a NUL character on this line: the file holds binary data or UTF-16 text without a byte-order mark
+            bad-lift-curves/angle-beyond-90.csv   |                                    | 6  | alpha_deg           | 95 degrees is outside -90 to 90; expected angles of attack from -90 to 90 degrees
+            bad-lift-curves/cl-beyond-5.csv       |                                    | 4  | cl                  | 40 is beyond 5 in size; expected section lift coefficients from -5 to 5
+            bad-lift-curves/comments-only.csv     |                                    | 3  |                     | the file holds no header line; expected a header line naming the columns alpha_deg and cl
+            bad-lift-curves/control-character.csv |                                    | 3  |                     | a control character U+000C on this line; expected a CSV file of a section lift curve of plain text
+            bad-lift-curves/decimal-comma.csv     |                                    | 3  |                     | 3 values on the line; expected 2, one per column of the header (line 1), separated by commas
+            bad-lift-curves/duplicate-column.csv  |                                    | 1  |                     | the column cl is named twice (columns 2 and 3); expected each column once
+            bad-lift-curves/empty-value.csv       |                                    | 3  | cl                  | no value; expected a decimal number (such as 1.25 or 3e-2)
+            bad-lift-curves/ends-at-maximum.csv   |                                    | 8  | cl                  | the curve ends without falling past its maximum (its highest cl, 0.8 at 6 degrees, has no lower cl after it); expected the curve to reach past its maximum
+            bad-lift-curves/exponent-long.csv     |                                    | 4  | cl                  | not a number ('4e-99999999'); expected a decimal number (such as 1.25 or 3e-2) with an exponent of at most 3 digits
+            bad-lift-curves/exponent-overflow.csv |                                    | 4  | cl                  | expected a finite number, got 4e999 (beyond the range of numbers, about 1.8e308)
+            bad-lift-curves/latin1.csv            |                                    | 2  |                     | the file is not UTF-8 text (byte 0xE9 on this line is not UTF-8); expected a CSV file of a section lift curve saved as UTF-8
+            bad-lift-curves/missing-cl-column.csv |                                    | 2  |                     | the header has no cl column; expected a header line naming the columns alpha_deg and cl
+            bad-lift-curves/nan.csv               |                                    | 4  | cl                  | expected a finite number, got NaN
+            bad-lift-curves/no-header.csv         |                                    | 1  |                     | the first line holds numbers, not a header; expected a header line naming the columns alpha_deg and cl
+            bad-lift-curves/no-zero-lift.csv      |                                    | 2  | cl                  | the curve does not rise through zero lift below its maximum
+            bad-lift-curves/not-a-number.csv      |                                    | 4  | cl                  | not a number ('0x1p-1'); expected a decimal number (such as 1.25 or 3e-2)
+            bad-lift-curves/not-increasing.csv    |                                    | 4  | alpha_deg           | 0 degrees after 0 on line 3; expected angles that increase strictly from line to line
+            bad-lift-curves/prose.csv             |                                    | 1  |                     | column 1 of the header is not one of alpha_deg, cl, cd, cm; expected a header line
+            bad-lift-curves/too-few.csv           |                                    | 4  |                     | only 3 angles in the file; expected at least 4 lines of data
+            bad-lift-curves/too-many.csv          |                                    | 1002|                     | more than 1000 angles; expected at most 1000 lines of data
+            bad-lift-curves/unknown-column.csv    |                                    | 1  |                     | column 3 of the header is not one of alpha_deg, cl, cd, cm
+            bad-lift-curves/utf16-without-bom.csv |                                    | 1  |                     | a NUL character on this line: the file holds binary data or UTF-16 text without a byte-order mark; expected a CSV file of a section lift curve saved as UTF-8
+            bad-lift-curves/wrong-count.csv       |                                    | 3  |                     | 3 values on the line; expected 2, one per column of the header (line 1)
             """;
 
     private static void read(String folder, Path path) {
@@ -101,6 +125,7 @@ class HostileFilesTest {
             case "bad-envelopes" -> EnvelopeReader.read(path);
             case "bad-sweeps" -> SweepFileReader.read(path, false);
             case "bad-coordinates" -> CoordinateFileReader.read(path);
+            case "bad-lift-curves" -> LiftCurveFileReader.read(path);
             default -> throw new IllegalArgumentException("no reader for " + folder);
         }
     }

@@ -14,14 +14,15 @@ import org.spanlift.input.YamlValue;
 
 /**
  * The files a command reads, for {@link OutputOptions#check}: an output must never be one of them. A wing
- * file brings the coordinate files its sections name ({@code camber-file}).
+ * file brings the files its sections name: coordinate files ({@code camber-file}) and lift-curve files
+ * ({@code file} of {@code lift-curve} and of {@code flap-lift-curves}).
  */
 public final class InputFiles {
 
     private InputFiles() {
     }
 
-    /** The wing files and the coordinate files their sections name. */
+    /** The wing files and the files their sections name. */
     public static List<Path> wings(List<Path> wingFiles) {
         List<Path> out = new ArrayList<>();
         for (Path w : wingFiles) {
@@ -31,7 +32,7 @@ public final class InputFiles {
     }
 
     /**
-     * A wing file and the coordinate files its sections name. A file that cannot be read or parsed adds
+     * A wing file and the files its sections name. A file that cannot be read or parsed adds
      * nothing more (its reader reports it); only a regular file is read here, so a FIFO is left to the reader.
      */
     public static List<Path> wing(Path wingFile) {
@@ -45,15 +46,19 @@ public final class InputFiles {
         }
         try {
             YamlValue tree = YamlParser.parse(Files.readString(wingFile, StandardCharsets.UTF_8), wingFile.toString());
-            out.addAll(coordinateFiles(tree, wingFile));
+            out.addAll(sectionFiles(tree, wingFile));
         } catch (IOException | InputException e) {
             // the wing reader reports what is wrong with the file
         }
         return out;
     }
 
-    /** The {@code sections.NAME.camber-file} paths of a wing tree, resolved against the wing file's folder. */
-    public static List<Path> coordinateFiles(YamlValue tree, Path wingFile) {
+    /**
+     * The files the sections of a wing tree name, resolved against the wing file's folder: each
+     * {@code sections.NAME.camber-file}, {@code sections.NAME.lift-curve.file} and
+     * {@code sections.NAME.flap-lift-curves[i].file}.
+     */
+    public static List<Path> sectionFiles(YamlValue tree, Path wingFile) {
         List<Path> out = new ArrayList<>();
         if (!(tree instanceof YamlValue.Mapping root)
                 || !(root.get("sections").orElse(null) instanceof YamlValue.Mapping sections)) {
@@ -61,15 +66,31 @@ public final class InputFiles {
         }
         Path folder = wingFile.toAbsolutePath().getParent();
         for (YamlValue.Entry e : sections.entries()) {
-            if (e.value() instanceof YamlValue.Mapping section
-                    && section.get("camber-file").orElse(null) instanceof YamlValue.Scalar file && !file.isNull()) {
-                try {
-                    out.add(folder == null ? Path.of(file.text()) : folder.resolve(file.text()));
-                } catch (InvalidPathException ignored) {
-                    // the section reader reports it
+            if (!(e.value() instanceof YamlValue.Mapping section)) {
+                continue;
+            }
+            add(out, folder, section.get("camber-file").orElse(null));
+            if (section.get("lift-curve").orElse(null) instanceof YamlValue.Mapping curve) {
+                add(out, folder, curve.get("file").orElse(null));
+            }
+            if (section.get("flap-lift-curves").orElse(null) instanceof YamlValue.Sequence flaps) {
+                for (YamlValue flap : flaps.items()) {
+                    if (flap instanceof YamlValue.Mapping curve) {
+                        add(out, folder, curve.get("file").orElse(null));
+                    }
                 }
             }
         }
         return out;
+    }
+
+    private static void add(List<Path> out, Path folder, YamlValue name) {
+        if (name instanceof YamlValue.Scalar file && !file.isNull()) {
+            try {
+                out.add(folder == null ? Path.of(file.text()) : folder.resolve(file.text()));
+            } catch (InvalidPathException ignored) {
+                // the section reader reports it
+            }
+        }
     }
 }
