@@ -90,11 +90,11 @@ public record StallStudy(Configuration clean, Optional<Configuration> flaps, Opt
         }
 
         /**
-         * The basis of the headline stall speed: {@code max-lift} when every section gives a measured lift
-         * curve, else {@code onset} (the linear onset errs safe; a synthetic curve's maximum is shown beside it).
+         * The basis of the headline stall speed: {@code max-lift} when every strip's section curve is measured,
+         * else {@code onset} (the linear onset errs safe; a synthetic curve's maximum is shown beside it).
          */
         public String speedBasis() {
-            return allMeasured(analysis.wing()) ? "max-lift" : "onset";
+            return maximumLift().synthetic() ? "onset" : "max-lift";
         }
 
         /** The headline stall speed, equivalent airspeed, m/s, by {@link #speedBasis()}. */
@@ -113,10 +113,6 @@ public record StallStudy(Configuration clean, Optional<Configuration> flaps, Opt
             }
             return OptionalDouble.of(speedBasis().equals("max-lift")
                     ? maximumLift().speed().orElseThrow().trueSpeed() : speed.orElseThrow().trueSpeed());
-        }
-
-        private static boolean allMeasured(Wing wing) {
-            return wing.sections().values().stream().allMatch(s -> s.liftCurve().isPresent());
         }
     }
 
