@@ -12,8 +12,8 @@ public final class CommonLift {
     /**
      * A common CL given with {@code --cl}, read and checked.
      *
-     * @throws InputException unless it is a decimal number with 0.05 <= |CL| <= 3 (e is defined only away from
-     *         zero lift)
+     * @throws InputException unless it is a decimal number with {@code 0.05 <= |CL| <= 3} (e is defined only
+     *         away from zero lift)
      */
     public static double parse(String text) {
         double cl = OptionNumber.parse("--cl", text);
@@ -24,7 +24,7 @@ public final class CommonLift {
     /**
      * Checks a common CL.
      *
-     * @throws InputException unless 0.05 <= |CL| <= 3
+     * @throws InputException unless {@code 0.05 <= |CL| <= 3}
      */
     public static void check(double cl) {
         if (!Double.isFinite(cl) || Math.abs(cl) < Coefficients.SPAN_EFFICIENCY_MIN_LIFT || Math.abs(cl) > 3) {
