@@ -94,7 +94,8 @@ public record StallStudy(Configuration clean, Optional<Configuration> flaps, Opt
          * else {@code onset} (the linear onset errs safe; a synthetic curve's maximum is shown beside it).
          */
         public String speedBasis() {
-            return maximumLift().synthetic() ? "onset" : "max-lift";
+            StripCurves curves = StripCurves.of(analysis.wing(), analysis.lattice(), deflections, limits, 0);
+            return curves.synthetic() ? "onset" : "max-lift";
         }
 
         /** The headline stall speed, equivalent airspeed, m/s, by {@link #speedBasis()}. */
