@@ -2,7 +2,6 @@ package org.spanlift.cli;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.Collections;
 import java.util.EnumSet;
 import java.util.LinkedHashMap;
@@ -135,7 +134,7 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
                 + "through the stall");
         o.put("section_curves", m.synthetic() ? "synthetic where no lift-curve is given: " + SyntheticCurve.DESCRIPTION
                 : "measured");
-        if (Arrays.stream(c.deflections()).anyMatch(d -> d != 0)) {
+        if (m.handbookFlap()) {
             o.put("flap_model", PlainFlap.source());
         }
         List<MaximumLift.StripState> right = m.strips().stream().filter(s -> s.y() > 0).toList();

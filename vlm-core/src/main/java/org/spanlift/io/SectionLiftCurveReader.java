@@ -381,7 +381,7 @@ public final class SectionLiftCurveReader {
             throw f.error("expected from " + MIN_ANGLES + " to " + MAX_ANGLES + " angles (through zero lift and past "
                     + "the maximum), got " + items.size());
         }
-        return increasing(items, -ALPHA_LIMIT_DEG, ALPHA_LIMIT_DEG);
+        return SectionReader.increasing(items, -ALPHA_LIMIT_DEG, ALPHA_LIMIT_DEG);
     }
 
     private static double[] reynolds(Field f) {
@@ -389,19 +389,7 @@ public final class SectionLiftCurveReader {
         if (items.isEmpty() || items.size() > MAX_REYNOLDS) {
             throw f.error("expected from 1 to " + MAX_REYNOLDS + " Reynolds numbers, got " + items.size());
         }
-        return increasing(items, MIN_REYNOLDS, MAX_REYNOLDS_NUMBER);
-    }
-
-    private static double[] increasing(List<Field> items, double lo, double hi) {
-        double[] out = new double[items.size()];
-        for (int i = 0; i < out.length; i++) {
-            out[i] = items.get(i).inRange(lo, hi);
-            if (i > 0 && !(out[i] > out[i - 1])) {
-                throw items.get(i).error("the values must increase strictly; " + Field.format(out[i]) + " follows "
-                        + Field.format(out[i - 1]));
-            }
-        }
-        return out;
+        return SectionReader.increasing(items, MIN_REYNOLDS, MAX_REYNOLDS_NUMBER);
     }
 
     /**

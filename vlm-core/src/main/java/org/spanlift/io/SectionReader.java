@@ -141,6 +141,11 @@ public final class SectionReader {
         if (items.isEmpty()) {
             throw f.error("expected a non-empty list of numbers");
         }
+        return increasing(items, lo, hi);
+    }
+
+    /** The items' numbers, each within [lo, hi], refused unless they increase strictly. */
+    static double[] increasing(List<Field> items, double lo, double hi) {
         double[] out = new double[items.size()];
         for (int i = 0; i < out.length; i++) {
             out[i] = items.get(i).inRange(lo, hi);

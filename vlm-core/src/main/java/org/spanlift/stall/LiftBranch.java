@@ -1,9 +1,12 @@
 package org.spanlift.stall;
 
 import java.util.ArrayList;
+import java.util.Locale;
 import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
+
+import org.spanlift.input.RefusedException;
 
 /**
  * The coupled lift curve of a wing through the stall, traced by continuation in angle of attack, and its
@@ -68,12 +71,14 @@ public final class LiftBranch {
         List<CoupledPoint> up = new ArrayList<>();
         CoupledPoint p = coupling.solve(start, new double[coupling.size()]);
         if (!p.converged()) {
-            throw new IllegalStateException("the coupled solution did not converge at the zero-lift angle");
+            throw new RefusedException(String.format(Locale.ROOT, "the lattice coupled with the section lift "
+                    + "curves has no solution at the wing's zero-lift angle (%.1f degrees): some strip is already "
+                    + "past its section peak there; check the section curves and the deflections",
+                    Math.toDegrees(start)));
         }
         up.add(p);
         int best = 0;
         End end = End.RANGE;
-        OptionalDouble signChange = OptionalDouble.empty();
         int n = 1;
         while (true) {
             double target = start + n * step;
@@ -99,9 +104,6 @@ public final class LiftBranch {
                 break;
             }
             up.add(next);
-            if (signChange.isEmpty() && next.stableJacobian() != up.get(0).stableJacobian()) {
-                signChange = OptionalDouble.of(next.alpha());
-            }
             best = indexOfMaximum(up);
             if (next.lift() < up.get(best).lift()
                     && next.alpha() >= up.get(best).alpha() + Math.toRadians(PAST_DEG) - 1e-12) {
@@ -117,6 +119,8 @@ public final class LiftBranch {
                 break;
             }
         }
+        OptionalDouble signChange = stableEnd < up.size() ? OptionalDouble.of(up.get(stableEnd).alpha())
+                : OptionalDouble.empty();
         List<CoupledPoint> stable = up.subList(0, stableEnd);
         best = indexOfMaximum(stable);
         CoupledPoint maximum = stable.get(best);

@@ -13,7 +13,6 @@ import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Wing;
 import org.spanlift.input.RefusedException;
 import org.spanlift.results.Coefficients;
-import org.spanlift.results.Solution;
 import org.spanlift.solve.WingAnalysis;
 
 /**
@@ -31,13 +30,14 @@ import org.spanlift.solve.WingAnalysis;
  * @param firstStall           where and when the first strip passes its section peak on the branch
  * @param aileron              the aileron stations at the maximum, when the wing has ailerons
  * @param synthetic            true when some strip's section curve was synthetic (built from cl_max)
+ * @param handbookFlap         true when some deflected strip's curve follows the handbook plain-flap correction
  * @param multipleSolutions    the range of angles [from, to] where a second solution was found, if any
  * @param strips               every strip with its own correction at the maximum, y ascending
  * @param curve                the coupled lift curve, alpha ascending, up to the end of the branch
  * @param speed                the stall speed at this maximum, with a flight condition
  */
 public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.End end, double stalledSpanFraction,
-        Optional<FirstStall> firstStall, Optional<AileronState> aileron, boolean synthetic,
+        Optional<FirstStall> firstStall, Optional<AileronState> aileron, boolean synthetic, boolean handbookFlap,
         Optional<double[]> multipleSolutions, List<StripState> strips, List<CurvePoint> curve,
         Optional<Speed> speed) {
 
@@ -121,7 +121,7 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
 
     private MaximumLift withSpeed(Speed s) {
         return new MaximumLift(lift, alpha, peak, end, stalledSpanFraction, firstStall, aileron, synthetic,
-                multipleSolutions, strips, curve, Optional.of(s));
+                handbookFlap, multipleSolutions, strips, curve, Optional.of(s));
     }
 
     private static MaximumLift from(WingAnalysis analysis, LiftBranch branch, Optional<Speed> speed) {
@@ -145,7 +145,7 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
         }
         return new MaximumLift(top.lift(), top.alpha(), branch.maximumIsPeak(), branch.end(),
                 stalledFraction(c, top), firstStall(c, branch, semi), aileron(wing, c, top), c.curves().synthetic(),
-                branch.multipleSolutions(), states, curve, speed);
+                c.curves().handbookFlap(), branch.multipleSolutions(), states, curve, speed);
     }
 
     /** The share of the span (by strip width) past its section peak. */
@@ -200,10 +200,5 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
             }
         }
         return best == null ? Optional.empty() : Optional.of(new AileronState(below, best.margin(), best.y()));
-    }
-
-    /** The coupled solution at the maximum is not kept; this re-solves it for span loads. */
-    public static Solution solutionAt(SectionCoupling c, CoupledPoint p) {
-        return c.solution(p);
     }
 }

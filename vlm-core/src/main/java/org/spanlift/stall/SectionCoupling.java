@@ -171,6 +171,10 @@ public final class SectionCoupling {
         DMatrixRMaj jac = new DMatrixRMaj(m, m);
         DMatrixRMaj step = new DMatrixRMaj(m, 1);
         LUDecompositionAlt_DDRM lu = new LUDecompositionAlt_DDRM();
+        double[] trial = new double[m];
+        double[] tcl = new double[m];
+        double[] tangle = new double[m];
+        double[] tr = new double[m];
         double c = Math.cos(alpha);
         for (int it = 0; it <= MAX_ITERATIONS; it++) {
             jacobian(alpha, c, angle, jac);
@@ -189,10 +193,6 @@ public final class SectionCoupling {
                 return CoupledPoint.failed(alpha, CoupledPoint.Status.NOT_CONVERGED, x);
             }
             double lambda = 1;
-            double[] trial = new double[m];
-            double[] tcl = new double[m];
-            double[] tangle = new double[m];
-            double[] tr = new double[m];
             while (true) {
                 for (int i = 0; i < m; i++) {
                     trial[i] = x[i] + lambda * step.data[i];

@@ -43,6 +43,7 @@ public record StallStudy(Configuration clean, Optional<Configuration> flaps, Opt
         private final StripLimits limits;
         private final Optional<FlightCondition> condition;
         private MaximumLift maximumLift;
+        private String speedBasis;
 
         Configuration(String label, double[] deflections, StallEstimate estimate, Optional<StallSpeed> speed,
                 WingAnalysis analysis, StripLimits limits, Optional<FlightCondition> condition) {
@@ -93,9 +94,13 @@ public record StallStudy(Configuration clean, Optional<Configuration> flaps, Opt
          * The basis of the headline stall speed: {@code max-lift} when every strip's section curve is measured,
          * else {@code onset} (the linear onset errs safe; a synthetic curve's maximum is shown beside it).
          */
-        public String speedBasis() {
-            StripCurves curves = StripCurves.of(analysis.wing(), analysis.lattice(), deflections, limits, 0);
-            return curves.synthetic() ? "onset" : "max-lift";
+        public synchronized String speedBasis() {
+            if (speedBasis == null) {
+                boolean synthetic = StripCurves.of(analysis.wing(), analysis.lattice(), deflections, limits, 0)
+                        .synthetic();
+                speedBasis = synthetic ? "onset" : "max-lift";
+            }
+            return speedBasis;
         }
 
         /** The headline stall speed, equivalent airspeed, m/s, by {@link #speedBasis()}. */
