@@ -249,7 +249,7 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         }
         t.row(cells("", configs, c -> ""));
         t.row(cells("maximum lift (section lift curves)", configs, c -> ""));
-        for (ResultKey<MaximumLift> key : Vocabulary.select(Vocabulary.MAX_LIFT, "CL", "alpha_deg", "is_peak",
+        for (ResultKey<MaximumLift> key : Vocabulary.select(Vocabulary.MAX_LIFT, "CL", "alpha_deg", "rounds_over", "trace_end",
                 "stalled_span_fraction", "first_stall.eta", "first_stall.CL", "aileron.below_peak",
                 "aileron.margin_dcl", "synthetic_curves")) {
             t.row(cells(Results.label(key, unit), configs, c -> Results.cell(key, c.maximumLift(), unit)));
@@ -272,14 +272,20 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         for (Configuration c : configs) {
             MaximumLift m = c.maximumLift();
             if (!m.peak()) {
-                b.append('\n').append(TextTable.wrap(String.format(Locale.ROOT, "NOTE (%s, maximum lift): the coupled lift curve "
-                        + "ends at a fold at alpha %.2f deg: a station stalls abruptly and the solution jumps to "
-                        + "another branch; the maximum shown is the highest lift found before it (conservative).",
-                        c.label(), Math.toDegrees(m.curve().get(m.curve().size() - 1).alpha())))).append('\n');
+                b.append('\n').append(TextTable.wrap(String.format(Locale.ROOT, "NOTE (%s, maximum lift): %s",
+                        c.label(), switch (m.end()) {
+                            case CURVE_ENDS -> "the traced lift curve ends where a section's tabulated lift curve "
+                                    + "ends, before the lift has fallen; the maximum shown is the highest found "
+                                    + "(extend the section's lift curve to higher angles)";
+                            case DEEP_STALL -> "the traced lift curve ends where a station is 10 degrees past its "
+                                    + "section peak, before the lift has fallen; the maximum shown is the highest found";
+                            default -> "the lift breaks off at the maximum: a station stalls abruptly there (a "
+                                    + "fold of the coupled solution)";
+                        }))).append('\n');
             }
             m.multipleSolutions().ifPresent(r -> b.append(TextTable.wrap(String.format(Locale.ROOT,
-                    "NOTE (%s, maximum lift): a second coupled solution exists from alpha %.2f to %.2f deg (more of the span "
-                            + "stalled): the lift there depends on the way the angle was reached.", c.label(),
+                    "NOTE (%s, maximum lift): two or more coupled solutions exist from alpha %.2f to %.2f deg (more or "
+                            + "less of the span stalled): the lift there depends on the way the angle was reached.", c.label(),
                     Math.toDegrees(r[0]), Math.toDegrees(r[1])))).append('\n'));
         }
         study.flapIncrement().ifPresent(inc -> b.append(String.format(Locale.ROOT,

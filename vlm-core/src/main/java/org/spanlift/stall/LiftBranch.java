@@ -1,74 +1,89 @@
 package org.spanlift.stall;
 
 import java.util.ArrayList;
-import java.util.Locale;
+import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.spanlift.input.RefusedException;
 
 /**
- * The coupled lift curve of a wing through the stall, traced by continuation in angle of attack, and its
- * maximum. The trace starts at the linear zero-lift angle (rounded down to a whole degree) and climbs in
- * {@value #STEP_DEG}-degree steps, each solve starting from the last converged corrections; a step that
- * fails is halved down to {@value #MIN_STEP_DEG} degree, and when it still fails the branch ends there
- * (a fold: beyond it the solution jumps to another branch). It stops {@value #PAST_DEG} degrees past the
- * maximum, at a branch end, where a tabulated section curve ends, or {@value #SPAN_DEG} degrees above the
- * start. The maximum is then refined by golden-section search between its neighbours to
- * {@value #REFINE_DEG} degree, each solve continued from the point below.
+ * The coupled lift curve of a wing through the stall and its maximum.
  *
- * <p>Multiple solutions: the trace is repeated downward from its last point; where the two traces differ
- * in CL by more than {@value #DIFFERENT} at the same angle, two solutions exist there (the downward one
- * has more strips past their peak), and a change of sign of the Jacobian's determinant along the upward
- * branch marks a fold or a branch point. Both are reported; no unconverged point carries a number.
+ * <p>The solution curve of {@link SectionCoupling} is traced by pseudo-arclength continuation (Keller, 1977)
+ * in the corrections and the angle of attack together, from the linear zero-lift angle (rounded down to a
+ * whole degree): a secant predictor, then the corrector on the hyperplane normal to it, the arclength step
+ * {@value #STEP_DEG} degree at most, halved on failure down to {@value #MIN_STEP}, grown after easy steps; where even that fails (a branch point,
+ * where the corrector's system is singular) the trace leaps two or four longest steps ahead. A
+ * strip that passes its section peak can make the curve fold: the angle of attack turns back, along an
+ * unstable stretch, and turns forward again with that strip stalled. The trace follows it round. Folds show
+ * as changes of sign of the Jacobian's determinant; points with the sign of the linear start are stable.
+ *
+ * <p>A wing whose angle of attack is raised slowly follows the stable points whose angle exceeds that of every
+ * stable point before them ({@link #upward()}): at a fold it jumps, at the same angle, to the next stable
+ * stretch (more of the span stalled). The maximum lift is the highest CL of that path, refined by
+ * golden-section search to {@value #REFINE_DEG} degree when it lies inside a stable stretch; when it lies at a
+ * fold the stall there is abrupt (the lift drops as the path jumps). Where unstable points exist, two or more
+ * solutions exist at the same angle ({@link #multipleSolutions()}): the lift there depends on how the angle
+ * was reached. The trace stops {@value #PAST_DEG} degrees past the maximum, where a tabulated section curve
+ * ends, where a strip passes its section peak by more than {@value #DEEP_STALL_DEG} degrees, {@value #SPAN_DEG} degrees above the start, after {@value #MAX_POINTS} points, or when a step fails
+ * at the smallest length. No unconverged point carries a number.
  */
 public final class LiftBranch {
 
     static final double STEP_DEG = 0.25;
-    static final double MIN_STEP_DEG = 0.01;
+    static final double MIN_STEP = 1e-6;
     static final double PAST_DEG = 4;
     static final double SPAN_DEG = 40;
     static final double REFINE_DEG = 0.005;
-    static final double DIFFERENT = 1e-6;
+    static final int MAX_POINTS = 3000;
+    /**
+     * How far past its section peak a strip's effective angle may go on the trace, degrees. Beyond it the
+     * post-stall section data (measured or modelled) are least certain and the strip-wise coupling has
+     * solutions that no wing reaches (a narrow strip answers its own correction weakly, so it can sit at any
+     * angle); the project's choice, well past where a wing's maximum lift lies.
+     */
+    static final double DEEP_STALL_DEG = 10;
+    /** The largest change of a strip's correction per change of angle when the maximum is refined. */
+    static final double JUMP = 20;
 
     private final SectionCoupling coupling;
+    private final List<CoupledPoint> trace;
     private final List<CoupledPoint> upward;
-    private final List<CoupledPoint> downward;
     private final CoupledPoint maximum;
     private final boolean peak;
     private final End end;
-    private final OptionalDouble jacobianSignChange;
 
-    /** How the upward trace ended. */
+    /** How the trace ended. */
     public enum End {
         /** It ran past the maximum as far as asked. */
         PAST_MAXIMUM,
-        /** Newton's method found no solution beyond the last point (a fold). */
-        FOLD,
+        /** A step failed at the smallest length. */
+        STALLED_STEP,
         /** A tabulated section curve ended. */
         CURVE_ENDS,
-        /** The angle range ended without a maximum. */
+        /** A strip went more than {@value LiftBranch#DEEP_STALL_DEG} degrees past its section peak. */
+        DEEP_STALL,
+        /** The angle range or the number of points ended. */
         RANGE
     }
 
-    private LiftBranch(SectionCoupling coupling, List<CoupledPoint> upward, List<CoupledPoint> downward,
-            CoupledPoint maximum, boolean peak, End end, OptionalDouble jacobianSignChange) {
+    private LiftBranch(SectionCoupling coupling, List<CoupledPoint> trace, List<CoupledPoint> upward,
+            CoupledPoint maximum, boolean peak, End end) {
         this.coupling = coupling;
+        this.trace = List.copyOf(trace);
         this.upward = List.copyOf(upward);
-        this.downward = List.copyOf(downward);
         this.maximum = maximum;
         this.peak = peak;
         this.end = end;
-        this.jacobianSignChange = jacobianSignChange;
     }
 
-    /** Traces the branch of the given coupling. */
+    /** Traces the solution curve of the given coupling from the wing's linear zero-lift angle (rad). */
     public static LiftBranch trace(SectionCoupling coupling, double zeroLiftAngle) {
-        double step = Math.toRadians(STEP_DEG);
         double start = Math.toRadians(Math.floor(Math.toDegrees(zeroLiftAngle)));
         double last = start + Math.toRadians(SPAN_DEG);
-        List<CoupledPoint> up = new ArrayList<>();
         CoupledPoint p = coupling.solve(start, new double[coupling.size()]);
         if (!p.converged()) {
             throw new RefusedException(String.format(Locale.ROOT, "the lattice coupled with the section lift "
@@ -76,76 +91,161 @@ public final class LiftBranch {
                     + "past its section peak there; check the section curves and the deflections",
                     Math.toDegrees(start)));
         }
-        up.add(p);
-        int best = 0;
+        boolean stable = p.stableJacobian();
+        double[] t = firstDirection(coupling, p);
+        double maxStep = Math.toRadians(STEP_DEG);
+        double ds = maxStep;
+        List<CoupledPoint> trace = new ArrayList<>(List.of(p));
+        List<CoupledPoint> up = new ArrayList<>(List.of(p));
         End end = End.RANGE;
-        int n = 1;
-        while (true) {
-            double target = start + n * step;
-            if (target > last + 1e-12) {
-                break;
+        while (trace.size() < MAX_POINTS) {
+            double[] x = p.corrections();
+            int m = x.length;
+            double[] predicted = new double[m];
+            for (int i = 0; i < m; i++) {
+                predicted[i] = x[i] + ds * t[i];
             }
-            CoupledPoint prev = up.get(up.size() - 1);
-            CoupledPoint next = coupling.solve(target, prev.corrections());
-            double h = target - prev.alpha();
-            while (!next.converged() && next.status() == CoupledPoint.Status.NOT_CONVERGED
-                    && h > Math.toRadians(MIN_STEP_DEG)) {
-                h /= 2;
-                CoupledPoint mid = coupling.solve(prev.alpha() + h, prev.corrections());
-                if (mid.converged()) {
-                    up.add(mid);
-                    prev = mid;
-                    h = target - prev.alpha();
-                    next = coupling.solve(target, prev.corrections());
+            double[] tx = Arrays.copyOf(t, m);
+            CoupledPoint q = coupling.correct(predicted, p.alpha() + ds * t[m], tx, t[m]);
+            if (!q.converged() || distance(p, q) > 3 * ds) {
+                ds /= 2;
+                if (ds >= MIN_STEP) {
+                    continue;
                 }
+                q = leap(coupling, p, t, maxStep);
+                if (q == null) {
+                    end = nearCurveEnd(coupling, p) ? End.CURVE_ENDS : End.STALLED_STEP;
+                    break;
+                }
+                ds = maxStep;
             }
-            if (!next.converged()) {
-                end = next.status() == CoupledPoint.Status.CURVE_ENDS ? End.CURVE_ENDS : End.FOLD;
+            if (deepStall(coupling, q)) {
+                end = End.DEEP_STALL;
                 break;
             }
-            up.add(next);
-            best = indexOfMaximum(up);
-            if (next.lift() < up.get(best).lift()
-                    && next.alpha() >= up.get(best).alpha() + Math.toRadians(PAST_DEG) - 1e-12) {
+            t = secant(p, q);
+            if (q.iterations() <= 3) {
+                ds = Math.min(maxStep, 1.5 * ds);
+            }
+            trace.add(q);
+            p = q;
+            if (q.stableJacobian() == stable && q.alpha() > up.get(up.size() - 1).alpha()) {
+                up.add(q);
+            }
+            CoupledPoint best = up.get(indexOfMaximum(up));
+            if (q.alpha() > last || q.alpha() < start - Math.toRadians(SPAN_DEG)) {
+                break;
+            }
+            if (up.get(up.size() - 1).lift() < best.lift()
+                    && up.get(up.size() - 1).alpha() >= best.alpha() + Math.toRadians(PAST_DEG)) {
                 end = End.PAST_MAXIMUM;
                 break;
             }
-            n++;
         }
-        int stableEnd = up.size();
-        for (int i = 1; i < up.size(); i++) {
-            if (up.get(i).stableJacobian() != up.get(0).stableJacobian()) {
-                stableEnd = i;
-                break;
-            }
+        int best = indexOfMaximum(up);
+        CoupledPoint maximum = up.get(best);
+        boolean smooth = best > 0 && best + 1 < up.size() && adjacentOnTrace(trace, up.get(best), up.get(best + 1))
+                && adjacentOnTrace(trace, up.get(best - 1), up.get(best));
+        if (smooth) {
+            List<CoupledPoint> known = new ArrayList<>(up.subList(best - 1, best + 1));
+            maximum = refine(coupling, known, up.get(best - 1).alpha(), up.get(best + 1).alpha(), maximum);
         }
-        OptionalDouble signChange = stableEnd < up.size() ? OptionalDouble.of(up.get(stableEnd).alpha())
-                : OptionalDouble.empty();
-        List<CoupledPoint> stable = up.subList(0, stableEnd);
-        best = indexOfMaximum(stable);
-        CoupledPoint maximum = stable.get(best);
         boolean peak = false;
-        if (best > 0) {
-            double hi = best + 1 < up.size() ? up.get(best + 1).alpha() : maximum.alpha() + step;
-            maximum = refine(coupling, new ArrayList<>(stable), up.get(best - 1).alpha(), hi, maximum);
-            for (int i = best + 1; i < stableEnd; i++) {
-                peak |= stable.get(i).lift() < maximum.lift();
+        for (int i = best + 1; i < up.size(); i++) {
+            peak |= up.get(i).lift() < maximum.lift();
+        }
+        return new LiftBranch(coupling, trace, up, maximum, peak && smooth, end);
+    }
+
+    /**
+     * A step over a point where even the shortest steps fail (a branch point, where the bordered system is
+     * singular): the corrector from two and four times the longest step ahead; null when neither converges.
+     */
+    private static CoupledPoint leap(SectionCoupling coupling, CoupledPoint p, double[] t, double maxStep) {
+        double[] x = p.corrections();
+        int m = x.length;
+        for (double ds : new double[] {2 * maxStep, 4 * maxStep}) {
+            double[] predicted = new double[m];
+            for (int i = 0; i < m; i++) {
+                predicted[i] = x[i] + ds * t[i];
+            }
+            CoupledPoint q = coupling.correct(predicted, p.alpha() + ds * t[m], Arrays.copyOf(t, m), t[m]);
+            if (q.converged() && distance(p, q) <= 3 * ds) {
+                return q;
             }
         }
-        List<CoupledPoint> down = new ArrayList<>();
-        CoupledPoint from = up.get(up.size() - 1);
-        for (int i = up.size() - 2; i >= 0; i--) {
-            CoupledPoint q = coupling.solve(up.get(i).alpha(), from.corrections());
-            if (!q.converged()) {
-                break;
-            }
-            down.add(q);
-            from = q;
-            if (Math.abs(q.lift() - up.get(i).lift()) <= 1e-9 && up.get(i).alpha() < maximum.alpha()) {
-                break;
+        return null;
+    }
+
+    private static boolean deepStall(SectionCoupling coupling, CoupledPoint p) {
+        for (int i = 0; i < coupling.size(); i++) {
+            double over = p.sectionAngle(i) - coupling.curves().curve(coupling.wingIndex(i)).peakAngle();
+            if (over > Math.toRadians(DEEP_STALL_DEG)) {
+                return true;
             }
         }
-        return new LiftBranch(coupling, up, down, maximum, peak, end, signChange);
+        return false;
+    }
+
+    /** True when some strip's effective angle is within one degree of the end of its section curve. */
+    private static boolean nearCurveEnd(SectionCoupling coupling, CoupledPoint p) {
+        for (int i = 0; i < coupling.size(); i++) {
+            if (p.sectionAngle(i) > coupling.curves().curve(coupling.wingIndex(i)).lastAngle() - Math.toRadians(1)) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** The unit tangent at the start, oriented toward increasing angle of attack. */
+    private static double[] firstDirection(SectionCoupling coupling, CoupledPoint p) {
+        int m = coupling.size();
+        double[] v = coupling.tangent(p).orElseThrow(() -> new RefusedException(
+                "the coupled solution is singular at the wing's zero-lift angle; check the section curves"));
+        double[] t = new double[m + 1];
+        double norm = 1;
+        for (int i = 0; i < m; i++) {
+            t[i] = v[i];
+            norm += v[i] * v[i];
+        }
+        t[m] = 1;
+        norm = Math.sqrt(norm);
+        for (int i = 0; i <= m; i++) {
+            t[i] /= norm;
+        }
+        return t;
+    }
+
+    /** The unit secant from p to q in (corrections, alpha). */
+    private static double[] secant(CoupledPoint p, CoupledPoint q) {
+        double[] a = p.corrections();
+        double[] b = q.corrections();
+        int m = a.length;
+        double[] t = new double[m + 1];
+        for (int i = 0; i < m; i++) {
+            t[i] = b[i] - a[i];
+        }
+        t[m] = q.alpha() - p.alpha();
+        double d = distance(p, q);
+        for (int i = 0; i <= m; i++) {
+            t[i] /= d;
+        }
+        return t;
+    }
+
+    private static double distance(CoupledPoint p, CoupledPoint q) {
+        double[] a = p.corrections();
+        double[] b = q.corrections();
+        double sum = (q.alpha() - p.alpha()) * (q.alpha() - p.alpha());
+        for (int i = 0; i < a.length; i++) {
+            sum += (b[i] - a[i]) * (b[i] - a[i]);
+        }
+        return Math.sqrt(sum);
+    }
+
+    private static boolean adjacentOnTrace(List<CoupledPoint> trace, CoupledPoint a, CoupledPoint b) {
+        int i = trace.indexOf(a);
+        return i >= 0 && i + 1 < trace.size() && trace.get(i + 1) == b;
     }
 
     private static int indexOfMaximum(List<CoupledPoint> points) {
@@ -159,27 +259,25 @@ public final class LiftBranch {
     }
 
     /**
-     * Golden-section search for the highest CL between lo and hi on the branch of the given points: each
-     * solve continues from the nearest point below it (else the nearest above) and counts only when it
-     * converges with the branch's sign of the Jacobian's determinant.
+     * Golden-section search for the highest CL between lo and hi on one stable stretch: each solve continues
+     * from the nearest known point below it and counts only when it converges without a jump.
      */
     private static CoupledPoint refine(SectionCoupling coupling, List<CoupledPoint> known, double lo, double hi,
             CoupledPoint best) {
-        boolean sign = known.get(0).stableJacobian();
         double g = (Math.sqrt(5) - 1) / 2;
         double tol = Math.toRadians(REFINE_DEG);
-        CoupledPoint top = best;
         while (hi - lo > tol) {
             double c = hi - g * (hi - lo);
             double d = lo + g * (hi - lo);
-            double fc = onBranch(coupling, known, c, sign);
-            double fd = onBranch(coupling, known, d, sign);
+            double fc = onBranch(coupling, known, c);
+            double fd = onBranch(coupling, known, d);
             if (fc >= fd) {
                 hi = d;
             } else {
                 lo = c;
             }
         }
+        CoupledPoint top = best;
         for (CoupledPoint p : known) {
             if (p.lift() > top.lift()) {
                 top = p;
@@ -188,7 +286,7 @@ public final class LiftBranch {
         return top;
     }
 
-    private static double onBranch(SectionCoupling coupling, List<CoupledPoint> known, double alpha, boolean sign) {
+    private static double onBranch(SectionCoupling coupling, List<CoupledPoint> known, double alpha) {
         CoupledPoint start = known.get(0);
         for (CoupledPoint p : known) {
             if (p.alpha() <= alpha && p.alpha() >= start.alpha()) {
@@ -196,69 +294,81 @@ public final class LiftBranch {
             }
         }
         CoupledPoint q = coupling.solve(alpha, start.corrections());
-        if (q.converged() && q.stableJacobian() == sign) {
-            known.add(q);
-            return q.lift();
+        if (!q.converged() || q.stableJacobian() != start.stableJacobian()) {
+            return Double.NEGATIVE_INFINITY;
         }
-        return Double.NEGATIVE_INFINITY;
+        double allowed = JUMP * Math.abs(alpha - start.alpha()) + 1e-12;
+        double[] a = q.corrections();
+        double[] b = start.corrections();
+        for (int i = 0; i < a.length; i++) {
+            if (Math.abs(a[i] - b[i]) > allowed) {
+                return Double.NEGATIVE_INFINITY;
+            }
+        }
+        known.add(q);
+        return q.lift();
     }
 
     public SectionCoupling coupling() {
         return coupling;
     }
 
-    /** The upward trace, converged points only, alpha ascending. */
+    /** Every point of the trace, in the order traced (the angle of attack turns back at folds). */
+    public List<CoupledPoint> trace() {
+        return trace;
+    }
+
+    /**
+     * The path of a slowly rising angle of attack: the stable points whose angle exceeds that of every stable
+     * point before them, alpha ascending.
+     */
     public List<CoupledPoint> upward() {
         return upward;
     }
 
-    /** The downward trace from the upward trace's last point, converged points only, alpha descending. */
-    public List<CoupledPoint> downward() {
-        return downward;
-    }
-
-    /**
-     * The point of highest CL on the upward trace before the Jacobian's determinant first changes sign
-     * (refined).
-     */
+    /** The point of highest CL on the upward path (refined inside a stable stretch). */
     public CoupledPoint maximum() {
         return maximum;
     }
 
-    /** How the upward trace ended. */
+    /** How the trace ended. */
     public End end() {
         return end;
     }
 
     /**
-     * True when the maximum is a true maximum of the branch (the CL falls beyond it before the Jacobian's
-     * determinant changes sign), false when the branch ends at or just after its highest point (a fold, a
-     * branch point or a curve's end) and the highest converged point on it is all that can be said.
+     * True when the lift rounds over at the maximum (it lies inside a stable stretch and the path's lift
+     * falls beyond it); false when the maximum is at a fold, where a station stalls abruptly and the path
+     * jumps to a stretch of lower lift, or when the trace ended there.
      */
     public boolean maximumIsPeak() {
         return peak;
     }
 
-    /** The first angle of the upward trace where the Jacobian's determinant changed sign, rad. */
+    /** The first angle of the trace where the Jacobian's determinant changed sign (a fold), rad. */
     public OptionalDouble jacobianSignChange() {
-        return jacobianSignChange;
+        for (CoupledPoint q : trace) {
+            if (q.stableJacobian() != trace.get(0).stableJacobian()) {
+                return OptionalDouble.of(q.alpha());
+            }
+        }
+        return OptionalDouble.empty();
     }
 
     /**
-     * The range of angles (rad) where the downward trace found a second solution, different from the
-     * upward one, if any: [lowest, highest].
+     * The range of angles (rad) over which the trace found unstable solutions, where two or more solutions
+     * exist at the same angle: [lowest, highest]; absent when none.
      */
     public Optional<double[]> multipleSolutions() {
-        double lo = Double.NaN;
-        double hi = Double.NaN;
-        for (CoupledPoint q : downward) {
-            for (CoupledPoint u : upward) {
-                if (Math.abs(u.alpha() - q.alpha()) < 1e-12 && Math.abs(u.lift() - q.lift()) > DIFFERENT) {
-                    lo = Double.isNaN(lo) ? q.alpha() : Math.min(lo, q.alpha());
-                    hi = Double.isNaN(hi) ? q.alpha() : Math.max(hi, q.alpha());
-                }
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        boolean stable = trace.get(0).stableJacobian();
+        for (CoupledPoint q : trace) {
+            if (q.stableJacobian() != stable) {
+                lo = Math.min(lo, q.alpha());
+                hi = Math.max(hi, q.alpha());
             }
         }
-        return Double.isNaN(lo) ? Optional.empty() : Optional.of(new double[] {lo, hi});
+        return lo > hi ? Optional.empty() : Optional.of(new double[] {lo, hi});
     }
 }

@@ -2,6 +2,7 @@ package org.spanlift.stall;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.dense.row.decomposition.lu.LUDecompositionAlt_DDRM;
@@ -24,7 +25,8 @@ import org.spanlift.solve.WingAnalysis;
  * <pre>
  *   cl_i(d) = A_i cos a + B_i sin a + cos a sum_j K_ij d_j       (the lattice, by superposition)
  *   alpha_i = alpha_0,i + cl_i / (2 pi) - d_i                     (the strip's effective angle of attack)
- *   R_i     = cl_i - f_i(alpha_i) = 0,
+ *   R_i     = cl_i - f_i(alpha_i) + S_i(d) = 0,
+ *   S_i(d)  = s 2 pi c_i^2 sum_j (d_i - d_j) / (h_i |y_i - y_j|)   (j the strips beside strip i)
  * </pre>
  *
  * alpha_0,i the strip's zero-lift angle in the lattice's thin-airfoil form ({@link StripCurves}). The
@@ -32,6 +34,18 @@ import org.spanlift.solve.WingAnalysis;
  * lift, less the correction; so with that line as the section curve every d_i is zero and the coupled
  * solution is the linear one. K comes from {@link StripBasis}, one back-substitution per strip on the
  * wing's factorization; each Newton step then costs a product with K and a small dense solve.
+ *
+ * <p>S is a spanwise smoothing of the corrections, a second difference scaled by the local chord squared
+ * (h_i the strip's width, s = {@value #SMOOTHING}). Without it the coupled problem is ill-posed past a
+ * section's peak: a strip's lift answers its own correction less the narrower the strip, so once one strip
+ * passes its peak it can run away alone, the curve folds there and the maximum falls as the strips are
+ * refined. The smoothing ties each correction to its neighbours over about a chord, so a stalled region is
+ * at least that wide whatever the strips; the maximum then converges with the strips
+ * (validation/CONVERGENCE.md). It adds nothing where the corrections are uniform along the span, and with
+ * each strip's thin-airfoil line as its curve (corrections zero) the linear solution is unchanged. The
+ * approach is that of an artificial viscosity added to the nonlinear lifting-line equation to keep its
+ * post-stall solutions smooth along the span (J.-J. Chattot, in his work on the nonlinear lifting line with
+ * viscous section data, about 2004; recalled from memory); the form and the weight here are the project's.
  *
  * <p>Newton's method with a backtracking line search on the largest residual; converged when every |R_i| is
  * at most {@value #TOLERANCE}. A symmetric condition of a mirrored wing solves the right half's strips with
@@ -43,6 +57,12 @@ public final class SectionCoupling {
     /** The largest residual |cl_i - f_i(alpha_i)| of a converged solution. */
     public static final double TOLERANCE = 1e-10;
     private static final int MAX_ITERATIONS = 60;
+    /**
+     * The weight of the spanwise smoothing of the corrections (see the class notes), the project's choice:
+     * it stiffens a pattern of corrections of spanwise wavelength two chords by about 6 per radian, more than
+     * the steepest fall of a section curve past its peak, and one of eight chords by 0.4 only.
+     */
+    static final double SMOOTHING = 0.1;
     private static final double TWO_PI = 2 * Math.PI;
 
     private final WingAnalysis analysis;
@@ -53,6 +73,8 @@ public final class SectionCoupling {
     private final double[] a;
     private final double[] b;
     private final double[][] k;
+    private final int[][] neighbours;
+    private final double[][] smoothing;
     private final double[] liftPerCorrection;
 
     private SectionCoupling(WingAnalysis analysis, double[] deflections, StripCurves curves) {
@@ -78,6 +100,9 @@ public final class SectionCoupling {
         this.b = new double[m];
         this.k = new double[m][m];
         this.liftPerCorrection = new double[m];
+        this.neighbours = new int[m][];
+        this.smoothing = new double[m][];
+        spanwiseSmoothing(lattice, unknowns);
         BasisSolutions linear = analysis.basis();
         for (int i = 0; i < m; i++) {
             Strip st = lattice.strips().get(unknowns.get(i));
@@ -106,6 +131,43 @@ public final class SectionCoupling {
             }
             liftPerCorrection[j] = sum / area;
         }
+    }
+
+    /**
+     * The neighbours of each unknown along the span (strips whose edges touch; in a symmetric system the
+     * innermost strip's mirror image carries the same correction and adds nothing) and the weights
+     * {@value #SMOOTHING} 2 pi c_i^2 / (h_i d_ij), h_i the strip's width and d_ij the distance between
+     * control points: a second difference of the corrections over the span, scaled by the local chord
+     * squared.
+     */
+    private void spanwiseSmoothing(Lattice lattice, List<Integer> unknowns) {
+        int m = unknowns.size();
+        double tol = 1e-9 * analysis.wing().reference().span();
+        for (int i = 0; i < m; i++) {
+            Strip si = lattice.strips().get(unknowns.get(i));
+            List<Integer> found = new ArrayList<>();
+            for (int j = 0; j < m; j++) {
+                Strip sj = lattice.strips().get(unknowns.get(j));
+                if (j != i && (Math.abs(si.yRight() - sj.yLeft()) <= tol || Math.abs(si.yLeft() - sj.yRight()) <= tol)) {
+                    found.add(j);
+                }
+            }
+            neighbours[i] = found.stream().mapToInt(Integer::intValue).toArray();
+            smoothing[i] = new double[neighbours[i].length];
+            for (int n = 0; n < neighbours[i].length; n++) {
+                Strip sj = lattice.strips().get(unknowns.get(neighbours[i][n]));
+                smoothing[i][n] = SMOOTHING * TWO_PI * si.chord() * si.chord() / (si.width() * Math.abs(sj.y() - si.y()));
+            }
+        }
+    }
+
+    /** The smoothing term of unknown i at corrections x. */
+    private double smoothed(int i, double[] x) {
+        double sum = 0;
+        for (int n = 0; n < neighbours[i].length; n++) {
+            sum += smoothing[i][n] * (x[i] - x[neighbours[i][n]]);
+        }
+        return sum;
     }
 
     /**
@@ -159,8 +221,30 @@ public final class SectionCoupling {
      * one per unknown; zeros for the linear solution).
      */
     public CoupledPoint solve(double alpha, double[] start) {
+        return newton(start, alpha, null, 0);
+    }
+
+    /**
+     * Solves for the corrections and the angle of attack together on the hyperplane through the predicted
+     * point (xPredicted, alphaPredicted) normal to the direction (tx, ta): the corrector of pseudo-arclength
+     * continuation (H. B. Keller, "Numerical solution of bifurcation and nonlinear eigenvalue problems",
+     * 1977), which passes folds where the angle of attack turns back.
+     */
+    CoupledPoint correct(double[] xPredicted, double alphaPredicted, double[] tx, double ta) {
+        return newton(xPredicted, alphaPredicted, tx, ta);
+    }
+
+    /**
+     * Newton's method with a backtracking line search on the largest residual. With tx null, alpha is fixed;
+     * otherwise alpha is an unknown too and the equation tx . (x - x0) + ta (alpha - alpha0) = 0 is added,
+     * (x0, alpha0) the start.
+     */
+    private CoupledPoint newton(double[] start, double alphaStart, double[] tx, double ta) {
         int m = size();
+        boolean bordered = tx != null;
+        int n = bordered ? m + 1 : m;
         double[] x = start.clone();
+        double alpha = alphaStart;
         double[] cl = new double[m];
         double[] angle = new double[m];
         double[] r = new double[m];
@@ -168,20 +252,32 @@ public final class SectionCoupling {
         if (Double.isNaN(norm)) {
             return CoupledPoint.failed(alpha, CoupledPoint.Status.CURVE_ENDS, x);
         }
-        DMatrixRMaj jac = new DMatrixRMaj(m, m);
-        DMatrixRMaj step = new DMatrixRMaj(m, 1);
+        DMatrixRMaj jac = new DMatrixRMaj(n, n);
+        DMatrixRMaj square = new DMatrixRMaj(m, m);
+        DMatrixRMaj step = new DMatrixRMaj(n, 1);
         LUDecompositionAlt_DDRM lu = new LUDecompositionAlt_DDRM();
         double[] trial = new double[m];
         double[] tcl = new double[m];
         double[] tangle = new double[m];
         double[] tr = new double[m];
-        double c = Math.cos(alpha);
+        double constraint = 0;
         for (int it = 0; it <= MAX_ITERATIONS; it++) {
-            jacobian(alpha, c, angle, jac);
-            if (norm <= TOLERANCE) {
-                boolean positive = lu.decompose(jac) && lu.computeDeterminant().real > 0;
+            jacobian(alpha, Math.cos(alpha), angle, square);
+            if (Math.max(norm, Math.abs(constraint)) <= TOLERANCE) {
+                boolean positive = lu.decompose(square) && lu.computeDeterminant().real > 0;
                 return new CoupledPoint(alpha, CoupledPoint.Status.CONVERGED, lift(alpha, x), x, cl, angle,
                         positive, it);
+            }
+            if (bordered) {
+                double[] ra = alphaDerivative(alpha, x, angle);
+                for (int i = 0; i < m; i++) {
+                    System.arraycopy(square.data, i * m, jac.data, i * n, m);
+                    jac.data[i * n + m] = ra[i];
+                    jac.data[m * n + i] = tx[i];
+                }
+                jac.data[m * n + m] = ta;
+            } else {
+                jac.setTo(square);
             }
             if (!lu.decompose(jac)) {
                 return CoupledPoint.failed(alpha, CoupledPoint.Status.NOT_CONVERGED, x);
@@ -189,21 +285,30 @@ public final class SectionCoupling {
             for (int i = 0; i < m; i++) {
                 step.data[i] = -r[i];
             }
+            if (bordered) {
+                step.data[m] = -constraint;
+            }
             if (!solveInPlace(lu, step)) {
                 return CoupledPoint.failed(alpha, CoupledPoint.Status.NOT_CONVERGED, x);
             }
+            double before = Math.max(norm, Math.abs(constraint));
             double lambda = 1;
             while (true) {
                 for (int i = 0; i < m; i++) {
                     trial[i] = x[i] + lambda * step.data[i];
                 }
-                double tn = residual(alpha, trial, tcl, tangle, tr);
-                if (!Double.isNaN(tn) && tn < (1 - 1e-4 * lambda) * norm) {
+                double ta2 = bordered ? alpha + lambda * step.data[m] : alpha;
+                double tn = residual(ta2, trial, tcl, tangle, tr);
+                double tg = bordered ? hyperplane(trial, ta2, start, alphaStart, tx, ta) : 0;
+                double after = Math.max(tn, Math.abs(tg));
+                if (!Double.isNaN(tn) && after < (1 - 1e-4 * lambda) * before) {
                     System.arraycopy(trial, 0, x, 0, m);
                     System.arraycopy(tcl, 0, cl, 0, m);
                     System.arraycopy(tangle, 0, angle, 0, m);
                     System.arraycopy(tr, 0, r, 0, m);
+                    alpha = ta2;
                     norm = tn;
+                    constraint = tg;
                     break;
                 }
                 lambda /= 2;
@@ -214,6 +319,50 @@ public final class SectionCoupling {
             }
         }
         return CoupledPoint.failed(alpha, CoupledPoint.Status.NOT_CONVERGED, x);
+    }
+
+    private static double hyperplane(double[] x, double alpha, double[] x0, double alpha0, double[] tx, double ta) {
+        double g = ta * (alpha - alpha0);
+        for (int i = 0; i < x.length; i++) {
+            g += tx[i] * (x[i] - x0[i]);
+        }
+        return g;
+    }
+
+    /** d R_i / d alpha at fixed corrections: d cl_i / d alpha (1 - f_i' / (2 pi)). */
+    private double[] alphaDerivative(double alpha, double[] x, double[] angle) {
+        int m = size();
+        double c = Math.cos(alpha);
+        double s = Math.sin(alpha);
+        double[] out = new double[m];
+        for (int i = 0; i < m; i++) {
+            double d = -a[i] * s + b[i] * c;
+            for (int j = 0; j < m; j++) {
+                d -= s * k[i][j] * x[j];
+            }
+            out[i] = d * (1 - curves.curve(wingIndex[i]).slope(angle[i]) / TWO_PI);
+        }
+        return out;
+    }
+
+    /**
+     * The tangent (dx/d alpha) of the solution curve at a converged point, from J dx = -dR/d alpha; absent
+     * where J is singular (at a fold).
+     */
+    Optional<double[]> tangent(CoupledPoint p) {
+        int m = size();
+        DMatrixRMaj jac = new DMatrixRMaj(m, m);
+        jacobian(p.alpha(), Math.cos(p.alpha()), p.sectionAngles(), jac);
+        LUDecompositionAlt_DDRM lu = new LUDecompositionAlt_DDRM();
+        if (!lu.decompose(jac)) {
+            return Optional.empty();
+        }
+        double[] ra = alphaDerivative(p.alpha(), p.corrections(), p.sectionAngles());
+        DMatrixRMaj v = new DMatrixRMaj(m, 1);
+        for (int i = 0; i < m; i++) {
+            v.data[i] = -ra[i];
+        }
+        return solveInPlace(lu, v) ? Optional.of(v.data) : Optional.empty();
     }
 
     private static boolean solveInPlace(LUDecompositionAlt_DDRM lu, DMatrixRMaj rhs) {
@@ -249,7 +398,7 @@ public final class SectionCoupling {
             if (angle[i] > f.lastAngle()) {
                 return Double.NaN;
             }
-            r[i] = v - f.lift(angle[i]);
+            r[i] = v - f.lift(angle[i]) + smoothed(i, x);
             norm = Math.max(norm, Math.abs(r[i]));
         }
         return norm;
@@ -264,6 +413,10 @@ public final class SectionCoupling {
                 jac.data[i * m + j] = scale * k[i][j];
             }
             jac.data[i * m + i] += fp;
+            for (int n = 0; n < neighbours[i].length; n++) {
+                jac.data[i * m + i] += smoothing[i][n];
+                jac.data[i * m + neighbours[i][n]] -= smoothing[i][n];
+            }
         }
     }
 

@@ -25,7 +25,10 @@ public interface SectionCurve {
         return lift(peakAngle());
     }
 
-    /** A tabulated curve, linear between its points, extended along its first segment below them. */
+    /**
+     * A tabulated curve, the monotone cubic through its points ({@link TableCurve}), extended along a straight
+     * line below them.
+     */
     static SectionCurve table(Table t) {
         return new TableCurve(t);
     }
@@ -82,48 +85,105 @@ public interface SectionCurve {
         }
     }
 
-    /** See {@link SectionCurve#table}. */
+    /**
+     * See {@link SectionCurve#table}: the monotone piecewise cubic of Fritsch and Carlson ("Monotone
+     * piecewise cubic interpolation", SIAM J. Numer. Anal. 17(2), 1980), with the slopes at the points chosen
+     * by the harmonic-mean rule of Fritsch and Butland (SIAM J. Sci. Stat. Comput. 5(2), 1984). It passes
+     * through every point, rises and falls where the table does (a point where the table turns keeps slope
+     * zero, so the table's highest cl stays the peak, at its angle) and has a continuous slope, which
+     * Newton's method needs. Below the first point it continues along the first segment's straight line.
+     */
     final class TableCurve implements SectionCurve {
-        private final Table t;
+        private final double[] x;
+        private final double[] y;
+        private final double[] d;
         private final double peak;
 
         TableCurve(Table t) {
-            if (t.size() < 2) {
+            int n = t.size();
+            if (n < 2) {
                 throw new IllegalArgumentException("a lift curve needs at least two points");
             }
-            this.t = t;
+            x = new double[n];
+            y = new double[n];
+            for (int i = 0; i < n; i++) {
+                x[i] = t.x(i);
+                y[i] = t.y(i);
+            }
+            double[] delta = new double[n - 1];
+            for (int i = 0; i < n - 1; i++) {
+                delta[i] = (y[i + 1] - y[i]) / (x[i + 1] - x[i]);
+            }
+            d = new double[n];
+            d[0] = delta[0];
+            d[n - 1] = delta[n - 2];
+            for (int i = 1; i < n - 1; i++) {
+                if (delta[i - 1] * delta[i] <= 0) {
+                    d[i] = 0;
+                } else {
+                    double h0 = x[i] - x[i - 1];
+                    double h1 = x[i + 1] - x[i];
+                    double w0 = 2 * h1 + h0;
+                    double w1 = h1 + 2 * h0;
+                    d[i] = (w0 + w1) / (w0 / delta[i - 1] + w1 / delta[i]);
+                }
+            }
             int best = 0;
-            for (int i = 1; i < t.size(); i++) {
-                if (t.y(i) > t.y(best)) {
+            for (int i = 1; i < n; i++) {
+                if (y[i] > y[best]) {
                     best = i;
-                } else if (t.y(i) < t.y(best)) {
+                } else if (y[i] < y[best]) {
                     break;
                 }
             }
-            this.peak = t.x(best);
+            this.peak = x[best];
+        }
+
+        private int segment(double alpha) {
+            int i = java.util.Arrays.binarySearch(x, alpha);
+            int k = i >= 0 ? i : -i - 2;
+            return Math.max(0, Math.min(x.length - 2, k));
         }
 
         @Override
         public double lift(double alpha) {
-            if (alpha < t.x(0)) {
-                return t.y(0) + slope(alpha) * (alpha - t.x(0));
+            if (alpha <= x[0]) {
+                return y[0] + d[0] * (alpha - x[0]);
             }
-            return t.at(alpha);
+            if (alpha >= x[x.length - 1]) {
+                return y[y.length - 1];
+            }
+            int k = segment(alpha);
+            double h = x[k + 1] - x[k];
+            double s = (alpha - x[k]) / h;
+            double h00 = (1 + 2 * s) * (1 - s) * (1 - s);
+            double h10 = s * (1 - s) * (1 - s);
+            double h01 = s * s * (3 - 2 * s);
+            double h11 = s * s * (s - 1);
+            return h00 * y[k] + h10 * h * d[k] + h01 * y[k + 1] + h11 * h * d[k + 1];
         }
 
         @Override
         public double slope(double alpha) {
-            int n = t.size();
-            int i = 0;
-            while (i < n - 2 && alpha >= t.x(i + 1)) {
-                i++;
+            if (alpha <= x[0]) {
+                return d[0];
             }
-            return (t.y(i + 1) - t.y(i)) / (t.x(i + 1) - t.x(i));
+            if (alpha >= x[x.length - 1]) {
+                return 0;
+            }
+            int k = segment(alpha);
+            double h = x[k + 1] - x[k];
+            double s = (alpha - x[k]) / h;
+            double dh00 = 6 * s * (s - 1) / h;
+            double dh10 = (1 - s) * (1 - 3 * s);
+            double dh01 = -6 * s * (s - 1) / h;
+            double dh11 = s * (3 * s - 2);
+            return dh00 * y[k] + dh10 * d[k] + dh01 * y[k + 1] + dh11 * d[k + 1];
         }
 
         @Override
         public double lastAngle() {
-            return t.x(t.size() - 1);
+            return x[x.length - 1];
         }
 
         @Override

@@ -155,10 +155,14 @@ public final class Vocabulary {
                     MaximumLift::lift),
             key("alpha_deg", DEGREE, "alpha at maximum CL", "its angle of attack", 2, CL_MAX,
                     m -> Math.toDegrees(m.alpha())),
-            key("is_peak", FLAG, "a maximum inside the branch",
-                    "true when the lift falls beyond the maximum on its branch; false when the branch ends at a "
-                            + "fold (a strip's abrupt stall) at or just after it, so the value is the highest found",
-                    0, CL_MAX, MaximumLift::peak),
+            key("rounds_over", FLAG, "lift rounds over at the maximum",
+                    "true when the lift rounds over at the maximum (a gentle stall); false when the maximum lies at "
+                            + "a fold, where a station stalls abruptly and the lift breaks off, or where the traced "
+                            + "curve ended (trace_end)", 0, CL_MAX, MaximumLift::peak),
+            key("trace_end", TEXT, "traced curve ended",
+                    "why the traced lift curve ended: past-maximum, curve-ends (a tabulated section curve ended), "
+                            + "deep-stall (a station 10 degrees past its peak), range, stalled-step", 0, CL_MAX,
+                    m -> m.end().name().toLowerCase(java.util.Locale.ROOT).replace('_', '-')),
             key("stalled_span_fraction", NONE, "span past its section peak",
                     "share of the span (outboard of the fuselage side) past its section cl peak at the maximum", 3,
                     CL_MAX, MaximumLift::stalledSpanFraction),
@@ -177,7 +181,8 @@ public final class Vocabulary {
                     "true when some section's lift curve was built from its lift slope, zero-lift angle and cl_max",
                     0, CL_MAX, MaximumLift::synthetic),
             key("multiple_solutions.from_deg", DEGREE, "second solutions from alpha",
-                    "lowest angle of attack where a second coupled solution was found", 2, CL_MAX,
+                    "lowest angle of attack with two or more coupled solutions (the lift there depends on how the "
+                            + "angle was reached)", 2, CL_MAX,
                     m -> m.multipleSolutions().map(r -> (Object) Math.toDegrees(r[0])).orElse(null)),
             key("multiple_solutions.to_deg", DEGREE, "  to alpha", "highest such angle", 2, CL_MAX,
                     m -> m.multipleSolutions().map(r -> (Object) Math.toDegrees(r[1])).orElse(null)),
