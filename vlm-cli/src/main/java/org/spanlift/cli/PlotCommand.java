@@ -29,6 +29,7 @@ import org.spanlift.io.WingFileReader;
 import org.spanlift.solve.WingAnalysis;
 import org.spanlift.stall.MissingSectionDataException;
 import org.spanlift.stall.StallStudy;
+import org.spanlift.stall.MaximumLift;
 import org.spanlift.stall.StallEstimate;
 
 import picocli.CommandLine.Command;
@@ -98,8 +99,7 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
                     .map(e -> OptionalDouble.of(e.y())).orElse(OptionalDouble.empty()), context);
             case SPAN_LOAD -> Plots.spanLoad(analysis, analysis.solve(spanLoadAlpha(analysis, deflections),
                     deflections), estimate(analysis, deflections, condition), context);
-            case LIFT -> Plots.liftCurve(analysis, deflections, range(), estimate(analysis, deflections, condition),
-                    context);
+            case LIFT -> liftCurve(analysis, deflections, condition, context);
             case POLAR -> Plots.polar(analysis, deflections, range(), flight.reynoldsRule(wing), context);
             case STALL -> Plots.stallMap(analysis, stall(analysis, deflections, condition), context);
         };
@@ -120,6 +120,29 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
         } catch (MissingSectionDataException e) {
             return Optional.empty();
         }
+    }
+
+    /**
+     * The lift curve; where the sections allow a stall estimate, with the onset and the lift through the
+     * stall (the angles then run to the end of the traced curve unless --alpha is given).
+     */
+    private Figure liftCurve(WingAnalysis analysis, double[] deflections, Optional<FlightCondition> condition,
+            FigureContext context) {
+        Optional<StallStudy.Configuration> c;
+        try {
+            c = Optional.of(StallStudy.configuration("plot", analysis, deflections, clMax.assumed(), condition));
+        } catch (MissingSectionDataException e) {
+            c = Optional.empty();
+        }
+        Optional<MaximumLift> maximum = c.map(StallStudy.Configuration::maximumLift);
+        List<Double> angles = range();
+        if (alpha == null && maximum.isPresent()) {
+            List<MaximumLift.CurvePoint> curve = maximum.get().curve();
+            double end = Math.ceil(Math.toDegrees(curve.get(curve.size() - 1).alpha()));
+            angles = AlphaList.parse("-4:" + (long) Math.max(14, end) + ":1");
+        }
+        return Plots.liftCurve(analysis, deflections, angles, c.map(StallStudy.Configuration::estimate), maximum,
+                context);
     }
 
     private StallEstimate stall(WingAnalysis analysis, double[] deflections, Optional<FlightCondition> condition) {

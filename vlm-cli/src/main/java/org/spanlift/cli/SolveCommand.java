@@ -19,6 +19,7 @@ import org.spanlift.solve.LiftCurve;
 import org.spanlift.atmosphere.Airspeed;
 import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.cli.options.AlphaList;
+import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
 import org.spanlift.cli.options.InputFiles;
@@ -50,6 +51,10 @@ import org.spanlift.results.ProfileDrag;
 import org.spanlift.results.Solution;
 import org.spanlift.results.SpanLoad;
 import org.spanlift.solve.WingAnalysis;
+import org.spanlift.stall.CoupledLift;
+import org.spanlift.stall.MaximumLift;
+import org.spanlift.stall.MissingSectionDataException;
+import org.spanlift.stall.StripLimits;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -78,6 +83,15 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
                     + "Without --alpha, only these.")
     List<String> targetLift = List.of();
 
+    @Option(names = "--through-stall",
+            description = "Couple the lattice with the sections' lift curves (or curves built from their cl-max) "
+                    + "and give the lift through the stall, the linear CL beside it; without --alpha, from -4 "
+                    + "degrees to 4 degrees past the maximum lift.")
+    boolean throughStall;
+
+    @Mixin
+    ClMaxOptions clMax;
+
     @Option(names = "--span-load", paramLabel = "FILE.csv",
             description = "Also write the per-strip span load of every point to this CSV file (SI units).")
     Path spanLoadFile;
@@ -102,6 +116,50 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
 
     @Spec
     CommandSpec spec;
+
+    /**
+     * The lift through the stall at the asked angles, or from -4 degrees to 4 degrees past the maximum in
+     * whole degrees: the coupled solutions found on the path of a slowly rising angle, each with the share
+     * of the span past its section peak, and the angles with none.
+     */
+    record ThroughStall(CoupledLift lift, MaximumLift maximum, List<Solution> solutions, List<Double> stalled,
+            List<Double> missingDeg) {
+
+        static ThroughStall of(Path file, WingAnalysis analysis, double[] deflections, OptionalDouble assumed,
+                List<Double> alphasDeg, OptionalDouble eas, AtmosphereState atmosphere) {
+            StripLimits limits;
+            try {
+                limits = StripLimits.of(analysis.wing(), analysis.lattice(), deflections, assumed);
+            } catch (MissingSectionDataException e) {
+                throw new InputException(file.toString(), 0, "sections", e.getMessage());
+            }
+            double rePerMetre = eas.isPresent() ? Airspeed.trueFromEquivalent(eas.getAsDouble(), atmosphere)
+                    / atmosphere.kinematicViscosity() : 0;
+            CoupledLift lift = CoupledLift.of(analysis, deflections, limits, rePerMetre);
+            MaximumLift maximum = lift.maximum();
+            List<Double> asked = alphasDeg;
+            if (asked.isEmpty()) {
+                asked = new ArrayList<>();
+                double top = Math.ceil(Math.toDegrees(maximum.alpha())) + 4;
+                for (double a = -4; a <= top; a++) {
+                    asked.add(a);
+                }
+            }
+            List<Solution> solutions = new ArrayList<>();
+            List<Double> stalled = new ArrayList<>();
+            List<Double> missing = new ArrayList<>();
+            for (double a : asked) {
+                Optional<CoupledLift.Point> p = lift.at(Math.toRadians(a));
+                if (p.isPresent()) {
+                    solutions.add(p.get().solution());
+                    stalled.add(p.get().stalledSpanFraction());
+                } else {
+                    missing.add(a);
+                }
+            }
+            return new ThroughStall(lift, maximum, solutions, stalled, missing);
+        }
+    }
 
     /** The level-flight (or load-factor n) point of a weight and speed. */
     record Level(FlightCondition condition, Solution solution) {
@@ -136,6 +194,12 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
                     "--load-factor");
         }
         boolean alphaGiven = spec.commandLine().getParseResult().hasMatchedOption("--alpha");
+        if (!throughStall) {
+            FlightOptions.refuse(spec, "an assumed cl_max serves --through-stall only", "--assume-cl-max");
+        } else if (!targetLift.isEmpty()) {
+            throw new InputException("--cl", 0, "", "past the stall a CL is reached at two angles of attack; with "
+                    + "--through-stall give angles with --alpha");
+        }
         List<Double> alphas = targetLift.isEmpty() || alphaGiven ? AlphaList.parse(alpha) : List.of();
         Wing wing = WingFileReader.read(file);
         Map<String, Double> overrides = flight.deflections(wing);
@@ -146,7 +210,13 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         double[] deflections = analysis.deflections(overrides);
         LiftCurve line = analysis.liftCurve(deflections);
         List<Solution> points = new ArrayList<>();
-        for (double a : alphas) {
+        Optional<ThroughStall> stall = Optional.empty();
+        if (throughStall) {
+            stall = Optional.of(ThroughStall.of(file, analysis, deflections, clMax.assumed(), alphaGiven ? alphas
+                    : List.of(), eas, atmosphere));
+            points.addAll(stall.get().solutions());
+        }
+        for (double a : throughStall ? List.<Double>of() : alphas) {
             points.add(analysis.solve(Math.toRadians(a), deflections));
         }
         for (String text : targetLift) {
@@ -161,9 +231,9 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         }
         Dimensions dims = new Dimensions(wing, atmosphere, eas, flight.reynoldsRule(wing));
         String text = switch (format) {
-            case JSON -> Json.write(json(wing, analysis, line, points, level, dims));
-            case CSV -> csv(points, dims);
-            default -> table(wing, analysis, line, points, level, dims, units.units(wing.displayUnit()));
+            case JSON -> Json.write(json(wing, analysis, line, points, level, dims, stall));
+            case CSV -> csv(points, dims, line, stall);
+            default -> table(wing, analysis, line, points, level, dims, units.units(wing.displayUnit()), stall);
         };
         String loads = spanLoadFile == null ? null : spanLoadCsv(wing, points, dims);
         output.write(text, spec.commandLine().getOut());
@@ -182,7 +252,7 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
     }
 
     private static Map<String, Object> json(Wing wing, WingAnalysis analysis, LiftCurve line,
-            List<Solution> points, Optional<Level> level, Dimensions dims) {
+            List<Solution> points, Optional<Level> level, Dimensions dims, Optional<ThroughStall> stall) {
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("name", wing.name());
         Map<String, Object> units = new LinkedHashMap<>();
@@ -216,10 +286,23 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
             root.put("flight", f);
         });
         List<Object> list = new ArrayList<>();
-        for (Solution s : points) {
-            list.add(pointJson(wing, s, dims));
+        for (int i = 0; i < points.size(); i++) {
+            Map<String, Object> p = pointJson(wing, points.get(i), dims);
+            if (stall.isPresent()) {
+                p.put("CL_linear", line.lift(points.get(i).alpha()));
+                p.put("stalled_span_fraction", stall.get().stalled().get(i));
+            }
+            list.add(p);
         }
         root.put("points", list);
+        stall.ifPresent(st -> {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("method", "lattice coupled with the section lift curves; points on the path of a slowly rising "
+                    + "angle of attack");
+            Results.put(m, Vocabulary.MAX_LIFT.stream().filter(k -> !k.needs(Need.WEIGHT)).toList(), st.maximum());
+            m.put("alpha_without_solution_deg", st.missingDeg());
+            root.put("through_stall", m);
+        });
         return root;
     }
 
@@ -274,14 +357,23 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         return m;
     }
 
-    private static String csv(List<Solution> points, Dimensions dims) {
+    private static String csv(List<Solution> points, Dimensions dims, LiftCurve line, Optional<ThroughStall> stall) {
         boolean drag = ProfileDrag.available(dims.wing());
         List<ResultKey<FlightPoint>> keys = Vocabulary.POINT.stream().filter(k -> drag || !k.needs(Need.POLARS))
                 .toList();
-        Csv csv = new Csv(Vocabulary.names(keys));
-        for (Solution s : points) {
-            FlightPoint point = dims.point(s);
-            csv.row(keys.stream().map(k -> k.of(point)).toArray());
+        List<String> header = new ArrayList<>(Vocabulary.names(keys));
+        if (stall.isPresent()) {
+            header.addAll(List.of("CL_linear", "stalled_span_fraction"));
+        }
+        Csv csv = new Csv(header);
+        for (int i = 0; i < points.size(); i++) {
+            FlightPoint point = dims.point(points.get(i));
+            List<Object> row = new ArrayList<>(keys.stream().map(k -> k.of(point)).toList());
+            if (stall.isPresent()) {
+                row.add(line.lift(points.get(i).alpha()));
+                row.add(stall.get().stalled().get(i));
+            }
+            csv.row(row.toArray());
         }
         return csv.toString();
     }
@@ -309,7 +401,7 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
     }
 
     private static String table(Wing wing, WingAnalysis analysis, LiftCurve line, List<Solution> points,
-            Optional<Level> level, Dimensions dims, DisplayUnits unit) {
+            Optional<Level> level, Dimensions dims, DisplayUnits unit, Optional<ThroughStall> stall) {
         String u = unit.length().symbol();
         double k = unit.length().metres();
         Reference r = wing.reference();
@@ -352,8 +444,12 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         if (several) {
             wing.surfaces().forEach(s -> headers.add("CL " + s.name()));
         }
+        if (stall.isPresent()) {
+            headers.addAll(List.of("CL linear", "past peak"));
+        }
         TextTable t = new TextTable(headers);
-        for (Solution s : points) {
+        for (int i = 0; i < points.size(); i++) {
+            Solution s = points.get(i);
             FlightPoint point = dims.point(s);
             List<String> row = new ArrayList<>(keys.stream().map(key -> Results.cell(key, point, unit)).toList());
             if (several) {
@@ -361,9 +457,28 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
                     row.add(TextTable.fixed(s.coefficients(k2).lift(), 4));
                 }
             }
+            if (stall.isPresent()) {
+                row.add(TextTable.fixed(line.lift(s.alpha()), 4));
+                row.add(TextTable.fixed(stall.get().stalled().get(i), 2));
+            }
             t.row(row);
         }
+        if (stall.isPresent()) {
+            MaximumLift m = stall.get().maximum();
+            b.append(TextTable.wrap(String.format(Locale.ROOT, "Through the stall: the lattice coupled with the "
+                    + "section lift curves (%s). Maximum CL %.4f at alpha %.2f deg, %s; %.0f%% of the span past "
+                    + "its section peak there. \"past peak\" is the share of the span past its section peak; "
+                    + "\"CL linear\" is linear theory's CL.", m.synthetic() ? "some built from cl-max, synthetic"
+                            : "measured", m.lift(), Math.toDegrees(m.alpha()), m.peak() ? "where the lift rounds over"
+                            : "where the lift breaks off or the traced curve ends (" + m.end().name().toLowerCase(Locale.ROOT)
+                                    .replace('_', '-') + ")", 100 * m.stalledSpanFraction()))).append("\n\n");
+        }
         b.append(t.render());
+        stall.filter(st -> !st.missingDeg().isEmpty()).ifPresent(st -> b.append(TextTable.wrap(String.format(
+                Locale.ROOT, "No solution on the path of a rising angle of attack at %s deg: beyond the traced "
+                        + "curve, or where the lift depends on how the angle was reached.", st.missingDeg().stream()
+                                .map(a -> TextTable.fixed(a, 1)).collect(java.util.stream.Collectors.joining(", ")))))
+                .append('\n'));
         b.append("\n  e is shown only where |CL| >= 0.05. CDi from the Trefftz plane. Cm positive nose-up; C_roll\n"
                 + "  positive right wing down, on the reference span. Use --format json for span loads.\n");
         if (drag) {

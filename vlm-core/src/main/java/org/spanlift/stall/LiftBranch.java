@@ -46,7 +46,7 @@ public final class LiftBranch {
      * angle); the project's choice, well past where a wing's maximum lift lies.
      */
     static final double DEEP_STALL_DEG = 10;
-    /** The largest change of a strip's correction per change of angle when the maximum is refined. */
+    /** The largest change of a strip's correction per change of angle along a branch, off the trace. */
     static final double JUMP = 20;
 
     private final SectionCoupling coupling;
@@ -294,19 +294,27 @@ public final class LiftBranch {
             }
         }
         CoupledPoint q = coupling.solve(alpha, start.corrections());
-        if (!q.converged() || q.stableJacobian() != start.stableJacobian()) {
+        if (!q.converged() || q.stableJacobian() != start.stableJacobian() || jumped(start, q)) {
             return Double.NEGATIVE_INFINITY;
-        }
-        double allowed = JUMP * Math.abs(alpha - start.alpha()) + 1e-12;
-        double[] a = q.corrections();
-        double[] b = start.corrections();
-        for (int i = 0; i < a.length; i++) {
-            if (Math.abs(a[i] - b[i]) > allowed) {
-                return Double.NEGATIVE_INFINITY;
-            }
         }
         known.add(q);
         return q.lift();
+    }
+
+    /**
+     * True when some strip's correction moved by more than {@value #JUMP} times the change of angle between
+     * the two points: the solve left the branch of the first.
+     */
+    static boolean jumped(CoupledPoint from, CoupledPoint to) {
+        double allowed = JUMP * Math.abs(to.alpha() - from.alpha()) + 1e-12;
+        double[] a = to.corrections();
+        double[] b = from.corrections();
+        for (int i = 0; i < a.length; i++) {
+            if (Math.abs(a[i] - b[i]) > allowed) {
+                return true;
+            }
+        }
+        return false;
     }
 
     public SectionCoupling coupling() {

@@ -88,11 +88,7 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
      */
     public static MaximumLift of(WingAnalysis analysis, double[] deflections, StripLimits limits,
             double reynoldsPerMetre) {
-        StripCurves curves = StripCurves.of(analysis.wing(), analysis.lattice(), deflections, limits,
-                reynoldsPerMetre);
-        SectionCoupling coupling = SectionCoupling.of(analysis, deflections, curves);
-        LiftBranch branch = LiftBranch.trace(coupling, analysis.liftCurve(deflections).zeroLiftAngle());
-        return from(analysis, branch, Optional.empty());
+        return CoupledLift.of(analysis, deflections, limits, reynoldsPerMetre).maximum();
     }
 
     /**
@@ -124,7 +120,7 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
                 handbookFlap, multipleSolutions, strips, curve, Optional.of(s));
     }
 
-    private static MaximumLift from(WingAnalysis analysis, LiftBranch branch, Optional<Speed> speed) {
+    static MaximumLift from(WingAnalysis analysis, LiftBranch branch) {
         SectionCoupling c = branch.coupling();
         CoupledPoint top = branch.maximum();
         Wing wing = analysis.wing();
@@ -145,7 +141,7 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
         }
         return new MaximumLift(top.lift(), top.alpha(), branch.maximumIsPeak(), branch.end(),
                 stalledFraction(c, top), firstStall(c, branch, semi), aileron(wing, c, top), c.curves().synthetic(),
-                c.curves().handbookFlap(), branch.multipleSolutions(), states, curve, speed);
+                c.curves().handbookFlap(), branch.multipleSolutions(), states, curve, Optional.empty());
     }
 
     /** The share of the span (by strip width) past its section peak. */

@@ -19,6 +19,7 @@ import org.knowm.xchart.style.XYStyler;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 import org.spanlift.flight.ReynoldsRule;
 import org.spanlift.solve.LiftCurve;
+import org.spanlift.stall.MaximumLift;
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.LengthUnit;
@@ -152,7 +153,7 @@ public final class Plots {
      * @param context the configuration
      */
     public static ChartFigure liftCurve(WingAnalysis analysis, double[] deflections, List<Double> alphasDeg,
-            Optional<StallEstimate> onset, FigureContext context) {
+            Optional<StallEstimate> onset, Optional<MaximumLift> maximum, FigureContext context) {
         LiftCurve line = analysis.liftCurve(deflections);
         double[] a = toArray(alphasDeg);
         double[] cl = new double[a.length];
@@ -161,9 +162,33 @@ public final class Plots {
         }
         String title = String.format(Locale.ROOT, "Lift curve: slope %.3f per rad (%.4f per deg), zero lift at %.2f\u00b0",
                 line.slope(), line.slope() * Math.PI / 180, Math.toDegrees(line.zeroLiftAngle()));
-        XYChart c = chart(title, "angle of attack \u03b1 [deg]", "CL  (inviscid linear theory: no stall)");
-        XYSeries s = c.addSeries("CL, " + analysis.wing().name(), a, cl);
+        XYChart c = chart(title, "angle of attack \u03b1 [deg]", maximum.isPresent() ? "CL"
+                : "CL  (inviscid linear theory: no stall)");
+        XYSeries s = c.addSeries((maximum.isPresent() ? "CL, linear theory, " : "CL, ") + analysis.wing().name(), a, cl);
         style(s, Palette.BLUE, Palette.line(0, 2.2f), SeriesMarkers.CIRCLE);
+        String maxText = "";
+        if (maximum.isPresent()) {
+            MaximumLift m = maximum.get();
+            double[] ca = m.curve().stream().mapToDouble(p -> Math.toDegrees(p.alpha())).toArray();
+            double[] ccl = m.curve().stream().mapToDouble(MaximumLift.CurvePoint::lift).toArray();
+            XYSeries coupled = c.addSeries("CL through the stall (section lift curves"
+                    + (m.synthetic() ? ", synthetic" : "") + ")", ca, ccl);
+            style(coupled, Palette.VERMILLION, Palette.line(1, 2.2f), SeriesMarkers.NONE);
+            XYSeries top = c.addSeries(String.format(Locale.ROOT, "maximum lift: CL = %.3f at \u03b1 = %.2f\u00b0",
+                    m.lift(), Math.toDegrees(m.alpha())), new double[] {Math.toDegrees(m.alpha())},
+                    new double[] {m.lift()});
+            top.setXYSeriesRenderStyle(XYSeriesRenderStyle.Scatter);
+            top.setMarker(SeriesMarkers.SQUARE);
+            top.setMarkerColor(Palette.VERMILLION);
+            c.addAnnotation(new MarkLabel(String.format(Locale.ROOT, "maximum lift, CL %.3f", m.lift()),
+                    Math.toDegrees(m.alpha()), m.lift(), Palette.font(Font.PLAIN, 12f), Palette.VERMILLION));
+            maxText = String.format(Locale.ROOT, " The vermillion curve is the lift through the stall from the "
+                    + "sections' lift curves%s (the lattice coupled with them, on the path of a slowly rising angle "
+                    + "of attack), from %.1f to %.1f degrees; its square marks the maximum lift, CL %.3f at %.2f "
+                    + "degrees, with %.0f%% of the span past its section peak.", m.synthetic()
+                            ? " (some built from cl_max: synthetic)" : "", ca[0], ca[ca.length - 1], m.lift(),
+                    Math.toDegrees(m.alpha()), 100 * m.stalledSpanFraction());
+        }
         XYSeries z = c.addSeries(String.format(Locale.ROOT, "zero-lift angle %.2f\u00b0",
                 Math.toDegrees(line.zeroLiftAngle())), new double[] {Math.toDegrees(line.zeroLiftAngle())},
                 new double[] {0});
@@ -185,13 +210,13 @@ public final class Plots {
                     e.lift(), Palette.font(Font.PLAIN, 12f), Palette.INK));
             onsetText = String.format(Locale.ROOT, " The black diamond marks the stall onset of this configuration by "
                     + "the critical-section method: at CL %.3f (%.2f degrees) the first station, at y = %s %s, reaches "
-                    + "its section cl_max%s. Beyond it the straight line is linear theory only.", e.lift(), alphaDeg,
+                    + "its section cl_max%s. Beyond it the blue line is linear theory only.", e.lift(), alphaDeg,
                     length(e.y(), analysis.wing().displayUnit()), analysis.wing().displayUnit().symbol(),
                     e.assumedClMax() ? " (some sections give no cl-max: an assumed value is used)" : "");
         }
         String desc = context.sentence() + String.format(Locale.ROOT, " Lift coefficient against angle of attack from "
                 + "%.1f to %.1f degrees by linear vortex-lattice theory, which does not stall; the lift slope at zero "
-                + "lift is %.3f per radian.", a[0], a[a.length - 1], line.slope()) + onsetText;
+                + "lift is %.3f per radian.", a[0], a[a.length - 1], line.slope()) + onsetText + maxText;
         return new ChartFigure(PlotKind.LIFT.figureId(), desc, c, context.text());
     }
 

@@ -152,7 +152,8 @@ public final class ReportPage {
             case PLANFORM -> Plots.planform(s.analysis(), estimate
                     .map(e -> OptionalDouble.of(e.y())).orElse(OptionalDouble.empty()), context);
             case SPAN_LOAD -> Plots.spanLoad(s.analysis(), s.spanLoadAtCl(), estimate, context);
-            case LIFT -> Plots.liftCurve(s.analysis(), s.deflections(), rangeDeg, estimate, context);
+            case LIFT -> Plots.liftCurve(s.analysis(), s.deflections(), rangeDeg, estimate,
+                    stall.map(StallStudy.Configuration::maximumLift), context);
             case POLAR -> Plots.polar(s.analysis(), s.deflections(), rangeDeg, reynolds, context);
         };
     }

@@ -22,6 +22,7 @@ import org.spanlift.geometry.Wing;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.results.Solution;
 import org.spanlift.solve.WingAnalysis;
+import org.spanlift.stall.MaximumLift;
 import org.spanlift.stall.StallEstimate;
 import org.spanlift.stall.StallStudy;
 
@@ -62,7 +63,7 @@ class PlotsTest {
         PlanformFigure planform = Plots.planform(TRAINER, OptionalDouble.of(e.y()), context);
         assertCarries(context, planform, planform.subtitle());
         for (ChartFigure f : List.of(Plots.spanLoad(TRAINER, s, Optional.of(e), context),
-                Plots.liftCurve(TRAINER, d, ANGLES, Optional.of(e), context),
+                Plots.liftCurve(TRAINER, d, ANGLES, Optional.of(e), Optional.empty(), context),
                 Plots.polar(TRAINER, d, ANGLES, org.spanlift.flight.ReynoldsRule.of(TRAINER.wing().reference(),
                         StandardAtmosphere.at(1000, 0), OptionalDouble.empty(), CONDITION), context),
                 Plots.stallMap(TRAINER, e, context))) {
@@ -99,12 +100,33 @@ class PlotsTest {
     }
 
     @Test
+    void theLiftCurveDrawsTheLiftThroughTheStallAndMarksItsMaximum() {
+        double[] d = flaps(TRAINER, 20);
+        StallStudy.Configuration c = StallStudy.configuration("plot", TRAINER, d, OptionalDouble.empty(),
+                Optional.empty());
+        MaximumLift m = c.maximumLift();
+        ChartFigure lift = Plots.liftCurve(TRAINER, d, ANGLES, Optional.of(c.estimate()), Optional.of(m),
+                FigureContext.of(TRAINER.wing(), d, Optional.empty()));
+        XYSeries through = lift.chart().getSeriesMap().values().stream()
+                .filter(s -> s.getName().startsWith("CL through the stall")).findFirst().orElseThrow();
+        assertEquals(m.curve().size(), through.getYData().length);
+        XYSeries top = lift.chart().getSeriesMap().values().stream()
+                .filter(s -> s.getName().startsWith("maximum lift")).findFirst().orElseThrow();
+        assertEquals(m.lift(), top.getYData()[0], 0);
+        for (double y : through.getYData()) {
+            assertTrue(y <= m.lift() + 1e-12, "no point of the curve above the maximum");
+        }
+        assertTrue(lift.description().contains(String.format(java.util.Locale.ROOT, "CL %.3f", m.lift())),
+                lift.description());
+    }
+
+    @Test
     void theLiftCurveMarksTheStallOnsetOfTheConfigurationDrawnOnTheCurve() {
         for (double deg : new double[] {0, 20}) {
             double[] d = flaps(TRAINER, deg);
             StallEstimate e = estimate(TRAINER, d);
-            ChartFigure lift = Plots.liftCurve(TRAINER, d, ANGLES, Optional.of(e), FigureContext.of(TRAINER.wing(), d,
-                    CONDITION));
+            ChartFigure lift = Plots.liftCurve(TRAINER, d, ANGLES, Optional.of(e), Optional.empty(),
+                    FigureContext.of(TRAINER.wing(), d, CONDITION));
             List<XYSeries> marks = lift.chart().getSeriesMap().values().stream()
                     .filter(s -> s.getName().startsWith(Plots.STALL_ONSET)).toList();
             assertEquals(1, marks.size(), "flaps " + deg);
@@ -121,8 +143,8 @@ class PlotsTest {
 
         WingAnalysis tourer = WingAnalysis.of(demo("tourer.wing.yaml"));
         double[] d = tourer.fileDeflections();
-        ChartFigure none = Plots.liftCurve(tourer, d, ANGLES, Optional.empty(), FigureContext.of(tourer.wing(), d,
-                Optional.empty()));
+        ChartFigure none = Plots.liftCurve(tourer, d, ANGLES, Optional.empty(), Optional.empty(),
+                FigureContext.of(tourer.wing(), d, Optional.empty()));
         assertTrue(none.chart().getSeriesMap().keySet().stream().noneMatch(k -> k.startsWith(Plots.STALL_ONSET)));
         assertTrue(none.description().contains("No stall onset is marked"), none.description());
     }
