@@ -137,6 +137,10 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         if (m.handbookFlap()) {
             o.put("flap_model", PlainFlap.source());
         }
+        if (m.inviscidFlap()) {
+            o.put("flap_outside_handbook_data", "a deflected control lies outside the handbook data ("
+                    + PlainFlap.range() + "): its strips carry the inviscid flap lift");
+        }
         List<MaximumLift.StripState> right = m.strips().stream().filter(s -> s.y() > 0).toList();
         Map<String, Object> strips = new LinkedHashMap<>();
         strips.put("y", right.stream().mapToDouble(MaximumLift.StripState::y).toArray());

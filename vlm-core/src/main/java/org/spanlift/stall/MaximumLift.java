@@ -31,13 +31,15 @@ import org.spanlift.solve.WingAnalysis;
  * @param aileron              the aileron stations at the maximum, when the wing has ailerons
  * @param synthetic            true when some strip's section curve was synthetic (built from cl_max)
  * @param handbookFlap         true when some deflected strip's curve follows the handbook plain-flap correction
+ * @param inviscidFlap         true when some deflected control lies outside the handbook data, so its strips
+ *                             carry the inviscid flap lift
  * @param multipleSolutions    the range of angles [from, to] where a second solution was found, if any
  * @param strips               every strip with its own correction at the maximum, y ascending
  * @param curve                the coupled lift curve, alpha ascending, up to the end of the branch
  * @param speed                the stall speed at this maximum, with a flight condition
  */
 public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.End end, double stalledSpanFraction,
-        Optional<FirstStall> firstStall, Optional<AileronState> aileron, boolean synthetic, boolean handbookFlap,
+        Optional<FirstStall> firstStall, Optional<AileronState> aileron, boolean synthetic, boolean handbookFlap, boolean inviscidFlap,
         Optional<double[]> multipleSolutions, List<StripState> strips, List<CurvePoint> curve,
         Optional<Speed> speed) {
 
@@ -117,7 +119,7 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
 
     private MaximumLift withSpeed(Speed s) {
         return new MaximumLift(lift, alpha, peak, end, stalledSpanFraction, firstStall, aileron, synthetic,
-                handbookFlap, multipleSolutions, strips, curve, Optional.of(s));
+                handbookFlap, inviscidFlap, multipleSolutions, strips, curve, Optional.of(s));
     }
 
     static MaximumLift from(WingAnalysis analysis, LiftBranch branch) {
@@ -141,7 +143,7 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
         }
         return new MaximumLift(top.lift(), top.alpha(), branch.maximumIsPeak(), branch.end(),
                 stalledFraction(c, top), firstStall(c, branch, semi), aileron(wing, c, top), c.curves().synthetic(),
-                c.curves().handbookFlap(), branch.multipleSolutions(), states, curve, Optional.empty());
+                c.curves().handbookFlap(), c.curves().inviscidFlap(), branch.multipleSolutions(), states, curve, Optional.empty());
     }
 
     /** The share of the span (by strip width) past its section peak. */

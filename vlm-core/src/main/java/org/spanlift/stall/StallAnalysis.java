@@ -22,7 +22,8 @@ import org.spanlift.solve.WingAnalysis;
  * cl(a) = A cos a + B sin a in linear theory (A from the x basis with the deflections, B from the z basis),
  * so the angle at which it reaches cl_max is found in closed form on the rising branch; the wing stalls
  * first where that angle is lowest. The basic and additional loads (cl at zero wing lift, and per unit CL)
- * are reported for the usual decomposition cl = cl_basic + CL cl_additional.
+ * are reported for the usual decomposition cl = cl_basic + CL cl_additional. Flaps and ailerons lift as the
+ * handbook plain-flap correction says ({@link FlapLift}), not with their inviscid lift.
  */
 public final class StallAnalysis {
 
@@ -40,7 +41,8 @@ public final class StallAnalysis {
         this.analysis = analysis;
         this.deflections = deflections.clone();
         this.limits = limits;
-        this.line = analysis.liftCurve(deflections);
+        double[] lifting = FlapLift.deflections(analysis.wing(), deflections);
+        this.line = analysis.liftCurve(lifting);
         Lattice lattice = analysis.lattice();
         BasisSolutions basis = analysis.basis();
         Wing wing = analysis.wing();
@@ -58,7 +60,7 @@ public final class StallAnalysis {
             double gz = 0;
             for (int r = 0; r < st.rows(); r++) {
                 int p = st.firstPanel() + r;
-                gx += basis.alongX(p, deflections);
+                gx += basis.alongX(p, lifting);
                 gz += basis.alongZ(p);
             }
             a[i] = 2 * gx / st.chord();
@@ -137,7 +139,7 @@ public final class StallAnalysis {
         sorted.sort(Comparator.comparingDouble(StallEstimate.StripStall::y));
         return new StallEstimate(line.lift(alpha), alpha, Math.abs(onset.y()), Math.abs(onset.y()) / semi,
                 limits.section(first), margin, half, List.copyOf(sorted), limits.assumed(),
-                limits.defaultFlapIncrement(), controlEndAt(onset, sorted));
+                limits.defaultFlapIncrement(), controlEndAt(onset, sorted), line);
     }
 
     /**

@@ -4,6 +4,8 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
+import org.spanlift.solve.LiftCurve;
+
 /**
  * Stall onset of the wing by the critical-section method in linear theory: the lowest wing CL at which
  * some strip's section cl reaches its cl_max. Angles in radians, lengths in metres.
@@ -24,10 +26,12 @@ import java.util.OptionalDouble;
  *                             any. Linear theory concentrates a deflected control's lift in a peak at
  *                             its ends, narrower than the chord; an onset found there falls as the strips
  *                             are refined and says more about the control's end than about the wing
+ * @param line                 the wing's lift line on which the onset lies: linear theory with the flaps and
+ *                             ailerons at their handbook lift
  */
 public record StallEstimate(double lift, double alpha, double y, double eta, String section,
         Optional<AileronMargin> aileronMargin, OptionalDouble halfSpanLift, List<StripStall> strips,
-        boolean assumedClMax, boolean defaultFlapIncrement, Optional<ControlEnd> besideControlEnd) {
+        boolean assumedClMax, boolean defaultFlapIncrement, Optional<ControlEnd> besideControlEnd, LiftCurve line) {
 
     public StallEstimate {
         strips = List.copyOf(strips);

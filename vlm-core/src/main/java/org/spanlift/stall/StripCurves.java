@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.NavigableMap;
 
+import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Section;
 import org.spanlift.geometry.SectionBlend;
 import org.spanlift.geometry.Surface;
@@ -30,14 +31,16 @@ public final class StripCurves {
     private final double[] latticeZeroLift;
     private final boolean synthetic;
     private final boolean handbookFlap;
+    private final boolean inviscidFlap;
 
     private StripCurves(StripLimits limits, SectionCurve[] curves, double[] latticeZeroLift, boolean synthetic,
-            boolean handbookFlap) {
+            boolean handbookFlap, boolean inviscidFlap) {
         this.limits = limits;
         this.curves = curves;
         this.latticeZeroLift = latticeZeroLift;
         this.synthetic = synthetic;
         this.handbookFlap = handbookFlap;
+        this.inviscidFlap = inviscidFlap;
     }
 
     /**
@@ -45,8 +48,7 @@ public final class StripCurves {
      *
      * @param reynoldsPerMetre rho V / mu at the flight condition (true speed), or 0 when unknown (measured
      *                         curves and cl_max tables are then read at their lowest Reynolds number)
-     * @throws RefusedException when a deflected control lies outside the handbook flap data's range, or
-     *                          beyond a section's measured flapped curves
+     * @throws RefusedException beyond a section's measured flapped curves
      */
     public static StripCurves of(Wing wing, Lattice lattice, double[] deflections, StripLimits limits,
             double reynoldsPerMetre) {
@@ -57,6 +59,7 @@ public final class StripCurves {
         double[] zeta = new double[n];
         boolean synthetic = false;
         boolean handbookFlap = false;
+        boolean inviscidFlap = false;
         for (int i = 0; i < n; i++) {
             Strip st = lattice.strips().get(ids.get(i));
             SectionBlend blend = main.planform().section(main.mirrored() ? Math.abs(st.y()) : st.y());
@@ -87,29 +90,35 @@ public final class StripCurves {
             } else if (delta > 0 && !near.flapLiftCurves().isEmpty()) {
                 curves[i] = measuredFlapped(near, clean, Math.toDegrees(delta), re);
             } else {
-                handbookFlap = true;
-                curves[i] = handbookFlapped(clean, limits, i, chordFraction, delta, near);
+                ControlSurface cs = wing.controls().get(control);
+                boolean covered = FlapLift.covered(wing, cs, Math.abs(delta));
+                handbookFlap |= covered;
+                inviscidFlap |= !covered;
+                curves[i] = flapped(clean, limits, i, cs, delta, near, covered);
             }
         }
-        return new StripCurves(limits, curves, zeta, synthetic, handbookFlap);
+        return new StripCurves(limits, curves, zeta, synthetic, handbookFlap, inviscidFlap);
     }
 
     /**
-     * The clean curve moved by a plain flap's handbook lift increment dcl_0 ({@link PlainFlap}) and raised by
-     * its cl_max increment dcl_max: {@code clean(alpha + (dcl_0 - dcl_max) / a0) + dcl_max}, so the straight
-     * part gains dcl_0 and the peak dcl_max, at an angle lower by (dcl_0 - dcl_max) / a0. A deflection up
-     * (an aileron's) lowers both by the same rule (an assumption of the project's: the handbook data are
-     * for deflections down).
+     * The clean curve moved by a plain flap's lift increment dcl_0 and raised by its cl_max increment
+     * dcl_max: {@code clean(alpha + (dcl_0 - dcl_max) / a0) + dcl_max}, so the straight part gains dcl_0 and
+     * the peak dcl_max, at an angle lower by (dcl_0 - dcl_max) / a0. Within the handbook data
+     * ({@link FlapLift#covered}) dcl_0 is the handbook increment ({@link PlainFlap}); beyond them the
+     * inviscid thin-airfoil one, 2 pi tau delta (flagged). dcl_max is the section's flap-cl-max table where
+     * given, else the strip limits' increment. A deflection up (an aileron's) lowers both by the same rule
+     * (an assumption of the project's: the handbook data are for deflections down).
      */
-    private static SectionCurve handbookFlapped(SectionCurve clean, StripLimits limits, int i, double chordFraction,
-            double delta, Section near) {
-        PlainFlap flap = PlainFlap.of(chordFraction);
+    private static SectionCurve flapped(SectionCurve clean, StripLimits limits, int i, ControlSurface control,
+            double delta, Section near, boolean covered) {
         double size = Math.abs(delta);
         double sign = Math.signum(delta);
-        double lift = sign * flap.liftIncrement(size);
+        double chord = control.chordFraction();
+        double lift = sign * (covered ? PlainFlap.of(chord).liftIncrement(size)
+                : 2 * Math.PI * PlainFlap.glauertTau(chord) * size);
         double peak = near.flapClMaxIncrement().isPresent() && delta > 0
                 ? near.flapClMaxIncrement().get().at(Math.toDegrees(size))
-                : sign * flap.clMaxIncrement(size);
+                : sign * StripLimits.defaultIncrement(chord, size);
         return SectionCurve.shifted(clean, (lift - peak) / limits.liftSlope(i), peak);
     }
 
@@ -155,7 +164,7 @@ public final class StripCurves {
         for (int i = 0; i < lines.length; i++) {
             lines[i] = SectionCurve.line(2 * Math.PI, latticeZeroLift[i]);
         }
-        return new StripCurves(limits, lines, latticeZeroLift, false, false);
+        return new StripCurves(limits, lines, latticeZeroLift, false, false, false);
     }
 
     /** The limits whose strips these curves follow. */
@@ -180,6 +189,14 @@ public final class StripCurves {
     /** True when some deflected strip's curve follows the handbook plain-flap correction ({@link PlainFlap}). */
     public boolean handbookFlap() {
         return handbookFlap;
+    }
+
+    /**
+     * True when some deflected strip's control lies outside the handbook data (chord fraction or deflection),
+     * so its curve carries the inviscid flap lift.
+     */
+    public boolean inviscidFlap() {
+        return inviscidFlap;
     }
 
     /** True when some strip's curve was built from lift slope, zero-lift angle and cl_max. */

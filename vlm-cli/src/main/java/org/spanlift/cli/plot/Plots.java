@@ -18,6 +18,7 @@ import org.knowm.xchart.XYSeries.XYSeriesRenderStyle;
 import org.knowm.xchart.style.XYStyler;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 import org.spanlift.flight.ReynoldsRule;
+import org.spanlift.section.PlainFlap;
 import org.spanlift.solve.LiftCurve;
 import org.spanlift.stall.MaximumLift;
 import org.spanlift.geometry.ControlKind;
@@ -154,17 +155,20 @@ public final class Plots {
      */
     public static ChartFigure liftCurve(WingAnalysis analysis, double[] deflections, List<Double> alphasDeg,
             Optional<StallEstimate> onset, Optional<MaximumLift> maximum, FigureContext context) {
-        LiftCurve line = analysis.liftCurve(deflections);
+        LiftCurve inviscid = analysis.liftCurve(deflections);
+        LiftCurve line = onset.map(StallEstimate::line).orElse(inviscid);
+        boolean handbook = !line.equals(inviscid);
         double[] a = toArray(alphasDeg);
         double[] cl = new double[a.length];
         for (int i = 0; i < a.length; i++) {
-            cl[i] = analysis.solve(Math.toRadians(a[i]), deflections).coefficients().lift();
+            cl[i] = line.lift(Math.toRadians(a[i]));
         }
         String title = String.format(Locale.ROOT, "Lift curve: slope %.3f per rad (%.4f per deg), zero lift at %.2f\u00b0",
                 line.slope(), line.slope() * Math.PI / 180, Math.toDegrees(line.zeroLiftAngle()));
         XYChart c = chart(title, "angle of attack \u03b1 [deg]", maximum.isPresent() ? "CL"
                 : "CL  (inviscid linear theory: no stall)");
-        XYSeries s = c.addSeries((maximum.isPresent() ? "CL, linear theory, " : "CL, ") + analysis.wing().name(), a, cl);
+        XYSeries s = c.addSeries((maximum.isPresent() ? "CL, linear theory, " : "CL, ") + analysis.wing().name()
+                + (handbook ? " (flaps at their handbook lift)" : ""), a, cl);
         style(s, Palette.BLUE, Palette.line(0, 2.2f), SeriesMarkers.CIRCLE);
         String maxText = "";
         if (maximum.isPresent()) {
@@ -216,7 +220,9 @@ public final class Plots {
         }
         String desc = context.sentence() + String.format(Locale.ROOT, " Lift coefficient against angle of attack from "
                 + "%.1f to %.1f degrees by linear vortex-lattice theory, which does not stall; the lift slope at zero "
-                + "lift is %.3f per radian.", a[0], a[a.length - 1], line.slope()) + onsetText + maxText;
+                + "lift is %.3f per radian.", a[0], a[a.length - 1], line.slope()) + (handbook ? " The deflected flaps "
+                + "and ailerons lift as the handbook plain-flap correction says (" + PlainFlap.source() + "), not with "
+                + "their inviscid lift." : "") + onsetText + maxText;
         return new ChartFigure(PlotKind.LIFT.figureId(), desc, c, context.text());
     }
 
