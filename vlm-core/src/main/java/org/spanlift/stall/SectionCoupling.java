@@ -35,14 +35,16 @@ import org.spanlift.solve.WingAnalysis;
  * solution is the linear one. K comes from {@link StripBasis}, one back-substitution per strip on the
  * wing's factorization; each Newton step then costs a product with K and a small dense solve.
  *
- * <p>S is a spanwise smoothing of the corrections, a second difference scaled by the local chord squared
- * (h_i the strip's width, s = {@value #SMOOTHING}). Without it the coupled problem is ill-posed past a
+ * <p>S is a spanwise smoothing of the corrections' departure from those of the straight-line problem (every
+ * curve replaced by its straight part, a linear system; the d_j in S stand for that departure), a second
+ * difference scaled by the local chord squared (h_i the strip's width, s = {@value #SMOOTHING}). Without it the coupled problem is ill-posed past a
  * section's peak: a strip's lift answers its own correction less the narrower the strip, so once one strip
  * passes its peak it can run away alone, the curve folds there and the maximum falls as the strips are
  * refined. The smoothing ties each correction to its neighbours over about a chord, so a stalled region is
  * at least that wide whatever the strips; the maximum then converges with the strips
- * (validation/CONVERGENCE.md). It adds nothing where the corrections are uniform along the span, and with
- * each strip's thin-airfoil line as its curve (corrections zero) the linear solution is unchanged. The
+ * (validation/CONVERGENCE.md). While every strip is on the straight part of its curve it adds nothing (the
+ * corrections are then the straight-line ones, steps at a flap's end included), and with each strip's
+ * thin-airfoil line as its curve the linear solution is unchanged. The
  * approach is that of an artificial viscosity added to the nonlinear lifting-line equation to keep its
  * post-stall solutions smooth along the span (J.-J. Chattot, in his work on the nonlinear lifting line with
  * viscous section data, about 2004; recalled from memory); the form and the weight here are the project's.
@@ -248,7 +250,8 @@ public final class SectionCoupling {
         double[] cl = new double[m];
         double[] angle = new double[m];
         double[] r = new double[m];
-        double norm = residual(alpha, x, cl, angle, r);
+        double[] reference = straightCorrections(alpha, null);
+        double norm = residual(alpha, x, cl, angle, r, reference);
         if (Double.isNaN(norm)) {
             return CoupledPoint.failed(alpha, CoupledPoint.Status.CURVE_ENDS, x);
         }
@@ -298,7 +301,8 @@ public final class SectionCoupling {
                     trial[i] = x[i] + lambda * step.data[i];
                 }
                 double ta2 = bordered ? alpha + lambda * step.data[m] : alpha;
-                double tn = residual(ta2, trial, tcl, tangle, tr);
+                double[] tref = bordered ? straightCorrections(ta2, null) : reference;
+                double tn = residual(ta2, trial, tcl, tangle, tr, tref);
                 double tg = bordered ? hyperplane(trial, ta2, start, alphaStart, tx, ta) : 0;
                 double after = Math.max(tn, Math.abs(tg));
                 if (!Double.isNaN(tn) && after < (1 - 1e-4 * lambda) * before) {
@@ -307,6 +311,7 @@ public final class SectionCoupling {
                     System.arraycopy(tangle, 0, angle, 0, m);
                     System.arraycopy(tr, 0, r, 0, m);
                     alpha = ta2;
+                    reference = tref;
                     norm = tn;
                     constraint = tg;
                     break;
@@ -342,7 +347,57 @@ public final class SectionCoupling {
             }
             out[i] = d * (1 - curves.curve(wingIndex[i]).slope(angle[i]) / TWO_PI);
         }
+        double[] rate = new double[m];
+        straightCorrections(alpha, rate);
+        for (int i = 0; i < m; i++) {
+            out[i] -= smoothed(i, rate);
+        }
         return out;
+    }
+
+    /**
+     * The corrections of the straight-line problem at alpha: every strip's curve replaced by its straight
+     * part, f_i = a_i (alpha_i - alpha_L0,i) ({@link StripCurves#lineSlope}, {@link StripCurves#lineZeroLift}),
+     * a linear system, (1 - a_i / (2 pi)) (cl0_i + cos(alpha) sum_j K_ij x_j) + a_i x_i = a_i (alpha_0,i -
+     * alpha_L0,i). The smoothing acts on the corrections' departure from these, so that it does nothing while
+     * every strip is on its straight part (where the corrections may step, at a flap's end, say). When
+     * {@code rate} is given it receives their derivative with alpha.
+     */
+    private double[] straightCorrections(double alpha, double[] rate) {
+        int m = size();
+        double c = Math.cos(alpha);
+        double s = Math.sin(alpha);
+        DMatrixRMaj matrix = new DMatrixRMaj(m, m);
+        double[] rhs = new double[m];
+        for (int i = 0; i < m; i++) {
+            int w = wingIndex[i];
+            double slope = curves.lineSlope(w);
+            double keep = 1 - slope / TWO_PI;
+            for (int j = 0; j < m; j++) {
+                matrix.data[i * m + j] = keep * c * k[i][j];
+            }
+            matrix.data[i * m + i] += slope;
+            rhs[i] = slope * (curves.latticeZeroLift(w) - curves.lineZeroLift(w)) - keep * (a[i] * c + b[i] * s);
+        }
+        LUDecompositionAlt_DDRM lu = new LUDecompositionAlt_DDRM();
+        if (!lu.decompose(matrix)) {
+            throw new IllegalStateException("the straight-line coupling is singular");
+        }
+        lu._solveVectorInternal(rhs);
+        if (rate != null) {
+            double[] d = new double[m];
+            for (int i = 0; i < m; i++) {
+                double keep = 1 - curves.lineSlope(wingIndex[i]) / TWO_PI;
+                double sum = 0;
+                for (int j = 0; j < m; j++) {
+                    sum += k[i][j] * rhs[j];
+                }
+                d[i] = -keep * (-a[i] * s + b[i] * c) + keep * s * sum;
+            }
+            lu._solveVectorInternal(d);
+            System.arraycopy(d, 0, rate, 0, m);
+        }
+        return rhs;
     }
 
     /**
@@ -380,10 +435,14 @@ public final class SectionCoupling {
      * Fills cl, the effective angles and the residuals at corrections x; returns the largest |residual|, or
      * NaN when some strip's effective angle is beyond the end of its curve.
      */
-    private double residual(double alpha, double[] x, double[] cl, double[] angle, double[] r) {
+    private double residual(double alpha, double[] x, double[] cl, double[] angle, double[] r, double[] reference) {
         int m = size();
         double c = Math.cos(alpha);
         double s = Math.sin(alpha);
+        double[] deviation = x.clone();
+        for (int i = 0; i < m; i++) {
+            deviation[i] -= reference[i];
+        }
         double norm = 0;
         for (int i = 0; i < m; i++) {
             double v = a[i] * c + b[i] * s;
@@ -398,7 +457,7 @@ public final class SectionCoupling {
             if (angle[i] > f.lastAngle()) {
                 return Double.NaN;
             }
-            r[i] = v - f.lift(angle[i]) + smoothed(i, x);
+            r[i] = v - f.lift(angle[i]) + smoothed(i, deviation);
             norm = Math.max(norm, Math.abs(r[i]));
         }
         return norm;

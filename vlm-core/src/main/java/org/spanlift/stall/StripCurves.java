@@ -32,6 +32,8 @@ public final class StripCurves {
     private final boolean synthetic;
     private final boolean handbookFlap;
     private final boolean inviscidFlap;
+    private final double[] lineSlope;
+    private final double[] lineZeroLift;
 
     private StripCurves(StripLimits limits, SectionCurve[] curves, double[] latticeZeroLift, boolean synthetic,
             boolean handbookFlap, boolean inviscidFlap) {
@@ -41,6 +43,12 @@ public final class StripCurves {
         this.synthetic = synthetic;
         this.handbookFlap = handbookFlap;
         this.inviscidFlap = inviscidFlap;
+        this.lineSlope = new double[curves.length];
+        this.lineZeroLift = new double[curves.length];
+        for (int i = 0; i < curves.length; i++) {
+            lineZeroLift[i] = zeroCrossing(curves[i], latticeZeroLift[i]);
+            lineSlope[i] = curves[i].slope(lineZeroLift[i]);
+        }
     }
 
     /**
@@ -165,6 +173,34 @@ public final class StripCurves {
             lines[i] = SectionCurve.line(2 * Math.PI, latticeZeroLift[i]);
         }
         return new StripCurves(limits, lines, latticeZeroLift, false, false, false);
+    }
+
+    /** The lift slope of the straight part of wing strip i's curve, per radian: its slope at zero lift. */
+    public double lineSlope(int i) {
+        return lineSlope[i];
+    }
+
+    /** The zero-lift angle of wing strip i's curve, rad: where it crosses zero lift below its peak. */
+    public double lineZeroLift(int i) {
+        return lineZeroLift[i];
+    }
+
+    /** The zero crossing of a curve over the 40 degrees below its peak (bisection). */
+    private static double zeroCrossing(SectionCurve f, double latticeZeroLift) {
+        double hi = f.peakAngle();
+        if (Double.isInfinite(hi)) {
+            hi = latticeZeroLift + Math.PI / 4;
+        }
+        double lo = hi - Math.toRadians(40);
+        for (int k = 0; k < 100 && hi - lo > 1e-15; k++) {
+            double mid = 0.5 * (lo + hi);
+            if (f.lift(mid) > 0) {
+                hi = mid;
+            } else {
+                lo = mid;
+            }
+        }
+        return 0.5 * (lo + hi);
     }
 
     /** The limits whose strips these curves follow. */
