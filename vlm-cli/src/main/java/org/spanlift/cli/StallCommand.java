@@ -307,6 +307,13 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
                             .orElse("No station on the " + end.control() + " itself reaches cl_max."))))
                     .append('\n'));
         }
+        for (Configuration c : configs) {
+            c.estimate().pointedTipFrom().ifPresent(from -> b.append('\n').append(TextTable.wrap(String.format(
+                    Locale.ROOT, "NOTE (%s): the strips beyond |y| = %.3f %s have a chord under 5%% of the mean "
+                            + "aerodynamic chord (a tip ending in a point, where linear theory's section lift grows "
+                            + "without bound): the onset leaves them out; the maximum lift keeps them, limited by "
+                            + "their section curves.", c.label(), from / k, u))).append('\n'));
+        }
         if (study.assumedClMax()) {
             b.append("\n  NOTE: some sections give no cl-max; an assumed value was used (--assume-cl-max).\n");
         }

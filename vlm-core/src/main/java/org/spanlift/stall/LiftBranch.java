@@ -177,8 +177,16 @@ public final class LiftBranch {
         return null;
     }
 
+    /**
+     * True when a strip is more than {@value #DEEP_STALL_DEG} degrees past its section peak; strips of a chord
+     * below {@link SectionCoupling#MIN_LENGTH} of the mean aerodynamic chord (toward a pointed tip, where
+     * linear theory's section lift grows without bound) do not count.
+     */
     private static boolean deepStall(SectionCoupling coupling, CoupledPoint p) {
         for (int i = 0; i < coupling.size(); i++) {
+            if (coupling.narrow(i)) {
+                continue;
+            }
             double over = p.sectionAngle(i) - coupling.curves().curve(coupling.wingIndex(i)).peakAngle();
             if (over > Math.toRadians(DEEP_STALL_DEG)) {
                 return true;

@@ -142,7 +142,7 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
             curve.add(new CurvePoint(p.alpha(), p.lift(), co.inducedDrag(), co.pitchingMoment(), stalledFraction(c, p)));
         }
         return new MaximumLift(top.lift(), top.alpha(), branch.maximumIsPeak(), branch.end(),
-                stalledFraction(c, top), firstStall(c, branch, semi), aileron(wing, c, top), c.curves().synthetic(),
+                stalledFraction(c, top), firstStall(c, branch, semi, wing.main().meanAerodynamicChord()), aileron(wing, c, top), c.curves().synthetic(),
                 c.curves().handbookFlap(), c.curves().inviscidFlap(), branch.multipleSolutions(), states, curve, Optional.empty());
     }
 
@@ -160,13 +160,18 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
         return past / total;
     }
 
-    private static Optional<FirstStall> firstStall(SectionCoupling c, LiftBranch branch, double semi) {
+    /**
+     * The first strip past its peak on the upward path, leaving out strips near a pointed tip as the linear
+     * onset does ({@link StallAnalysis#POINTED_TIP_CHORD}).
+     */
+    private static Optional<FirstStall> firstStall(SectionCoupling c, LiftBranch branch, double semi, double mac) {
         for (CoupledPoint p : branch.upward()) {
             int first = -1;
             double most = 0;
             for (int i = 0; i < c.size(); i++) {
                 double over = p.sectionAngle(i) - c.curves().curve(c.wingIndex(i)).peakAngle();
-                if (over > 0 && (first < 0 || over > most)) {
+                boolean pointedTip = c.strip(i).chord() < StallAnalysis.POINTED_TIP_CHORD * mac;
+                if (over > 0 && !pointedTip && (first < 0 || over > most)) {
                     first = i;
                     most = over;
                 }

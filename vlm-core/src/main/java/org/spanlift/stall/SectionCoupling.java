@@ -65,6 +65,11 @@ public final class SectionCoupling {
      * the steepest fall of a section curve past its peak, and one of eight chords by 0.4 only.
      */
     static final double SMOOTHING = 0.1;
+    /**
+     * The smallest length of the smoothing, over the wing's mean aerodynamic chord: toward a pointed tip the
+     * chord goes to zero, and so would the smoothing, leaving the tip strips free to run away alone.
+     */
+    static final double MIN_LENGTH = 0.5;
     private static final double TWO_PI = 2 * Math.PI;
 
     private final WingAnalysis analysis;
@@ -158,7 +163,8 @@ public final class SectionCoupling {
             smoothing[i] = new double[neighbours[i].length];
             for (int n = 0; n < neighbours[i].length; n++) {
                 Strip sj = lattice.strips().get(unknowns.get(neighbours[i][n]));
-                smoothing[i][n] = SMOOTHING * TWO_PI * si.chord() * si.chord() / (si.width() * Math.abs(sj.y() - si.y()));
+                double length = Math.max(si.chord(), MIN_LENGTH * analysis.wing().main().meanAerodynamicChord());
+                smoothing[i][n] = SMOOTHING * TWO_PI * length * length / (si.width() * Math.abs(sj.y() - si.y()));
             }
         }
     }
@@ -201,6 +207,11 @@ public final class SectionCoupling {
     /** The index into {@link StripLimits#strips()} of unknown i. */
     public int wingIndex(int i) {
         return wingIndex[i];
+    }
+
+    /** True when unknown i's chord is below {@link #MIN_LENGTH} of the mean aerodynamic chord. */
+    public boolean narrow(int i) {
+        return strip(i).chord() < MIN_LENGTH * analysis.wing().main().meanAerodynamicChord();
     }
 
     /** The lattice strip of unknown i. */

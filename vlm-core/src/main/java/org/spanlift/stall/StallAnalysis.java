@@ -104,8 +104,8 @@ public final class StallAnalysis {
             Strip st = lattice.strips().get(ids.get(i));
             re[i] = reynoldsPerMetre * st.chord();
             clMax[i] = limits.clMax(i, re[i]);
-            alphaReach[i] = Math.abs(clMax[i]) <= amplitude[i] ? phase[i] - Math.acos(clMax[i] / amplitude[i])
-                    : Double.POSITIVE_INFINITY;
+            alphaReach[i] = Math.abs(clMax[i]) <= amplitude[i] && !pointedTip(st)
+                    ? phase[i] - Math.acos(clMax[i] / amplitude[i]) : Double.POSITIVE_INFINITY;
         }
         int first = 0;
         for (int i = 1; i < n; i++) {
@@ -132,6 +132,13 @@ public final class StallAnalysis {
             strips.add(new StallEstimate.StripStall(st.y(), Math.abs(st.y()) / semi, st.chord(), limits.section(i),
                     re[i], clMax[i], clOnset, clBasic, clAdd, limits.sectionAngle(i, clOnset), reach));
         }
+        OptionalDouble tipFrom = OptionalDouble.empty();
+        for (int i = 0; i < n; i++) {
+            Strip st = lattice.strips().get(ids.get(i));
+            if (pointedTip(st) && (tipFrom.isEmpty() || Math.abs(st.yLeft()) < tipFrom.getAsDouble())) {
+                tipFrom = OptionalDouble.of(Math.min(Math.abs(st.yLeft()), Math.abs(st.yRight())));
+            }
+        }
         Strip onset = lattice.strips().get(ids.get(first));
         Optional<StallEstimate.AileronMargin> margin = aileronMargin(analysis.wing(), strips);
         OptionalDouble half = halfSpan(lattice, ids, strips);
@@ -139,8 +146,21 @@ public final class StallAnalysis {
         sorted.sort(Comparator.comparingDouble(StallEstimate.StripStall::y));
         return new StallEstimate(line.lift(alpha), alpha, Math.abs(onset.y()), Math.abs(onset.y()) / semi,
                 limits.section(first), margin, half, List.copyOf(sorted), limits.assumed(),
-                limits.defaultFlapIncrement(), controlEndAt(onset, sorted), line);
+                limits.defaultFlapIncrement(), controlEndAt(onset, sorted), line, tipFrom);
     }
+
+    /**
+     * True for a strip of a chord under {@value #POINTED_TIP_CHORD} of the wing's mean aerodynamic chord: near a
+     * tip that ends in a point, where linear theory's section lift grows without bound toward the tip (an
+     * onset found there would fall with every refinement of the strips). Such strips are not onset candidates
+     * (the outputs say so); the lift through the stall keeps them, limited by their section curves.
+     */
+    private boolean pointedTip(Strip st) {
+        return st.chord() < POINTED_TIP_CHORD * analysis.wing().main().meanAerodynamicChord();
+    }
+
+    /** The strips left out of the onset with a chord under this fraction of the mean aerodynamic chord. */
+    public static final double POINTED_TIP_CHORD = 0.05;
 
     /**
      * The deflected control of the wing with a side edge on one of the strip's edges (the lattice cuts strips

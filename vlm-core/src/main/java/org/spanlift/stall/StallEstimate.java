@@ -28,10 +28,14 @@ import org.spanlift.solve.LiftCurve;
  *                             are refined and says more about the control's end than about the wing
  * @param line                 the wing's lift line on which the onset lies: linear theory with the flaps and
  *                             ailerons at their handbook lift
+ * @param pointedTipFrom       where strips of a chord under {@link StallAnalysis#POINTED_TIP_CHORD} of the mean
+ *                             aerodynamic chord begin (|y|, toward a tip ending in a point): they are left out
+ *                             of the onset; absent when there are none
  */
 public record StallEstimate(double lift, double alpha, double y, double eta, String section,
         Optional<AileronMargin> aileronMargin, OptionalDouble halfSpanLift, List<StripStall> strips,
-        boolean assumedClMax, boolean defaultFlapIncrement, Optional<ControlEnd> besideControlEnd, LiftCurve line) {
+        boolean assumedClMax, boolean defaultFlapIncrement, Optional<ControlEnd> besideControlEnd, LiftCurve line,
+        OptionalDouble pointedTipFrom) {
 
     public StallEstimate {
         strips = List.copyOf(strips);

@@ -133,6 +133,9 @@ public final class Vocabulary {
                     e -> boxed(e.halfSpanLift())),
             key("assumed_cl_max", FLAG, "cl_max assumed", "true when some section's cl_max was assumed", 0,
                     CL_MAX, StallEstimate::assumedClMax),
+            key("pointed_tip_from", METRE, "onset leaves out strips from |y|",
+                    "where the strips left out of the onset begin: a chord under 5% of the mean aerodynamic chord, "
+                            + "toward a tip ending in a point", 3, CL_MAX, e -> boxed(e.pointedTipFrom())),
             key("default_flap_increment", FLAG, "default flap increment",
                     "true when a flapped strip used the handbook default cl_max increment", 0, CL_MAX,
                     StallEstimate::defaultFlapIncrement),
