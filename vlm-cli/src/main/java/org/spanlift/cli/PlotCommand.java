@@ -101,7 +101,7 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
                     deflections), estimate(analysis, deflections, condition), context);
             case LIFT -> liftCurve(analysis, deflections, condition, context);
             case POLAR -> Plots.polar(analysis, deflections, range(), flight.reynoldsRule(wing), context);
-            case STALL -> Plots.stallMap(analysis, stall(analysis, deflections, condition), context);
+            case STALL -> stallMap(analysis, deflections, condition, context);
         };
         FigureOutput.write(figure, format, output, spec.commandLine().getOut());
         return 0;
@@ -145,12 +145,16 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
                 context);
     }
 
-    private StallEstimate stall(WingAnalysis analysis, double[] deflections, Optional<FlightCondition> condition) {
+    /** The stall map, with the section cl at maximum lift and past it from the section lift curves. */
+    private Figure stallMap(WingAnalysis analysis, double[] deflections, Optional<FlightCondition> condition,
+            FigureContext context) {
+        StallStudy.Configuration c;
         try {
-            return StallStudy.configuration("plot", analysis, deflections, clMax.assumed(), condition).estimate();
+            c = StallStudy.configuration("plot", analysis, deflections, clMax.assumed(), condition);
         } catch (MissingSectionDataException e) {
             throw new InputException(file.toString(), 0, "sections", e.getMessage());
         }
+        return Plots.stallMap(analysis, c.estimate(), Optional.of(c.maximumLift()), context);
     }
 
     private double spanLoadAlpha(WingAnalysis analysis, double[] deflections) {

@@ -150,6 +150,12 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         strips.put("cl_over_cl_peak", right.stream().mapToDouble(s -> s.cl() / s.peakCl()).toArray());
         strips.put("section_alpha_deg", right.stream().mapToDouble(s -> Math.toDegrees(s.sectionAngle())).toArray());
         strips.put("past_peak", right.stream().map(MaximumLift.StripState::pastPeak).toList());
+        List<Object> stallAlpha = new ArrayList<>();
+        right.forEach(st -> stallAlpha.add(st.stallAlpha().isPresent()
+                ? (Object) Math.toDegrees(st.stallAlpha().getAsDouble()) : null));
+        strips.put("alpha_passing_peak_deg", stallAlpha);
+        strips.put("cl_beyond", right.stream().mapToDouble(MaximumLift.StripState::clBeyond).toArray());
+        strips.put("beyond_alpha_deg", Math.toDegrees(m.beyondAlpha()));
         o.put("strips_at_maximum", strips);
         Map<String, Object> curve = new LinkedHashMap<>();
         curve.put("alpha_deg", m.curve().stream().mapToDouble(p -> Math.toDegrees(p.alpha())).toArray());

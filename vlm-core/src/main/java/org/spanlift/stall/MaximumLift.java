@@ -22,9 +22,9 @@ import org.spanlift.solve.WingAnalysis;
  *
  * @param lift                 the highest CL of the branch (whole lattice)
  * @param alpha                its angle of attack
- * @param peak                 true when it is a maximum inside the branch; false when the branch ends (a fold,
- *                             a branch point, a curve's end) at or just after it
- * @param end                  how the traced branch ended
+ * @param peak                 true when the lift rounds over at the maximum; false when it breaks off there (a
+ *                             fold) or the traced curve ended there ({@link LiftBranch#maximumIsPeak})
+ * @param end                  how the traced curve ended
  * @param stalledSpanFraction  the share of the wing's span (outboard of the fuselage side) past its section
  *                             peak at the maximum
  * @param firstStall           where and when the first strip passes its section peak on the branch
@@ -34,13 +34,16 @@ import org.spanlift.solve.WingAnalysis;
  * @param inviscidFlap         true when some deflected control lies outside the handbook data, so its strips
  *                             carry the inviscid flap lift
  * @param multipleSolutions    the range of angles [from, to] where a second solution was found, if any
- * @param strips               every strip with its own correction at the maximum, y ascending
- * @param curve                the coupled lift curve, alpha ascending, up to the end of the branch
+ * @param strips               every strip with its own correction at the maximum, y ascending, with its cl at
+ *                             the last angle of the path ({@code beyondAlpha})
+ * @param beyondAlpha          the last angle of attack of the path of a rising angle (past the maximum unless
+ *                             the curve ended there), rad
+ * @param curve                the coupled lift curve on that path, alpha ascending
  * @param speed                the stall speed at this maximum, with a flight condition
  */
 public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.End end, double stalledSpanFraction,
         Optional<FirstStall> firstStall, Optional<AileronState> aileron, boolean synthetic, boolean handbookFlap, boolean inviscidFlap,
-        Optional<double[]> multipleSolutions, List<StripState> strips, List<CurvePoint> curve,
+        Optional<double[]> multipleSolutions, List<StripState> strips, double beyondAlpha, List<CurvePoint> curve,
         Optional<Speed> speed) {
 
     /** Relative change of the stall speed below which the Reynolds-number iteration stops. */
@@ -67,8 +70,13 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
     public record AileronState(boolean belowPeak, double margin, double y) {
     }
 
-    /** One strip at the maximum: cl, its section curve's peak, the effective angle and the peak's angle. */
-    public record StripState(double y, double eta, double cl, double peakCl, double sectionAngle, double peakAngle) {
+    /**
+     * One strip at the maximum: cl, its section curve's peak, the effective angle and the peak's angle (rad);
+     * the wing's angle of attack at which it passed its peak on the path, if it did; its cl at the path's last
+     * angle.
+     */
+    public record StripState(double y, double eta, double cl, double peakCl, double sectionAngle, double peakAngle,
+            OptionalDouble stallAlpha, double clBeyond) {
         public boolean pastPeak() {
             return sectionAngle > peakAngle;
         }
@@ -119,7 +127,7 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
 
     private MaximumLift withSpeed(Speed s) {
         return new MaximumLift(lift, alpha, peak, end, stalledSpanFraction, firstStall, aileron, synthetic,
-                handbookFlap, inviscidFlap, multipleSolutions, strips, curve, Optional.of(s));
+                handbookFlap, inviscidFlap, multipleSolutions, strips, beyondAlpha, curve, Optional.of(s));
     }
 
     static MaximumLift from(WingAnalysis analysis, LiftBranch branch) {
@@ -129,11 +137,13 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
         double semi = wing.main().mirrored() ? wing.main().planform().yEnd()
                 : 0.5 * (wing.main().planform().yEnd() - wing.main().planform().yStart());
         List<StripState> states = new ArrayList<>();
+        List<CoupledPoint> path = branch.upward();
+        CoupledPoint beyond = path.get(path.size() - 1);
         for (int i = 0; i < c.size(); i++) {
             SectionCurve f = c.curves().curve(c.wingIndex(i));
             double y = c.strip(i).y();
             states.add(new StripState(y, Math.abs(y) / semi, top.cl(i), f.peakLift(), top.sectionAngle(i),
-                    f.peakAngle()));
+                    f.peakAngle(), stallAlpha(path, i, f.peakAngle()), beyond.cl(i)));
         }
         states.sort(Comparator.comparingDouble(StripState::y));
         List<CurvePoint> curve = new ArrayList<>();
@@ -143,7 +153,23 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
         }
         return new MaximumLift(top.lift(), top.alpha(), branch.maximumIsPeak(), branch.end(),
                 stalledFraction(c, top), firstStall(c, branch, semi, wing.main().meanAerodynamicChord()), aileron(wing, c, top), c.curves().synthetic(),
-                c.curves().handbookFlap(), c.curves().inviscidFlap(), branch.multipleSolutions(), states, curve, Optional.empty());
+                c.curves().handbookFlap(), c.curves().inviscidFlap(), branch.multipleSolutions(), states, beyond.alpha(), curve, Optional.empty());
+    }
+
+    /**
+     * The angle of attack at which unknown i's effective angle first passes its peak angle on the path,
+     * linear between the two points around it; absent if it never does.
+     */
+    private static OptionalDouble stallAlpha(List<CoupledPoint> path, int i, double peakAngle) {
+        for (int k = 1; k < path.size(); k++) {
+            double before = path.get(k - 1).sectionAngle(i) - peakAngle;
+            double after = path.get(k).sectionAngle(i) - peakAngle;
+            if (before <= 0 && after > 0) {
+                double t = -before / (after - before);
+                return OptionalDouble.of(path.get(k - 1).alpha() + t * (path.get(k).alpha() - path.get(k - 1).alpha()));
+            }
+        }
+        return OptionalDouble.empty();
     }
 
     /** The share of the span (by strip width) past its section peak. */

@@ -297,7 +297,8 @@ public final class Plots {
      *
      * @param context the configuration of the estimate; its deflected flaps are shaded
      */
-    public static ChartFigure stallMap(WingAnalysis analysis, StallEstimate stall, FigureContext context) {
+    public static ChartFigure stallMap(WingAnalysis analysis, StallEstimate stall, Optional<MaximumLift> maximum,
+            FigureContext context) {
         Wing wing = analysis.wing();
         LengthUnit u = wing.displayUnit();
         List<StallEstimate.StripStall> strips = stall.strips();
@@ -311,6 +312,11 @@ public final class Plots {
             top = Math.max(top, Math.max(cl[i], strips.get(i).clMax()));
         }
         double band = 1.1 * top;
+        if (maximum.isPresent()) {
+            for (MaximumLift.StripState st : maximum.get().strips()) {
+                band = Math.max(band, 1.1 * Math.max(st.cl(), st.clBeyond()));
+            }
+        }
         String title = String.format(Locale.ROOT, "Stall map: onset at CL = %.3f (\u03b1 = %.2f\u00b0), station \u03b7 = %.2f",
                 stall.lift(), Math.toDegrees(stall.alpha()), stall.eta());
         XYChart c = chart(title, "spanwise station y [" + u.symbol() + "], right tip positive",
@@ -333,6 +339,25 @@ public final class Plots {
             body.setFillColor(Palette.FUSELAGE_FILL);
             body.setLineColor(Palette.FUSELAGE_FILL);
             body.setMarker(SeriesMarkers.NONE);
+        }
+        String progression = "";
+        if (maximum.isPresent()) {
+            MaximumLift m = maximum.get();
+            double[][] atMax = bothHalves(m.strips(), MaximumLift.StripState::cl, u);
+            double[][] beyond = bothHalves(m.strips(), MaximumLift.StripState::clBeyond, u);
+            halves(c, String.format(Locale.ROOT, "section cl at maximum lift (CL %.3f, \u03b1 = %.2f\u00b0)",
+                    m.lift(), Math.toDegrees(m.alpha())), atMax[0], atMax[1], fuselage > 0, Palette.GREEN,
+                    Palette.line(0, 2.2f), SeriesMarkers.NONE);
+            if (m.beyondAlpha() > m.alpha() + 1e-9) {
+                halves(c, String.format(Locale.ROOT, "section cl past it (\u03b1 = %.2f\u00b0)",
+                        Math.toDegrees(m.beyondAlpha())), beyond[0], beyond[1], fuselage > 0, Palette.PURPLE,
+                        Palette.line(2, 2.0f), SeriesMarkers.NONE);
+            }
+            progression = String.format(Locale.ROOT, " From the section lift curves%s: the section cl at the "
+                    + "maximum lift (CL %.3f at %.2f degrees, %.0f%% of the span past its section peak)%s.",
+                    m.synthetic() ? " (some built from cl_max: synthetic)" : "", m.lift(), Math.toDegrees(m.alpha()),
+                    100 * m.stalledSpanFraction(), m.beyondAlpha() > m.alpha() + 1e-9 ? String.format(Locale.ROOT,
+                            " and past it at %.2f degrees", Math.toDegrees(m.beyondAlpha())) : "");
         }
         double[][] max = clMaxAlongSpan(stall, u);
         halves(c, clMaxName(stall), max[0], max[1], fuselage > 0, Palette.VERMILLION, Palette.line(1, 2.0f),
@@ -364,8 +389,28 @@ public final class Plots {
                 + "the cl_max of each station%s. Critical-section method in linear theory.%s",
                 surfaceLabel(wing), stall.lift(), Math.toDegrees(stall.alpha()),
                 shaded.isEmpty() ? "" : "; shaded: " + String.join("; ", shaded),
-                stall.assumedClMax() ? " Some sections give no cl-max: an assumed value is used." : "");
+                stall.assumedClMax() ? " Some sections give no cl-max: an assumed value is used." : "") + progression;
         return new ChartFigure(PlotKind.STALL.figureId(), desc, c, context.text());
+    }
+
+    /**
+     * A value of the maximum-lift strips along both halves, y ascending, in the display unit: the strips as
+     * they are when they cover both halves, else the right half mirrored.
+     */
+    private static double[][] bothHalves(List<MaximumLift.StripState> strips,
+            java.util.function.ToDoubleFunction<MaximumLift.StripState> value, LengthUnit u) {
+        boolean mirror = strips.stream().allMatch(st -> st.y() > 0);
+        List<double[]> points = new ArrayList<>();
+        for (MaximumLift.StripState st : strips) {
+            points.add(new double[] {st.y() / u.metres(), value.applyAsDouble(st)});
+            if (mirror) {
+                points.add(new double[] {-st.y() / u.metres(), value.applyAsDouble(st)});
+            }
+        }
+        points.sort(java.util.Comparator.comparingDouble(p -> p[0]));
+        double[] y = points.stream().mapToDouble(p -> p[0]).toArray();
+        double[] v = points.stream().mapToDouble(p -> p[1]).toArray();
+        return new double[][] {y, v};
     }
 
     /** The legend entry of the sections' cl_max, flagged when some is assumed. */

@@ -148,7 +148,8 @@ public final class ReportPage {
             ReynoldsRule reynolds, FigureContext context) {
         Optional<StallEstimate> estimate = stall.map(StallStudy.Configuration::estimate);
         return switch (kind) {
-            case STALL -> estimate.map(e -> (Figure) Plots.stallMap(s.analysis(), e, context)).orElse(null);
+            case STALL -> stall.map(c -> (Figure) Plots.stallMap(s.analysis(), c.estimate(), Optional.of(c.maximumLift()),
+                    context)).orElse(null);
             case PLANFORM -> Plots.planform(s.analysis(), estimate
                     .map(e -> OptionalDouble.of(e.y())).orElse(OptionalDouble.empty()), context);
             case SPAN_LOAD -> Plots.spanLoad(s.analysis(), s.spanLoadAtCl(), estimate, context);

@@ -66,7 +66,7 @@ class PlotsTest {
                 Plots.liftCurve(TRAINER, d, ANGLES, Optional.of(e), Optional.empty(), context),
                 Plots.polar(TRAINER, d, ANGLES, org.spanlift.flight.ReynoldsRule.of(TRAINER.wing().reference(),
                         StandardAtmosphere.at(1000, 0), OptionalDouble.empty(), CONDITION), context),
-                Plots.stallMap(TRAINER, e, context))) {
+                Plots.stallMap(TRAINER, e, Optional.empty(), context))) {
             assertCarries(context, f, f.subtitle());
         }
     }
@@ -74,7 +74,8 @@ class PlotsTest {
     @Test
     void theStallMapShadesTheSpanOfEachDeflectedFlapAndNamesItInTheLegend() {
         double[] d = flaps(TRAINER, 20);
-        ChartFigure map = Plots.stallMap(TRAINER, estimate(TRAINER, d), FigureContext.of(TRAINER.wing(), d, CONDITION));
+        ChartFigure map = Plots.stallMap(TRAINER, estimate(TRAINER, d), Optional.empty(),
+                FigureContext.of(TRAINER.wing(), d, CONDITION));
         ControlSurface flap = TRAINER.wing().control("flap").orElseThrow();
         double unit = TRAINER.wing().displayUnit().metres();
         List<XYSeries> bands = map.chart().getSeriesMap().values().stream()
@@ -92,7 +93,7 @@ class PlotsTest {
         assertTrue(map.description().contains("deflected flap (flap at 20 degrees)"), map.description());
 
         double[] clean = flaps(TRAINER, 0);
-        ChartFigure cleanMap = Plots.stallMap(TRAINER, estimate(TRAINER, clean),
+        ChartFigure cleanMap = Plots.stallMap(TRAINER, estimate(TRAINER, clean), Optional.empty(),
                 FigureContext.of(TRAINER.wing(), clean, CONDITION));
         assertTrue(cleanMap.chart().getSeriesMap().keySet().stream().noneMatch(k -> k.startsWith(Plots.FLAP_SPAN)),
                 "no flap band when no flap is deflected");
