@@ -34,6 +34,7 @@ import org.spanlift.io.WingFileReader;
 import org.spanlift.solve.WingAnalysis;
 import org.spanlift.stall.MissingSectionDataException;
 import org.spanlift.section.PlainFlap;
+import org.spanlift.stall.FlapLift;
 import org.spanlift.stall.MaximumLift;
 import org.spanlift.stall.StallEstimate;
 import org.spanlift.stall.SyntheticCurve;
@@ -124,7 +125,7 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         return m;
     }
 
-    private static Map<String, Object> maxLiftJson(Configuration c) {
+    private static Map<String, Object> maxLiftJson(Wing wing, Configuration c) {
         MaximumLift m = c.maximumLift();
         Map<String, Object> o = new LinkedHashMap<>();
         List<ResultKey<MaximumLift>> keys = m.speed().isPresent() ? Vocabulary.MAX_LIFT
@@ -134,8 +135,27 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
                 + "through the stall");
         o.put("section_curves", m.synthetic() ? "synthetic where no lift-curve is given: " + SyntheticCurve.DESCRIPTION
                 : "measured");
-        if (m.handbookFlap()) {
-            o.put("flap_model", PlainFlap.source());
+        List<FlapLift.Values> flaps = FlapLift.values(wing, c.deflections());
+        if (!flaps.isEmpty()) {
+            Map<String, Object> model = new LinkedHashMap<>();
+            model.put("source", PlainFlap.source());
+            model.put("range", PlainFlap.range());
+            List<Object> each = new ArrayList<>();
+            for (FlapLift.Values v : flaps) {
+                Map<String, Object> one = new LinkedHashMap<>();
+                one.put("control", v.control());
+                one.put("chord_fraction", v.chordFraction());
+                one.put("deflection_deg", Math.toDegrees(v.deflection()));
+                one.put("tau", v.tau());
+                one.put("effectiveness_ratio", v.effectivenessRatio().isPresent() ? v.effectivenessRatio().getAsDouble() : null);
+                one.put("large_deflection_factor", v.largeDeflection().isPresent() ? v.largeDeflection().getAsDouble() : null);
+                one.put("section_lift_increment", v.liftIncrement());
+                one.put("section_cl_max_increment", v.clMaxIncrement());
+                one.put("within_handbook_data", v.covered());
+                each.add(one);
+            }
+            model.put("controls", each);
+            o.put("flap_model", model);
         }
         if (m.inviscidFlap()) {
             o.put("flap_outside_handbook_data", "a deflected control lies outside the handbook data ("
@@ -191,12 +211,12 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         root.put("atmosphere", atm);
         root.put("fuselage_half_width", wing.main().fuselageHalfWidth());
         root.put("stall", stallJson(study.clean()));
-        root.put("max_lift", maxLiftJson(study.clean()));
+        root.put("max_lift", maxLiftJson(wing, study.clean()));
         study.flaps().ifPresent(flaps -> {
             Map<String, Object> f = stallJson(flaps);
             f.put("deflections_deg", deflections(wing, flaps.deflections()));
             root.put("stall_flaps", f);
-            root.put("max_lift_flaps", maxLiftJson(flaps));
+            root.put("max_lift_flaps", maxLiftJson(wing, flaps));
             Results.put(root, Vocabulary.select(Vocabulary.STUDY, "flap_increment_CL"), study);
         });
         study.condition().ifPresent(fc -> {
@@ -314,6 +334,19 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
                     .append('\n'));
         }
         for (Configuration c : configs) {
+            for (FlapLift.Values v : FlapLift.values(wing, c.deflections())) {
+                b.append('\n').append(TextTable.wrap(String.format(Locale.ROOT, "NOTE (%s): %s, %.0f%% chord at %.1f deg: "
+                        + "%s; section lift %+.3f, cl_max %+.3f. Both the onset and the maximum lift use it.", c.label(),
+                        v.control(), 100 * v.chordFraction(), Math.toDegrees(v.deflection()), v.covered()
+                                ? String.format(Locale.ROOT, "the handbook plain-flap lift, effectiveness ratio %.3f x "
+                                        + "K' %.3f = %.3f of the thin-airfoil lift 2 pi tau delta, tau %.3f (%s)",
+                                        v.effectivenessRatio().getAsDouble(), v.largeDeflection().getAsDouble(),
+                                        v.effectivenessRatio().getAsDouble() * v.largeDeflection().getAsDouble(),
+                                        v.tau(), PlainFlap.source())
+                                : "beyond the handbook data (" + PlainFlap.range() + "), so the inviscid flap lift",
+                        v.liftIncrement() * Math.signum(v.deflection()),
+                        v.clMaxIncrement() * Math.signum(v.deflection())))).append('\n');
+            }
             c.estimate().pointedTipFrom().ifPresent(from -> b.append('\n').append(TextTable.wrap(String.format(
                     Locale.ROOT, "NOTE (%s): the strips beyond |y| = %.3f %s have a chord under 5%% of the mean "
                             + "aerodynamic chord (a tip ending in a point, where linear theory's section lift grows "
