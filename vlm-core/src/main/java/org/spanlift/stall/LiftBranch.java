@@ -25,7 +25,8 @@ import org.spanlift.input.RefusedException;
  * stable point before them ({@link #upward()}): at a fold it jumps, at the same angle, to the next stable
  * stretch (more of the span stalled). The maximum lift is the highest CL of that path, refined by
  * golden-section search to {@value #REFINE_DEG} degree when it lies inside a stable stretch; when it lies at a
- * fold the stall there is abrupt (the lift drops as the path jumps). Where unstable points exist, two or more
+ * fold the stall there is abrupt (the lift drops as the path jumps), and the fold is located to the same
+ * tolerance by bisection along the trace. Where unstable points exist, two or more
  * solutions exist at the same angle ({@link #multipleSolutions()}): the lift there depends on how the angle
  * was reached. The trace stops {@value #PAST_DEG} degrees past the maximum, where a tabulated section curve
  * ends, where a strip passes its section peak by more than {@value #DEEP_STALL_DEG} degrees, {@value #SPAN_DEG} degrees above the start, after {@value #MAX_POINTS} points, or when a step fails
@@ -149,12 +150,47 @@ public final class LiftBranch {
         if (smooth) {
             List<CoupledPoint> known = new ArrayList<>(up.subList(best - 1, best + 1));
             maximum = refine(coupling, known, up.get(best - 1).alpha(), up.get(best + 1).alpha(), maximum);
+        } else {
+            int at = trace.indexOf(maximum);
+            if (at >= 0 && at + 1 < trace.size() && trace.get(at + 1).stableJacobian() != stable) {
+                maximum = refineFold(coupling, maximum, trace.get(at + 1));
+            }
         }
         boolean peak = false;
         for (int i = best + 1; i < up.size(); i++) {
             peak |= up.get(i).lift() < maximum.lift();
         }
         return new LiftBranch(coupling, trace, up, maximum, peak && smooth, end);
+    }
+
+    /**
+     * The last stable point before a fold, between a stable point and the unstable one after it on the
+     * trace: the corrector from the stable end halfway along the secant, kept as the new stable end or the
+     * new unstable end by its Jacobian's sign, until the two lie within {@value #REFINE_DEG} degree.
+     */
+    private static CoupledPoint refineFold(SectionCoupling coupling, CoupledPoint stable, CoupledPoint unstable) {
+        CoupledPoint a = stable;
+        CoupledPoint b = unstable;
+        for (int k = 0; k < 40 && Math.abs(b.alpha() - a.alpha()) > Math.toRadians(REFINE_DEG); k++) {
+            double ds = distance(a, b) / 2;
+            double[] t = secant(a, b);
+            double[] x = a.corrections();
+            int m = x.length;
+            double[] predicted = new double[m];
+            for (int i = 0; i < m; i++) {
+                predicted[i] = x[i] + ds * t[i];
+            }
+            CoupledPoint q = coupling.correct(predicted, a.alpha() + ds * t[m], Arrays.copyOf(t, m), t[m]);
+            if (!q.converged()) {
+                break;
+            }
+            if (q.stableJacobian() == stable.stableJacobian()) {
+                a = q;
+            } else {
+                b = q;
+            }
+        }
+        return a.lift() > stable.lift() ? a : stable;
     }
 
     /**

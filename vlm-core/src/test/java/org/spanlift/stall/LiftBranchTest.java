@@ -88,5 +88,16 @@ class LiftBranchTest {
             assertEquals(up.get(0).stableJacobian(), up.get(i).stableJacobian());
         }
         assertFalse(b.maximumIsPeak(), "the maximum is at a fold: the lift breaks off");
+        CoupledPoint on = b.maximum();
+        double reach = 0;
+        while (reach < 1) {
+            CoupledPoint next = b.coupling().solve(on.alpha() + Math.toRadians(0.01), on.corrections());
+            if (!next.converged() || next.stableJacobian() != on.stableJacobian() || LiftBranch.jumped(on, next)) {
+                break;
+            }
+            on = next;
+            reach += 0.01;
+        }
+        assertTrue(reach < 0.1, "the branch of the maximum ends within 0.1 degree of it (the fold): " + reach);
     }
 }
