@@ -12,6 +12,7 @@ import org.spanlift.cli.output.Results;
 import org.spanlift.flight.FlightCondition;
 import org.spanlift.flight.FlightPoint;
 import org.spanlift.flight.ReynoldsRule;
+import org.spanlift.stall.MaximumLift;
 import org.spanlift.stall.StallEstimate;
 import org.spanlift.stall.StallStudy;
 import org.spanlift.vocabulary.ResultKey;
@@ -185,12 +186,18 @@ public final class ReportPage {
             ResultKey<StallEstimate> margin = Vocabulary.find(Vocabulary.ONSET, "aileron_margin.dcl");
             est.aileronMargin().ifPresent(m -> key(h, "aileron margin, clean", "\u0394cl = " + value(margin, est, u),
                     margin.description()));
-            c.speed().ifPresent(v -> key(h, "stall speed, clean", Html.fixed(Airspeed.knots(v.equivalent()), 1)
-                    + " kt EAS", Html.fixed(Airspeed.knots(v.trueSpeed()), 1) + " kt TAS; wing alone, see the caution"));
+            MaximumLift m = c.maximumLift();
+            key(h, "maximum CL, clean", Html.fixed(m.lift(), 3), "from the section lift curves"
+                    + (m.synthetic() ? " (synthetic: built from cl_max)" : "") + "; " + Html.fixed(100
+                            * m.stalledSpanFraction(), 0) + "% of the span past its section peak there");
+            c.headlineEquivalent().ifPresent(v -> key(h, "stall speed, clean", Html.fixed(Airspeed.knots(v), 1)
+                    + " kt EAS", Html.fixed(Airspeed.knots(c.headlineTrue().getAsDouble()), 1) + " kt TAS; "
+                            + basisText(c) + "; wing alone, see the caution"));
         });
-        in.stall().flatMap(StallStudy::flaps).ifPresent(f -> f.speed().ifPresent(v -> key(h, "stall speed, flaps",
-                Html.fixed(Airspeed.knots(v.equivalent()), 1) + " kt EAS", Html.fixed(Airspeed.knots(v.trueSpeed()), 1)
-                        + " kt TAS; " + deflectionText(s.wing(), f.deflections()))));
+        in.stall().flatMap(StallStudy::flaps).ifPresent(f -> f.headlineEquivalent().ifPresent(v -> key(h,
+                "stall speed, flaps", Html.fixed(Airspeed.knots(v), 1) + " kt EAS",
+                Html.fixed(Airspeed.knots(f.headlineTrue().getAsDouble()), 1) + " kt TAS; " + basisText(f) + "; "
+                        + deflectionText(s.wing(), f.deflections()))));
         h.line("</ul>");
         if (in.stall().isEmpty()) {
             h.el("p", "class=\"missing\"", "No stall results: " + in.unavailable());
@@ -213,10 +220,19 @@ public final class ReportPage {
                         (w, st) -> st.map(c -> value(k, c.estimate(), u)).orElse("\u2013")));
             }
             if (in.condition().isPresent()) {
-                rows.add(row("stall speed EAS [kt]", in, flapStall, (w, st) -> st.flatMap(StallStudy.Configuration::speed)
-                        .map(v -> Html.fixed(Airspeed.knots(v.equivalent()), 1)).orElse("\u2013")));
-                rows.add(row("stall speed TAS [kt]", in, flapStall, (w, st) -> st.flatMap(StallStudy.Configuration::speed)
-                        .map(v -> Html.fixed(Airspeed.knots(v.trueSpeed()), 1)).orElse("\u2013")));
+                rows.add(row("onset stall speed EAS [kt]", in, flapStall, (w, st) -> st.flatMap(
+                        StallStudy.Configuration::speed).map(v -> Html.fixed(Airspeed.knots(v.equivalent()), 1))
+                        .orElse("\u2013")));
+            }
+            for (ResultKey<MaximumLift> k : Vocabulary.select(Vocabulary.MAX_LIFT, "CL", "alpha_deg", "rounds_over",
+                    "stalled_span_fraction", "first_stall.eta", "aileron.below_peak", "synthetic_curves")) {
+                rows.add(row(Results.label(k, u), in, flapStall,
+                        (w, st) -> st.map(c -> value(k, c.maximumLift(), u)).orElse("\u2013")));
+            }
+            if (in.condition().isPresent()) {
+                rows.add(row("stall speed at maximum CL EAS [kt]", in, flapStall, (w, st) -> st.flatMap(
+                        c -> c.maximumLift().speed()).map(v -> Html.fixed(Airspeed.knots(v.equivalent()), 1))
+                        .orElse("\u2013")));
             }
         }
         h.table("configurations", in.flaps().isPresent() ? "Clean and with flaps" : "Clean", header, rows);
@@ -238,6 +254,12 @@ public final class ReportPage {
         }
         h.table("results", "Coefficients by angle of attack, " + (in.flaps().isPresent() ? "with flaps" : "clean"),
                 columns.stream().map(k -> Results.label(k, u)).toList(), coefficients);
+    }
+
+    /** Which maximum a configuration's headline stall speed rests on. */
+    private static String basisText(StallStudy.Configuration c) {
+        return c.speedBasis().equals("max-lift") ? "at the maximum lift from measured section curves"
+                : "at the linear onset, which errs safe (the section curves are partly synthetic)";
     }
 
     private static List<String> row(String label, Inputs in, Optional<StallStudy.Configuration> flapStall, Cell cell) {
