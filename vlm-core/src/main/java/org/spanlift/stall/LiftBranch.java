@@ -29,7 +29,8 @@ import org.spanlift.input.RefusedException;
  * tolerance by bisection along the trace. Where unstable points exist, two or more
  * solutions exist at the same angle ({@link #multipleSolutions()}): the lift there depends on how the angle
  * was reached. The trace stops {@value #PAST_DEG} degrees past the maximum, where a tabulated section curve
- * ends, where a strip passes its section peak by more than {@value #DEEP_STALL_DEG} degrees, {@value #SPAN_DEG} degrees above the start, after {@value #MAX_POINTS} points, or when a step fails
+ * ends, where more than {@value #DEEP_STALL_SPAN} of the span is {@value #DEEP_STALL_DEG} degrees past its section
+ * peak, {@value #SPAN_DEG} degrees above the start, after {@value #MAX_POINTS} points, or when a step fails
  * at the smallest length. No unconverged point carries a number.
  */
 public final class LiftBranch {
@@ -47,6 +48,8 @@ public final class LiftBranch {
      * angle); the project's choice, well past where a wing's maximum lift lies.
      */
     static final double DEEP_STALL_DEG = 10;
+    /** The share of the span in deep stall that ends the trace. */
+    static final double DEEP_STALL_SPAN = 0.05;
     /** The largest change of a strip's correction per change of angle along a branch, off the trace. */
     static final double JUMP = 20;
 
@@ -65,7 +68,10 @@ public final class LiftBranch {
         STALLED_STEP,
         /** A tabulated section curve ended. */
         CURVE_ENDS,
-        /** A strip went more than {@value LiftBranch#DEEP_STALL_DEG} degrees past its section peak. */
+        /**
+         * More than {@value LiftBranch#DEEP_STALL_SPAN} of the span went more than
+         * {@value LiftBranch#DEEP_STALL_DEG} degrees past its section peak.
+         */
         DEEP_STALL,
         /** The angle range or the number of points ended. */
         RANGE
@@ -214,21 +220,24 @@ public final class LiftBranch {
     }
 
     /**
-     * True when a strip is more than {@value #DEEP_STALL_DEG} degrees past its section peak; strips of a chord
-     * below {@link SectionCoupling#MIN_LENGTH} of the mean aerodynamic chord (toward a pointed tip, where
-     * linear theory's section lift grows without bound) do not count.
+     * True when more than {@value #DEEP_STALL_SPAN} of the span (by strip width) is more than
+     * {@value #DEEP_STALL_DEG} degrees past its section peak; strips of a chord below
+     * {@link SectionCoupling#MIN_LENGTH} of the mean aerodynamic chord (toward a pointed tip, where linear
+     * theory's section lift grows without bound) do not count. A narrow strip alone (beside a flap's end,
+     * under the end's concentrated lift) does not end the curve.
      */
     private static boolean deepStall(SectionCoupling coupling, CoupledPoint p) {
+        double total = 0;
+        double deep = 0;
         for (int i = 0; i < coupling.size(); i++) {
-            if (coupling.narrow(i)) {
-                continue;
-            }
+            double width = coupling.strip(i).width();
+            total += width;
             double over = p.sectionAngle(i) - coupling.curves().curve(coupling.wingIndex(i)).peakAngle();
-            if (over > Math.toRadians(DEEP_STALL_DEG)) {
-                return true;
+            if (!coupling.narrow(i) && over > Math.toRadians(DEEP_STALL_DEG)) {
+                deep += width;
             }
         }
-        return false;
+        return deep > DEEP_STALL_SPAN * total;
     }
 
     /** True when some strip's effective angle is within one degree of the end of its section curve. */

@@ -141,8 +141,10 @@ public final class SectionCoupling {
     }
 
     /**
-     * The neighbours of each unknown along the span (strips whose edges touch; in a symmetric system the
-     * innermost strip's mirror image carries the same correction and adds nothing) and the weights
+     * The neighbours of each unknown along the span (strips whose edges touch, across a control's end too:
+     * there the smoothing also spreads linear theory's concentrated lift at the end over about a chord,
+     * without which the strip beside the end ran away alone and the maximum did not settle; in a symmetric
+     * system the innermost strip's mirror image carries the same correction and adds nothing) and the weights
      * {@value #SMOOTHING} 2 pi c_i^2 / (h_i d_ij), h_i the strip's width and d_ij the distance between
      * control points: a second difference of the corrections over the span, scaled by the local chord
      * squared.
@@ -155,7 +157,8 @@ public final class SectionCoupling {
             List<Integer> found = new ArrayList<>();
             for (int j = 0; j < m; j++) {
                 Strip sj = lattice.strips().get(unknowns.get(j));
-                if (j != i && (Math.abs(si.yRight() - sj.yLeft()) <= tol || Math.abs(si.yLeft() - sj.yRight()) <= tol)) {
+                boolean touch = Math.abs(si.yRight() - sj.yLeft()) <= tol || Math.abs(si.yLeft() - sj.yRight()) <= tol;
+                if (j != i && touch) {
                     found.add(j);
                 }
             }
