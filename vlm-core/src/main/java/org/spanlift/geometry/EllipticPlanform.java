@@ -101,4 +101,10 @@ public record EllipticPlanform(double semiSpan, double rootChord, double rootNos
     public double chordNoseZIntegral() {
         return rootNoseZ * area() + Math.tan(dihedral) * chordYIntegral();
     }
+
+    @Override
+    public EllipticPlanform withWashoutChange(double change) {
+        return new EllipticPlanform(semiSpan, rootChord, rootNoseX, rootNoseZ, dihedral, rootTwist, washout + change,
+                sectionName);
+    }
 }

@@ -49,4 +49,15 @@ public sealed interface Planform permits StationPlanform, EllipticPlanform {
 
     /** Integral of chord times leading-edge z, m^3. */
     double chordNoseZIntegral();
+
+    /**
+     * The same planform with its washout (root twist minus tip twist) larger by {@code change} (rad): a twist
+     * change falling linearly from 0 at the root (yStart) to -change at the tip.
+     */
+    Planform withWashoutChange(double change);
+
+    /** Root twist minus tip twist, rad. */
+    default double washout() {
+        return twist(yStart()) - twist(yEnd());
+    }
 }

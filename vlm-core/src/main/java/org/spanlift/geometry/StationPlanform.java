@@ -130,4 +130,16 @@ public record StationPlanform(List<Station> stations) implements Planform {
         }
         return sum;
     }
+
+    @Override
+    public StationPlanform withWashoutChange(double change) {
+        double root = yStart();
+        double length = yEnd() - root;
+        List<Station> changed = new java.util.ArrayList<>();
+        for (Station st : stations) {
+            changed.add(new Station(st.y(), st.chord(), st.noseX(), st.noseZ(),
+                    st.twist() - change * (st.y() - root) / length, st.section()));
+        }
+        return new StationPlanform(changed);
+    }
 }

@@ -62,6 +62,11 @@ public record Surface(String name, boolean mirrored, Planform planform, List<Con
         return new Vec3(xLe + 0.25 * meanAerodynamicChord(), y, z);
     }
 
+    /** The same surface with its washout larger by {@code change}, rad ({@link Planform#withWashoutChange}). */
+    public Surface withWashoutChange(double change) {
+        return new Surface(name, mirrored, planform.withWashoutChange(change), controls, lattice, fuselageHalfWidth);
+    }
+
     public Surface withLattice(LatticeSpec spec) {
         return new Surface(name, mirrored, planform, controls, spec, fuselageHalfWidth);
     }

@@ -82,4 +82,11 @@ public record Wing(String name, LengthUnit displayUnit, Reference reference, Lis
         return new Wing(name, displayUnit, reference, surfaces.stream().map(s -> s.withLattice(spec)).toList(),
                 sections);
     }
+
+    /** The same wing with the washout of its first surface larger by {@code change}, rad. */
+    public Wing withWashoutChange(double change) {
+        List<Surface> changed = new ArrayList<>(surfaces);
+        changed.set(0, surfaces.get(0).withWashoutChange(change));
+        return new Wing(name, displayUnit, reference, changed, sections);
+    }
 }
