@@ -563,6 +563,44 @@ public final class Plots {
         return new ChartFigure("compare-lift", desc, c, FigureContext.text(keys, contexts));
     }
 
+    /**
+     * The washout trade: the onset station, the aileron margin at onset and the cruise span efficiency against
+     * washout, with the least washout that meets the requirements marked.
+     *
+     * @param washoutDeg  the grid of washouts, degrees
+     * @param eta         the onset station over the semi-span at each
+     * @param margin      the aileron margin at onset at each (NaN-free; empty without ailerons)
+     * @param cruiseE     the span efficiency at the cruise CL at each
+     * @param answerDeg   the least washout meeting the requirements, if any
+     */
+    public static ChartFigure washoutTrade(String wingName, double[] washoutDeg, double[] eta, Optional<double[]> margin,
+            double[] cruiseE, double cruiseCl, OptionalDouble answerDeg, String requirements, FigureContext context) {
+        XYChart c = chart("Washout trade: " + wingName, "washout (root twist minus tip twist) [deg]",
+                "onset \u03b7, aileron margin \u0394cl, cruise e");
+        XYSeries onset = c.addSeries("stall-onset station \u03b7", washoutDeg, eta);
+        style(onset, Palette.BLUE, Palette.line(0, 2.2f), SeriesMarkers.CIRCLE);
+        margin.ifPresent(m -> {
+            XYSeries s = c.addSeries("aileron margin at onset \u0394cl", washoutDeg, m);
+            style(s, Palette.VERMILLION, Palette.line(1, 2.2f), SeriesMarkers.NONE);
+        });
+        XYSeries e = c.addSeries(String.format(Locale.ROOT, "span efficiency e at CL %.2f", cruiseCl), washoutDeg,
+                cruiseE);
+        style(e, Palette.GREEN, Palette.line(2, 2.2f), SeriesMarkers.NONE);
+        String answer = " No washout within the range drawn meets the requirements.";
+        if (answerDeg.isPresent()) {
+            double w = answerDeg.getAsDouble();
+            XYSeries mark = c.addSeries(String.format(Locale.ROOT, "least washout meeting them: %.2f\u00b0", w),
+                    new double[] {w, w}, new double[] {0, 1});
+            style(mark, Palette.INK, Palette.line(1, 1.5f), SeriesMarkers.NONE);
+            answer = String.format(Locale.ROOT, " The vertical line marks the least washout that meets them, %.2f "
+                    + "degrees.", w);
+        }
+        String desc = context.sentence() + " The stall-onset station (critical-section method), the least aileron "
+                + "section margin at the onset and the span efficiency at the cruise CL against the washout, root "
+                + "twist minus tip twist, linear from root to tip. Requirements: " + requirements + "." + answer;
+        return new ChartFigure("washout-trade", desc, c, context.text());
+    }
+
     // ---------------------------------------------------------------- helpers
 
     /** A chart in Spanlift's style: white, light grid, outline text; {@link ChartFigure} adds title and legend. */

@@ -1,0 +1,100 @@
+package org.spanlift.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.spanlift.input.YamlParser;
+import org.spanlift.input.YamlValue;
+
+/** {@code spanlift washout}: its answer, round trip through {@code stall}, its outputs and refusals. */
+class WashoutCommandTest {
+
+    @TempDir
+    Path dir;
+
+    private static YamlValue json(CliRun r) {
+        assertEquals(0, r.exitCode(), r.err());
+        assertFalse(r.out().contains("NaN"));
+        return YamlParser.parse(r.out(), "output.json");
+    }
+
+    private static YamlValue at(YamlValue root, String dotted) {
+        YamlValue v = root;
+        for (String step : dotted.split("\\.")) {
+            v = v instanceof YamlValue.Mapping m ? m.get(step).orElseThrow(() -> new AssertionError("no " + dotted))
+                    : ((YamlValue.Sequence) v).items().get(Integer.parseInt(step));
+        }
+        return v;
+    }
+
+    private static double number(YamlValue root, String dotted) {
+        return Double.parseDouble(((YamlValue.Scalar) at(root, dotted)).text());
+    }
+
+    /** The tourer with its washout replaced. */
+    private Path tourerWith(double washoutDeg) throws IOException {
+        String text = Files.readString(Path.of(CliRun.demo("tourer.wing.yaml")), StandardCharsets.UTF_8);
+        String changed = text.replace("washout: 2}", String.format(Locale.ROOT, "washout: %.17g}", washoutDeg));
+        assertTrue(!changed.equals(text), "the demo's washout key was found");
+        Path file = dir.resolve("tourer-" + washoutDeg + ".wing.yaml");
+        Files.writeString(file, changed, StandardCharsets.UTF_8);
+        return file;
+    }
+
+    @Test
+    void theWashoutFoundMeetsTheAileronMarginWhenStallAnalysesTheWingWithIt() throws IOException {
+        YamlValue w = json(CliRun.of("washout", CliRun.demo("tourer.wing.yaml"), "--aileron-margin", "0.1",
+                "--assume-cl-max=1.4", "--format", "json"));
+        assertEquals("true", ((YamlValue.Scalar) at(w, "met")).text());
+        double washout = number(w, "washout_deg");
+        YamlValue stall = json(CliRun.of("stall", tourerWith(washout).toString(), "--assume-cl-max=1.4",
+                "--format", "json"));
+        assertTrue(number(stall, "stall.aileron_margin.dcl") >= 0.1 - 1e-6);
+        YamlValue less = json(CliRun.of("stall", tourerWith(washout - 0.01).toString(), "--assume-cl-max=1.4",
+                "--format", "json"));
+        assertTrue(number(less, "stall.aileron_margin.dcl") < 0.1, "a washout smaller by the tolerance misses it");
+        for (String key : new String[] {"washout_change_deg", "requirements.0.slack", "stall.CL", "stall.eta",
+                "stall.aileron_margin.dcl", "cruise.CL", "cruise.e", "cruise.CDi", "trade.0.washout_deg"}) {
+            at(w, key);
+        }
+        assertEquals(washout - 2, number(w, "washout_change_deg"), 1e-9, "the change to the file's 2 degrees");
+    }
+
+    @Test
+    void anUnreachableRequirementIsAnsweredWithWhatFailsAndByHowMuch() {
+        CliRun r = CliRun.of("washout", CliRun.demo("tourer.wing.yaml"), "--aileron-margin", "0.9",
+                "--assume-cl-max=1.4");
+        assertEquals(0, r.exitCode(), r.err());
+        assertTrue(r.out().contains("NO washout from 0.0 to 10.0 deg meets them"), r.out());
+        assertTrue(r.out().contains("NO"), r.out());
+    }
+
+    @Test
+    void withoutARequirementOrWithAnUnknownControlItIsRefused() {
+        CliRun none = CliRun.of("washout", CliRun.demo("tourer.wing.yaml"), "--assume-cl-max=1.4");
+        assertEquals(2, none.exitCode());
+        assertTrue(none.err().contains("give at least one requirement"), none.err());
+        CliRun unknown = CliRun.of("washout", CliRun.demo("tourer.wing.yaml"), "--onset-inboard-of", "spoiler",
+                "--assume-cl-max=1.4");
+        assertEquals(2, unknown.exitCode());
+        assertTrue(unknown.err().contains("no control named 'spoiler'"), unknown.err());
+    }
+
+    @Test
+    void theTradeFigureIsDrawn() {
+        CliRun svg = CliRun.of("washout", CliRun.demo("tourer.wing.yaml"), "--aileron-margin", "0.1",
+                "--assume-cl-max=1.4", "--format", "svg");
+        assertEquals(0, svg.exitCode(), svg.err());
+        assertTrue(svg.out().contains("<svg"), "an SVG document");
+        assertTrue(svg.out().contains("least washout that meets them"), "its description names the answer");
+    }
+}
