@@ -36,6 +36,7 @@ import org.spanlift.input.quantity.QuantityFormatException;
 import org.spanlift.input.quantity.QuantityKind;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.stall.MissingSectionDataException;
+import org.spanlift.washout.LeastDragTwist;
 import org.spanlift.washout.WashoutDesign;
 import org.spanlift.washout.WashoutPoint;
 import org.spanlift.washout.WashoutRequirement;
@@ -125,11 +126,13 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
         } catch (MissingSectionDataException e) {
             throw new InputException(file.toString(), 0, "sections", e.getMessage());
         }
+        LeastDragTwist leastDrag = LeastDragTwist.of(org.spanlift.solve.WingAnalysis.of(wing), deflections, cruiseCl);
         switch (format) {
-            case JSON -> output.write(Json.write(json(wing, requirements, result, cruiseCl)), spec.commandLine().getOut());
+            case JSON -> output.write(Json.write(json(wing, requirements, result, cruiseCl, leastDrag)),
+                    spec.commandLine().getOut());
             case SVG, PNG -> FigureOutput.write(figure(wing, deflections, requirements, result, cruiseCl, condition),
                     format, output, spec.commandLine().getOut());
-            default -> output.write(table(wing, requirements, result, cruiseCl), spec.commandLine().getOut());
+            default -> output.write(table(wing, requirements, result, cruiseCl, leastDrag), spec.commandLine().getOut());
         }
         return 0;
     }
@@ -190,7 +193,7 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
     }
 
     private static Map<String, Object> json(Wing wing, List<WashoutRequirement> requirements,
-            WashoutDesign.Result r, double cruiseCl) {
+            WashoutDesign.Result r, double cruiseCl, LeastDragTwist leastDrag) {
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("name", wing.name());
         root.put("units", Map.of("angle", "deg", "length", "m", "speed", "m/s"));
@@ -229,6 +232,18 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
             trade.add(m);
         }
         root.put("trade", trade);
+        Map<String, Object> least = new LinkedHashMap<>();
+        least.put("e", box(leastDrag.solution().coefficients().spanEfficiency()));
+        least.put("CDi", leastDrag.solution().coefficients().inducedDrag());
+        double[] tw = leastDrag.twist();
+        least.put("washout_deg", Math.toDegrees(tw[0] - tw[tw.length - 1]));
+        least.put("y", leastDrag.y());
+        double[] deg = new double[tw.length];
+        for (int i = 0; i < tw.length; i++) {
+            deg[i] = Math.toDegrees(tw[i]);
+        }
+        least.put("twist_change_deg", deg);
+        root.put("least_drag_twist", least);
         root.put("caution", Cautions.STALL);
         return root;
     }
@@ -252,7 +267,7 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
     }
 
     private static String table(Wing wing, List<WashoutRequirement> requirements, WashoutDesign.Result r,
-            double cruiseCl) {
+            double cruiseCl, LeastDragTwist leastDrag) {
         StringBuilder b = new StringBuilder(wing.name()).append('\n');
         String asked = String.join("; ", requirements.stream().map(WashoutRequirement::describe).toList());
         b.append(TextTable.wrap("Requirements: " + asked + ".")).append('\n');
@@ -283,6 +298,13 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
                                         Airspeed.knots(at.stallSpeed().getAsDouble())) : ""));
         b.append(String.format(Locale.ROOT, "  cruise at CL %.2f: e %s, CDi %.5f (without washout: e %s, CDi %.5f)%n%n",
                 cruiseCl, e(at.cruiseE()), at.cruiseDrag(), e(r.unwashed().cruiseE()), r.unwashed().cruiseDrag()));
+        double[] tw = leastDrag.twist();
+        b.setLength(b.length() - 1);
+        b.append(TextTable.wrap(String.format(Locale.ROOT, "For comparison, the twist of least induced drag at CL %.2f "
+                + "(no stall requirement; the elliptic load, Munk): e %s, CDi %.5f, %.2f deg from root to tip (not "
+                + "linear; JSON least_drag_twist gives it strip by strip).", cruiseCl,
+                e(leastDrag.solution().coefficients().spanEfficiency()), leastDrag.solution().coefficients().inducedDrag(),
+                Math.toDegrees(tw[0] - tw[tw.length - 1])))).append("\n\n");
         TextTable t = new TextTable(List.of("washout [deg]", "onset CL", "onset eta", "aileron margin",
                 "Vs onset [kt]", "cruise e", "cruise CDi", "meets"));
         for (WashoutPoint p : r.trade()) {
