@@ -40,6 +40,8 @@ import org.spanlift.loads.LoadsAnalysis;
 import org.spanlift.loads.SpanwiseLoads;
 import org.spanlift.solve.WingAnalysis;
 import org.spanlift.stall.StallStudy;
+import org.spanlift.washout.WashoutDesign;
+import org.spanlift.cli.options.WashoutOptions;
 import org.spanlift.stall.StripLimits;
 import org.spanlift.structure.LoadCase;
 import org.spanlift.structure.WingStructure;
@@ -91,6 +93,9 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
 
     @Mixin
     UnitsOption units;
+
+    @Mixin
+    WashoutOptions washout;
 
     @Spec
     CommandSpec spec;
@@ -190,7 +195,17 @@ public final class CompareCommand implements Callable<Integer>, OffersFormats {
                 }
             }
         }
-        return new Comparison.Entry(summary, stall, loads, notes);
+        Optional<WashoutDesign.Result> washoutAnswer = Optional.empty();
+        if (washout.asked()) {
+            double[] bounds = washout.bounds();
+            try {
+                washoutAnswer = Optional.of(WashoutDesign.find(wing, clean, washout.requirements(wing), cl,
+                        clMax.assumed(), condition, bounds[0], bounds[1]));
+            } catch (RefusedException e) {
+                notes.add("no washout answer: " + e.getMessage());
+            }
+        }
+        return new Comparison.Entry(summary, stall, loads, washoutAnswer, notes);
     }
 
     private static String csv(Comparison cmp) {

@@ -27,7 +27,13 @@ import org.spanlift.geometry.Wing;
 import org.spanlift.input.RefusedException;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.solve.WingAnalysis;
+import org.spanlift.stall.MissingSectionDataException;
 import org.spanlift.stall.StallStudy;
+import org.spanlift.washout.WashoutDesign;
+import org.spanlift.washout.WashoutRequirement;
+import org.spanlift.cli.options.WashoutOptions;
+import org.spanlift.cli.plot.Plots;
+import org.spanlift.input.InputException;
 
 
 import picocli.CommandLine.Command;
@@ -77,6 +83,9 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
     @Mixin
     UnitsOption units;
 
+    @Mixin
+    WashoutOptions washout;
+
     @Spec
     CommandSpec spec;
 
@@ -108,9 +117,22 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
             unavailable = e.getMessage();
         }
         double[] drawn = StallStudy.anyFlapDeflected(wing, asked) ? asked : clean;
+        Optional<ReportPage.Washout> washoutAnswer = Optional.empty();
+        if (washout.asked()) {
+            List<WashoutRequirement> requirements = washout.requirements(wing);
+            double[] bounds = washout.bounds();
+            WashoutDesign.Result r;
+            try {
+                r = WashoutDesign.find(wing, clean, requirements, cl, clMax.assumed(), condition, bounds[0], bounds[1]);
+            } catch (MissingSectionDataException e) {
+                throw new InputException(file.toString(), 0, "sections", e.getMessage());
+            }
+            washoutAnswer = Optional.of(new ReportPage.Washout(requirements, r, Plots.washoutTrade(wing.name(), r,
+                    requirements, cl, FigureContext.of(wing, clean, condition))));
+        }
         String html = ReportPage.build(new ReportPage.Inputs(summary, flaps, fine, stall, stallFine, unavailable,
                 condition, flight.reynoldsRule(wing), FigureContext.of(wing, drawn, condition), alphas, curve,
-                units.units(wing.displayUnit()), new VersionProvider().getVersion()[0]));
+                units.units(wing.displayUnit()), new VersionProvider().getVersion()[0], washoutAnswer));
         assert format == Format.HTML;
         output.write(html, spec.commandLine().getOut());
         return 0;

@@ -14,7 +14,6 @@ import java.util.Set;
 import java.util.concurrent.Callable;
 
 import org.spanlift.atmosphere.Airspeed;
-import org.spanlift.cli.options.Angles;
 import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
@@ -22,6 +21,7 @@ import org.spanlift.cli.options.InputFiles;
 import org.spanlift.cli.options.OffersFormats;
 import org.spanlift.cli.options.OptionNumber;
 import org.spanlift.cli.options.OutputOptions;
+import org.spanlift.cli.options.WashoutOptions;
 import org.spanlift.cli.output.Cautions;
 import org.spanlift.cli.output.Json;
 import org.spanlift.cli.output.TextTable;
@@ -31,9 +31,6 @@ import org.spanlift.cli.plot.Plots;
 import org.spanlift.flight.FlightCondition;
 import org.spanlift.geometry.Wing;
 import org.spanlift.input.InputException;
-import org.spanlift.input.quantity.Quantity;
-import org.spanlift.input.quantity.QuantityFormatException;
-import org.spanlift.input.quantity.QuantityKind;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.stall.MissingSectionDataException;
 import org.spanlift.washout.LeastDragTwist;
@@ -63,31 +60,12 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
     @Parameters(index = "0", paramLabel = "FILE", description = "The wing file (.wing.yaml).")
     Path file;
 
-    @Option(names = "--onset-inboard-of", paramLabel = "CONTROL",
-            description = "Require the stall onset inboard of this control's inner end (an aileron, say).")
-    String inboardOf;
-
-    @Option(names = "--clearance", paramLabel = "DISTANCE",
-            description = "With --onset-inboard-of: by at least this distance (a length with its unit, 0.3m) or "
-                    + "this fraction of the semi-span (a plain number, 0.05).")
-    String clearance;
-
-    @Option(names = "--aileron-margin", paramLabel = "DCL",
-            description = "Require the least aileron section margin (cl_max - cl) at stall onset to be at least this.")
-    String aileronMargin;
-
-    @Option(names = "--ailerons-below-peak",
-            description = "Require every aileron station below its section cl peak at the wing's maximum lift (from "
-                    + "the section lift curves).")
-    boolean belowPeak;
+    @Mixin
+    WashoutOptions washout;
 
     @Option(names = "--cl", paramLabel = "CL", defaultValue = "0.5",
             description = "The cruise CL of the cost (span efficiency and induced drag). Default: ${DEFAULT-VALUE}.")
     String cruise;
-
-    @Option(names = "--between", paramLabel = "FROM:TO", defaultValue = "0:10",
-            description = "The washouts to consider, degrees. Default: ${DEFAULT-VALUE}.")
-    String between;
 
     @Mixin
     OutputOptions output;
@@ -110,13 +88,10 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
         output.check(InputFiles.wing(file));
         FlightOptions.refuse(spec, "washout finds the stall speed itself; give --weight (and --altitude) for it",
                 "--speed", "--true-speed");
-        if (clearance != null && inboardOf == null) {
-            throw new InputException("--clearance", 0, "", "goes with --onset-inboard-of");
-        }
-        double[] range = bounds();
+        double[] range = washout.bounds();
         double cruiseCl = OptionNumber.parse("--cl", cruise);
         Wing wing = WingFileReader.read(file);
-        List<WashoutRequirement> requirements = requirements(wing);
+        List<WashoutRequirement> requirements = washout.requirements(wing);
         double[] deflections = org.spanlift.solve.WingAnalysis.of(wing).deflections(flight.deflections(wing));
         Optional<FlightCondition> condition = flight.condition();
         WashoutDesign.Result result;
@@ -130,66 +105,11 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
         switch (format) {
             case JSON -> output.write(Json.write(json(wing, requirements, result, cruiseCl, leastDrag)),
                     spec.commandLine().getOut());
-            case SVG, PNG -> FigureOutput.write(figure(wing, deflections, requirements, result, cruiseCl, condition),
-                    format, output, spec.commandLine().getOut());
+            case SVG, PNG -> FigureOutput.write(Plots.washoutTrade(wing.name(), result, requirements, cruiseCl,
+                    FigureContext.of(wing, deflections, condition)), format, output, spec.commandLine().getOut());
             default -> output.write(table(wing, requirements, result, cruiseCl, leastDrag), spec.commandLine().getOut());
         }
         return 0;
-    }
-
-    private double[] bounds() {
-        String[] parts = between.split(":", -1);
-        if (parts.length != 2) {
-            throw new InputException("--between", 0, "", "expected FROM:TO in degrees, such as 0:10, got '"
-                    + between.strip() + "'");
-        }
-        double from = Angles.parse("--between", parts[0], "a washout", 20);
-        double to = Angles.parse("--between", parts[1], "a washout", 20);
-        if (!(to > from) || from < -10 || to > 20) {
-            throw new InputException("--between", 0, "", "expected washouts from -10 to 20 degrees, FROM below TO, "
-                    + "got '" + between.strip() + "'");
-        }
-        return new double[] {Math.toRadians(from), Math.toRadians(to)};
-    }
-
-    private List<WashoutRequirement> requirements(Wing wing) {
-        List<WashoutRequirement> r = new ArrayList<>();
-        if (inboardOf != null) {
-            double semi = wing.main().planform().yEnd();
-            double by = 0;
-            if (clearance != null) {
-                String text = clearance.strip();
-                if (Character.isLetter(text.charAt(text.length() - 1))) {
-                    try {
-                        by = Quantity.parse(text, QuantityKind.LENGTH).value();
-                    } catch (QuantityFormatException e) {
-                        throw new InputException("--clearance", 0, "", e.getMessage());
-                    }
-                } else {
-                    by = OptionNumber.parse("--clearance", text) * semi;
-                }
-                if (!(by >= 0 && by < semi)) {
-                    throw new InputException("--clearance", 0, "", "expected a clearance from 0 to the semi-span");
-                }
-            }
-            r.add(new WashoutRequirement.OnsetInboard(inboardOf, by));
-        }
-        if (aileronMargin != null) {
-            double dcl = OptionNumber.parse("--aileron-margin", aileronMargin);
-            if (!(dcl >= 0 && dcl <= 1)) {
-                throw new InputException("--aileron-margin", 0, "", "expected a section margin from 0 to 1, got "
-                        + aileronMargin.strip());
-            }
-            r.add(new WashoutRequirement.AileronMargin(dcl));
-        }
-        if (belowPeak) {
-            r.add(new WashoutRequirement.AileronsBelowPeak());
-        }
-        if (r.isEmpty()) {
-            throw new InputException("washout", 0, "", "give at least one requirement: --onset-inboard-of CONTROL, "
-                    + "--aileron-margin DCL or --ailerons-below-peak");
-        }
-        return r;
     }
 
     private static Map<String, Object> json(Wing wing, List<WashoutRequirement> requirements,
@@ -322,23 +242,6 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
 
     private static String e(OptionalDouble e) {
         return e.isPresent() ? TextTable.fixed(e.getAsDouble(), 4) : "-";
-    }
-
-    private static org.spanlift.cli.plot.Figure figure(Wing wing, double[] deflections,
-            List<WashoutRequirement> requirements, WashoutDesign.Result r, double cruiseCl,
-            Optional<FlightCondition> condition) {
-        List<WashoutPoint> trade = r.trade();
-        double[] w = trade.stream().mapToDouble(p -> Math.toDegrees(p.washout())).toArray();
-        double[] eta = trade.stream().mapToDouble(p -> p.onset().eta()).toArray();
-        boolean ailerons = trade.get(0).onset().aileronMargin().isPresent();
-        Optional<double[]> margin = ailerons ? Optional.of(trade.stream()
-                .mapToDouble(p -> p.onset().aileronMargin().orElseThrow().dcl()).toArray()) : Optional.empty();
-        double[] e = trade.stream().mapToDouble(p -> p.cruiseE().orElse(0)).toArray();
-        OptionalDouble answer = r.washout().map(p -> OptionalDouble.of(Math.toDegrees(p.washout())))
-                .orElse(OptionalDouble.empty());
-        return Plots.washoutTrade(wing.name(), w, eta, margin, e, cruiseCl, answer,
-                String.join("; ", requirements.stream().map(WashoutRequirement::describe).toList()),
-                FigureContext.of(wing, deflections, condition));
     }
 
     @Override

@@ -27,6 +27,7 @@ import org.spanlift.loads.SpanwiseLoads;
 import org.spanlift.stall.MaximumLift;
 import org.spanlift.stall.StallEstimate;
 import org.spanlift.stall.StallStudy;
+import org.spanlift.washout.WashoutDesign;
 
 /**
  * Every scalar result a user can ask for, declared once: key, SI unit, table label, description and how it
@@ -43,6 +44,7 @@ import org.spanlift.stall.StallStudy;
  * <li>{@link #MAX_LIFT}: a maximum lift from the section lift curves, under {@link #MAX_CLEAN}
  * ({@code max_lift.CL}) or {@link #MAX_FLAPS};</li>
  * <li>{@link #STUDY}: the clean-and-flapped stall study (flap increment, stall speeds);</li>
+ * <li>{@link #WASHOUT}: the answer of a washout search ({@code washout.least_deg});</li>
  * <li>{@link #LOADS}: one load case's root loads, under {@link #LOAD_CASE} in {@code compare};</li>
  * <li>{@link #CONTROL}: a control's geometry, under {@code controls.NAME.}.</li>
  * </ul>
@@ -220,6 +222,22 @@ public final class Vocabulary {
             key("assumed_cl_max", FLAG, "cl_max assumed",
                     "true when some section's cl_max was assumed, clean or with flaps", 0, CL_MAX,
                     StallStudy::assumedClMax));
+
+    /** The answer of a washout search. */
+    public static final List<ResultKey<WashoutDesign.Result>> WASHOUT = List.of(
+            key("washout.met", FLAG, "washout meets the requirements",
+                    "true when some washout within the bounds meets every stall requirement", 0, CL_MAX,
+                    WashoutDesign.Result::met),
+            key("washout.least_deg", DEGREE, "least washout meeting them",
+                    "the least washout (root twist minus tip twist) meeting every requirement", 2, CL_MAX,
+                    r -> r.washout().map(p -> (Object) Math.toDegrees(p.washout())).orElse(null)),
+            key("washout.change_deg", DEGREE, "  change to the file's",
+                    "that washout less the file's", 2, CL_MAX,
+                    r -> r.washout().map(p -> (Object) Math.toDegrees(p.change())).orElse(null)),
+            key("washout.cruise_e", NONE, "  e at the cruise CL there", "span efficiency at the cruise CL with it", 4,
+                    CL_MAX, r -> r.washout().flatMap(p -> p.cruiseE().isPresent()
+                            ? java.util.Optional.of((Object) p.cruiseE().getAsDouble()) : java.util.Optional.empty())
+                            .orElse(null)));
 
     /** One load case of the spanwise loads (limit loads unless a safety factor was applied). */
     public static final List<ResultKey<SpanwiseLoads>> LOADS = List.of(

@@ -21,6 +21,9 @@ import org.spanlift.flight.ReynoldsRule;
 import org.spanlift.section.PlainFlap;
 import org.spanlift.solve.LiftCurve;
 import org.spanlift.stall.MaximumLift;
+import org.spanlift.washout.WashoutDesign;
+import org.spanlift.washout.WashoutPoint;
+import org.spanlift.washout.WashoutRequirement;
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.LengthUnit;
@@ -564,17 +567,21 @@ public final class Plots {
     }
 
     /**
-     * The washout trade: the onset station, the aileron margin at onset and the cruise span efficiency against
-     * washout, with the least washout that meets the requirements marked.
-     *
-     * @param washoutDeg  the grid of washouts, degrees
-     * @param eta         the onset station over the semi-span at each
-     * @param margin      the aileron margin at onset at each (NaN-free; empty without ailerons)
-     * @param cruiseE     the span efficiency at the cruise CL at each
-     * @param answerDeg   the least washout meeting the requirements, if any
+     * The washout trade: the onset station, the aileron margin at onset (with ailerons) and the cruise span
+     * efficiency against washout, with the least washout that meets the requirements marked.
      */
-    public static ChartFigure washoutTrade(String wingName, double[] washoutDeg, double[] eta, Optional<double[]> margin,
-            double[] cruiseE, double cruiseCl, OptionalDouble answerDeg, String requirements, FigureContext context) {
+    public static ChartFigure washoutTrade(String wingName, WashoutDesign.Result r,
+            List<WashoutRequirement> requirements, double cruiseCl, FigureContext context) {
+        List<WashoutPoint> trade = r.trade();
+        double[] washoutDeg = trade.stream().mapToDouble(p -> Math.toDegrees(p.washout())).toArray();
+        double[] eta = trade.stream().mapToDouble(p -> p.onset().eta()).toArray();
+        boolean ailerons = trade.get(0).onset().aileronMargin().isPresent();
+        Optional<double[]> margin = ailerons ? Optional.of(trade.stream()
+                .mapToDouble(p -> p.onset().aileronMargin().orElseThrow().dcl()).toArray()) : Optional.empty();
+        double[] cruiseE = trade.stream().mapToDouble(p -> p.cruiseE().orElse(0)).toArray();
+        OptionalDouble answerDeg = r.washout().map(p -> OptionalDouble.of(Math.toDegrees(p.washout())))
+                .orElse(OptionalDouble.empty());
+        String asked = String.join("; ", requirements.stream().map(WashoutRequirement::describe).toList());
         XYChart c = chart("Washout trade: " + wingName, "washout (root twist minus tip twist) [deg]",
                 "onset \u03b7, aileron margin \u0394cl, cruise e");
         XYSeries onset = c.addSeries("stall-onset station \u03b7", washoutDeg, eta);
@@ -597,7 +604,7 @@ public final class Plots {
         }
         String desc = context.sentence() + " The stall-onset station (critical-section method), the least aileron "
                 + "section margin at the onset and the span efficiency at the cruise CL against the washout, root "
-                + "twist minus tip twist, linear from root to tip. Requirements: " + requirements + "." + answer;
+                + "twist minus tip twist, linear from root to tip. Requirements: " + asked + "." + answer;
         return new ChartFigure("washout-trade", desc, c, context.text());
     }
 

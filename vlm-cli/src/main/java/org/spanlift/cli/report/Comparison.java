@@ -14,7 +14,9 @@ import org.spanlift.flight.FlightPoint;
 import org.spanlift.input.Field;
 import org.spanlift.loads.SpanwiseLoads;
 import org.spanlift.stall.StallEstimate;
+import org.spanlift.stall.MaximumLift;
 import org.spanlift.stall.StallStudy;
+import org.spanlift.washout.WashoutDesign;
 import org.spanlift.structure.LoadCase;
 import org.spanlift.vocabulary.ResultKey;
 import org.spanlift.vocabulary.Vocabulary;
@@ -35,10 +37,11 @@ public final class Comparison {
      * @param summary   the wing and its point at the common CL, clean
      * @param stall     its stall study, when its sections give cl_max (or one is assumed)
      * @param loads     the load case's loads, when there is a load case
+     * @param washout   the answer of the washout search, when requirements were given
      * @param notes     why a group of values is missing or how it was obtained
      */
     public record Entry(WingSummary summary, Optional<StallStudy> stall, Optional<SpanwiseLoads> loads,
-            List<String> notes) {
+            Optional<WashoutDesign.Result> washout, List<String> notes) {
 
         public Entry {
             notes = List.copyOf(notes);
@@ -129,6 +132,23 @@ public final class Comparison {
             ResultKey<StallStudy> inc = Vocabulary.find(Vocabulary.STUDY, "flap_increment_CL");
             out.add(new Row(inc.key(), inc, inc.label(), e -> e.stall().map(s -> number(inc.of(s)))
                     .orElse(OptionalDouble.empty())));
+        }
+        if (entries.stream().anyMatch(e -> e.stall().isPresent())) {
+            ResultKey<MaximumLift> top = Vocabulary.find(Vocabulary.MAX_LIFT, "CL");
+            out.add(new Row(Vocabulary.MAX_CLEAN + top.key(), top, top.label() + ", clean", e -> e.stall()
+                    .map(s -> number(top.of(s.clean().maximumLift()))).orElse(OptionalDouble.empty())));
+            if (entries.stream().anyMatch(e -> e.stall().flatMap(StallStudy::flaps).isPresent())) {
+                out.add(new Row(Vocabulary.MAX_FLAPS + top.key(), top, top.label() + ", flaps", e -> e.stall()
+                        .flatMap(StallStudy::flaps).map(f -> number(top.of(f.maximumLift())))
+                        .orElse(OptionalDouble.empty())));
+            }
+        }
+        if (entries.stream().anyMatch(e -> e.washout().isPresent())) {
+            for (ResultKey<WashoutDesign.Result> k : Vocabulary.select(Vocabulary.WASHOUT, "washout.least_deg",
+                    "washout.change_deg", "washout.cruise_e")) {
+                out.add(new Row(k.key(), k, k.label(), e -> e.washout().map(w -> number(k.of(w)))
+                        .orElse(OptionalDouble.empty())));
+            }
         }
         if (condition.isPresent() && entries.stream().anyMatch(e -> e.stall().isPresent())) {
             for (ResultKey<StallStudy> k : Vocabulary.select(Vocabulary.STUDY, "stall_speed.clean_eas",

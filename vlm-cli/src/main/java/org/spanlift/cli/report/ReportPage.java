@@ -14,6 +14,9 @@ import org.spanlift.flight.FlightPoint;
 import org.spanlift.flight.ReynoldsRule;
 import org.spanlift.stall.MaximumLift;
 import org.spanlift.stall.StallEstimate;
+import org.spanlift.washout.WashoutDesign;
+import org.spanlift.washout.WashoutPoint;
+import org.spanlift.washout.WashoutRequirement;
 import org.spanlift.stall.StallStudy;
 import org.spanlift.vocabulary.ResultKey;
 import org.spanlift.vocabulary.Vocabulary;
@@ -58,7 +61,7 @@ public final class ReportPage {
     public record Inputs(WingSummary clean, Optional<WingSummary> flaps, WingSummary fine, Optional<StallStudy> stall,
             Optional<StallStudy> stallFine, String unavailable, Optional<FlightCondition> condition,
             ReynoldsRule reynolds, FigureContext context, List<Double> alphasDeg, List<Double> rangeDeg,
-            DisplayUnits units, String version) {
+            DisplayUnits units, String version, Optional<Washout> washout) {
 
         /** The configuration the figures draw: with flaps when asked, else clean. */
         WingSummary drawn() {
@@ -69,6 +72,16 @@ public final class ReportPage {
         Optional<StallStudy.Configuration> drawnStall() {
             return stall.map(s -> flaps.isPresent() && s.flaps().isPresent() ? s.flaps().get() : s.clean());
         }
+    }
+
+    /**
+     * The washout answer the report shows when asked for.
+     *
+     * @param requirements the requirements
+     * @param result       the search's answer
+     * @param figure       its trade figure
+     */
+    public record Washout(List<WashoutRequirement> requirements, WashoutDesign.Result result, Figure figure) {
     }
 
     public static String build(Inputs in) {
@@ -86,6 +99,7 @@ public final class ReportPage {
         h.caution();
 
         keyResults(h, in);
+        in.washout().ifPresent(w -> washout(h, w, summary.wing()));
         description(h, summary, u);
         h.el("h2", "Figures");
         String drawn = in.flaps().isPresent() ? "The figures show the wing with flaps ("
@@ -158,6 +172,30 @@ public final class ReportPage {
                     stall.map(StallStudy.Configuration::maximumLift), context);
             case POLAR -> Plots.polar(s.analysis(), s.deflections(), rangeDeg, reynolds, context);
         };
+    }
+
+    private static void washout(Html h, Washout w, Wing wing) {
+        h.el("h2", "Washout");
+        WashoutDesign.Result r = w.result();
+        String asked = String.join("; ", w.requirements().stream().map(WashoutRequirement::describe).toList());
+        double file = Math.toDegrees(wing.main().planform().washout());
+        h.el("p", r.washout().map(p -> String.format(Locale.ROOT, "The least washout meeting the requirements (%s) is "
+                + "%.2f degrees (the file's %.2f %+.2f; root twist minus tip twist, linear from root to tip).", asked,
+                Math.toDegrees(p.washout()), file, Math.toDegrees(p.change()))).orElse(String.format(Locale.ROOT,
+                        "No washout from %.1f to %.1f degrees meets the requirements (%s); the slacks below are "
+                                + "read at %.1f degrees.", Math.toDegrees(r.trade().get(0).washout()),
+                        Math.toDegrees(r.atUpper().washout()), asked, Math.toDegrees(r.atUpper().washout()))));
+        WashoutPoint at = r.washout().orElse(r.atUpper());
+        List<List<String>> rows = new ArrayList<>();
+        for (WashoutRequirement q : w.requirements()) {
+            rows.add(List.of(q.describe(), Html.fixed(q.slack(at), 3) + " " + q.unit(), q.slack(at) >= 0 ? "yes" : "no"));
+        }
+        h.table("washout", "Requirements at that washout", List.of("requirement", "slack", "met"), rows);
+        h.raw("<figure id=\"figure-washout-trade\">").line("");
+        h.line(SvgWriter.element(w.figure()));
+        h.raw("<figcaption><b>").text(w.figure().title()).raw(".</b> ").text(w.figure().description())
+                .line("</figcaption>");
+        h.line("</figure>");
     }
 
     /** One row of the clean-and-flapped table: a label and a cell per configuration. */
