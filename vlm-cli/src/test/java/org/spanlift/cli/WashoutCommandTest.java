@@ -90,6 +90,25 @@ class WashoutCommandTest {
     }
 
     @Test
+    void compareAndReportGiveTheSameAnswerAsWashout() {
+        YamlValue w = json(CliRun.of("washout", CliRun.demo("tourer.wing.yaml"), "--aileron-margin", "0.1",
+                "--assume-cl-max=1.4", "--format", "json"));
+        YamlValue cmp = json(CliRun.of("compare", CliRun.demo("tourer.wing.yaml"), CliRun.demo("trainer.wing.yaml"),
+                "--aileron-margin", "0.1", "--assume-cl-max=1.4", "--format", "json"));
+        YamlValue first = ((YamlValue.Sequence) at(cmp, "wings")).items().get(0);
+        double compared = Double.parseDouble(((YamlValue.Scalar) ((YamlValue.Mapping) first).get("washout.least_deg")
+                .orElseThrow()).text());
+        assertEquals(number(w, "washout_deg"), compared, 0);
+        CliRun report = CliRun.of("report", CliRun.demo("tourer.wing.yaml"), "--aileron-margin", "0.1",
+                "--assume-cl-max=1.4", "--output", dir.resolve("r.html").toString());
+        assertEquals(0, report.exitCode(), report.err());
+        String html = Files.readString(dir.resolve("r.html"), StandardCharsets.UTF_8);
+        assertTrue(html.contains(String.format(Locale.ROOT, "is %.2f degrees", number(w, "washout_deg"))),
+                "the report states the same washout");
+        assertTrue(html.contains("figure-washout-trade"), "and draws the trade");
+    }
+
+    @Test
     void theTradeFigureIsDrawn() {
         CliRun svg = CliRun.of("washout", CliRun.demo("tourer.wing.yaml"), "--aileron-margin", "0.1",
                 "--assume-cl-max=1.4", "--format", "svg");
