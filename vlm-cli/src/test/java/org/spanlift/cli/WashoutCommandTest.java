@@ -90,7 +90,7 @@ class WashoutCommandTest {
     }
 
     @Test
-    void compareAndReportGiveTheSameAnswerAsWashout() {
+    void compareAndReportGiveTheSameAnswerAsWashout() throws IOException {
         YamlValue w = json(CliRun.of("washout", CliRun.demo("tourer.wing.yaml"), "--aileron-margin", "0.1",
                 "--assume-cl-max=1.4", "--format", "json"));
         YamlValue cmp = json(CliRun.of("compare", CliRun.demo("tourer.wing.yaml"), CliRun.demo("trainer.wing.yaml"),
