@@ -22,7 +22,6 @@ import org.spanlift.solve.SingularSystemException;
 import org.spanlift.solve.WingAnalysis;
 import org.spanlift.stall.StallStudy;
 import org.spanlift.sweep.Constraint;
-import org.spanlift.sweep.Parameter;
 import org.spanlift.sweep.ParameterPath;
 import org.spanlift.sweep.ResultColumn;
 import org.spanlift.sweep.Sweep;
@@ -34,7 +33,9 @@ import org.spanlift.vocabulary.WingResult;
 /**
  * Evaluates the cases of a sweep into flat rows of named scalar results. Not thread-safe: one per thread.
  *
- * <p>Each case substitutes its values into the base wing tree, reads the wing and builds its lattice. The
+ * <p>Each case computes its derived values from its swept values ({@code Derivation}; a value that is not a
+ * finite number of a wing file's size fails the case, located in the sweep file), substitutes both into the
+ * base wing tree, reads the wing and builds its lattice. The
  * factorized influence systems are kept in a small cache keyed by the lattice geometry (every panel's
  * vortex points, control point, normal and cut-off, compared bit for bit), so when a case changes only
  * what enters the right-hand side (twist, washout, camber, section data, deflections) the factorization is
@@ -80,11 +81,13 @@ public final class CaseEvaluator {
     public CaseResult evaluate(long index) {
         String[] values = sweep.design().values(index);
         String id = CaseResult.id(sweep.parameters(), values);
+        double[] derived = null;
         try {
-            Object[] results = compute(values);
+            derived = sweep.derivation().values(values);
+            Object[] results = compute(sweep.caseTree(values, derived));
             for (int k = 0; k < results.length; k++) {
                 if (results[k] instanceof Double d && !Double.isFinite(d)) {
-                    return failed(index, id, values, "the result " + columns.get(k).name() + " is " + d
+                    return failed(index, id, values, derived, "the result " + columns.get(k).name() + " is " + d
                             + ", not a finite number: the wing with these values is degenerate");
                 }
             }
@@ -95,20 +98,20 @@ public final class CaseEvaluator {
                     feasible &= c.holds(number(results, c.left()), number(results, c.right()));
                 }
             }
-            return new CaseResult(index, id, values, results, feasible, null);
+            return new CaseResult(index, id, values, derived, results, feasible, null);
         } catch (SingularSystemException e) {
-            return failed(index, id, values, "cannot solve this geometry: " + e.getMessage());
+            return failed(index, id, values, derived, "cannot solve this geometry: " + e.getMessage());
         } catch (InputException | RefusedException | ParameterPath.PathException e) {
-            return failed(index, id, values, e.getMessage());
+            return failed(index, id, values, derived, e.getMessage());
         } catch (RuntimeException e) {
-            return failed(index, id, values, "internal error (" + e.getClass().getSimpleName()
+            return failed(index, id, values, derived, "internal error (" + e.getClass().getSimpleName()
                     + (e.getMessage() == null ? "" : ": " + e.getMessage()) + ")");
         }
     }
 
-    private CaseResult failed(long index, String id, String[] values, String message) {
+    private CaseResult failed(long index, String id, String[] values, double[] derived, String message) {
         String m = message.replace(baseFile + ":", sweep.baseName() + ":").replace('\n', ' ').replace('\r', ' ');
-        return new CaseResult(index, id, values, new Object[columns.size()], null, m);
+        return new CaseResult(index, id, values, derived, new Object[columns.size()], null, m);
     }
 
     private Double number(Object[] results, String column) {
@@ -123,12 +126,7 @@ public final class CaseEvaluator {
         return null;
     }
 
-    private Object[] compute(String[] values) {
-        YamlValue tree = sweep.baseTree();
-        List<Parameter> parameters = sweep.parameters();
-        for (int p = 0; p < parameters.size(); p++) {
-            tree = parameters.get(p).path().apply(tree, values[p]);
-        }
+    private Object[] compute(YamlValue tree) {
         Wing wing = WingFileReader.fromTree(tree, baseFile);
         List<ControlSurface> controls = wing.controls();
         int nc = controls.size();
