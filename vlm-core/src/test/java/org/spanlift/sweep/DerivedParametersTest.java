@@ -85,6 +85,22 @@ class DerivedParametersTest {
     }
 
     @Test
+    void theExampleSweepHoldsTheTourersAreaAndSpanInEveryCase() {
+        Sweep s = SweepFileReader.read(Path.of("..", "geometries", "tourer-washout-taper.sweep.yaml"), false);
+        double ft = 0.3048;
+        double area = 34 * 5.6 * 1.5 / 2 * ft * ft;
+        assertEquals(area, s.baseWing().reference().area(), 1e-12 * area, "142.8 ft^2 is the tourer's own area");
+        assertEquals(63, s.design().count());
+        for (long i = 0; i < s.design().count(); i++) {
+            String[] values = s.design().values(i);
+            Wing wing = WingFileReader.fromTree(s.caseTree(values, s.derivation().values(values)),
+                    s.basePath().toString());
+            assertEquals(area, wing.reference().area(), 1e-12 * area, "case " + i);
+            assertEquals(34 * ft, wing.reference().span(), 1e-12, "case " + i);
+        }
+    }
+
+    @Test
     void aStudyVariableSweepsTheAspectRatioAtConstantAreaInALatinHypercube() {
         Sweep s = read("""
                 parameters:
