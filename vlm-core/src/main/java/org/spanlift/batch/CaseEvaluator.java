@@ -2,6 +2,7 @@ package org.spanlift.batch;
 
 import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -15,12 +16,19 @@ import org.spanlift.geometry.Wing;
 import org.spanlift.input.InputException;
 import org.spanlift.input.RefusedException;
 import org.spanlift.input.YamlValue;
+import org.spanlift.io.StructureReader;
 import org.spanlift.io.WingFileReader;
+import org.spanlift.loads.LoadsAnalysis;
+import org.spanlift.loads.SpanwiseLoads;
 import org.spanlift.solve.InfluenceCache;
 import org.spanlift.solve.LiftCurve;
 import org.spanlift.solve.SingularSystemException;
 import org.spanlift.solve.WingAnalysis;
+import org.spanlift.stall.MissingSectionDataException;
 import org.spanlift.stall.StallStudy;
+import org.spanlift.stall.StripLimits;
+import org.spanlift.structure.LoadCase;
+import org.spanlift.structure.WingStructure;
 import org.spanlift.sweep.Constraint;
 import org.spanlift.sweep.ParameterPath;
 import org.spanlift.sweep.ResultColumn;
@@ -53,6 +61,7 @@ public final class CaseEvaluator {
     private final List<ResultColumn> columns;
     private final boolean wantStall;
     private final boolean wantFlaps;
+    private final boolean wantLoads;
     private final InfluenceCache cache = new InfluenceCache(CACHE_SIZE);
 
     public CaseEvaluator(Sweep sweep) {
@@ -61,6 +70,7 @@ public final class CaseEvaluator {
         this.columns = sweep.columns();
         this.wantStall = columns.stream().anyMatch(ResultColumn::needsClMax);
         this.wantFlaps = columns.stream().anyMatch(ResultColumn::needsFlaps);
+        this.wantLoads = columns.stream().anyMatch(ResultColumn::needsLoadCase);
     }
 
     /** Factorizations done so far by this evaluator (for measurements). */
@@ -154,6 +164,7 @@ public final class CaseEvaluator {
 
         Object[] out = new Object[columns.size()];
         Map<String, FlightPoint> points = new HashMap<>();
+        SpanwiseLoads loads = wantLoads ? loads(tree, wing, analysis, clean) : null;
         for (int k = 0; k < columns.size(); k++) {
             ResultColumn col = columns.get(k);
             out[k] = switch (col.group()) {
@@ -167,9 +178,35 @@ public final class CaseEvaluator {
                 case CONTROL -> value(col, ControlGeometry.of(wing, wing.control(col.control()).orElseThrow(
                         () -> new InputException(baseFile, 0, "controls", "the wing has no control named '"
                                 + col.control() + "'"))));
+                case LOADS -> value(col, loads);
             };
         }
         return out;
+    }
+
+    /**
+     * The loads of the sweep's load case on the case's wing, clean, with the structure of the case's tree (as
+     * {@code compare} gives them). A case that needs more wing lift than the stall onset gives cannot be flown
+     * at that speed and fails, as {@code loads} refuses it; without cl-max data the onset is not checked.
+     */
+    private SpanwiseLoads loads(YamlValue tree, Wing wing, WingAnalysis analysis, double[] clean) {
+        LoadCase loadCase = sweep.loadCase().orElseThrow();
+        WingStructure structure = StructureReader.fromTree(tree, baseFile, wing);
+        LoadsAnalysis la = LoadsAnalysis.of(analysis, structure, clean);
+        SpanwiseLoads l = la.loads(loadCase);
+        StripLimits limits;
+        try {
+            limits = StripLimits.of(wing, analysis.lattice(), clean, sweep.assumeClMax());
+        } catch (MissingSectionDataException e) {
+            return l;
+        }
+        double onset = la.stallOnsetLift(loadCase, limits);
+        if (LoadsAnalysis.beyondStall(l, onset)) {
+            throw new RefusedException(String.format(Locale.ROOT, "the load case needs a wing CL of %.3f, above the "
+                    + "stall onset %.3f: it cannot be flown at that speed (no loads.* values)", l.liftCoefficient(),
+                    onset));
+        }
+        return l;
     }
 
     /** The column's value from its source (the column's group says which source type it reads). */

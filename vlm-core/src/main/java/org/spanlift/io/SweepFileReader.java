@@ -15,6 +15,7 @@ import java.util.LinkedHashMap;
 import java.util.HexFormat;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -47,6 +48,7 @@ import org.spanlift.sweep.Ranking;
 import org.spanlift.sweep.ResultColumn;
 import org.spanlift.sweep.Sweep;
 import org.spanlift.stall.MissingSectionDataException;
+import org.spanlift.structure.LoadCase;
 import org.spanlift.stall.StripLimits;
 
 /**
@@ -61,7 +63,8 @@ public final class SweepFileReader {
     public static final long MAX_CASES_WITHOUT_FORCE = 10_000_000L;
 
     static final Set<String> TOP_KEYS = Set.of("base", "parameters", "design", "flight", "points", "columns",
-            "constraints", "rank", "assume-cl-max", "names", "constants", "derived");
+            "constraints", "rank", "assume-cl-max", "names", "constants", "derived", "load-case");
+    static final Set<String> LOAD_CASE_KEYS = Set.of("speed", "load-factor");
     static final Set<String> RANGE_KEYS = Set.of("from", "to", "step");
     static final Set<String> DESIGN_KEYS = Set.of("kind", "cases", "seed");
     static final Set<String> FLIGHT_KEYS = Set.of("weight", "altitude", "isa-offset", "load-factor", "flaps");
@@ -246,9 +249,10 @@ public final class SweepFileReader {
             columns.add(ResultColumn.parse(ResultColumn.ASSUMED_CL_MAX, controls));
         }
         refuseColumnsNamedAsPaths(columnsField, names, parameters, derivation);
+        Optional<LoadCase> loadCase = loadCase(root, columnsField, columns, condition, altitude, baseTree, baseWing);
         return new Sweep(file, baseName, basePath, baseTree, baseWing, parameters, derivation, design, columns,
                 constraints,
-                Optional.ofNullable(ranking), condition, flaps, assume, fingerprint(text, baseText));
+                Optional.ofNullable(ranking), condition, flaps, assume, loadCase, fingerprint(text, baseText));
     }
 
 
@@ -544,6 +548,45 @@ public final class SweepFileReader {
         } catch (ParameterPath.PathException e) {
             throw new InputException(at.file(), at.line(), at.field(), e.getMessage());
         }
+    }
+
+    /**
+     * The load case of the {@code loads.*} columns: {@code load-case: {speed, load-factor}} with the flight's
+     * weight and pressure altitude. The columns need it, the flight's weight, a {@code structure} section in
+     * the base wing file and a mirrored first surface; a load case without such a column is refused.
+     */
+    private static Optional<LoadCase> loadCase(Field root, Field columnsField, List<ResultColumn> columns,
+            Optional<FlightCondition> condition, double altitude, YamlValue baseTree, Wing baseWing) {
+        boolean wanted = columns.stream().anyMatch(ResultColumn::needsLoadCase);
+        Optional<Field> field = root.optional("load-case");
+        if (field.isEmpty()) {
+            if (wanted) {
+                throw columnsField.error("loads.* columns need a load case: add load-case: {speed: 110kt, "
+                        + "load-factor: 3.8} (and the weight under flight)");
+            }
+            return Optional.empty();
+        }
+        Field lc = field.get();
+        lc.allowOnly(LOAD_CASE_KEYS);
+        if (!wanted) {
+            throw lc.error("a load case serves the loads.* columns (such as loads.root.bending); add one, or leave "
+                    + "load-case out");
+        }
+        double speed = Quantities.speed(lc.required("speed", "the equivalent airspeed with a unit, such as 110kt"));
+        double n = lc.optional("load-factor").map(f -> f.inRange(-CasesReader.MAX_LOAD_FACTOR,
+                CasesReader.MAX_LOAD_FACTOR)).orElse(1.0);
+        if (condition.isEmpty()) {
+            throw lc.error("a load case needs the aircraft's weight: add flight: {weight: ...} (such as 1100kg)");
+        }
+        if (!(baseTree instanceof YamlValue.Mapping m && m.get("structure").isPresent())) {
+            throw columnsField.error("loads.* columns need a structure section in the base wing file (its masses give "
+                    + "the inertia relief)");
+        }
+        if (!baseWing.main().mirrored()) {
+            throw columnsField.error("loads.* columns need a mirrored first surface: loads are computed per half-wing");
+        }
+        return Optional.of(new LoadCase(String.format(Locale.ROOT, "n %s at %s m/s EAS", Field.format(n),
+                Field.brief(speed)), condition.get().weight(), n, speed, altitude, "given"));
     }
 
     /**

@@ -8,6 +8,7 @@ import java.util.OptionalDouble;
 import org.spanlift.flight.FlightCondition;
 import org.spanlift.geometry.Wing;
 import org.spanlift.input.YamlValue;
+import org.spanlift.structure.LoadCase;
 
 /**
  * A sweep, as its file describes it: the base wing (its tree, to substitute parameter values into), the
@@ -29,12 +30,13 @@ import org.spanlift.input.YamlValue;
  * @param condition   the flight condition, when a weight is given
  * @param flapsDeg    the flap deflection of the flapped configuration, degrees (else the base file's)
  * @param assumeClMax the cl_max assumed for sections that give none, if asked
+ * @param loadCase    the load case of the {@code loads.*} columns, if asked
  * @param fingerprint SHA-256 of the sweep file and the base wing file: a run's output belongs to it
  */
 public record Sweep(String file, String baseName, Path basePath, YamlValue baseTree, Wing baseWing,
         List<Parameter> parameters, Derivation derivation, Design design, List<ResultColumn> columns, List<Constraint> constraints,
         Optional<Ranking> ranking, Optional<FlightCondition> condition, OptionalDouble flapsDeg,
-        OptionalDouble assumeClMax, String fingerprint) {
+        OptionalDouble assumeClMax, Optional<LoadCase> loadCase, String fingerprint) {
 
     public Sweep {
         parameters = List.copyOf(parameters);

@@ -85,6 +85,7 @@ class HostileFilesTest {
             bad-sweeps/flight-isa-offset-huge.sweep.yaml |                                    | 5  | flight.isa-offset   | a temperature offset from the standard atmosphere must be from -100 K to 100 K, got "1e200K"
             bad-sweeps/flight-weight-huge.sweep.yaml     |                                    | 5  | flight.weight       | a weight must be from 0.01 N to 1e7 N (about 1 g to 1000 t as a mass), got "1e307kg"
             bad-sweeps/from-huge.sweep.yaml              |                                    | 3  | parameters.surfaces.wing.trapezoid.washout.from | is -1e200; expected 0 or a number from 1e-12 to 1e12 in size (either sign)
+            bad-sweeps/load-case-speed-huge.sweep.yaml   |                                    | 5  | load-case.speed     | a speed must be from 0.1 m/s to 1000 m/s (about 0.19 kt to 1944 kt), got "1e200kt"
             bad-sweeps/lhs-cases-overflow.sweep.yaml     |                                    | 5  | design.cases        | expected a finite number, got 1e999 (beyond the range of numbers, about 1.8e308)
             bad-sweeps/parameter-list-empty.sweep.yaml   |                                    | 3  | parameters.surfaces.wing.trapezoid.taper | expected at least one value
             bad-sweeps/points-empty-list.sweep.yaml      |                                    | 5  | points.alpha        | expected from 1 to 100 values, got 0
