@@ -216,6 +216,10 @@ public final class SweepCommand implements Callable<Integer> {
             }
             err.println("  " + Cautions.SWEEP);
         }
+        if (sweep.columns().stream().anyMatch(ResultColumn::needsLoadCase)) {
+            err.println("  load case: " + sweep.loadCase().orElseThrow().name() + ", clean");
+            err.println("  " + Cautions.SWEEP_LOADS);
+        }
         err.flush();
     }
 

@@ -36,6 +36,8 @@ class VocabularyOutputsTest {
     private static final double CL = 0.5;
     private static final String WEIGHT = "750kg";
     private static final String FLAPS = "20";
+    private static final String LOAD_FACTOR = "3.8";
+    private static final String LOAD_SPEED = "110kt";
 
     @TempDir
     static Path dir;
@@ -68,9 +70,11 @@ class VocabularyOutputsTest {
         for (ControlSurface c : wing.controls()) {
             Vocabulary.CONTROL.forEach(k -> columns.add(Vocabulary.CONTROLS + c.name() + "." + k.key()));
         }
+        Vocabulary.LOADS.forEach(k -> columns.add(Vocabulary.LOAD_CASE + k.key()));
         StringBuilder sweep = new StringBuilder("base: w.wing.yaml\n"
                 + "parameters:\n  surfaces.wing.controls.aileron.deflection: [0]\n"
-                + "flight: {weight: " + WEIGHT + ", flaps: " + FLAPS + "}\ncolumns:\n");
+                + "flight: {weight: " + WEIGHT + ", flaps: " + FLAPS + "}\n"
+                + "load-case: {speed: " + LOAD_SPEED + ", load-factor: " + LOAD_FACTOR + "}\ncolumns:\n");
         columns.forEach(c -> sweep.append("  - \"").append(c).append("\"\n"));
         Path sweepFile = Files.writeString(dir.resolve("all.sweep.yaml"), sweep.toString());
         Path out = dir.resolve("all.csv");
@@ -152,9 +156,20 @@ class VocabularyOutputsTest {
     }
 
     @Test
+    void everyLoadKeyInTheSweepEqualsLoadsInTheSameCase() {
+        String wingFile = dir.resolve("w.wing.yaml").toString();
+        YamlValue loads = json(CliRun.of("loads", wingFile, "--weight", WEIGHT, "--load-factor", LOAD_FACTOR,
+                "--speed", LOAD_SPEED, "--format", "json"));
+        YamlValue firstCase = at(loads, "cases.0");
+        for (ResultKey<?> k : Vocabulary.LOADS) {
+            same(k, at(firstCase, k.key()), sweepRow.get(Vocabulary.LOAD_CASE + k.key()));
+        }
+    }
+
+    @Test
     void everyLoadKeyIsInTheLoadsOutputAndCompareAgrees() {
         String wingFile = dir.resolve("w.wing.yaml").toString();
-        String[] loadCase = {"--weight", WEIGHT, "--load-factor", "3.8", "--speed", "110kt"};
+        String[] loadCase = {"--weight", WEIGHT, "--load-factor", LOAD_FACTOR, "--speed", LOAD_SPEED};
         YamlValue loads = json(CliRun.of("loads", wingFile, loadCase[0], loadCase[1], loadCase[2], loadCase[3],
                 loadCase[4], loadCase[5], "--format", "json"));
         YamlValue both = json(CliRun.of("compare", wingFile, wingFile, loadCase[0], loadCase[1], loadCase[2],

@@ -2,6 +2,7 @@ package org.spanlift.batch;
 
 import java.util.HashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -15,14 +16,20 @@ import org.spanlift.geometry.Wing;
 import org.spanlift.input.InputException;
 import org.spanlift.input.RefusedException;
 import org.spanlift.input.YamlValue;
+import org.spanlift.io.StructureReader;
 import org.spanlift.io.WingFileReader;
+import org.spanlift.loads.LoadsAnalysis;
+import org.spanlift.loads.SpanwiseLoads;
 import org.spanlift.solve.InfluenceCache;
 import org.spanlift.solve.LiftCurve;
 import org.spanlift.solve.SingularSystemException;
 import org.spanlift.solve.WingAnalysis;
+import org.spanlift.stall.MissingSectionDataException;
 import org.spanlift.stall.StallStudy;
+import org.spanlift.stall.StripLimits;
+import org.spanlift.structure.LoadCase;
+import org.spanlift.structure.WingStructure;
 import org.spanlift.sweep.Constraint;
-import org.spanlift.sweep.Parameter;
 import org.spanlift.sweep.ParameterPath;
 import org.spanlift.sweep.ResultColumn;
 import org.spanlift.sweep.Sweep;
@@ -34,7 +41,9 @@ import org.spanlift.vocabulary.WingResult;
 /**
  * Evaluates the cases of a sweep into flat rows of named scalar results. Not thread-safe: one per thread.
  *
- * <p>Each case substitutes its values into the base wing tree, reads the wing and builds its lattice. The
+ * <p>Each case computes its derived values from its swept values ({@code Derivation}; a value that is not a
+ * finite number of a wing file's size fails the case, located in the sweep file), substitutes both into the
+ * base wing tree, reads the wing and builds its lattice. The
  * factorized influence systems are kept in a small cache keyed by the lattice geometry (every panel's
  * vortex points, control point, normal and cut-off, compared bit for bit), so when a case changes only
  * what enters the right-hand side (twist, washout, camber, section data, deflections) the factorization is
@@ -52,6 +61,7 @@ public final class CaseEvaluator {
     private final List<ResultColumn> columns;
     private final boolean wantStall;
     private final boolean wantFlaps;
+    private final boolean wantLoads;
     private final InfluenceCache cache = new InfluenceCache(CACHE_SIZE);
 
     public CaseEvaluator(Sweep sweep) {
@@ -60,6 +70,7 @@ public final class CaseEvaluator {
         this.columns = sweep.columns();
         this.wantStall = columns.stream().anyMatch(ResultColumn::needsClMax);
         this.wantFlaps = columns.stream().anyMatch(ResultColumn::needsFlaps);
+        this.wantLoads = columns.stream().anyMatch(ResultColumn::needsLoadCase);
     }
 
     /** Factorizations done so far by this evaluator (for measurements). */
@@ -80,11 +91,13 @@ public final class CaseEvaluator {
     public CaseResult evaluate(long index) {
         String[] values = sweep.design().values(index);
         String id = CaseResult.id(sweep.parameters(), values);
+        double[] derived = null;
         try {
-            Object[] results = compute(values);
+            derived = sweep.derivation().values(values);
+            Object[] results = compute(sweep.caseTree(values, derived));
             for (int k = 0; k < results.length; k++) {
                 if (results[k] instanceof Double d && !Double.isFinite(d)) {
-                    return failed(index, id, values, "the result " + columns.get(k).name() + " is " + d
+                    return failed(index, id, values, derived, "the result " + columns.get(k).name() + " is " + d
                             + ", not a finite number: the wing with these values is degenerate");
                 }
             }
@@ -95,20 +108,20 @@ public final class CaseEvaluator {
                     feasible &= c.holds(number(results, c.left()), number(results, c.right()));
                 }
             }
-            return new CaseResult(index, id, values, results, feasible, null);
+            return new CaseResult(index, id, values, derived, results, feasible, null);
         } catch (SingularSystemException e) {
-            return failed(index, id, values, "cannot solve this geometry: " + e.getMessage());
+            return failed(index, id, values, derived, "cannot solve this geometry: " + e.getMessage());
         } catch (InputException | RefusedException | ParameterPath.PathException e) {
-            return failed(index, id, values, e.getMessage());
+            return failed(index, id, values, derived, e.getMessage());
         } catch (RuntimeException e) {
-            return failed(index, id, values, "internal error (" + e.getClass().getSimpleName()
+            return failed(index, id, values, derived, "internal error (" + e.getClass().getSimpleName()
                     + (e.getMessage() == null ? "" : ": " + e.getMessage()) + ")");
         }
     }
 
-    private CaseResult failed(long index, String id, String[] values, String message) {
+    private CaseResult failed(long index, String id, String[] values, double[] derived, String message) {
         String m = message.replace(baseFile + ":", sweep.baseName() + ":").replace('\n', ' ').replace('\r', ' ');
-        return new CaseResult(index, id, values, new Object[columns.size()], null, m);
+        return new CaseResult(index, id, values, derived, new Object[columns.size()], null, m);
     }
 
     private Double number(Object[] results, String column) {
@@ -123,12 +136,7 @@ public final class CaseEvaluator {
         return null;
     }
 
-    private Object[] compute(String[] values) {
-        YamlValue tree = sweep.baseTree();
-        List<Parameter> parameters = sweep.parameters();
-        for (int p = 0; p < parameters.size(); p++) {
-            tree = parameters.get(p).path().apply(tree, values[p]);
-        }
+    private Object[] compute(YamlValue tree) {
         Wing wing = WingFileReader.fromTree(tree, baseFile);
         List<ControlSurface> controls = wing.controls();
         int nc = controls.size();
@@ -156,6 +164,7 @@ public final class CaseEvaluator {
 
         Object[] out = new Object[columns.size()];
         Map<String, FlightPoint> points = new HashMap<>();
+        SpanwiseLoads loads = wantLoads ? loads(tree, wing, analysis, clean) : null;
         for (int k = 0; k < columns.size(); k++) {
             ResultColumn col = columns.get(k);
             out[k] = switch (col.group()) {
@@ -169,9 +178,35 @@ public final class CaseEvaluator {
                 case CONTROL -> value(col, ControlGeometry.of(wing, wing.control(col.control()).orElseThrow(
                         () -> new InputException(baseFile, 0, "controls", "the wing has no control named '"
                                 + col.control() + "'"))));
+                case LOADS -> value(col, loads);
             };
         }
         return out;
+    }
+
+    /**
+     * The loads of the sweep's load case on the case's wing, clean, with the structure of the case's tree (as
+     * {@code compare} gives them). A case that needs more wing lift than the stall onset gives cannot be flown
+     * at that speed and fails, as {@code loads} refuses it; without cl-max data the onset is not checked.
+     */
+    private SpanwiseLoads loads(YamlValue tree, Wing wing, WingAnalysis analysis, double[] clean) {
+        LoadCase loadCase = sweep.loadCase().orElseThrow();
+        WingStructure structure = StructureReader.fromTree(tree, baseFile, wing);
+        LoadsAnalysis la = LoadsAnalysis.of(analysis, structure, clean);
+        SpanwiseLoads l = la.loads(loadCase);
+        StripLimits limits;
+        try {
+            limits = StripLimits.of(wing, analysis.lattice(), clean, sweep.assumeClMax());
+        } catch (MissingSectionDataException e) {
+            return l;
+        }
+        double onset = la.stallOnsetLift(loadCase, limits);
+        if (LoadsAnalysis.beyondStall(l, onset)) {
+            throw new RefusedException(String.format(Locale.ROOT, "the load case needs a wing CL of %.3f, above the "
+                    + "stall onset %.3f: it cannot be flown at that speed (no loads.* values)", l.liftCoefficient(),
+                    onset));
+        }
+        return l;
     }
 
     /** The column's value from its source (the column's group says which source type it reads). */

@@ -12,9 +12,12 @@ import java.util.List;
  * results (aligned with the sweep's columns; a {@code Double}, a {@code Boolean} flag, or null where a value
  * does not exist, such as e near zero lift) or the error that stopped it.
  *
+ * @param derived  the case's derived values in the sweep's entry order (empty without derived entries), or null
+ *                 when they could not be computed (the error says why)
  * @param feasible whether the case meets every constraint; null without constraints or when it failed
  */
-public record CaseResult(long index, String id, String[] values, Object[] results, Boolean feasible, String error) {
+public record CaseResult(long index, String id, String[] values, double[] derived, Object[] results, Boolean feasible,
+        String error) {
 
     /** Hex digits of a case id (64 bits of SHA-256). */
     public static final int ID_LENGTH = 16;
@@ -24,11 +27,12 @@ public record CaseResult(long index, String id, String[] values, Object[] result
     }
 
     /**
-     * The stable id of a case: the first 64 bits of SHA-256 over {@code path=value} lines, one per parameter,
-     * so it depends on the parameter values alone (not on the case's index or the design).
+     * The stable id of a case: the first 64 bits of SHA-256 over {@code key=value} lines, one per parameter
+     * (the key is its path, or a study variable's name), so it depends on the parameter values alone (not on
+     * the case's index, the design or the derived values, which follow from them).
      */
     public static String id(List<Parameter> parameters, String[] values) {
-        return id(parameters.stream().map(p -> p.path().text()).toArray(String[]::new), values);
+        return id(parameters.stream().map(Parameter::key).toArray(String[]::new), values);
     }
 
     /**

@@ -9,10 +9,14 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.HashSet;
+import java.util.LinkedHashMap;
 import java.util.HexFormat;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Locale;
+import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
@@ -28,19 +32,23 @@ import org.spanlift.input.InputException;
 import org.spanlift.input.TextFile;
 import org.spanlift.input.YamlParser;
 import org.spanlift.input.YamlValue;
+import org.spanlift.input.quantity.Decimal;
 import org.spanlift.input.quantity.Quantity;
 import org.spanlift.input.quantity.QuantityFormatException;
 import org.spanlift.input.quantity.PhysicalRange;
 import org.spanlift.input.quantity.QuantityKind;
 import org.spanlift.lattice.LatticeBuilder;
 import org.spanlift.sweep.Constraint;
+import org.spanlift.sweep.Derivation;
 import org.spanlift.sweep.Design;
+import org.spanlift.sweep.Expression;
 import org.spanlift.sweep.Parameter;
 import org.spanlift.sweep.ParameterPath;
 import org.spanlift.sweep.Ranking;
 import org.spanlift.sweep.ResultColumn;
 import org.spanlift.sweep.Sweep;
 import org.spanlift.stall.MissingSectionDataException;
+import org.spanlift.structure.LoadCase;
 import org.spanlift.stall.StripLimits;
 
 /**
@@ -55,7 +63,8 @@ public final class SweepFileReader {
     public static final long MAX_CASES_WITHOUT_FORCE = 10_000_000L;
 
     static final Set<String> TOP_KEYS = Set.of("base", "parameters", "design", "flight", "points", "columns",
-            "constraints", "rank", "assume-cl-max");
+            "constraints", "rank", "assume-cl-max", "names", "constants", "derived", "load-case");
+    static final Set<String> LOAD_CASE_KEYS = Set.of("speed", "load-factor");
     static final Set<String> RANGE_KEYS = Set.of("from", "to", "step");
     static final Set<String> DESIGN_KEYS = Set.of("kind", "cases", "seed");
     static final Set<String> FLIGHT_KEYS = Set.of("weight", "altitude", "isa-offset", "load-factor", "flaps");
@@ -72,6 +81,8 @@ public final class SweepFileReader {
     static final long MAX_RANGE_VALUES = 1_000_000_000L;
     /** Most angles or lift coefficients under points. */
     static final int MAX_POINTS = 100;
+    /** Most entries under each of names, constants and derived. */
+    static final int MAX_DERIVED_ENTRIES = 100;
 
     private SweepFileReader() {
     }
@@ -119,6 +130,7 @@ public final class SweepFileReader {
         if (parameters.isEmpty()) {
             throw paramsField.error("expected at least one parameter");
         }
+        Derivation derivation = derivation(root, baseTree, parameters);
 
         Design design = design(root, paramsField, parameters, force);
 
@@ -231,23 +243,32 @@ public final class SweepFileReader {
             throw columnsField.error("stall_flaps columns need a control of kind flap; the base wing has none");
         }
         if (stall && assume.isEmpty()) {
-            requireClMax(columnsField, baseName, basePath, baseWing, baseTree, parameters, design);
+            requireClMax(columnsField, baseName, basePath, baseWing, baseTree, parameters, derivation, design);
         }
         if (stall && assume.isPresent() && !names.contains(ResultColumn.ASSUMED_CL_MAX)) {
             columns.add(ResultColumn.parse(ResultColumn.ASSUMED_CL_MAX, controls));
         }
-        return new Sweep(file, baseName, basePath, baseTree, baseWing, parameters, design, columns, constraints,
-                Optional.ofNullable(ranking), condition, flaps, assume, fingerprint(text, baseText));
+        refuseColumnsNamedAsPaths(columnsField, names, parameters, derivation);
+        Optional<LoadCase> loadCase = loadCase(root, columnsField, columns, condition, altitude, baseTree, baseWing);
+        return new Sweep(file, baseName, basePath, baseTree, baseWing, parameters, derivation, design, columns,
+                constraints,
+                Optional.ofNullable(ranking), condition, flaps, assume, loadCase, fingerprint(text, baseText));
     }
 
 
     private static Parameter parameter(Field p, YamlValue baseTree) {
         String pathText = p.path().substring("parameters.".length());
-        ParameterPath path;
-        try {
-            path = ParameterPath.parse(pathText, WingSchema.ROOT);
-        } catch (ParameterPath.PathException e) {
-            throw p.error(e.getMessage());
+        String variable = isVariable(pathText) ? pathText : null;
+        ParameterPath path = null;
+        if (variable != null && Expression.FUNCTIONS.containsKey(variable)) {
+            throw p.error(variable + " is a function of the expressions; choose another name for the study variable");
+        }
+        if (variable == null) {
+            try {
+                path = ParameterPath.parse(pathText, WingSchema.ROOT);
+            } catch (ParameterPath.PathException e) {
+                throw p.error(e.getMessage());
+            }
         }
         Parameter parameter;
         if (p.value() instanceof YamlValue.Sequence) {
@@ -258,6 +279,9 @@ public final class SweepFileReader {
                     throw item.error("expected a plain value (a number or a word), got " + item.value().describe());
                 }
                 String v = item.text().trim();
+                if (variable != null && !Decimal.matches(v)) {
+                    throw item.error("a study variable takes numbers; got " + item.value().describe());
+                }
                 if (!seen.add(v)) {
                     throw item.error("the value " + v + " is listed twice");
                 }
@@ -266,7 +290,8 @@ public final class SweepFileReader {
             if (values.isEmpty()) {
                 throw p.error("expected at least one value");
             }
-            parameter = Parameter.ofList(path, p.line(), values);
+            parameter = variable != null ? Parameter.ofList(variable, p.line(), values)
+                    : Parameter.ofList(path, p.line(), values);
         } else if (p.value() instanceof YamlValue.Mapping) {
             p.allowOnly(RANGE_KEYS);
             Field fromField = p.required("from", "the first value of the range");
@@ -292,18 +317,302 @@ public final class SweepFileReader {
             } else if (to.compareTo(from) < 0) {
                 throw toField.error("must not be below 'from' (" + fromField.text() + ") in a range without a step");
             }
-            parameter = Parameter.ofRange(path, p.line(), from, to, step);
+            parameter = variable != null ? Parameter.ofRange(variable, p.line(), from, to, step)
+                    : Parameter.ofRange(path, p.line(), from, to, step);
         } else {
             throw p.error("expected a list of values or a range {from: ..., to: ..., step: ...}, got "
                     + p.value().describe());
         }
         String first = parameter.hasStep() || !parameter.isRange() ? parameter.gridValue(0) : parameter.sample(0);
         try {
-            path.apply(baseTree, first);
+            parameter.apply(baseTree, first);
         } catch (ParameterPath.PathException e) {
             throw p.error(e.getMessage());
         }
         return parameter;
+    }
+
+    /**
+     * The derived entries with the names and constants their expressions use. Every name is a constant, a
+     * swept parameter (its value in each case) or a value the base file gives at a path that is not swept
+     * (fixed); no name may stand for a derived path, so derived values depend on no other derived value.
+     * Parts of an expression that use fixed values only are evaluated now, and a failure there refused.
+     */
+    private static Derivation derivation(Field root, YamlValue baseTree, List<Parameter> parameters) {
+        Optional<Field> derivedField = root.optional("derived");
+        Optional<Field> namesField = root.optional("names");
+        Optional<Field> constantsField = root.optional("constants");
+        String units = baseTree instanceof YamlValue.Mapping m && m.get("units").orElse(null)
+                instanceof YamlValue.Scalar u ? u.text().trim() : "the file's unit";
+        Map<String, Parameter> swept = new HashMap<>();
+        Map<String, Integer> sweptIndex = new HashMap<>();
+        for (int p = 0; p < parameters.size(); p++) {
+            Parameter parameter = parameters.get(p);
+            if (parameter.isVariable()) {
+                continue;
+            }
+            String place = placeOf(parameter.path(), baseTree,
+                    new InputException(root.file(), parameter.line(), "parameters." + parameter.path().text(), ""));
+            Parameter same = swept.put(place, parameter);
+            if (same != null) {
+                throw new InputException(root.file(), parameter.line(), "parameters." + parameter.path().text(),
+                        "names the same value as the parameter " + same.path().text() + "; sweep it once");
+            }
+            sweptIndex.put(place, p);
+        }
+
+        if (derivedField.isEmpty()) {
+            for (Optional<Field> f : List.of(namesField, constantsField)) {
+                if (f.isPresent()) {
+                    throw f.get().error("names and constants serve the expressions of derived entries; add "
+                            + "derived, or leave this out");
+                }
+            }
+            for (Parameter p : parameters) {
+                if (p.isVariable()) {
+                    throw unusedVariable(root, p);
+                }
+            }
+            return Derivation.none();
+        }
+        List<Field> derivedEntries = bounded(derivedField.get(), "derived",
+                "a mapping from wing-file paths to expressions, such as surfaces.wing.trapezoid.root-chord: "
+                + "2 * area / (span * (1 + taper))");
+        Map<String, String> derivedPlaces = new HashMap<>();
+        List<ParameterPath> derivedPaths = new ArrayList<>();
+        for (Field d : derivedEntries) {
+            ParameterPath path = wingPath(d, d.path().substring("derived.".length()));
+            try {
+                path.apply(baseTree, "1");
+            } catch (ParameterPath.PathException e) {
+                throw d.error(e.getMessage());
+            }
+            String place = placeOf(path, baseTree, d.error(""));
+            if (swept.containsKey(place)) {
+                throw d.error("this value is also swept (parameters." + swept.get(place).path().text() + "); a value "
+                        + "is either swept or derived");
+            }
+            String other = derivedPlaces.put(place, path.text());
+            if (other != null) {
+                throw d.error("names the same value as the derived entry " + other + "; derive it once");
+            }
+            derivedPaths.add(path);
+        }
+
+        Map<String, Integer> slots = new LinkedHashMap<>();
+        List<String> slotNames = new ArrayList<>();
+        List<Integer> parameterOf = new ArrayList<>();
+        List<Double> fixed = new ArrayList<>();
+        for (int p = 0; p < parameters.size(); p++) {
+            if (parameters.get(p).isVariable()) {
+                slots.put(parameters.get(p).key(), slots.size());
+                slotNames.add(parameters.get(p).key());
+                parameterOf.add(p);
+                fixed.add(0.0);
+            }
+        }
+        String unitsNote = "every name stands for a number in the base wing file's own units (" + units
+                + " for lengths, degrees for angles)";
+        if (constantsField.isPresent()) {
+            for (Field c : bounded(constantsField.get(), "constants", "a mapping from names to numbers")) {
+                String name = declaredName(c, "constants.", slots);
+                if (!(c.value() instanceof YamlValue.Scalar s) || !s.plain() || !Decimal.matches(s.text())) {
+                    throw c.error("expected a plain number, got " + c.value().describe() + "; constants take no unit: "
+                            + unitsNote);
+                }
+                slots.put(name, slots.size());
+                slotNames.add(name);
+                parameterOf.add(-1);
+                fixed.add(c.number());
+            }
+        }
+        if (namesField.isPresent()) {
+            for (Field n : bounded(namesField.get(), "names", "a mapping from names to wing-file paths, such as "
+                    + "taper: surfaces.wing.trapezoid.taper")) {
+                String name = declaredName(n, "names.", slots);
+                ParameterPath path = wingPath(n, n.text());
+                String place = placeOf(path, baseTree, n.error(""));
+                if (derivedPlaces.containsKey(place)) {
+                    throw n.error("names the derived value " + derivedPlaces.get(place) + "; expressions use swept "
+                            + "values, values of the base file and constants, never derived values");
+                }
+                Integer p = sweptIndex.get(place);
+                double value = 0;
+                if (p != null) {
+                    Parameter parameter = parameters.get(p);
+                    if (!parameter.isRange()) {
+                        for (long i = 0; i < parameter.gridCount(); i++) {
+                            if (!Decimal.matches(parameter.gridValue(i))) {
+                                throw n.error("names the swept parameter " + parameter.path().text() + ", whose value '"
+                                        + Field.shown(parameter.gridValue(i)) + "' is not a number");
+                            }
+                        }
+                    }
+                } else {
+                    YamlValue v = path.find(baseTree).orElseThrow(() -> n.error("the base file gives no value at "
+                            + path.text() + " (its default applies); give the value in the base file, or sweep it"));
+                    if (!(v instanceof YamlValue.Scalar s) || !s.plain() || !Decimal.matches(s.text())) {
+                        throw n.error("the base file's value at " + path.text() + " is " + v.describe()
+                                + ", not a plain number");
+                    }
+                    value = Decimal.parse(((YamlValue.Scalar) v).text());
+                }
+                slots.put(name, slots.size());
+                slotNames.add(name);
+                parameterOf.add(p == null ? -1 : p);
+                fixed.add(value);
+            }
+        }
+
+        double[] fixedValues = fixed.stream().mapToDouble(Double::doubleValue).toArray();
+        boolean[] known = new boolean[fixedValues.length];
+        for (int s = 0; s < known.length; s++) {
+            known[s] = parameterOf.get(s) < 0;
+        }
+        List<Derivation.Derived> derived = new ArrayList<>();
+        for (int i = 0; i < derivedEntries.size(); i++) {
+            Field d = derivedEntries.get(i);
+            if (!(d.value() instanceof YamlValue.Scalar)) {
+                throw d.error("expected an expression, such as 2 * area / (span * (1 + taper)), got "
+                        + d.value().describe());
+            }
+            Expression e;
+            try {
+                e = Expression.parse(d.text(), slots);
+                OptionalDouble now = e.fold(fixedValues, known);
+                String problem = now.isPresent() ? Derivation.outOfRange(now.getAsDouble()) : null;
+                if (problem != null) {
+                    throw d.error(problem);
+                }
+            } catch (Expression.ExpressionException x) {
+                throw d.error(x.located());
+            }
+            derived.add(new Derivation.Derived(derivedPaths.get(i), d.file(), d.line(), d.path(), e));
+        }
+        for (Parameter p : parameters) {
+            if (p.isVariable() && derived.stream().noneMatch(d -> d.expression().slots().contains(slots.get(p.key())))) {
+                throw unusedVariable(root, p);
+            }
+        }
+        return new Derivation(derived, slotNames, parameterOf.stream().mapToInt(Integer::intValue).toArray(),
+                fixedValues);
+    }
+
+    private static InputException unusedVariable(Field root, Parameter p) {
+        return new InputException(root.file(), p.line(), "parameters." + p.key(), "'" + p.key() + "' is not a key of "
+                + "a wing file's top level (expected a path such as surfaces.wing.trapezoid.taper), and as a study "
+                + "variable no derived expression uses it");
+    }
+
+    /** The entries of a names, constants or derived mapping: 1 to {@value #MAX_DERIVED_ENTRIES}. */
+    private static List<Field> bounded(Field f, String key, String expected) {
+        if (!(f.value() instanceof YamlValue.Mapping)) {
+            throw f.error("expected " + expected + ", got " + f.value().describe());
+        }
+        List<Field> entries = f.entries();
+        if (entries.isEmpty() || entries.size() > MAX_DERIVED_ENTRIES) {
+            throw f.error("expected from 1 to " + MAX_DERIVED_ENTRIES + " entries under " + key + ", got "
+                    + entries.size());
+        }
+        return entries;
+    }
+
+    /** A name declared under names or constants: the entry's key, checked and not yet declared. */
+    private static String declaredName(Field f, String prefix, Map<String, Integer> declared) {
+        String name = f.path().substring(prefix.length());
+        if (!Expression.NAME.matcher(name).matches()) {
+            throw f.error("'" + Field.shown(name) + "' is not a name; expected a letter, then letters, digits or "
+                    + "underscores (at most 32 characters), such as span or root_chord");
+        }
+        if (Expression.FUNCTIONS.containsKey(name)) {
+            throw f.error(name + " is a function of the expressions; choose another name");
+        }
+        if (declared.containsKey(name)) {
+            throw f.error("the name " + name + " is declared twice (as a study variable, under constants or under "
+                    + "names)");
+        }
+        return name;
+    }
+
+    private static ParameterPath wingPath(Field at, String text) {
+        try {
+            return ParameterPath.parse(text, WingSchema.ROOT);
+        } catch (ParameterPath.PathException e) {
+            throw at.error(e.getMessage());
+        }
+    }
+
+    private static String placeOf(ParameterPath path, YamlValue baseTree, InputException at) {
+        try {
+            return path.place(baseTree);
+        } catch (ParameterPath.PathException e) {
+            throw new InputException(at.file(), at.line(), at.field(), e.getMessage());
+        }
+    }
+
+    /**
+     * The load case of the {@code loads.*} columns: {@code load-case: {speed, load-factor}} with the flight's
+     * weight and pressure altitude. The columns need it, the flight's weight, a {@code structure} section in
+     * the base wing file and a mirrored first surface; a load case without such a column is refused.
+     */
+    private static Optional<LoadCase> loadCase(Field root, Field columnsField, List<ResultColumn> columns,
+            Optional<FlightCondition> condition, double altitude, YamlValue baseTree, Wing baseWing) {
+        boolean wanted = columns.stream().anyMatch(ResultColumn::needsLoadCase);
+        Optional<Field> field = root.optional("load-case");
+        if (field.isEmpty()) {
+            if (wanted) {
+                throw columnsField.error("loads.* columns need a load case: add load-case: {speed: 110kt, "
+                        + "load-factor: 3.8} (and the weight under flight)");
+            }
+            return Optional.empty();
+        }
+        Field lc = field.get();
+        lc.allowOnly(LOAD_CASE_KEYS);
+        if (!wanted) {
+            throw lc.error("a load case serves the loads.* columns (such as loads.root.bending); add one, or leave "
+                    + "load-case out");
+        }
+        double speed = Quantities.speed(lc.required("speed", "the equivalent airspeed with a unit, such as 110kt"));
+        double n = lc.optional("load-factor").map(f -> f.inRange(-CasesReader.MAX_LOAD_FACTOR,
+                CasesReader.MAX_LOAD_FACTOR)).orElse(1.0);
+        if (condition.isEmpty()) {
+            throw lc.error("a load case needs the aircraft's weight: add flight: {weight: ...} (such as 1100kg)");
+        }
+        if (!(baseTree instanceof YamlValue.Mapping m && m.get("structure").isPresent())) {
+            throw columnsField.error("loads.* columns need a structure section in the base wing file (its masses give "
+                    + "the inertia relief)");
+        }
+        if (!baseWing.main().mirrored()) {
+            throw columnsField.error("loads.* columns need a mirrored first surface: loads are computed per half-wing");
+        }
+        return Optional.of(new LoadCase(String.format(Locale.ROOT, "n %s at %s m/s EAS", Field.format(n),
+                Field.brief(speed)), condition.get().weight(), n, speed, altitude, "given"));
+    }
+
+    /**
+     * Refuses a result column with the name of a swept or derived path ({@code reference.area} is both): the
+     * rows would have two columns of one name.
+     */
+    private static void refuseColumnsNamedAsPaths(Field columnsField, Set<String> columns, List<Parameter> parameters,
+            Derivation derivation) {
+        List<String> paths = new ArrayList<>();
+        parameters.forEach(p -> paths.add(p.key()));
+        derivation.derived().forEach(d -> paths.add(d.path().text()));
+        for (String path : paths) {
+            if (columns.contains(path)) {
+                throw columnsField.error("the result column " + path + " has the name of a swept or derived value, "
+                        + "whose own column holds its value (in the wing file's units); leave the result column out");
+            }
+        }
+    }
+
+    /**
+     * Whether a parameter's key is a study variable: a bare name (no dots or brackets) that is not a key of a
+     * wing file's top level. The reader refuses a variable no derived expression uses, so a mistyped
+     * top-level key is not silently taken for one.
+     */
+    static boolean isVariable(String key) {
+        return Expression.NAME.matcher(key).matches() && !WingSchema.ROOT.keys().containsKey(key);
     }
 
     /**
@@ -356,7 +665,7 @@ public final class SweepFileReader {
             }
             for (Parameter p : parameters) {
                 if (p.isRange() && !p.hasStep()) {
-                    throw new InputException(at.file(), p.line(), "parameters." + p.path().text(),
+                    throw new InputException(at.file(), p.line(), "parameters." + p.key(),
                             "a range in a full grid needs a step");
                 }
             }
@@ -449,14 +758,15 @@ public final class SweepFileReader {
     }
 
     private static void requireClMax(Field at, String baseName, Path basePath, Wing baseWing, YamlValue baseTree,
-            List<Parameter> parameters, Design design) {
+            List<Parameter> parameters, Derivation derivation, Design design) {
         Wing wing = baseWing;
         try {
             String[] first = design.values(0);
             YamlValue tree = baseTree;
             for (int p = 0; p < parameters.size(); p++) {
-                tree = parameters.get(p).path().apply(tree, first[p]);
+                tree = parameters.get(p).apply(tree, first[p]);
             }
+            tree = derivation.apply(tree, derivation.values(first));
             wing = WingFileReader.fromTree(tree, basePath.toString());
         } catch (RuntimeException e) {
             wing = baseWing;

@@ -5,8 +5,11 @@ import java.math.MathContext;
 import java.math.RoundingMode;
 import java.util.List;
 
+import org.spanlift.input.YamlValue;
+
 /**
- * One swept parameter: its path in the wing file and its values, as a list (numbers or words, used as
+ * One swept parameter: its path in the wing file, or the name of a study variable that only derived values
+ * use ({@code aspect_ratio}; it sets no wing value itself), and its values, as a list (numbers or words, used as
  * written) or a range from, to, step (exact decimal steps; the end point is included when it falls on the
  * grid within rounding). In a Latin hypercube a range is sampled continuously between from and to, and
  * snapped to its steps when it gives a step.
@@ -18,6 +21,7 @@ public final class Parameter {
     static final double END_SLACK = 1e-9;
 
     private final ParameterPath path;
+    private final String key;
     private final int line;
     private final List<String> list;
     private final BigDecimal from;
@@ -25,9 +29,10 @@ public final class Parameter {
     private final BigDecimal step;
     private final long count;
 
-    private Parameter(ParameterPath path, int line, List<String> list, BigDecimal from, BigDecimal to,
-            BigDecimal step) {
+    private Parameter(ParameterPath path, String variable, int line, List<String> list, BigDecimal from,
+            BigDecimal to, BigDecimal step) {
         this.path = path;
+        this.key = path != null ? path.text() : variable;
         this.line = line;
         this.list = list == null ? null : List.copyOf(list);
         this.from = from;
@@ -38,7 +43,17 @@ public final class Parameter {
 
     /** A parameter with listed values. */
     public static Parameter ofList(ParameterPath path, int line, List<String> values) {
-        return new Parameter(path, line, values, null, null, null);
+        return new Parameter(path, null, line, values, null, null, null);
+    }
+
+    /** A study variable with listed values (numbers: the reader checks). */
+    public static Parameter ofList(String variable, int line, List<String> values) {
+        return new Parameter(null, variable, line, values, null, null, null);
+    }
+
+    /** A study variable over a range, as {@link #ofRange(ParameterPath, int, BigDecimal, BigDecimal, BigDecimal)}. */
+    public static Parameter ofRange(String variable, int line, BigDecimal from, BigDecimal to, BigDecimal step) {
+        return new Parameter(null, variable, line, null, from, to, step);
     }
 
     /**
@@ -46,7 +61,7 @@ public final class Parameter {
      * that a step is non-zero and leads from {@code from} to {@code to}.
      */
     public static Parameter ofRange(ParameterPath path, int line, BigDecimal from, BigDecimal to, BigDecimal step) {
-        return new Parameter(path, line, null, from, to, step);
+        return new Parameter(path, null, line, null, from, to, step);
     }
 
     /** The number of grid values of a range: floor((to - from) / step + slack) + 1. */
@@ -57,8 +72,31 @@ public final class Parameter {
         return n.compareTo(BigDecimal.valueOf(Long.MAX_VALUE / 2)) > 0 ? Long.MAX_VALUE / 2 : n.longValueExact();
     }
 
+    /**
+     * The parameter's path in the wing file.
+     *
+     * @throws IllegalStateException for a study variable, which has none
+     */
     public ParameterPath path() {
+        if (path == null) {
+            throw new IllegalStateException("the study variable " + key + " has no wing-file path");
+        }
         return path;
+    }
+
+    /** Whether this is a study variable: a name that only derived values use, with no wing-file path. */
+    public boolean isVariable() {
+        return path == null;
+    }
+
+    /** The parameter as the sweep file writes it and its column is named: the path, or the variable's name. */
+    public String key() {
+        return key;
+    }
+
+    /** The wing tree with the value at the parameter's path; a study variable leaves the tree as it is. */
+    public YamlValue apply(YamlValue tree, String value) {
+        return path == null ? tree : path.apply(tree, value);
     }
 
     /** The line of the parameter in the sweep file. */

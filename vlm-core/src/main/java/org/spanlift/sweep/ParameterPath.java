@@ -194,6 +194,82 @@ public final class ParameterPath {
                 + (names.isEmpty() ? "none" : String.join(", ", names)));
     }
 
+    /**
+     * The place this path names in a wing tree, with every list element chosen by name written as its index
+     * ({@code surfaces[0].trapezoid.taper}): two paths name the same value exactly when their places in the
+     * base tree are equal, however they are written. Keys the tree leaves to their defaults are part of the
+     * place as written.
+     *
+     * @throws PathException when the tree lacks a list element, section or planform the path needs
+     */
+    public String place(YamlValue tree) {
+        StringBuilder b = new StringBuilder();
+        walk(tree, b);
+        return b.toString();
+    }
+
+    /**
+     * The value at this path in a wing tree, when the tree gives one (a key left to its default gives none).
+     *
+     * @throws PathException when the tree lacks a list element, section or planform the path needs
+     */
+    public Optional<YamlValue> find(YamlValue tree) {
+        return Optional.ofNullable(walk(tree, new StringBuilder()));
+    }
+
+    /** Follows the path through the tree, writing its place; the value there, or null when absent. */
+    private YamlValue walk(YamlValue tree, StringBuilder place) {
+        YamlValue node = tree;
+        for (Step step : steps) {
+            if (node != null && isNull(node)) {
+                node = null;
+            }
+            if (step instanceof Key k) {
+                place.append(place.length() == 0 ? "" : ".").append(k.key());
+                if (node == null) {
+                    continue;
+                }
+                if (!(node instanceof YamlValue.Mapping m)) {
+                    throw new PathException("'" + place + "' of the base file is inside " + node.describe()
+                            + ", not a mapping");
+                }
+                Optional<YamlValue> child = m.get(k.key()).filter(v -> !isNull(v));
+                if (child.isEmpty() && k.mustExist()) {
+                    throw new PathException(missing(k.key(), place.substring(0, Math.max(0,
+                            place.length() - k.key().length() - 1)), m));
+                }
+                node = child.orElse(null);
+                continue;
+            }
+            if (!(node instanceof YamlValue.Sequence seq)) {
+                throw new PathException("'" + place + "' of the base file is " + (node == null ? "absent"
+                        : node.describe()) + "; the path needs a list there");
+            }
+            int index = -1;
+            if (step instanceof Index i) {
+                index = i.index();
+                if (index >= seq.items().size()) {
+                    throw new PathException("'" + place + "' of the base file has " + seq.items().size()
+                            + " elements; there is no index " + index + " (counted from 0)");
+                }
+            } else {
+                String name = ((Name) step).name();
+                for (int i = 0; i < seq.items().size() && index < 0; i++) {
+                    if (seq.items().get(i) instanceof YamlValue.Mapping m
+                            && m.get("name").orElse(null) instanceof YamlValue.Scalar s && s.text().equals(name)) {
+                        index = i;
+                    }
+                }
+                if (index < 0) {
+                    throw new PathException("'" + place + "' of the base file has no element named '" + name + "'");
+                }
+            }
+            place.append('[').append(index).append(']');
+            node = seq.items().get(index);
+        }
+        return node == null || isNull(node) ? null : node;
+    }
+
     private static String missing(String key, String at, YamlValue.Mapping map) {
         if (PLANFORMS.contains(key)) {
             List<String> has = PLANFORMS.stream().filter(p -> map.get(p).isPresent()).sorted().toList();

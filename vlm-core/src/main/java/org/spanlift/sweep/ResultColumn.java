@@ -11,7 +11,8 @@ import org.spanlift.vocabulary.Vocabulary;
 /**
  * A sweep's result column: a key of the {@link Vocabulary}, with {@code @CL=0.5} or {@code @alpha=4} for a
  * value taken at a wing CL or an angle of attack (degrees), {@code stall.} or {@code stall_flaps.} before a
- * stall-onset key, and {@code controls.NAME.} before a control's key. SI units, angles in degrees, as in the
+ * stall-onset key, {@code controls.NAME.} before a control's key, and {@code loads.} before a key of the
+ * sweep's load case ({@code loads.root.bending}). SI units, angles in degrees, as in the
  * JSON outputs. An unknown name is refused, never defaulted.
  *
  * @param name     the column name as written
@@ -40,7 +41,9 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
         /** {@link Vocabulary#STUDY}: flap increment, stall speeds, the assumed-cl_max flag. */
         STUDY,
         /** {@link Vocabulary#CONTROL}. */
-        CONTROL
+        CONTROL,
+        /** {@link Vocabulary#LOADS} of the sweep's load case, under {@link Vocabulary#LOAD_CASE}. */
+        LOADS
     }
 
     /** The flag column added when a sweep assumes cl-max for sections that give none. */
@@ -123,6 +126,13 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
                         k, null, false, 0);
             }
         }
+        if (n.startsWith(Vocabulary.LOAD_CASE)) {
+            String rest = n.substring(Vocabulary.LOAD_CASE.length());
+            ResultKey<?> k = Vocabulary.lookup(Vocabulary.LOADS, rest).orElseThrow(() -> new ColumnException(
+                    "unknown load-case result '" + rest + "'; expected " + Vocabulary.LOAD_CASE + " followed by one of "
+                            + String.join(", ", Vocabulary.names(Vocabulary.LOADS))));
+            return new ResultColumn(n, Group.LOADS, k, null, false, 0);
+        }
         Matcher c = CONTROL.matcher(n);
         if (c.matches()) {
             if (!controls.contains(c.group(1))) {
@@ -140,7 +150,8 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
                 + String.join(", ", Vocabulary.names(Vocabulary.ONSET)) + "); max_lift.* or max_lift_flaps.* ("
                 + String.join(", ", Vocabulary.names(Vocabulary.MAX_LIFT)) + "); "
                 + String.join(", ", Vocabulary.names(Vocabulary.STUDY)) + "; controls.NAME.* ("
-                + String.join(", ", Vocabulary.names(Vocabulary.CONTROL)) + ")");
+                + String.join(", ", Vocabulary.names(Vocabulary.CONTROL)) + "); loads.* ("
+                + String.join(", ", Vocabulary.names(Vocabulary.LOADS)) + ")");
     }
 
     /** True for columns that need section cl-max data. */
@@ -151,6 +162,11 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
     /** True for columns of the flapped configuration. */
     public boolean needsFlaps() {
         return group == Group.STALL_FLAPS || group == Group.MAX_LIFT_FLAPS || key.needs(Need.FLAPS);
+    }
+
+    /** True for columns of the sweep's load case ({@code loads.*}). */
+    public boolean needsLoadCase() {
+        return group == Group.LOADS;
     }
 
     /** True for columns that need a weight (stall speeds). */

@@ -8,6 +8,7 @@ import java.util.OptionalDouble;
 import org.spanlift.flight.FlightCondition;
 import org.spanlift.geometry.Wing;
 import org.spanlift.input.YamlValue;
+import org.spanlift.structure.LoadCase;
 
 /**
  * A sweep, as its file describes it: the base wing (its tree, to substitute parameter values into), the
@@ -20,6 +21,7 @@ import org.spanlift.input.YamlValue;
  * @param baseTree    the base wing file's tree
  * @param baseWing    the base wing as read
  * @param parameters  the swept parameters
+ * @param derivation  the derived values, computed per case from the swept ones (none when the file has none)
  * @param design      the cases: a full grid or a Latin hypercube
  * @param columns     every output column: those listed, those the constraints and ranking read, and the flag
  *                    column
@@ -28,16 +30,32 @@ import org.spanlift.input.YamlValue;
  * @param condition   the flight condition, when a weight is given
  * @param flapsDeg    the flap deflection of the flapped configuration, degrees (else the base file's)
  * @param assumeClMax the cl_max assumed for sections that give none, if asked
+ * @param loadCase    the load case of the {@code loads.*} columns, if asked
  * @param fingerprint SHA-256 of the sweep file and the base wing file: a run's output belongs to it
  */
 public record Sweep(String file, String baseName, Path basePath, YamlValue baseTree, Wing baseWing,
-        List<Parameter> parameters, Design design, List<ResultColumn> columns, List<Constraint> constraints,
+        List<Parameter> parameters, Derivation derivation, Design design, List<ResultColumn> columns, List<Constraint> constraints,
         Optional<Ranking> ranking, Optional<FlightCondition> condition, OptionalDouble flapsDeg,
-        OptionalDouble assumeClMax, String fingerprint) {
+        OptionalDouble assumeClMax, Optional<LoadCase> loadCase, String fingerprint) {
 
     public Sweep {
         parameters = List.copyOf(parameters);
         columns = List.copyOf(columns);
         constraints = List.copyOf(constraints);
+    }
+
+    /**
+     * The wing tree of a case: the base tree with the swept values, then the derived values, at their paths.
+     *
+     * @param values  the case's swept values, in parameter order
+     * @param derived the case's derived values ({@link Derivation#values}), in entry order
+     * @throws ParameterPath.PathException when the base file lacks what a path needs
+     */
+    public YamlValue caseTree(String[] values, double[] derived) {
+        YamlValue tree = baseTree;
+        for (int p = 0; p < parameters.size(); p++) {
+            tree = parameters.get(p).apply(tree, values[p]);
+        }
+        return derivation.apply(tree, derived);
     }
 }

@@ -20,6 +20,11 @@ public final class Cautions {
     public static final String SWEEP = "Caution: stall results are linear-theory estimates for the wing alone; they "
             + "inform design and do not replace flight test, airworthiness standards or licensed engineering judgement.";
 
+    /** Loads columns of a sweep (limit loads of one case, clean). */
+    public static final String SWEEP_LOADS = "Caution: loads.* columns are limit loads of the wing alone for "
+            + "preliminary sizing, without safety factors; structural design follows the applicable airworthiness "
+            + "standards and licensed engineering practice.";
+
     /** A comparison that shows stall results, loads or both. */
     public static final String COMPARISON = "Caution: stall speeds and loads are linear-theory estimates for the wing "
             + "alone (without the tail's download, which raises the real stall speed); loads are limit loads without "

@@ -17,7 +17,7 @@ import org.spanlift.sweep.Sweep;
 /**
  * How sweep rows are written and read back: CSV (a header line, then one line per case) or JSON Lines (one
  * flat object per case). Columns: {@code case} (index from 0 in the whole design), {@code id}, the parameter
- * paths, the result columns, {@code feasible} (with constraints) and {@code error}. Numbers are written in
+ * paths, the derived paths (each case's derived value, empty when it could not be computed), the result columns, {@code feasible} (with constraints) and {@code error}. Numbers are written in
  * full precision (Java's shortest round-trip form); an absent value is an empty cell or null. A row ends
  * with a line feed: in JSON Lines every row is one line; in CSV a text cell holding a comma, a quote or a
  * line break is quoted (RFC 4180), so a row is complete when its line feed outside quotes is there
@@ -49,7 +49,8 @@ public enum RowFormat {
         List<String> names = new ArrayList<>();
         names.add("case");
         names.add("id");
-        sweep.parameters().forEach(p -> names.add(p.path().text()));
+        sweep.parameters().forEach(p -> names.add(p.key()));
+        sweep.derivation().derived().forEach(d -> names.add(d.path().text()));
         sweep.columns().forEach(c -> names.add(c.name()));
         if (!sweep.constraints().isEmpty()) {
             names.add("feasible");
@@ -77,6 +78,10 @@ public enum RowFormat {
         cells.add(r.id());
         for (String v : r.values()) {
             cells.add(new ParameterValue(v));
+        }
+        int derived = sweep.derivation().derived().size();
+        for (int i = 0; i < derived; i++) {
+            cells.add(r.derived() == null ? null : (Object) r.derived()[i]);
         }
         List<ResultColumn> columns = sweep.columns();
         for (int i = 0; i < columns.size(); i++) {
