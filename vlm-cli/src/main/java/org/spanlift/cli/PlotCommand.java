@@ -134,7 +134,7 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
         } catch (MissingSectionDataException e) {
             c = Optional.empty();
         }
-        Optional<MaximumLift> maximum = c.map(StallStudy.Configuration::maximumLift);
+        Optional<MaximumLift> maximum = c.flatMap(StallStudy.Configuration::maximumLiftIfAny);
         List<Double> angles = range();
         if (alpha == null && maximum.isPresent()) {
             List<MaximumLift.CurvePoint> curve = maximum.get().curve();
@@ -154,7 +154,7 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
         } catch (MissingSectionDataException e) {
             throw new InputException(file.toString(), 0, "sections", e.getMessage());
         }
-        return Plots.stallMap(analysis, c.estimate(), Optional.of(c.maximumLift()), context);
+        return Plots.stallMap(analysis, c.estimate(), c.maximumLiftIfAny(), context);
     }
 
     private double spanLoadAlpha(WingAnalysis analysis, double[] deflections) {

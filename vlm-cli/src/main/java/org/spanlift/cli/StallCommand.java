@@ -126,8 +126,12 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
     }
 
     private static Map<String, Object> maxLiftJson(Wing wing, Configuration c) {
-        MaximumLift m = c.maximumLift();
         Map<String, Object> o = new LinkedHashMap<>();
+        if (c.maximumLiftIfAny().isEmpty()) {
+            o.put("unavailable", c.maximumLiftProblem().orElseThrow());
+            return o;
+        }
+        MaximumLift m = c.maximumLift();
         List<ResultKey<MaximumLift>> keys = m.speed().isPresent() ? Vocabulary.MAX_LIFT
                 : Vocabulary.MAX_LIFT.stream().filter(k -> !k.key().startsWith("stall_speed")).toList();
         Results.put(o, keys, m);
@@ -222,7 +226,8 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         study.condition().ifPresent(fc -> {
             List<ResultKey<StallStudy>> speeds = study.flaps().isPresent()
                     ? Vocabulary.select(Vocabulary.STUDY, "stall_speed.clean_eas", "stall_speed.clean_tas",
-                            "stall_speed.flaps_eas", "stall_speed.flaps_tas", "stall_speed.basis")
+                            "stall_speed.flaps_eas", "stall_speed.flaps_tas", "stall_speed.basis",
+                            "stall_speed.flaps_basis")
                     : Vocabulary.select(Vocabulary.STUDY, "stall_speed.clean_eas", "stall_speed.clean_tas",
                             "stall_speed.basis");
             Results.put(root, speeds, study);
@@ -282,24 +287,23 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         for (ResultKey<MaximumLift> key : Vocabulary.select(Vocabulary.MAX_LIFT, "CL", "alpha_deg", "rounds_over", "trace_end",
                 "stalled_span_fraction", "first_stall.eta", "first_stall.CL", "aileron.below_peak",
                 "aileron.margin_dcl", "synthetic_curves")) {
-            t.row(cells(Results.label(key, unit), configs, c -> Results.cell(key, c.maximumLift(), unit)));
+            t.row(cells(Results.label(key, unit), configs, c -> c.maximumLiftIfAny()
+                    .map(m -> Results.cell(key, m, unit)).orElse("-")));
         }
         if (study.condition().isPresent()) {
-            t.row(cells("stall speed at max CL EAS [kt]", configs,
-                    c -> TextTable.fixed(Airspeed.knots(c.maximumLift().speed().orElseThrow().equivalent()), 1)));
-            t.row(cells("stall speed at max CL TAS [kt]", configs,
-                    c -> TextTable.fixed(Airspeed.knots(c.maximumLift().speed().orElseThrow().trueSpeed()), 1)));
+            t.row(cells("stall speed at max CL EAS [kt]", configs, c -> c.maximumLiftIfAny()
+                    .map(m -> TextTable.fixed(Airspeed.knots(m.speed().orElseThrow().equivalent()), 1)).orElse("-")));
+            t.row(cells("stall speed at max CL TAS [kt]", configs, c -> c.maximumLiftIfAny()
+                    .map(m -> TextTable.fixed(Airspeed.knots(m.speed().orElseThrow().trueSpeed()), 1)).orElse("-")));
         }
         b.append(t.render());
-        study.condition().ifPresent(fc -> b.append('\n').append(TextTable.wrap(String.format(Locale.ROOT,
-                "The headline stall speed is the %s one: %s", study.clean().speedBasis().equals("max-lift")
-                        ? "maximum-lift" : "onset",
-                study.clean().speedBasis().equals("max-lift")
-                        ? "every section gives a measured lift curve."
-                        : "the maximum lift rests on synthetic section curves (built from cl_max), so the linear "
-                                + "onset, which errs safe, stays the headline; the speed at maximum lift is shown "
-                                + "beside it for comparison."))).append('\n'));
+        study.condition().ifPresent(fc -> b.append('\n').append(TextTable.wrap(headlineText(configs))).append('\n'));
         for (Configuration c : configs) {
+            c.maximumLiftProblem().ifPresent(problem -> b.append('\n').append(TextTable.wrap(String.format(Locale.ROOT,
+                    "NOTE (%s, maximum lift): none: %s.", c.label(), problem))).append('\n'));
+            if (c.maximumLiftIfAny().isEmpty()) {
+                continue;
+            }
             MaximumLift m = c.maximumLift();
             if (!m.peak()) {
                 b.append('\n').append(TextTable.wrap(String.format(Locale.ROOT, "NOTE (%s, maximum lift): %s",
@@ -364,6 +368,17 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         }
         b.append('\n').append(TextTable.wrap(Cautions.STALL)).append('\n');
         return b.toString();
+    }
+
+    /** Which maximum each configuration's headline stall speed rests on, and why. */
+    private static String headlineText(List<Configuration> configs) {
+        List<String> parts = new ArrayList<>();
+        for (Configuration c : configs) {
+            parts.add(c.label() + " at the " + (c.speedBasis().equals("max-lift") ? "maximum lift (every section "
+                    + "gives a measured lift curve)" : "linear onset, which errs safe (the maximum lift rests on "
+                    + "synthetic section curves built from cl_max, or there is none)"));
+        }
+        return "The headline stall speeds: " + String.join("; ", parts) + ". The other one is shown beside it.";
     }
 
     private interface Cell {

@@ -83,6 +83,16 @@ class MaximumLiftOutputTest {
     }
 
     @Test
+    void aFlapBeyondTheMeasuredFlappedCurvesLeavesTheOnsetAndSaysWhyThereIsNoMaximum() {
+        YamlValue r = json("stall", CliRun.demo("club-low-wing.wing.yaml"), "--weight", "550kgf", "--flaps", "30",
+                "--format", "json");
+        assertTrue(text(r, "max_lift_flaps.unavailable").contains("up to 20 degrees"));
+        assertEquals("onset", text(r, "stall_speed.flaps_basis"));
+        assertEquals("max-lift", text(r, "stall_speed.basis"));
+        assertTrue(number(r, "stall_flaps.CL") > number(r, "stall.CL"), "the flapped onset is still given");
+    }
+
+    @Test
     void solveThroughTheStallAgreesWithStallOnTheMaximumAndKeepsLinearTheoryBeside() {
         YamlValue solve = json("solve", CliRun.demo("trainer.wing.yaml"), "--through-stall", "--format", "json");
         YamlValue stall = json("stall", CliRun.demo("trainer.wing.yaml"), "--format", "json");

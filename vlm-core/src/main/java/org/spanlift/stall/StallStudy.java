@@ -5,6 +5,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.spanlift.flight.FlightCondition;
+import org.spanlift.input.RefusedException;
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Wing;
@@ -43,6 +44,7 @@ public record StallStudy(Configuration clean, Optional<Configuration> flaps, Opt
         private final StripLimits limits;
         private final Optional<FlightCondition> condition;
         private MaximumLift maximumLift;
+        private String maximumLiftProblem;
         private String speedBasis;
 
         Configuration(String label, double[] deflections, StallEstimate estimate, Optional<StallSpeed> speed,
@@ -91,14 +93,41 @@ public record StallStudy(Configuration clean, Optional<Configuration> flaps, Opt
         }
 
         /**
-         * The basis of the headline stall speed: {@code max-lift} when every strip's section curve is measured,
-         * else {@code onset} (the linear onset errs safe; a synthetic curve's maximum is shown beside it).
+         * The maximum lift, or empty when the section data cannot give one (a flap deflected beyond a
+         * section's measured flapped curves, say); {@link #maximumLiftProblem()} then says why.
+         */
+        public synchronized Optional<MaximumLift> maximumLiftIfAny() {
+            if (maximumLift == null && maximumLiftProblem == null) {
+                try {
+                    maximumLift();
+                } catch (RefusedException e) {
+                    maximumLiftProblem = e.getMessage();
+                }
+            }
+            return Optional.ofNullable(maximumLift);
+        }
+
+        /** Why there is no maximum lift, when {@link #maximumLiftIfAny()} is empty. */
+        public synchronized Optional<String> maximumLiftProblem() {
+            maximumLiftIfAny();
+            return Optional.ofNullable(maximumLiftProblem);
+        }
+
+        /**
+         * The basis of the headline stall speed: {@code max-lift} when every strip's section curve is measured
+         * (and the maximum lift can be found), else {@code onset} (the linear onset errs safe; a synthetic
+         * curve's maximum is shown beside it).
          */
         public synchronized String speedBasis() {
             if (speedBasis == null) {
-                boolean synthetic = StripCurves.of(analysis.wing(), analysis.lattice(), deflections, limits, 0)
-                        .synthetic();
-                speedBasis = synthetic ? "onset" : "max-lift";
+                boolean measured;
+                try {
+                    measured = !StripCurves.of(analysis.wing(), analysis.lattice(), deflections, limits, 0).synthetic()
+                            && condition.map(fc -> maximumLiftIfAny().isPresent()).orElse(true);
+                } catch (RefusedException e) {
+                    measured = false;
+                }
+                speedBasis = measured ? "max-lift" : "onset";
             }
             return speedBasis;
         }

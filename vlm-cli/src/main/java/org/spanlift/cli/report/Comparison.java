@@ -136,10 +136,10 @@ public final class Comparison {
         if (entries.stream().anyMatch(e -> e.stall().isPresent())) {
             ResultKey<MaximumLift> top = Vocabulary.find(Vocabulary.MAX_LIFT, "CL");
             out.add(new Row(Vocabulary.MAX_CLEAN + top.key(), top, top.label() + ", clean", e -> e.stall()
-                    .map(s -> number(top.of(s.clean().maximumLift()))).orElse(OptionalDouble.empty())));
+                    .flatMap(s -> s.clean().maximumLiftIfAny()).map(m -> number(top.of(m))).orElse(OptionalDouble.empty())));
             if (entries.stream().anyMatch(e -> e.stall().flatMap(StallStudy::flaps).isPresent())) {
                 out.add(new Row(Vocabulary.MAX_FLAPS + top.key(), top, top.label() + ", flaps", e -> e.stall()
-                        .flatMap(StallStudy::flaps).map(f -> number(top.of(f.maximumLift())))
+                        .flatMap(StallStudy::flaps).flatMap(f -> f.maximumLiftIfAny()).map(m -> number(top.of(m)))
                         .orElse(OptionalDouble.empty())));
             }
         }

@@ -163,13 +163,13 @@ public final class ReportPage {
             ReynoldsRule reynolds, FigureContext context) {
         Optional<StallEstimate> estimate = stall.map(StallStudy.Configuration::estimate);
         return switch (kind) {
-            case STALL -> stall.map(c -> (Figure) Plots.stallMap(s.analysis(), c.estimate(), Optional.of(c.maximumLift()),
+            case STALL -> stall.map(c -> (Figure) Plots.stallMap(s.analysis(), c.estimate(), c.maximumLiftIfAny(),
                     context)).orElse(null);
             case PLANFORM -> Plots.planform(s.analysis(), estimate
                     .map(e -> OptionalDouble.of(e.y())).orElse(OptionalDouble.empty()), context);
             case SPAN_LOAD -> Plots.spanLoad(s.analysis(), s.spanLoadAtCl(), estimate, context);
             case LIFT -> Plots.liftCurve(s.analysis(), s.deflections(), rangeDeg, estimate,
-                    stall.map(StallStudy.Configuration::maximumLift), context);
+                    stall.flatMap(StallStudy.Configuration::maximumLiftIfAny), context);
             case POLAR -> Plots.polar(s.analysis(), s.deflections(), rangeDeg, reynolds, context);
         };
     }
@@ -224,10 +224,9 @@ public final class ReportPage {
             ResultKey<StallEstimate> margin = Vocabulary.find(Vocabulary.ONSET, "aileron_margin.dcl");
             est.aileronMargin().ifPresent(m -> key(h, "aileron margin, clean", "\u0394cl = " + value(margin, est, u),
                     margin.description()));
-            MaximumLift m = c.maximumLift();
-            key(h, "maximum CL, clean", Html.fixed(m.lift(), 3), "from the section lift curves"
-                    + (m.synthetic() ? " (synthetic: built from cl_max)" : "") + "; " + Html.fixed(100
-                            * m.stalledSpanFraction(), 0) + "% of the span past its section peak there");
+            c.maximumLiftIfAny().ifPresent(m -> key(h, "maximum CL, clean", Html.fixed(m.lift(), 3),
+                    "from the section lift curves" + (m.synthetic() ? " (synthetic: built from cl_max)" : "") + "; "
+                            + Html.fixed(100 * m.stalledSpanFraction(), 0) + "% of the span past its section peak there"));
             c.headlineEquivalent().ifPresent(v -> key(h, "stall speed, clean", Html.fixed(Airspeed.knots(v), 1)
                     + " kt EAS", Html.fixed(Airspeed.knots(c.headlineTrue().getAsDouble()), 1) + " kt TAS; "
                             + basisText(c) + "; wing alone, see the caution"));
@@ -265,11 +264,11 @@ public final class ReportPage {
             for (ResultKey<MaximumLift> k : Vocabulary.select(Vocabulary.MAX_LIFT, "CL", "alpha_deg", "rounds_over",
                     "stalled_span_fraction", "first_stall.eta", "aileron.below_peak", "synthetic_curves")) {
                 rows.add(row(Results.label(k, u), in, flapStall,
-                        (w, st) -> st.map(c -> value(k, c.maximumLift(), u)).orElse("\u2013")));
+                        (w, st) -> st.flatMap(c -> c.maximumLiftIfAny()).map(m -> value(k, m, u)).orElse("\u2013")));
             }
             if (in.condition().isPresent()) {
                 rows.add(row("stall speed at maximum CL EAS [kt]", in, flapStall, (w, st) -> st.flatMap(
-                        c -> c.maximumLift().speed()).map(v -> Html.fixed(Airspeed.knots(v.equivalent()), 1))
+                        c -> c.maximumLiftIfAny().flatMap(MaximumLift::speed)).map(v -> Html.fixed(Airspeed.knots(v.equivalent()), 1))
                         .orElse("\u2013")));
             }
         }
