@@ -1,6 +1,7 @@
 package org.spanlift.cli.plot;
 
 import java.awt.BasicStroke;
+import java.awt.Color;
 import java.awt.Font;
 import java.awt.Graphics2D;
 import java.awt.geom.AffineTransform;
@@ -12,13 +13,16 @@ import java.util.List;
 import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.XYSeries.XYSeriesRenderStyle;
+import org.knowm.xchart.style.XYStyler;
 import org.knowm.xchart.style.markers.None;
 
 /**
  * An XChart chart as a {@link Figure}, between a header and a legend of its own: above, the title and, in a
  * lighter line below it, the subtitle (the configuration the chart was drawn for, wrapped when it is long);
  * below, the legend in as many centred rows as its entries need (a shaded band as a swatch, a line with its
- * stroke and marker, a lone marker). The chart paints its axes and series in between.
+ * stroke and marker, a lone marker). The chart paints its axes and series in between; their texts (tick
+ * labels, axis titles) the figure writes itself where the chart laid them out, so that SVG carries them as
+ * text: the chart's own are painted in a transparent colour, which {@link SvgCanvas} does not write.
  */
 public final class ChartFigure implements Figure {
 
@@ -34,6 +38,7 @@ public final class ChartFigure implements Figure {
     private static final double SYMBOL_GAP = 7;
     private static final double ENTRY_GAP = 24;
     private static final double BELOW_LEGEND = 12;
+    private static final Color NONE = new Color(0, 0, 0, 0);
 
     private final String id;
     private final String title;
@@ -43,6 +48,8 @@ public final class ChartFigure implements Figure {
     private final List<List<XYSeries>> legend;
     private final int width;
     private final int height;
+    private final Color tickColour;
+    private final Color titleColour;
 
     /**
      * @param chart    the chart, complete, its title the figure's; the figure takes its size, growing by a line
@@ -59,8 +66,15 @@ public final class ChartFigure implements Figure {
         this.legend = rows(chart, width - 2 * SIDE);
         this.height = chart.getHeight() + (int) Math.round(LINE * (this.subtitle.size() - 1)
                 + ROW * (Math.max(1, legend.size()) - 1));
-        chart.getStyler().setChartTitleVisible(false);
-        chart.getStyler().setLegendVisible(false);
+        XYStyler st = chart.getStyler();
+        st.setChartTitleVisible(false);
+        st.setLegendVisible(false);
+        this.tickColour = st.getAxisTickLabelsColor();
+        this.titleColour = st.getChartFontColor();
+        st.setXAxisTickLabelsColor(NONE);
+        st.setYAxisTickLabelsColor(NONE);
+        st.setXAxisTitleColor(NONE);
+        st.setYAxisTitleColor(NONE);
     }
 
     public XYChart chart() {
@@ -120,6 +134,7 @@ public final class ChartFigure implements Figure {
         int bottom = (int) Math.round(height - ROW * legend.size() - BELOW_LEGEND);
         g.translate(0, top);
         chart.paint(g, width, bottom - top);
+        axisTexts(g);
         g.setTransform(saved);
         // after the chart, which gives series without a style of their own their default one
         for (int r = 0; r < legend.size(); r++) {
@@ -131,6 +146,62 @@ public final class ChartFigure implements Figure {
                 Text.draw(g, s.getName(), LEGEND, x + SYMBOL + SYMBOL_GAP, baseline, Text.Align.LEFT, Palette.INK, null);
                 x += entryWidth(s) + ENTRY_GAP;
             }
+        }
+    }
+
+    /**
+     * The tick labels and axis titles, where the chart laid them out: a y tick label right-aligned against
+     * its tick marks and centred on its tick, an x tick label centred under its tick with its digits' foot on
+     * the top of the title's box, the x title centred under the plot with its lowest ink on the chart's
+     * bottom, the y title turned to read upward, centred beside the plot. As the chart does, a tick label
+     * that would stand outside its axis or the chart is left out.
+     */
+    private void axisTexts(Graphics2D g) {
+        XYStyler st = chart.getStyler();
+        Font ticks = st.getAxisTickLabelsFont();
+        double digits = Text.ink("0123456789", ticks).getHeight();
+        if (st.isYAxisTicksVisible()) {
+            ChartAxes.AxisText y = ChartAxes.y(chart);
+            double right = y.tickLabels().getMaxX();
+            double top = y.bounds().getMinY();
+            double foot = y.bounds().getMaxY();
+            for (int i = 0; i < y.labels().size(); i++) {
+                double at = foot - y.locations().get(i);
+                if (!y.labels().get(i).isEmpty() && at > top && at < foot) {
+                    Text.draw(g, y.labels().get(i), ticks, right, at + digits / 2, Text.Align.RIGHT, tickColour, null);
+                }
+            }
+        }
+        if (st.isXAxisTicksVisible()) {
+            ChartAxes.AxisText x = ChartAxes.x(chart);
+            double baseline = x.tickLabels().getMaxY();
+            double left = x.bounds().getMinX();
+            double right = x.bounds().getMaxX();
+            for (int i = 0; i < x.labels().size(); i++) {
+                String label = x.labels().get(i);
+                double at = left + x.locations().get(i);
+                double w = Text.ink(label, ticks).getWidth();
+                if (!label.isEmpty() && at > left && at < right && at - w / 2 > 0 && at + w / 2 < chart.getWidth()) {
+                    Text.draw(g, label, ticks, at, baseline, Text.Align.CENTRE, tickColour, null);
+                }
+            }
+        }
+        Font titles = st.getAxisTitleFont();
+        String xTitle = chart.getXAxisTitle();
+        if (xTitle != null && !xTitle.isBlank() && st.isXAxisTitleVisible()) {
+            Rectangle2D box = ChartAxes.x(chart).bounds();
+            Rectangle2D ink = Text.ink(xTitle, titles);
+            Text.draw(g, xTitle, titles, box.getCenterX(), box.getMaxY() - ink.getMaxY(), Text.Align.CENTRE,
+                    titleColour, null);
+        }
+        String yTitle = chart.getYAxisTitle();
+        if (yTitle != null && !yTitle.isBlank() && st.isYAxisTitleVisible()) {
+            Rectangle2D box = ChartAxes.y(chart).bounds();
+            AffineTransform saved = g.getTransform();
+            g.translate(box.getMinX() + Text.ink(yTitle, titles).getHeight(), box.getCenterY());
+            g.rotate(-Math.PI / 2);
+            Text.draw(g, yTitle, titles, 0, 0, Text.Align.CENTRE, titleColour, null);
+            g.setTransform(saved);
         }
     }
 

@@ -48,6 +48,12 @@ public final class Palette {
     /** The font family of every figure: Java's logical sans-serif (DejaVu Sans on Debian). */
     public static final String FAMILY = Font.SANS_SERIF;
 
+    /**
+     * The font stack of SVG text: the font Java lays the figures out with on Debian first, then the common
+     * sans-serif fonts of other systems, whose widths are close.
+     */
+    public static final String SVG_FONT_FAMILY = "DejaVu Sans, Arial, Helvetica, sans-serif";
+
     private Palette() {
     }
 

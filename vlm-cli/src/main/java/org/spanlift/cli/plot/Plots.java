@@ -610,7 +610,10 @@ public final class Plots {
 
     // ---------------------------------------------------------------- helpers
 
-    /** A chart in Spanlift's style: white, light grid, outline text; {@link ChartFigure} adds title and legend. */
+    /**
+     * A chart in Spanlift's style: white, light grid; {@link ChartFigure} adds title and legend and writes the
+     * axis texts.
+     */
     static XYChart chart(String title, String xTitle, String yTitle) {
         XYChart c = new XYChart(CHART_WIDTH, CHART_HEIGHT);
         c.setTitle(title);

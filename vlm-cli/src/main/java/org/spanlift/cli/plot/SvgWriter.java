@@ -24,7 +24,8 @@ import org.w3c.dom.NodeList;
  * Paints a {@link Figure} into Batik's SVG generator and serializes the result deterministically: every
  * id carries the figure's own prefix (so several figures can be inlined in one HTML page without their
  * clip paths colliding), there is no generator comment or time stamp, the declarations inside each
- * {@code style} attribute are sorted, and attributes are written in name order.
+ * {@code style} attribute are sorted, and attributes are written in name order. Text is written as text
+ * ({@link SvgCanvas}) in the font stack {@link Palette#SVG_FONT_FAMILY}.
  */
 public final class SvgWriter {
 
@@ -59,12 +60,14 @@ public final class SvgWriter {
         SVGGeneratorContext ctx = SVGGeneratorContext.createDefault(doc);
         ctx.setComment(null);
         ctx.setEmbeddedFontsOn(false);
-        SVGGraphics2D g = new SVGGraphics2D(ctx, true);
+        SVGGraphics2D g = new SvgCanvas(ctx);
         g.setSVGCanvasSize(new Dimension(figure.width(), figure.height()));
         figure.paint(g);
         Element root = g.getRoot();
         g.dispose();
         styleToSortedCss(root);
+        // the text's family for every viewer, in place of Batik's default (Java's logical font's name)
+        putStyle(root, "font-family", Palette.SVG_FONT_FAMILY);
         escapeControlCharacters(root);
         prefixIds(root, figure.id());
         root.removeAttribute("contentScriptType");
@@ -108,6 +111,7 @@ public final class SvgWriter {
             }
         }
         remove.forEach(e::removeAttribute);
+        tidy(e, css);
         if (!css.isEmpty()) {
             StringBuilder b = new StringBuilder();
             css.forEach((k, v) -> b.append(b.length() == 0 ? "" : "; ").append(k).append(':').append(v));
@@ -118,6 +122,39 @@ public final class SvgWriter {
                 styleToSortedCss(child);
             }
         }
+    }
+
+    private static final List<String> FONT = List.of("font-family", "font-size", "font-style", "font-weight");
+
+    /**
+     * Leaves out what Batik writes but nothing uses: the graphics state's font on the groups (Java's
+     * logical font; only the root's family and a text's own size, weight and style apply), and the stroke
+     * settings of text that is not stroked.
+     */
+    private static void tidy(Element e, Map<String, String> css) {
+        String tag = e.getLocalName() == null ? e.getTagName() : e.getLocalName();
+        if (tag.equals("text")) {
+            if ("none".equals(css.get("stroke"))) {
+                css.keySet().removeIf(k -> k.startsWith("stroke-"));
+            }
+        } else if (!tag.equals("svg")) {
+            FONT.forEach(css::remove);
+        }
+    }
+
+    /** Sets one declaration of an element's style, keeping the declarations sorted. */
+    private static void putStyle(Element e, String property, String value) {
+        Map<String, String> css = new TreeMap<>();
+        for (String decl : e.getAttribute("style").split(";")) {
+            int colon = decl.indexOf(':');
+            if (colon > 0) {
+                css.put(decl.substring(0, colon).trim(), decl.substring(colon + 1).trim());
+            }
+        }
+        css.put(property, value);
+        StringBuilder b = new StringBuilder();
+        css.forEach((k, v) -> b.append(b.length() == 0 ? "" : "; ").append(k).append(':').append(v));
+        e.setAttribute("style", b.toString());
     }
 
     /**
@@ -150,7 +187,7 @@ public final class SvgWriter {
             "stroke-width", "stroke-opacity", "stroke-dasharray", "stroke-dashoffset", "stroke-linecap",
             "stroke-linejoin", "stroke-miterlimit", "opacity", "clip-path", "color-rendering", "color-interpolation",
             "image-rendering", "shape-rendering", "text-rendering", "font-family", "font-size", "font-style",
-            "font-weight", "clip-rule", "mask", "filter");
+            "font-weight", "clip-rule", "mask", "filter", "text-anchor");
 
     private static void prefixIds(Element root, String prefix) {
         Map<String, String> renamed = new LinkedHashMap<>();

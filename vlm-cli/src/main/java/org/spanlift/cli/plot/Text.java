@@ -8,13 +8,15 @@ import java.awt.Shape;
 import java.awt.font.FontRenderContext;
 import java.awt.font.TextLayout;
 import java.awt.geom.AffineTransform;
+import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.regex.Pattern;
 
 /**
- * Text drawn as outlines, the way the charts draw theirs, so that a figure looks the same in every viewer
- * whatever fonts it has.
+ * The figures' text. In SVG ({@link SvgCanvas}) it is written as text elements, anchored at the point given,
+ * so a viewer lays the words out in its own font of the document's font stack; in a bitmap it is filled as
+ * outlines of Java's font. Widths for layout (wrapping, legends, room beside a label) come from Java's font.
  */
 final class Text {
 
@@ -28,6 +30,11 @@ final class Text {
     /** The advance width of the text in pixels. */
     static double width(String text, Font font) {
         return new TextLayout(text, font, FRC).getAdvance();
+    }
+
+    /** The bounds of the text's ink, relative to its origin on the baseline (y negative above it). */
+    static Rectangle2D ink(String text, Font font) {
+        return new TextLayout(text, font, FRC).getBounds();
     }
 
     /** The separator of the parts of a subtitle, where it breaks first. */
@@ -73,6 +80,10 @@ final class Text {
     static void draw(Graphics2D g, String text, Font font, double x, double y, Align align, Color colour,
             Color halo) {
         if (text.isEmpty()) {
+            return;
+        }
+        if (g instanceof SvgCanvas svg) {
+            svg.text(text, font, x, y, align, colour, halo);
             return;
         }
         TextLayout layout = new TextLayout(text, font, FRC);
