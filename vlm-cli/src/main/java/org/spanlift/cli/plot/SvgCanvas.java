@@ -86,13 +86,10 @@ final class SvgCanvas extends SVGGraphics2D {
             case CENTRE -> t.setAttributeNS(null, "text-anchor", "middle");
             case RIGHT -> t.setAttributeNS(null, "text-anchor", "end");
         }
+        // all three always: Batik gives an element the graphics state's font for whatever it leaves unset
         t.setAttributeNS(null, "font-size", ctx.doubleString(font.getSize2D()) + "px");
-        if (font.isBold()) {
-            t.setAttributeNS(null, "font-weight", "bold");
-        }
-        if (font.isItalic()) {
-            t.setAttributeNS(null, "font-style", "italic");
-        }
+        t.setAttributeNS(null, "font-weight", font.isBold() ? "bold" : "normal");
+        t.setAttributeNS(null, "font-style", font.isItalic() ? "italic" : "normal");
         t.appendChild(getDOMFactory().createTextNode(text));
         return t;
     }

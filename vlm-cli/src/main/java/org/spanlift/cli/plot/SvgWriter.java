@@ -127,13 +127,14 @@ public final class SvgWriter {
     private static final List<String> FONT = List.of("font-family", "font-size", "font-style", "font-weight");
 
     /**
-     * Leaves out what Batik writes but nothing uses: the graphics state's font on the groups (Java's
-     * logical font; only the root's family and a text's own size, weight and style apply), and the stroke
-     * settings of text that is not stroked.
+     * Leaves out what Batik writes but nothing uses: the graphics state's font on the groups and its family
+     * on text (Java's logical font; only the root's family and a text's own size, weight and style apply),
+     * and the stroke settings of text that is not stroked.
      */
     private static void tidy(Element e, Map<String, String> css) {
         String tag = e.getLocalName() == null ? e.getTagName() : e.getLocalName();
         if (tag.equals("text")) {
+            css.remove("font-family");
             if ("none".equals(css.get("stroke"))) {
                 css.keySet().removeIf(k -> k.startsWith("stroke-"));
             }

@@ -79,6 +79,19 @@ class SvgTextTest {
     }
 
     @Test
+    void onlyTheTitleIsBoldWhateverTheChartLastDrew() throws Exception {
+        for (PlotKind kind : PlotKind.values()) {
+            List<Element> texts = texts(SvgSupport.parse(plot(kind.cliName())));
+            for (int i = 0; i < texts.size(); i++) {
+                String style = texts.get(i).getAttribute("style");
+                String weight = i == 0 ? "font-weight:bold" : "font-weight:normal";
+                assertTrue(style.contains(weight) && style.contains("font-style:normal"),
+                        kind.cliName() + ", '" + texts.get(i).getTextContent() + "': " + style);
+            }
+        }
+    }
+
+    @Test
     void aHaloIsAStrokedCopyUnderItsText() throws Exception {
         Document doc = SvgSupport.parse(plot("lift"));
         List<Element> texts = texts(doc);
