@@ -4,8 +4,9 @@ import java.util.Arrays;
 
 /**
  * A section's measured lift coefficient against its angle of attack (from the chord line) through and
- * beyond the stall, at one or more Reynolds numbers: linear in alpha between the given angles, linear in
- * Reynolds number between curves, constant beyond the Reynolds numbers' ends. Angles in radians. Immutable.
+ * beyond the stall, at one or more Reynolds numbers: the points as given, linear in Reynolds number between
+ * curves, constant beyond the Reynolds numbers' ends ({@link #at}). Between the angles the stall analysis
+ * interpolates with a monotone cubic ({@code stall.SectionCurve.table}). Angles in radians. Immutable.
  */
 public final class MeasuredLiftCurve {
 
@@ -49,7 +50,7 @@ public final class MeasuredLiftCurve {
         return new MeasuredLiftCurve(new double[] {0}, alpha, new double[][] {cl});
     }
 
-    /** The curve at one Reynolds number: cl against alpha (rad), interpolated between the given curves. */
+    /** The points of the curve at one Reynolds number: cl against alpha (rad), linear between the given curves. */
     public Table at(double re) {
         int n = reynolds.length;
         if (n == 1 || re <= reynolds[0]) {
