@@ -1,5 +1,6 @@
 package org.spanlift.input;
 
+import java.io.StringReader;
 import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Deque;
@@ -11,9 +12,8 @@ import java.util.Optional;
 import java.util.Set;
 
 import org.snakeyaml.engine.v2.api.LoadSettings;
-import org.snakeyaml.engine.v2.api.lowlevel.Compose;
-import org.snakeyaml.engine.v2.api.lowlevel.Parse;
 import org.snakeyaml.engine.v2.common.Anchor;
+import org.snakeyaml.engine.v2.composer.Composer;
 import org.snakeyaml.engine.v2.events.AliasEvent;
 import org.snakeyaml.engine.v2.events.Event;
 import org.snakeyaml.engine.v2.events.NodeEvent;
@@ -27,6 +27,8 @@ import org.snakeyaml.engine.v2.nodes.NodeTuple;
 import org.snakeyaml.engine.v2.nodes.ScalarNode;
 import org.snakeyaml.engine.v2.nodes.SequenceNode;
 import org.snakeyaml.engine.v2.nodes.Tag;
+import org.snakeyaml.engine.v2.parser.ParserImpl;
+import org.snakeyaml.engine.v2.scanner.StreamReader;
 
 /**
  * Reads YAML text into a {@link YamlValue} tree with line marks. Safe: only the node graph is composed (no
@@ -94,8 +96,10 @@ public final class YamlParser {
                 .setMaxAliasesForCollections(MAX_ALIASES).setAllowNonScalarKeys(true).build();
         Optional<Node> root;
         try {
-            checkStructure(new Parse(settings).parseString(text), file);
-            root = new Compose(settings).composeString(text);
+            // the parser and composer directly: the engine's module does not export its lowlevel api
+            checkStructure(() -> new ParserImpl(settings, new StreamReader(settings, new StringReader(text))), file);
+            root = new Composer(settings, new ParserImpl(settings, new StreamReader(settings, new StringReader(text))))
+                    .getSingleNode();
         } catch (MarkedYamlEngineException e) {
             throw syntaxError(e, text, file);
         } catch (ReaderException e) {
