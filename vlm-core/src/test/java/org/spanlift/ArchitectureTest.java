@@ -28,7 +28,7 @@ class ArchitectureTest {
                 .layer("lattice").definedBy("org.spanlift.lattice..")
                 .layer("solve").definedBy("org.spanlift.solve..", "org.spanlift.results..")
                 .layer("analyses").definedBy("org.spanlift.flight..", "org.spanlift.stall..", "org.spanlift.loads..",
-                        "org.spanlift.washout..")
+                        "org.spanlift.washout..", "org.spanlift.balance..")
                 .layer("vocabulary").definedBy("org.spanlift.vocabulary..")
                 .layer("sweep").definedBy("org.spanlift.sweep..")
                 .layer("readers").definedBy("org.spanlift.io..")
@@ -58,8 +58,8 @@ class ArchitectureTest {
                 "org.spanlift.input..", "org.spanlift.geometry..", "org.spanlift.section..",
                 "org.spanlift.atmosphere..", "org.spanlift.structure..", "org.spanlift.lattice..",
                 "org.spanlift.solve..", "org.spanlift.results..", "org.spanlift.flight..", "org.spanlift.stall..",
-                "org.spanlift.loads..", "org.spanlift.washout..", "org.spanlift.vocabulary..", "org.spanlift.sweep..",
-                "org.spanlift.io..",
+                "org.spanlift.loads..", "org.spanlift.washout..", "org.spanlift.balance..", "org.spanlift.vocabulary..",
+                "org.spanlift.sweep..", "org.spanlift.io..",
                 "org.spanlift.batch..")
                 .check(CORE);
     }

@@ -5,5 +5,7 @@ public enum ControlKind {
     /** Both sides deflect the same way (symmetric). */
     FLAP,
     /** The left side deflects opposite to the right (antisymmetric); mirrored surfaces only. */
-    AILERON
+    AILERON,
+    /** Symmetric pitch control on a tail or canard: the deflection that trims the configuration. */
+    ELEVATOR
 }

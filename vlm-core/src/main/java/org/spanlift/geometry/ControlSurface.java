@@ -1,12 +1,20 @@
 package org.spanlift.geometry;
 
+import java.util.Optional;
+
 /**
  * A plain trailing-edge control: spanwise from y = from to y = to (metres, on the described half), with
  * its chord a fixed fraction of the local chord. The deflection is in radians, positive trailing edge
- * down; for an aileron it is the right one's.
+ * down; for an aileron it is the right one's. The limits, when given, are its travel.
  */
 public record ControlSurface(String name, ControlKind kind, double from, double to, double chordFraction,
-        double deflection) {
+        double deflection, Optional<DeflectionLimits> limits) {
+
+    /** A control without stated limits. */
+    public ControlSurface(String name, ControlKind kind, double from, double to, double chordFraction,
+            double deflection) {
+        this(name, kind, from, to, chordFraction, deflection, Optional.empty());
+    }
 
     /** The hinge line as a fraction of the local chord from the leading edge. */
     public double hingeFraction() {

@@ -9,12 +9,19 @@ import java.util.List;
  * @param fuselageHalfWidth y of the wing-fuselage junction of a mirrored surface, m (0: none). The lattice
  *                          carries the surface through the fuselage; the stations inboard of the junction
  *                          are covered by it and are not candidates for stall onset
+ * @param role              what the surface does ({@link Wing} makes its first surface the wing)
  */
 public record Surface(String name, boolean mirrored, Planform planform, List<ControlSurface> controls,
-        LatticeSpec lattice, double fuselageHalfWidth) {
+        LatticeSpec lattice, double fuselageHalfWidth, SurfaceRole role) {
 
     public Surface {
         controls = List.copyOf(controls);
+        for (ControlSurface c : controls) {
+            if (c.kind() == ControlKind.ELEVATOR && !role.pitchControlling()) {
+                throw new IllegalArgumentException("the elevator '" + c.name() + "' needs a surface whose role is "
+                        + "tail or canard; surface '" + name + "' is a " + role.word());
+            }
+        }
         if (!(fuselageHalfWidth >= 0) || !(fuselageHalfWidth < planform.yEnd())) {
             throw new IllegalArgumentException("the fuselage half-width must be from 0 to less than the semi-span, got "
                     + fuselageHalfWidth + " m");
@@ -24,10 +31,21 @@ public record Surface(String name, boolean mirrored, Planform planform, List<Con
         }
     }
 
-    /** A surface without a fuselage. */
+    /** A surface with no special role (the wing, when it is the first). */
+    public Surface(String name, boolean mirrored, Planform planform, List<ControlSurface> controls,
+            LatticeSpec lattice, double fuselageHalfWidth) {
+        this(name, mirrored, planform, controls, lattice, fuselageHalfWidth, SurfaceRole.OTHER);
+    }
+
+    /** A surface without a fuselage and with no special role. */
     public Surface(String name, boolean mirrored, Planform planform, List<ControlSurface> controls,
             LatticeSpec lattice) {
         this(name, mirrored, planform, controls, lattice, 0);
+    }
+
+    /** The same surface in another role. */
+    public Surface withRole(SurfaceRole newRole) {
+        return new Surface(name, mirrored, planform, controls, lattice, fuselageHalfWidth, newRole);
     }
 
     /** True when the station at |y| lies inside the fuselage (inboard of the junction). */
@@ -64,10 +82,11 @@ public record Surface(String name, boolean mirrored, Planform planform, List<Con
 
     /** The same surface with its washout larger by {@code change}, rad ({@link Planform#withWashoutChange}). */
     public Surface withWashoutChange(double change) {
-        return new Surface(name, mirrored, planform.withWashoutChange(change), controls, lattice, fuselageHalfWidth);
+        return new Surface(name, mirrored, planform.withWashoutChange(change), controls, lattice, fuselageHalfWidth,
+                role);
     }
 
     public Surface withLattice(LatticeSpec spec) {
-        return new Surface(name, mirrored, planform, controls, spec, fuselageHalfWidth);
+        return new Surface(name, mirrored, planform, controls, spec, fuselageHalfWidth, role);
     }
 }

@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.OptionalInt;
 import java.util.TreeSet;
 
 /**
@@ -11,18 +13,53 @@ import java.util.TreeSet;
  * sections they name, and the reference values. Immutable; SI units throughout. The length unit of the
  * file is kept for display only. Every section a surface names must be in {@code sections}: a wing naming
  * one that is not is refused with an {@link IllegalArgumentException} naming the station and the section.
+ *
+ * <p>The first surface is the wing: a first surface without a role gets {@link SurfaceRole#WING}, and no other
+ * surface may have it; at most one surface is the tail and one the canard.
+ *
+ * @param fuselage         the fuselage of the empirical pitching-moment estimate, if described
+ * @param thrustLineHeight the height of the thrust line above the centre of gravity, m, if given (thrust along
+ *                         the body x axis, equal to the drag in level flight)
  */
 public record Wing(String name, LengthUnit displayUnit, Reference reference, List<Surface> surfaces,
-        Map<String, Section> sections) {
+        Map<String, Section> sections, Optional<Fuselage> fuselage, OptionalDouble thrustLineHeight) {
 
     public Wing {
-        surfaces = List.copyOf(surfaces);
-        sections = Map.copyOf(sections);
         if (surfaces.isEmpty()) {
             throw new IllegalArgumentException("a wing needs at least one surface");
         }
+        surfaces = new ArrayList<>(surfaces);
+        if (surfaces.get(0).role() == SurfaceRole.OTHER) {
+            surfaces.set(0, surfaces.get(0).withRole(SurfaceRole.WING));
+        }
+        surfaces = List.copyOf(surfaces);
+        sections = Map.copyOf(sections);
+        requireRoles(surfaces);
+        if (thrustLineHeight.isPresent() && !Double.isFinite(thrustLineHeight.getAsDouble())) {
+            throw new IllegalArgumentException("the thrust line height must be a finite length");
+        }
         for (Surface s : surfaces) {
             requireSections(s, sections);
+        }
+    }
+
+    /** A wing without fuselage or thrust line. */
+    public Wing(String name, LengthUnit displayUnit, Reference reference, List<Surface> surfaces,
+            Map<String, Section> sections) {
+        this(name, displayUnit, reference, surfaces, sections, Optional.empty(), OptionalDouble.empty());
+    }
+
+    private static void requireRoles(List<Surface> surfaces) {
+        if (surfaces.get(0).role() != SurfaceRole.WING) {
+            throw new IllegalArgumentException("the first surface is the wing; surface '" + surfaces.get(0).name()
+                    + "' is declared a " + surfaces.get(0).role().word());
+        }
+        for (SurfaceRole role : List.of(SurfaceRole.WING, SurfaceRole.TAIL, SurfaceRole.CANARD)) {
+            List<String> named = surfaces.stream().filter(s -> s.role() == role).map(Surface::name).toList();
+            if (named.size() > 1) {
+                throw new IllegalArgumentException("only one surface may be the " + role.word() + (role
+                        == SurfaceRole.WING ? " (the first)" : "") + "; found " + String.join(", ", named));
+            }
         }
     }
 
@@ -61,6 +98,16 @@ public record Wing(String name, LengthUnit displayUnit, Reference reference, Lis
         return surfaces.stream().allMatch(Surface::mirrored);
     }
 
+    /** The index of the surface of the given role, if there is one. */
+    public OptionalInt surfaceIndex(SurfaceRole role) {
+        for (int i = 0; i < surfaces.size(); i++) {
+            if (surfaces.get(i).role() == role) {
+                return OptionalInt.of(i);
+            }
+        }
+        return OptionalInt.empty();
+    }
+
     /** Every control on every surface, in file order. */
     public List<ControlSurface> controls() {
         List<ControlSurface> all = new ArrayList<>();
@@ -80,13 +127,13 @@ public record Wing(String name, LengthUnit displayUnit, Reference reference, Lis
     /** A copy with every surface's lattice replaced. */
     public Wing withLattice(LatticeSpec spec) {
         return new Wing(name, displayUnit, reference, surfaces.stream().map(s -> s.withLattice(spec)).toList(),
-                sections);
+                sections, fuselage, thrustLineHeight);
     }
 
     /** The same wing with the washout of its first surface larger by {@code change}, rad. */
     public Wing withWashoutChange(double change) {
         List<Surface> changed = new ArrayList<>(surfaces);
         changed.set(0, surfaces.get(0).withWashoutChange(change));
-        return new Wing(name, displayUnit, reference, changed, sections);
+        return new Wing(name, displayUnit, reference, changed, sections, fuselage, thrustLineHeight);
     }
 }

@@ -12,9 +12,13 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import java.util.Set;
 
 import org.spanlift.geometry.ControlKind;
+import org.spanlift.geometry.DeflectionLimits;
+import org.spanlift.geometry.Fuselage;
+import org.spanlift.geometry.SurfaceRole;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.EllipticPlanform;
 import org.spanlift.geometry.LatticeSpec;
@@ -44,17 +48,22 @@ public final class WingFileReader {
 
     /** Keys accepted at each level of a wing file (the schema sweeps check their paths against). */
     public static final Set<String> TOP_KEYS = Set.of("name", "units", "reference", "surfaces", "sections",
-            "structure");
+            "structure", "fuselage", "thrust-line");
     public static final Set<String> REFERENCE_KEYS = Set.of("area", "span", "chord", "moment-point");
     public static final Set<String> SURFACE_KEYS = Set.of("name", "mirror", "section", "stations", "trapezoid",
-            "elliptic", "controls", "lattice", "fuselage-half-width");
+            "elliptic", "controls", "lattice", "fuselage-half-width", "role");
     public static final Set<String> STATION_KEYS = Set.of("y", "chord", "nose-x", "nose-z", "twist", "section");
     public static final Set<String> TRAPEZOID_KEYS = Set.of("span", "root-chord", "taper", "sweep", "dihedral",
             "washout", "root-twist", "root-nose");
     public static final Set<String> ELLIPTIC_KEYS = Set.of("span", "root-chord", "dihedral", "washout",
             "root-twist", "root-nose");
     public static final Set<String> CONTROL_KEYS = Set.of("name", "kind", "from", "to", "chord-fraction",
-            "deflection");
+            "deflection", "limits");
+    public static final Set<String> FUSELAGE_KEYS = Set.of("length", "width", "nose-x");
+    public static final Set<String> THRUST_LINE_KEYS = Set.of("height");
+
+    /** Largest control deflection or travel limit accepted, degrees either way. */
+    public static final double MAX_DEFLECTION_DEG = 45;
     public static final Set<String> LATTICE_KEYS = Set.of("strips", "rows", "strip-spacing", "row-spacing");
     public static final Set<String> SECTION_KEYS = SectionReader.KEYS;
 
@@ -139,9 +148,10 @@ public final class WingFileReader {
         List<Surface> surfaces = new ArrayList<>();
         Set<String> surfaceNames = new HashSet<>();
         Set<String> controlNames = new HashSet<>();
+        Set<SurfaceRole> rolesTaken = new HashSet<>();
         int panels = 0;
         for (Field sf : surfaceFields) {
-            Surface surface = readSurface(sf, k, sections, controlNames);
+            Surface surface = readSurface(sf, k, sections, controlNames, surfaces.isEmpty(), rolesTaken);
             if (!surfaceNames.add(surface.name())) {
                 throw sf.required("name", "a name").error("another surface has the name '" + Field.shown(surface.name())
                         + "'; expected a name no other surface has");
@@ -159,7 +169,13 @@ public final class WingFileReader {
         root.optional("structure").ifPresent(st -> StructureReader.read(st, k, surfaces.get(0)));
         Reference defaults = Wing.defaultReference(surfaces.get(0));
         Reference reference = root.optional("reference").map(r -> readReference(r, k, defaults)).orElse(defaults);
-        Wing wing = new Wing(name, unit, reference, surfaces, sections);
+        Optional<Fuselage> fuselage = root.optional("fuselage").map(fu -> readFuselage(fu, k));
+        OptionalDouble thrustHeight = root.optional("thrust-line").map(t -> {
+            t.allowOnly(THRUST_LINE_KEYS);
+            Field h = t.required("height", "the height of the thrust line above the centre of gravity");
+            return OptionalDouble.of(length(h, h.number(), k));
+        }).orElse(OptionalDouble.empty());
+        Wing wing = new Wing(name, unit, reference, surfaces, sections, fuselage, thrustHeight);
         checkFuselageSides(wing, surfaceFields, k);
         return wing;
     }
@@ -262,9 +278,39 @@ public final class WingFileReader {
         return new Reference(area, span, chord, point);
     }
 
-    private static Surface readSurface(Field f, double k, Map<String, Section> sections, Set<String> controlNames) {
+    private static Fuselage readFuselage(Field f, double k) {
+        f.allowOnly(FUSELAGE_KEYS);
+        double length = positiveLength(f.required("length", "the fuselage's length"), k);
+        double width = positiveLength(f.required("width", "the fuselage's greatest width"), k);
+        Field nose = f.required("nose-x", "the x of the fuselage's nose");
+        return new Fuselage(length, width, length(nose, nose.number(), k));
+    }
+
+    private static SurfaceRole readRole(Field f, boolean first) {
+        SurfaceRole role = switch (f.choice(List.of("wing", "tail", "canard"))) {
+            case "wing" -> SurfaceRole.WING;
+            case "tail" -> SurfaceRole.TAIL;
+            default -> SurfaceRole.CANARD;
+        };
+        if (first != (role == SurfaceRole.WING)) {
+            throw f.error(first ? "the first surface is the wing; expected role wing here, or put the wing first"
+                    : "only the first surface is the wing; expected tail or canard, or no role");
+        }
+        return role;
+    }
+
+    private static Surface readSurface(Field f, double k, Map<String, Section> sections, Set<String> controlNames,
+            boolean first, Set<SurfaceRole> rolesTaken) {
         f.allowOnly(SURFACE_KEYS);
         String name = name(f.required("name", "a name for the surface"), "a surface");
+        SurfaceRole role = f.optional("role").map(r -> {
+            SurfaceRole read = readRole(r, first);
+            if (!rolesTaken.add(read)) {
+                throw r.error("another surface is already the " + read.word() + "; expected one " + read.word()
+                        + " at most");
+            }
+            return read;
+        }).orElse(first ? SurfaceRole.WING : SurfaceRole.OTHER);
         boolean mirrored = f.optional("mirror").map(Field::bool).orElse(true);
         Optional<Field> sectionField = f.optional("section");
         String surfaceSection = sectionField.map(s -> sectionName(s, sections)).orElse(FLAT_SECTION);
@@ -298,7 +344,7 @@ public final class WingFileReader {
             return c.items();
         }).orElse(List.of());
         for (Field cf : controlFields) {
-            ControlSurface c = readControl(cf, k, mirrored, planform, controls);
+            ControlSurface c = readControl(cf, k, mirrored, planform, controls, role);
             if (!controlNames.add(c.name())) {
                 throw cf.required("name", "a name for the control").error("another control has the name '"
                         + Field.shown(c.name()) + "'; expected a name no other control in the file has");
@@ -315,7 +361,7 @@ public final class WingFileReader {
         }
         double fuselage = f.optional("fuselage-half-width").map(w -> fuselageHalfWidth(w, k, mirrored, planform))
                 .orElse(0.0);
-        return new Surface(name, mirrored, planform, controls, lattice, fuselage);
+        return new Surface(name, mirrored, planform, controls, lattice, fuselage, role);
     }
 
     private static double fuselageHalfWidth(Field f, double k, boolean mirrored, Planform planform) {
@@ -451,12 +497,19 @@ public final class WingFileReader {
     }
 
     private static ControlSurface readControl(Field f, double k, boolean mirrored, Planform planform,
-            List<ControlSurface> earlier) {
+            List<ControlSurface> earlier, SurfaceRole role) {
         f.allowOnly(CONTROL_KEYS);
         String name = name(f.required("name", "a name for the control"), "a control");
-        Field kindField = f.required("kind", "flap or aileron");
-        ControlKind kind = kindField.choice(List.of("flap", "aileron")).equals("flap") ? ControlKind.FLAP
-                : ControlKind.AILERON;
+        Field kindField = f.required("kind", "flap, aileron or elevator");
+        ControlKind kind = switch (kindField.choice(List.of("flap", "aileron", "elevator"))) {
+            case "flap" -> ControlKind.FLAP;
+            case "aileron" -> ControlKind.AILERON;
+            default -> ControlKind.ELEVATOR;
+        };
+        if (kind == ControlKind.ELEVATOR && !role.pitchControlling()) {
+            throw kindField.error("an elevator belongs on the tail or the canard; expected role: tail or role: canard "
+                    + "on this surface, or another kind");
+        }
         if (kind == ControlKind.AILERON && !mirrored) {
             throw kindField.error("an aileron deflects antisymmetrically and needs a mirrored surface; "
                     + "expected kind flap here, or mirror: true on the surface");
@@ -491,8 +544,29 @@ public final class WingFileReader {
             throw cfField.error("is " + Field.format(cf) + "; expected a fraction of the local chord between 0 and 1, "
                     + "both excluded");
         }
-        double deflection = Math.toRadians(f.optional("deflection").map(d -> d.inRange(-45, 45)).orElse(0.0));
-        return new ControlSurface(name, kind, from, to, cf, deflection);
+        double deflection = Math.toRadians(f.optional("deflection")
+                .map(d -> d.inRange(-MAX_DEFLECTION_DEG, MAX_DEFLECTION_DEG)).orElse(0.0));
+        Optional<DeflectionLimits> limits = f.optional("limits").map(l -> {
+            double[] v = l.numbers(2);
+            for (double d : v) {
+                if (!(Math.abs(d) <= MAX_DEFLECTION_DEG)) {
+                    throw l.error("holds " + Field.brief(d) + "; expected [least, greatest] in degrees (trailing edge "
+                            + "down positive), each within " + Field.brief(MAX_DEFLECTION_DEG));
+                }
+            }
+            if (!(v[0] < v[1])) {
+                throw l.error("is [" + Field.brief(v[0]) + ", " + Field.brief(v[1]) + "]; expected [least, greatest] in "
+                        + "degrees, the least first");
+            }
+            double lo = Math.toRadians(v[0]);
+            double hi = Math.toRadians(v[1]);
+            if (deflection < lo || deflection > hi) {
+                throw l.error("do not hold the control's deflection of " + Field.brief(Math.toDegrees(deflection))
+                        + " degrees; expected limits around it");
+            }
+            return new DeflectionLimits(lo, hi);
+        });
+        return new ControlSurface(name, kind, from, to, cf, deflection, limits);
     }
 
     private static LatticeSpec readLattice(Field f, boolean noControls) {

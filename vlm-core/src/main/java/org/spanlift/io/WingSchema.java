@@ -22,7 +22,7 @@ public final class WingSchema {
         Node station = YamlSchema.mapping(WingFileReader.STATION_KEYS, Map.of(), false);
         Node trapezoid = YamlSchema.mapping(WingFileReader.TRAPEZOID_KEYS, Map.of("root-nose", Node.NUMBERS), false);
         Node elliptic = YamlSchema.mapping(WingFileReader.ELLIPTIC_KEYS, Map.of("root-nose", Node.NUMBERS), false);
-        Node control = YamlSchema.mapping(WingFileReader.CONTROL_KEYS, Map.of(), false);
+        Node control = YamlSchema.mapping(WingFileReader.CONTROL_KEYS, Map.of("limits", Node.NUMBERS), false);
         Node lattice = YamlSchema.mapping(WingFileReader.LATTICE_KEYS, Map.of(), false);
         Node surface = YamlSchema.mapping(WingFileReader.SURFACE_KEYS, Map.of(
                 "stations", new Node(Kind.INDEXED_LIST, Map.of(), station, false),
@@ -50,6 +50,8 @@ public final class WingSchema {
         ROOT = YamlSchema.mapping(WingFileReader.TOP_KEYS, Map.of(
                 "reference", reference,
                 "surfaces", new Node(Kind.NAMED_LIST, Map.of(), surface, false),
+                "fuselage", YamlSchema.mapping(WingFileReader.FUSELAGE_KEYS, Map.of(), false),
+                "thrust-line", YamlSchema.mapping(WingFileReader.THRUST_LINE_KEYS, Map.of(), false),
                 "sections", new Node(Kind.NAMED_MAPPING, Map.of(), section, false)), false);
     }
 

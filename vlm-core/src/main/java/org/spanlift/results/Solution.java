@@ -6,6 +6,7 @@ import java.util.Comparator;
 import java.util.List;
 
 import org.spanlift.geometry.Reference;
+import org.spanlift.geometry.Vec3;
 import org.spanlift.lattice.Lattice;
 import org.spanlift.lattice.Strip;
 
@@ -64,6 +65,25 @@ public final class Solution {
 
     public Reference reference() {
         return reference;
+    }
+
+    /** The same condition with moments taken about {@code point} (m, wing axes) instead. */
+    public Solution about(Vec3 point) {
+        Reference moved = new Reference(reference.area(), reference.span(), reference.chord(), point);
+        return new Solution(lattice, moved, alpha, deflections, circulation);
+    }
+
+    /**
+     * The normal force coefficient along body z (sum of the panels' z forces over q S), positive up; the
+     * pitching moment about a point dx behind the moment point is Cm + dx CZ / c.
+     */
+    public double normalForce() {
+        PanelForces f = panelForces();
+        double fz = 0;
+        for (int i = 0; i < lattice.panelCount(); i++) {
+            fz += f.fz(i);
+        }
+        return fz / reference.area();
     }
 
     /** Panel circulation per unit speed, m. */

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 
 import org.spanlift.geometry.ControlSurface;
+import org.spanlift.geometry.Vec3;
 import org.spanlift.geometry.Wing;
 import org.spanlift.lattice.Lattice;
 import org.spanlift.lattice.LatticeBuilder;
@@ -108,6 +109,25 @@ public final class WingAnalysis {
         synchronized (systems) {
             return stripBases.computeIfAbsent(key,
                     k -> StripBasis.solve(lattice, systems, halves, k.strips(), k.symmetric()));
+        }
+    }
+
+    /**
+     * The circulation per unit speed (m, every panel) of a steady nose-up pitch rate q about {@code centre} (m,
+     * wing axes), per unit of q/V (1/m), with no angle of attack, incidence or deflection: the air meets each
+     * control point at (-(z - z_c), 0, x - x_c) q, so the right-hand side is (z - z_c) n_x - (x - x_c) n_z. The
+     * rotation is symmetric, so a mirrored wing solves it on its symmetric system. The wake stays along +x
+     * (linear theory).
+     */
+    public double[] pitchRateCirculation(Vec3 centre) {
+        int n = lattice.panelCount();
+        double[] rhs = new double[n];
+        for (int i = 0; i < n; i++) {
+            rhs[i] = (lattice.cz(i) - centre.z()) * lattice.nx(i) - (lattice.cx(i) - centre.x()) * lattice.nz(i);
+        }
+        synchronized (systems) {
+            InfluenceSystem main = halves ? systems.symmetric() : systems.full();
+            return BasisSolutions.expand(lattice, main, rhs, 1);
         }
     }
 

@@ -51,6 +51,11 @@ public final class CoupledLift {
         return MaximumLift.from(analysis, branch);
     }
 
+    /** The lattice solution at the maximum lift (incidence corrections included). */
+    public Solution maximumSolution() {
+        return branch.coupling().solution(branch.maximum());
+    }
+
     /** The traced curve. */
     public LiftBranch branch() {
         return branch;

@@ -21,7 +21,7 @@ public final class FlapLift {
     }
 
     /** The lifting deflections, rad, control order, for the given ones. */
-    static double[] deflections(Wing wing, double[] deflections) {
+    public static double[] deflections(Wing wing, double[] deflections) {
         double[] out = deflections.clone();
         List<ControlSurface> controls = wing.controls();
         for (int c = 0; c < controls.size(); c++) {

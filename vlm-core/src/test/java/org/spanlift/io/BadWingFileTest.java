@@ -36,10 +36,10 @@ class BadWingFileTest {
             missing-surfaces             | 1  | surfaces                               | missing key; expected a list of surfaces
             missing-station-y            | 6  | surfaces[0].stations[1].y              | missing key; expected the station's spanwise position
             missing-station-chord        | 7  | surfaces[0].stations[1].chord          | missing key; expected the local chord
-            missing-control-kind         | 6  | surfaces[0].controls[0].kind           | missing key; expected flap or aileron
+            missing-control-kind         | 6  | surfaces[0].controls[0].kind           | missing key; expected flap, aileron or elevator
             empty-required-value         | 6  | surfaces[0].stations[0].chord          | the key has no value; expected the local chord
             empty-optional-value         | 7  | surfaces[0].trapezoid.washout          | the key has no value; expected a value, or leave the key out
-            unknown-top-key              | 2  | colour                                 | unknown key; expected one of name, reference, sections, structure, surfaces, units
+            unknown-top-key              | 2  | colour                                 | unknown key; expected one of fuselage, name, reference, sections, structure, surfaces, thrust-line, units
             unknown-surface-key          | 4  | surfaces[0].mirrored                   | unknown key; expected one of controls, elliptic, fuselage-half-width, lattice, mirror,
             unknown-station-key          | 6  | surfaces[0].stations[1].incidence      | unknown key; expected one of chord, nose-x, nose-z, section, twist, y
             unknown-trapezoid-key        | 7  | surfaces[0].trapezoid.tip-chord        | unknown key; expected one of dihedral, root-chord, root-nose,
@@ -196,6 +196,14 @@ class BadWingFileTest {
             flap-lift-curve-below-clean             | 10 | sections.main.flap-lift-curves[0].cl[4] | the curve's maximum cl, 1.3, is 0.1 below the clean curve's 1.4; expected a flap curve that raises cl_max by 0 to 3
             flap-lift-curve-no-zero-lift            | 10 | sections.main.flap-lift-curves[0].cl[0] | does not rise through zero lift below its maximum
             flap-lift-curve-file-ends-at-maximum    | 10 | sections.main.flap-lift-curves[0].file | bad-lift-curves/ends-at-maximum.csv:8: cl: the curve ends without falling past its maximum
+            second-surface-role-wing                | 6  | surfaces[1].role                       | only the first surface is the wing; expected tail or canard, or no role
+            first-surface-role-canard               | 4  | surfaces[0].role                       | the first surface is the wing; expected role wing here, or put the wing first
+            elevator-without-tail-role              | 8  | surfaces[1].controls[0].kind           | an elevator belongs on the tail or the canard; expected role: tail or role: canard on this surface, or another kind
+            elevator-limits-reversed                | 9  | surfaces[1].controls[0].limits         | is [15, -25]; expected [least, greatest] in degrees, the least first
+            elevator-deflection-beyond-limits       | 9  | surfaces[1].controls[0].limits         | do not hold the control's deflection of 20 degrees; expected limits around it
+            two-tails                               | 9  | surfaces[2].role                       | another surface is already the tail; expected one tail at most
+            fuselage-missing-width                  | 5  | fuselage.width                         | missing key; expected the fuselage's greatest width
+            thrust-line-unknown-key                 | 5  | thrust-line.angle                      | unknown key; expected one of height
             flap-cl-max-disagrees-with-flap-curve   | 9  | sections.main.flap-cl-max              | gives an increment of 0.5 at 20 degrees, but the flap curve at 20 degrees (line 11) reaches 1.7, 0.3 above the clean curve's 1.4; expected the two within 0.02
             """;
 
