@@ -29,7 +29,8 @@ class TrapezoidTest {
                 Math.toRadians(2.5), "main", 0.2, -0.1);
         // record equality compares every double exactly
         assertEquals(code.planform(), file.main().planform());
-        assertEquals(code.surface("wing", List.of(), LatticeSpec.DEFAULT), file.main());
+        // a wing makes its first surface the wing
+        assertEquals(code.surface("wing", List.of(), LatticeSpec.DEFAULT).withRole(SurfaceRole.WING), file.main());
     }
 
     @Test
