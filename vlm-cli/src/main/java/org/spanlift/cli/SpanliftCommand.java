@@ -19,7 +19,7 @@ import picocli.CommandLine.Command;
         description = "Vortex-lattice wing analysis: span load, lift slope, induced drag and span efficiency.",
         subcommands = {SolveCommand.class, StallCommand.class, LoadsCommand.class, SweepCommand.class,
                 MergeCommand.class, PlotCommand.class, ReportCommand.class, CompareCommand.class,
-                ValidateCommand.class, WashoutCommand.class},
+                ValidateCommand.class, WashoutCommand.class, BalanceCommand.class},
         footer = {"", "Exit codes: 0 success; 1 the run finished but some case failed; 2 bad input, usage, or an"
                 + " environment the run cannot proceed in (a full disk); 3 internal error."})
 public final class SpanliftCommand implements Runnable {

@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
+import org.spanlift.balance.BalanceStudy;
 import org.spanlift.flight.FlightCondition;
 import org.spanlift.flight.FlightPoint;
 import org.spanlift.flight.ReynoldsRule;
@@ -62,6 +63,7 @@ public final class CaseEvaluator {
     private final boolean wantStall;
     private final boolean wantFlaps;
     private final boolean wantLoads;
+    private final boolean wantBalance;
     private final InfluenceCache cache = new InfluenceCache(CACHE_SIZE);
 
     public CaseEvaluator(Sweep sweep) {
@@ -71,6 +73,7 @@ public final class CaseEvaluator {
         this.wantStall = columns.stream().anyMatch(ResultColumn::needsClMax);
         this.wantFlaps = columns.stream().anyMatch(ResultColumn::needsFlaps);
         this.wantLoads = columns.stream().anyMatch(ResultColumn::needsLoadCase);
+        this.wantBalance = columns.stream().anyMatch(ResultColumn::needsCentreOfGravity);
     }
 
     /** Factorizations done so far by this evaluator (for measurements). */
@@ -149,8 +152,13 @@ public final class CaseEvaluator {
         }
         double[] clean = StallStudy.cleanDeflections(wing, asked);
         boolean flapCase = wantFlaps && StallStudy.anyFlapDeflected(wing, flapped);
-        WingAnalysis analysis = flapCase ? WingAnalysis.of(wing, cache, asked, clean, flapped)
-                : WingAnalysis.of(wing, cache, asked, clean);
+        // The elevators' bases too when the balance trims with them.
+        double[] elevators = new double[nc];
+        for (int c = 0; c < nc; c++) {
+            elevators[c] = wantBalance && controls.get(c).kind() == ControlKind.ELEVATOR ? 1 : 0;
+        }
+        WingAnalysis analysis = flapCase ? WingAnalysis.of(wing, cache, asked, clean, flapped, elevators)
+                : WingAnalysis.of(wing, cache, asked, clean, elevators);
         WingResult wingResult = WingResult.of(analysis, asked);
 
         StallStudy study = null;
@@ -165,6 +173,8 @@ public final class CaseEvaluator {
         Object[] out = new Object[columns.size()];
         Map<String, FlightPoint> points = new HashMap<>();
         SpanwiseLoads loads = wantLoads ? loads(tree, wing, analysis, clean) : null;
+        BalanceStudy balance = wantBalance ? BalanceStudy.of(analysis, flapCase ? flapped : clean,
+                sweep.centreOfGravity().orElseThrow(), sweep.condition(), sweep.assumeClMax()) : null;
         for (int k = 0; k < columns.size(); k++) {
             ResultColumn col = columns.get(k);
             out[k] = switch (col.group()) {
@@ -179,6 +189,7 @@ public final class CaseEvaluator {
                         () -> new InputException(baseFile, 0, "controls", "the wing has no control named '"
                                 + col.control() + "'"))));
                 case LOADS -> value(col, loads);
+                case BALANCE -> value(col, balance);
             };
         }
         return out;

@@ -23,6 +23,7 @@ import java.util.Set;
 
 import org.spanlift.atmosphere.AtmosphereState;
 import org.spanlift.atmosphere.StandardAtmosphere;
+import org.spanlift.balance.CentreOfGravity;
 import org.spanlift.flight.FlightCondition;
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
@@ -67,7 +68,7 @@ public final class SweepFileReader {
     static final Set<String> LOAD_CASE_KEYS = Set.of("speed", "load-factor");
     static final Set<String> RANGE_KEYS = Set.of("from", "to", "step");
     static final Set<String> DESIGN_KEYS = Set.of("kind", "cases", "seed");
-    static final Set<String> FLIGHT_KEYS = Set.of("weight", "altitude", "isa-offset", "load-factor", "flaps");
+    static final Set<String> FLIGHT_KEYS = Set.of("weight", "altitude", "isa-offset", "load-factor", "flaps", "cg");
     static final Set<String> POINT_KEYS = Set.of("alpha", "CL");
     static final Set<String> RANK_KEYS = Set.of("by", "order", "keep");
 
@@ -144,6 +145,13 @@ public final class SweepFileReader {
         double loadFactor = flight.flatMap(f -> f.optional("load-factor")).map(f -> f.inRange(0.1, 15)).orElse(1.0);
         OptionalDouble flaps = flight.flatMap(f -> f.optional("flaps")).map(f -> OptionalDouble.of(f.inRange(-45, 45)))
                 .orElse(OptionalDouble.empty());
+        Optional<CentreOfGravity> cg = flight.flatMap(f -> f.optional("cg")).map(f -> {
+            try {
+                return CentreOfGravity.parse(f.text());
+            } catch (QuantityFormatException e) {
+                throw f.error(e.getMessage());
+            }
+        });
         Optional<FlightCondition> condition = Optional.empty();
         if (weight.isPresent()) {
             Field at = flight.orElseThrow();
@@ -238,6 +246,10 @@ public final class SweepFileReader {
         if (stall && condition.isEmpty() && columns.stream().anyMatch(ResultColumn::needsWeight)) {
             throw columnsField.error("stall_speed columns need a weight: add flight: {weight: ...} (such as 1100kg)");
         }
+        if (cg.isEmpty() && columns.stream().anyMatch(ResultColumn::needsCentreOfGravity)) {
+            throw columnsField.error("balance columns need a centre of gravity: add flight: {cg: ...} (such as 25%mac "
+                    + "or 0.62m)");
+        }
         if (columns.stream().anyMatch(ResultColumn::needsFlaps)
                 && baseWing.controls().stream().noneMatch(c -> c.kind() == ControlKind.FLAP)) {
             throw columnsField.error("stall_flaps columns need a control of kind flap; the base wing has none");
@@ -252,7 +264,7 @@ public final class SweepFileReader {
         Optional<LoadCase> loadCase = loadCase(root, columnsField, columns, condition, altitude, baseTree, baseWing);
         return new Sweep(file, baseName, basePath, baseTree, baseWing, parameters, derivation, design, columns,
                 constraints,
-                Optional.ofNullable(ranking), condition, flaps, assume, loadCase, fingerprint(text, baseText));
+                Optional.ofNullable(ranking), condition, flaps, assume, loadCase, cg, fingerprint(text, baseText));
     }
 
 

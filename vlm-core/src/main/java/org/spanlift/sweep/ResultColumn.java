@@ -43,7 +43,9 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
         /** {@link Vocabulary#CONTROL}. */
         CONTROL,
         /** {@link Vocabulary#LOADS} of the sweep's load case, under {@link Vocabulary#LOAD_CASE}. */
-        LOADS
+        LOADS,
+        /** {@link Vocabulary#BALANCE} at the sweep's centre of gravity, under {@link Vocabulary#BALANCE_PREFIX}. */
+        BALANCE
     }
 
     /** The flag column added when a sweep assumes cl-max for sections that give none. */
@@ -133,6 +135,13 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
                             + String.join(", ", Vocabulary.names(Vocabulary.LOADS))));
             return new ResultColumn(n, Group.LOADS, k, null, false, 0);
         }
+        if (n.startsWith(Vocabulary.BALANCE_PREFIX)) {
+            String rest = n.substring(Vocabulary.BALANCE_PREFIX.length());
+            ResultKey<?> k = Vocabulary.lookup(Vocabulary.BALANCE, rest).orElseThrow(() -> new ColumnException(
+                    "unknown balance result '" + rest + "'; expected " + Vocabulary.BALANCE_PREFIX + " followed by one of "
+                            + String.join(", ", Vocabulary.names(Vocabulary.BALANCE))));
+            return new ResultColumn(n, Group.BALANCE, k, null, false, 0);
+        }
         Matcher c = CONTROL.matcher(n);
         if (c.matches()) {
             if (!controls.contains(c.group(1))) {
@@ -151,7 +160,8 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
                 + String.join(", ", Vocabulary.names(Vocabulary.MAX_LIFT)) + "); "
                 + String.join(", ", Vocabulary.names(Vocabulary.STUDY)) + "; controls.NAME.* ("
                 + String.join(", ", Vocabulary.names(Vocabulary.CONTROL)) + "); loads.* ("
-                + String.join(", ", Vocabulary.names(Vocabulary.LOADS)) + ")");
+                + String.join(", ", Vocabulary.names(Vocabulary.LOADS)) + "); balance.* ("
+                + String.join(", ", Vocabulary.names(Vocabulary.BALANCE)) + ")");
     }
 
     /** True for columns that need section cl-max data. */
@@ -167,6 +177,11 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
     /** True for columns of the sweep's load case ({@code loads.*}). */
     public boolean needsLoadCase() {
         return group == Group.LOADS;
+    }
+
+    /** True for columns of the balance at the sweep's centre of gravity ({@code balance.*}). */
+    public boolean needsCentreOfGravity() {
+        return key.needs(Need.CG);
     }
 
     /** True for columns that need a weight (stall speeds). */

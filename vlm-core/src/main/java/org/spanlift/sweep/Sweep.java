@@ -6,6 +6,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.spanlift.flight.FlightCondition;
+import org.spanlift.balance.CentreOfGravity;
 import org.spanlift.geometry.Wing;
 import org.spanlift.input.YamlValue;
 import org.spanlift.structure.LoadCase;
@@ -31,12 +32,14 @@ import org.spanlift.structure.LoadCase;
  * @param flapsDeg    the flap deflection of the flapped configuration, degrees (else the base file's)
  * @param assumeClMax the cl_max assumed for sections that give none, if asked
  * @param loadCase    the load case of the {@code loads.*} columns, if asked
+ * @param centreOfGravity the centre of gravity of the {@code balance.*} columns, if given
  * @param fingerprint SHA-256 of the sweep file and the base wing file: a run's output belongs to it
  */
 public record Sweep(String file, String baseName, Path basePath, YamlValue baseTree, Wing baseWing,
         List<Parameter> parameters, Derivation derivation, Design design, List<ResultColumn> columns, List<Constraint> constraints,
         Optional<Ranking> ranking, Optional<FlightCondition> condition, OptionalDouble flapsDeg,
-        OptionalDouble assumeClMax, Optional<LoadCase> loadCase, String fingerprint) {
+        OptionalDouble assumeClMax, Optional<LoadCase> loadCase, Optional<CentreOfGravity> centreOfGravity,
+        String fingerprint) {
 
     public Sweep {
         parameters = List.copyOf(parameters);

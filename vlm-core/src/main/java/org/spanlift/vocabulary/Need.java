@@ -9,5 +9,7 @@ public enum Need {
     /** A weight (a flight condition). */
     WEIGHT,
     /** A drag polar for every section. */
-    POLARS
+    POLARS,
+    /** A centre of gravity. */
+    CG
 }

@@ -21,6 +21,8 @@ import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.function.Function;
 
+import org.spanlift.balance.Balance;
+import org.spanlift.balance.BalanceStudy;
 import org.spanlift.flight.FlightPoint;
 import org.spanlift.lattice.Lattice;
 import org.spanlift.loads.SpanwiseLoads;
@@ -45,6 +47,9 @@ import org.spanlift.washout.WashoutDesign;
  * ({@code max_lift.CL}) or {@link #MAX_FLAPS};</li>
  * <li>{@link #STUDY}: the clean-and-flapped stall study (flap increment, stall speeds);</li>
  * <li>{@link #WASHOUT}: the answer of a washout search ({@code washout.least_deg});</li>
+ * <li>{@link #TRIM}: one trimmed point of level flight (the rows of {@code balance}'s trim table);</li>
+ * <li>{@link #BALANCE}: the configuration in balance at one centre of gravity, under {@link #BALANCE_PREFIX} in a
+ * sweep ({@code balance.static_margin});</li>
  * <li>{@link #LOADS}: one load case's root loads, under {@link #LOAD_CASE} in {@code compare};</li>
  * <li>{@link #CONTROL}: a control's geometry, under {@code controls.NAME.}.</li>
  * </ul>
@@ -63,6 +68,8 @@ public final class Vocabulary {
     public static final String MAX_FLAPS = "max_lift_flaps.";
     /** The prefix of the load keys where several groups share one flat row (compare). */
     public static final String LOAD_CASE = "loads.";
+    /** The prefix of the balance keys in a sweep. */
+    public static final String BALANCE_PREFIX = "balance.";
     /** The prefix of a control's keys, followed by its name and a dot. */
     public static final String CONTROLS = "controls.";
 
@@ -241,6 +248,96 @@ public final class Vocabulary {
                     CL_MAX, r -> r.washout().flatMap(p -> p.cruiseE().isPresent()
                             ? java.util.Optional.of((Object) p.cruiseE().getAsDouble()) : java.util.Optional.empty())
                             .orElse(null)));
+
+    /** One trimmed point of level flight. */
+    public static final List<ResultKey<Balance.TrimPoint>> TRIM = List.of(
+            key("speed_eas", METRE_PER_SECOND, "EAS", "equivalent airspeed", 1, t -> t.equivalentSpeed()),
+            key("speed_tas", METRE_PER_SECOND, "TAS", "true airspeed", 1, t -> t.trueSpeed()),
+            key("CL", NONE, "CL", "the configuration's lift coefficient", 3, t -> t.lift()),
+            key("alpha_deg", DEGREE, "alpha", "angle of attack of the wing file's x axis", 2,
+                    t -> Math.toDegrees(t.alpha())),
+            key("elevator_deg", DEGREE, "elevator", "elevator deflection, trailing edge down positive", 2,
+                    t -> Math.toDegrees(t.elevator())),
+            key("wing_CL", NONE, "wing CL", "the wing's lift coefficient on the reference area", 3,
+                    t -> t.wingLift()),
+            key("tail_CL", NONE, "tail CL", "the tail's (or canard's) lift coefficient on its own area", 3,
+                    t -> boxed(t.pitchLift())),
+            key("tail_load", NEWTON, "tail load", "the tail's (or canard's) lift, positive up", 0,
+                    t -> boxed(t.pitchLoad())),
+            key("CDi", NONE, "CDi", "induced drag coefficient of the configuration (Trefftz plane)", 5,
+                    t -> t.inducedDrag()),
+            key("CD", NONE, "CD", "CDi + CDp where every section gives a drag polar", 5, POLARS, t -> boxed(t.drag())),
+            key("trim_CDi", NONE, "trim CDi", "CDi trimmed less CDi at the same CL with the elevator at zero", 5,
+                    t -> t.trimDrag()),
+            key("thrust", NEWTON, "thrust", "thrust equal to the drag, where a thrust line is given", 0,
+                    t -> boxed(t.thrust())),
+            key("within_limits", FLAG, "in travel", "true when the elevator lies within its limits", 0,
+                    t -> t.withinLimits()));
+
+    /** The configuration in balance at one centre of gravity (a tail or canard with an elevator for the trim). */
+    public static final List<ResultKey<BalanceStudy>> BALANCE = List.of(
+            key("cg.x", METRE, "centre of gravity x", "the centre of gravity's x in the wing file's axes", 3,
+                    Set.of(Need.CG), BalanceStudy::cgX),
+            key("cg.mac_fraction", NONE, "  as a fraction of the MAC", "the centre of gravity behind the leading edge "
+                    + "of the wing's mean aerodynamic chord, over the MAC", 3, Set.of(Need.CG),
+                    BalanceStudy::cgMacFraction),
+            key("neutral_point.x", METRE, "neutral point x", "the stick-fixed neutral point's x: where dCm/dCL "
+                    + "vanishes at small angles of attack", 3, Set.of(Need.CG), b -> b.neutralPoint().x()),
+            key("neutral_point.mac_fraction", NONE, "  as a fraction of the MAC",
+                    "the neutral point behind the MAC's leading edge, over the MAC", 3, Set.of(Need.CG),
+                    b -> b.neutralPoint().macFraction()),
+            key("static_margin", NONE, "static margin", "neutral point less centre of gravity, over the MAC "
+                    + "(positive: stable)", 3, Set.of(Need.CG), BalanceStudy::staticMargin),
+            key("derivatives.CL_alpha", PER_RADIAN, "CL_alpha", "the configuration's lift slope at small angles", 4,
+                    Set.of(Need.CG), b -> b.derivatives().liftSlope()),
+            key("derivatives.Cm_alpha", PER_RADIAN, "Cm_alpha", "pitching-moment slope about the centre of gravity, "
+                    + "the fuselage's included", 4, Set.of(Need.CG), b -> b.derivatives().momentSlope()),
+            key("derivatives.CL_q", PER_RADIAN, "CL_q", "lift per radian of pitch rate q c / (2 V) about the centre "
+                    + "of gravity", 4, Set.of(Need.CG), b -> b.derivatives().liftPerRate()),
+            key("derivatives.Cm_q", PER_RADIAN, "Cm_q", "pitching moment per radian of q c / (2 V) (pitch damping)",
+                    4, Set.of(Need.CG), b -> b.derivatives().momentPerRate()),
+            key("derivatives.CL_de", PER_RADIAN, "CL_de", "lift per radian of elevator (with the handbook "
+                    + "effectiveness at small deflections)", 4, Set.of(Need.CG),
+                    b -> boxed(b.derivatives().liftPerElevator())),
+            key("derivatives.Cm_de", PER_RADIAN, "Cm_de", "pitching moment per radian of elevator about the centre "
+                    + "of gravity", 4, Set.of(Need.CG), b -> boxed(b.derivatives().momentPerElevator())),
+            key("stall_speed_trimmed.clean_eas", METRE_PER_SECOND, "trimmed stall speed clean EAS",
+                    "stall speed clean, trimmed with the tail's load, power off, equivalent airspeed", 2,
+                    Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT),
+                    b -> b.stallClean().map(s -> (Object) s.equivalentSpeed()).orElse(null)),
+            key("stall_speed_trimmed.flaps_eas", METRE_PER_SECOND, "trimmed stall speed flaps EAS",
+                    "stall speed with flaps, trimmed, power off, equivalent airspeed", 2,
+                    Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT, Need.FLAPS),
+                    b -> b.stallFlaps().map(s -> (Object) s.equivalentSpeed()).orElse(null)),
+            key("stall_speed_trimmed.basis", TEXT, "trimmed stall speed basis",
+                    "max-lift (every section gives a measured lift curve) or onset (the linear onset, which errs "
+                            + "safe)", 0, Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT),
+                    b -> b.stallClean().map(s -> (Object) s.basis().word()).orElse(null)),
+            key("stall_speed_trimmed.clean_CL", NONE, "  configuration CL there",
+                    "the whole configuration's CL at the trimmed clean stall (wing and tail)", 3,
+                    Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT),
+                    b -> b.stallClean().map(s -> (Object) s.lift()).orElse(null)),
+            key("elevator_at_stall.clean_deg", DEGREE, "elevator to trim at the stall clean",
+                    "the elevator deflection that trims the clean stall (trailing edge down positive)", 2,
+                    Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT),
+                    b -> b.stallClean().map(s -> (Object) Math.toDegrees(s.elevator())).orElse(null)),
+            key("elevator_at_stall.flaps_deg", DEGREE, "elevator to trim at the stall with flaps",
+                    "the elevator deflection that trims the flapped stall", 2,
+                    Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT, Need.FLAPS),
+                    b -> b.stallFlaps().map(s -> (Object) Math.toDegrees(s.elevator())).orElse(null)),
+            key("elevator_at_stall.within_limits", FLAG, "  within the elevator's travel",
+                    "true when the elevator reaches both trims within its limits", 0,
+                    Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT),
+                    b -> b.stallClean().map(s -> (Object) (s.withinLimits()
+                            && b.stallFlaps().map(Balance.TrimmedStall::withinLimits).orElse(true))).orElse(null)),
+            key("forward_limit.x", METRE, "forward limit of the centre of gravity x",
+                    "the most forward centre of gravity at which the elevator at its up stop trims the stall (with "
+                            + "the flaps when deflected), power off", 3, Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT),
+                    b -> boxed(b.forwardLimit())),
+            key("forward_limit.mac_fraction", NONE, "  as a fraction of the MAC", "that limit over the MAC", 3,
+                    Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT),
+                    b -> b.forwardLimit().isPresent() ? (Object) b.clean().macFraction(b.forwardLimit().getAsDouble())
+                            : null));
 
     /** One load case of the spanwise loads (limit loads unless a safety factor was applied). */
     public static final List<ResultKey<SpanwiseLoads>> LOADS = List.of(

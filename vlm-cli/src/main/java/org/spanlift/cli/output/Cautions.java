@@ -31,6 +31,13 @@ public final class Cautions {
             + "safety factors. They inform design and defer to the applicable airworthiness standards, local rules "
             + "and licensed engineering practice.";
 
+    /** The configuration in balance: neutral point, trim and trimmed stall speeds. */
+    public static final String BALANCE = "Caution: linear theory for the configuration given (wake along the x axis, "
+            + "tail efficiency 1, no propeller slipstream, out of ground effect; the forward limit of the centre of "
+            + "gravity ignores ground effect, which needs more elevator in the landing flare). Stall points are power "
+            + "off. Not a substitute for flight test, airworthiness standards, local rules or licensed engineering "
+            + "judgement.";
+
     private Cautions() {
     }
 }
