@@ -82,8 +82,10 @@ public final class Lattice {
     /**
      * The squared Rankine core radius of every trailing leg: (w/2)^2, w the smallest width (in the y-z
      * plane) of the strips whose panels share the leg, and never more than the squared y-z distance from
-     * the leg to any control point of those strips' surfaces (that bound acts only where a forced cut line
-     * makes the widths jump). So no control point of a leg's own surface lies inside its core.
+     * the leg to any control point of those strips' surfaces (that bound acts where a forced cut line makes
+     * the widths jump, and at the tip of cosine strips, whose last control point, at its midpoint in angle,
+     * lies nearer the tip than half its width). So no control point of a leg's own surface lies inside its
+     * core.
      */
     private double[] coresSquared() {
         int count = trailingCutoff.length;
