@@ -9,8 +9,8 @@ package org.spanlift.solve;
  * <p>Bound legs are potential line vortices; a point within the cut-off distance of one gets no velocity
  * from it, so a point on a vortex line never yields NaN.
  *
- * <p>Trailing legs have a Rankine core (W. J. M. Rankine, 1858; as in Saffman, Vortex Dynamics, 1992, the
- * Rankine vortex): at distance d from the leg (in the y-z plane) the swirl is the potential one,
+ * <p>Trailing legs have a Rankine core (W. J. M. Rankine, 1858; the Rankine vortex of vortex-dynamics texts,
+ * e.g. Saffman, Vortex Dynamics, 1992, reference recalled from memory): at distance d from the leg (in the y-z plane) the swirl is the potential one,
  * (1 + cos) / (4 pi d) with cos = rx / r, for d &gt;= r_c, and solid-body rotation inside the core,
  * (1 + cos) d / (4 pi r_c^2) for d &lt; r_c, continuous at d = r_c. Outside the core the arithmetic is
  * exactly that of the potential leg, so a point never inside a core sees bit-identical velocities. The
