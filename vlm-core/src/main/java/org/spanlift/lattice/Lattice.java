@@ -3,8 +3,11 @@ package org.spanlift.lattice;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
 
 /**
  * The discretized wing: panels, each carrying a horseshoe vortex, grouped in spanwise strips. Arrays are
@@ -36,6 +39,7 @@ public final class Lattice {
     private final boolean mirrored;
     private final double[] trailing;   // unique trailing-leg start points, xyz
     private final double[] trailingCutoff;
+    private final double[] trailingCore2;
     private final int[] aPoint;        // index of panel's A among the trailing points
     private final int[] bPoint;
 
@@ -72,6 +76,62 @@ public final class Lattice {
             trailing[3 * k + 2] = points.get(k).z();
             trailingCutoff[k] = cut.get(k);
         }
+        this.trailingCore2 = coresSquared();
+    }
+
+    /**
+     * The squared Rankine core radius of every trailing leg: (w/2)^2, w the smallest width (in the y-z
+     * plane) of the strips whose panels share the leg, and never more than the squared y-z distance from
+     * the leg to any control point of those strips' surfaces (that bound acts where a forced cut line makes
+     * the widths jump, and at the tip of cosine strips, whose last control point, at its midpoint in angle,
+     * lies nearer the tip than half its width). So no control point of a leg's own surface lies inside its
+     * core.
+     */
+    private double[] coresSquared() {
+        int count = trailingCutoff.length;
+        double[] core2 = new double[count];
+        Arrays.fill(core2, Double.POSITIVE_INFINITY);
+        List<Set<Integer>> surfaces = new ArrayList<>();
+        for (int k = 0; k < count; k++) {
+            surfaces.add(new TreeSet<>());
+        }
+        for (int p = 0; p < stripOf.length; p++) {
+            Strip st = strips.get(stripOf[p]);
+            double half = 0.5 * st.width();
+            for (int k : new int[] {aPoint[p], bPoint[p]}) {
+                core2[k] = Math.min(core2[k], half * half);
+                surfaces.get(k).add(st.surface());
+            }
+        }
+        Map<Integer, double[]> controlsBySurface = new HashMap<>(); // distinct control (y, z) of each surface
+        Map<Integer, Set<Vec>> distinct = new HashMap<>();
+        for (int p = 0; p < stripOf.length; p++) {
+            distinct.computeIfAbsent(strips.get(stripOf[p]).surface(), s -> new LinkedHashSet<>())
+                    .add(new Vec(0, control[3 * p + 1], control[3 * p + 2]));
+        }
+        distinct.forEach((surface, set) -> {
+            double[] yz = new double[2 * set.size()];
+            int i = 0;
+            for (Vec v : set) {
+                yz[i++] = v.y();
+                yz[i++] = v.z();
+            }
+            controlsBySurface.put(surface, yz);
+        });
+        for (int k = 0; k < count; k++) {
+            double qy = trailing[3 * k + 1];
+            double qz = trailing[3 * k + 2];
+            for (int surface : surfaces.get(k)) {
+                double[] yz = controlsBySurface.get(surface);
+                for (int i = 0; i < yz.length; i += 2) {
+                    // the kernel's own arithmetic for the distance, so the bound holds exactly
+                    double ry = yz[i] - qy;
+                    double rz = yz[i + 1] - qz;
+                    core2[k] = Math.min(core2[k], ry * ry + rz * rz);
+                }
+            }
+        }
+        return core2;
     }
 
     /** A point compared by exact coordinates. */
@@ -125,6 +185,15 @@ public final class Lattice {
     /** The cut-off of a trailing point: the smallest of those of the panels sharing it. */
     public double trailingCutoff(int k) {
         return trailingCutoff[k];
+    }
+
+    /**
+     * The squared radius of the Rankine core of trailing leg k, m^2: half the smallest y-z width of the
+     * strips meeting at the leg, bounded so that no control point of the leg's own surface lies inside
+     * the core. Points of other surfaces (a tail in a wing's wake) may.
+     */
+    public double trailingCoreSquared(int k) {
+        return trailingCore2[k];
     }
 
     /**

@@ -3,9 +3,18 @@ package org.spanlift.solve;
 /**
  * Biot-Savart velocity of the legs of a unit-strength horseshoe vortex (circulation 1 m^2/s): the bound leg
  * from A to B, and the semi-infinite legs along +x from A and B (a horseshoe is the leg from +infinity
- * into A, the bound leg, and the leg from B back to +infinity). {@link InfluenceSystem} sums them, sharing
- * each trailing leg between the panels that meet at its start. A point within the cut-off distance of a
- * leg gets no velocity from that leg, so a point on a vortex line never yields NaN.
+ * into A, the bound leg, and the leg from B back to +infinity). {@link InfluenceSystem} and
+ * {@link InducedVelocity} sum them, sharing each trailing leg between the panels that meet at its start.
+ *
+ * <p>Bound legs are potential line vortices; a point within the cut-off distance of one gets no velocity
+ * from it, so a point on a vortex line never yields NaN.
+ *
+ * <p>Trailing legs have a Rankine core (W. J. M. Rankine, 1858; the Rankine vortex of vortex-dynamics texts,
+ * e.g. Saffman, Vortex Dynamics, 1992, reference recalled from memory): at distance d from the leg (in the y-z plane) the swirl is the potential one,
+ * (1 + cos) / (4 pi d) with cos = rx / r, for d &gt;= r_c, and solid-body rotation inside the core,
+ * (1 + cos) d / (4 pi r_c^2) for d &lt; r_c, continuous at d = r_c. Outside the core the arithmetic is
+ * exactly that of the potential leg, so a point never inside a core sees bit-identical velocities. The
+ * core radius is the lattice's ({@code Lattice.trailingCoreSquared}); the cut-off still applies first.
  */
 final class HorseshoeKernel {
 
@@ -45,10 +54,11 @@ final class HorseshoeKernel {
 
     /**
      * Adds the velocity of a semi-infinite leg along +x starting at Q (sense +1: from Q downstream;
-     * sense -1: from downstream into Q) at P.
+     * sense -1: from downstream into Q) at P, with a Rankine core of squared radius {@code core2} (m^2; 0:
+     * a potential leg).
      */
     static void trailing(double qx, double qy, double qz, double px, double py, double pz, double eps,
-            double sense, double[] out) {
+            double core2, double sense, double[] out) {
         double rx = px - qx;
         double ry = py - qy;
         double rz = pz - qz;
@@ -57,7 +67,7 @@ final class HorseshoeKernel {
             return;
         }
         double r = Math.sqrt(rx * rx + d2);
-        double k = sense * (1 + rx / r) / (FOUR_PI * d2);
+        double k = sense * (1 + rx / r) / (FOUR_PI * (d2 < core2 ? core2 : d2));
         out[1] -= k * rz;
         out[2] += k * ry;
     }

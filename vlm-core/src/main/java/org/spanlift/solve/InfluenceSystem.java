@@ -120,7 +120,7 @@ public final class InfluenceSystem {
             v[1] = 0;
             v[2] = 0;
             HorseshoeKernel.trailing(lattice.trailingX(k), lattice.trailingY(k), lattice.trailingZ(k), px, py, pz,
-                    lattice.trailingCutoff(k), 1, v);
+                    lattice.trailingCutoff(k), lattice.trailingCoreSquared(k), 1, v);
             trailing[k] = v[1] * ny + v[2] * nz;
         }
         for (int j = 0; j < row.length; j++) {
