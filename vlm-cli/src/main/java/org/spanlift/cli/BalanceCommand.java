@@ -208,7 +208,6 @@ public final class BalanceCommand implements Callable<Integer>, OffersFormats {
         root.put("cg", cg);
         root.put("static_margin", margins);
         root.put("derivatives", derivatives);
-        root.put("downwash_gradient", null);
         root.put("trim", trimRows);
         root.put("stall_speed_trimmed", stall);
         Map<String, Object> fwd = new LinkedHashMap<>();
@@ -260,6 +259,10 @@ public final class BalanceCommand implements Callable<Integer>, OffersFormats {
                 100 * first.neutralPoint().macFraction()));
         out.append(String.format(Locale.ROOT, "Mean aerodynamic chord %s, leading edge at x %s%n",
                 length(b.meanAerodynamicChord(), u), length(b.macPoint(0), u)));
+        if (first.downwashGradient().isPresent()) {
+            out.append(String.format(Locale.ROOT, "Downwash gradient at the tail: %.3f (the lattice's, the tail "
+                    + "removed)%n", first.downwashGradient().getAsDouble()));
+        }
         if (b.fuselageSlope().isPresent()) {
             out.append(String.format(Locale.ROOT, "Fuselage: dCm/dalpha %+.3f per rad (empirical)%n",
                     b.fuselageSlope().getAsDouble()));
@@ -315,11 +318,14 @@ public final class BalanceCommand implements Callable<Integer>, OffersFormats {
             }
             t.row(cells);
         }
-        StringBuilder b = new StringBuilder("Static margin:");
+        List<ResultKey<BalanceStudy>> keys = Vocabulary.select(Vocabulary.BALANCE, "cg.x", "cg.mac_fraction",
+                "static_margin");
+        TextTable margins = new TextTable(keys.stream().map(k -> Results.label(k, u)).toList());
         for (BalanceStudy s : studies) {
-            b.append(String.format(Locale.ROOT, "  %s %.1f%% MAC", cgName(s, u), 100 * s.staticMargin()));
+            margins.row(keys.stream().map(k -> Results.cell(k, s, u)).toList());
         }
-        return b.append('\n').append('\n').append(t.render()).toString();
+        return margins.render() + "\nPitch derivatives (rate per radian of q c/(2V); moments about each centre of "
+                + "gravity):\n" + t.render();
     }
 
     private static String trimTable(BalanceStudy s, List<Balance.TrimPoint> rows, FlightCondition condition,
@@ -373,5 +379,10 @@ public final class BalanceCommand implements Callable<Integer>, OffersFormats {
             b.append("Forward limit: give the elevator's limits (limits: [least, greatest] in degrees) for it.\n");
         }
         return b.toString();
+    }
+
+    @Override
+    public Set<Format> formats() {
+        return FORMATS;
     }
 }

@@ -21,6 +21,7 @@ import org.spanlift.input.RefusedException;
 import org.spanlift.results.ProfileDrag;
 import org.spanlift.results.Solution;
 import org.spanlift.section.PlainFlap;
+import org.spanlift.solve.TailDownwash;
 import org.spanlift.solve.WingAnalysis;
 import org.spanlift.stall.CoupledLift;
 import org.spanlift.stall.FlapLift;
@@ -132,6 +133,16 @@ public final class Balance {
     /** The centre of gravity at x (m): (x, 0, z of the reference moment point). */
     public Vec3 centreAt(double x) {
         return new Vec3(x, 0, wing.reference().momentPoint().z());
+    }
+
+    /**
+     * The downwash gradient d epsilon / d alpha at the tail from the lattice, the tail removed (area mean over the
+     * tail, at zero angle of attack; {@link TailDownwash}); empty without a surface whose role is tail.
+     */
+    public OptionalDouble downwashGradient() {
+        OptionalInt tail = wing.surfaceIndex(SurfaceRole.TAIL);
+        return tail.isPresent() ? OptionalDouble.of(TailDownwash.of(wing, tail.getAsInt()).gradient())
+                : OptionalDouble.empty();
     }
 
     /** The fuselage's empirical dCm/dalpha, per radian, where a fuselage is described. */

@@ -25,10 +25,12 @@ import org.spanlift.stall.StripLimits;
  * @param stallFlaps   the trimmed stall with the flaps, likewise
  * @param forwardLimit the forward limit's x, m, with elevator limits, a weight and cl_max data
  * @param stallProblem why there is no trimmed stall, when there is none
+ * @param downwashGradient d epsilon / d alpha at the tail, with a tail ({@link Balance#downwashGradient()})
  */
 public record BalanceStudy(Balance clean, Optional<Balance> flaps, double cgX, Balance.NeutralPoint neutralPoint,
         Balance.PitchDerivatives derivatives, Optional<Balance.TrimmedStall> stallClean,
-        Optional<Balance.TrimmedStall> stallFlaps, OptionalDouble forwardLimit, Optional<String> stallProblem) {
+        Optional<Balance.TrimmedStall> stallFlaps, OptionalDouble forwardLimit, Optional<String> stallProblem,
+        OptionalDouble downwashGradient) {
 
     /**
      * The study at one centre of gravity.
@@ -71,7 +73,7 @@ public record BalanceStudy(Balance clean, Optional<Balance> flaps, double cgX, B
             }
         }
         return new BalanceStudy(clean, flaps, x, clean.neutralPoint(), clean.derivatives(x), stallClean, stallFlaps,
-                forward, problem);
+                forward, problem, clean.downwashGradient());
     }
 
     private static Balance.TrimmedStall stall(Balance b, double x, FlightCondition condition,

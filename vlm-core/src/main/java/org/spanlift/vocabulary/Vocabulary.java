@@ -276,9 +276,9 @@ public final class Vocabulary {
 
     /** The configuration in balance at one centre of gravity (a tail or canard with an elevator for the trim). */
     public static final List<ResultKey<BalanceStudy>> BALANCE = List.of(
-            key("cg.x", METRE, "centre of gravity x", "the centre of gravity's x in the wing file's axes", 3,
+            key("cg.x", METRE, "cg x", "the centre of gravity's x in the wing file's axes", 3,
                     Set.of(Need.CG), BalanceStudy::cgX),
-            key("cg.mac_fraction", NONE, "  as a fraction of the MAC", "the centre of gravity behind the leading edge "
+            key("cg.mac_fraction", NONE, "cg / MAC", "the centre of gravity behind the leading edge "
                     + "of the wing's mean aerodynamic chord, over the MAC", 3, Set.of(Need.CG),
                     BalanceStudy::cgMacFraction),
             key("neutral_point.x", METRE, "neutral point x", "the stick-fixed neutral point's x: where dCm/dCL "
@@ -286,7 +286,7 @@ public final class Vocabulary {
             key("neutral_point.mac_fraction", NONE, "  as a fraction of the MAC",
                     "the neutral point behind the MAC's leading edge, over the MAC", 3, Set.of(Need.CG),
                     b -> b.neutralPoint().macFraction()),
-            key("static_margin", NONE, "static margin", "neutral point less centre of gravity, over the MAC "
+            key("static_margin", NONE, "static margin / MAC", "neutral point less centre of gravity, over the MAC "
                     + "(positive: stable)", 3, Set.of(Need.CG), BalanceStudy::staticMargin),
             key("derivatives.CL_alpha", PER_RADIAN, "CL_alpha", "the configuration's lift slope at small angles", 4,
                     Set.of(Need.CG), b -> b.derivatives().liftSlope()),
@@ -301,31 +301,34 @@ public final class Vocabulary {
                     b -> boxed(b.derivatives().liftPerElevator())),
             key("derivatives.Cm_de", PER_RADIAN, "Cm_de", "pitching moment per radian of elevator about the centre "
                     + "of gravity", 4, Set.of(Need.CG), b -> boxed(b.derivatives().momentPerElevator())),
-            key("stall_speed_trimmed.clean_eas", METRE_PER_SECOND, "trimmed stall speed clean EAS",
+            key("derivatives.downwash_gradient", NONE, "downwash gradient at the tail",
+                    "d epsilon / d alpha at the tail from the lattice, the tail removed (area mean over the tail)", 3,
+                    Set.of(Need.CG), b -> boxed(b.downwashGradient())),
+            key("stall_speed_trimmed.clean_eas", METRE_PER_SECOND, "trimmed Vs clean EAS",
                     "stall speed clean, trimmed with the tail's load, power off, equivalent airspeed", 2,
                     Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT),
                     b -> b.stallClean().map(s -> (Object) s.equivalentSpeed()).orElse(null)),
-            key("stall_speed_trimmed.flaps_eas", METRE_PER_SECOND, "trimmed stall speed flaps EAS",
+            key("stall_speed_trimmed.flaps_eas", METRE_PER_SECOND, "trimmed Vs flaps EAS",
                     "stall speed with flaps, trimmed, power off, equivalent airspeed", 2,
                     Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT, Need.FLAPS),
                     b -> b.stallFlaps().map(s -> (Object) s.equivalentSpeed()).orElse(null)),
-            key("stall_speed_trimmed.basis", TEXT, "trimmed stall speed basis",
+            key("stall_speed_trimmed.basis", TEXT, "trimmed Vs basis",
                     "max-lift (every section gives a measured lift curve) or onset (the linear onset, which errs "
                             + "safe)", 0, Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT),
                     b -> b.stallClean().map(s -> (Object) s.basis().word()).orElse(null)),
-            key("stall_speed_trimmed.clean_CL", NONE, "  configuration CL there",
+            key("stall_speed_trimmed.clean_CL", NONE, "CL at trimmed Vs",
                     "the whole configuration's CL at the trimmed clean stall (wing and tail)", 3,
                     Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT),
                     b -> b.stallClean().map(s -> (Object) s.lift()).orElse(null)),
-            key("elevator_at_stall.clean_deg", DEGREE, "elevator to trim at the stall clean",
+            key("elevator_at_stall.clean_deg", DEGREE, "elevator at Vs clean",
                     "the elevator deflection that trims the clean stall (trailing edge down positive)", 2,
                     Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT),
                     b -> b.stallClean().map(s -> (Object) Math.toDegrees(s.elevator())).orElse(null)),
-            key("elevator_at_stall.flaps_deg", DEGREE, "elevator to trim at the stall with flaps",
+            key("elevator_at_stall.flaps_deg", DEGREE, "elevator at Vs flaps",
                     "the elevator deflection that trims the flapped stall", 2,
                     Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT, Need.FLAPS),
                     b -> b.stallFlaps().map(s -> (Object) Math.toDegrees(s.elevator())).orElse(null)),
-            key("elevator_at_stall.within_limits", FLAG, "  within the elevator's travel",
+            key("elevator_at_stall.within_limits", FLAG, "elevator in travel",
                     "true when the elevator reaches both trims within its limits", 0,
                     Set.of(Need.CG, Need.CL_MAX, Need.WEIGHT),
                     b -> b.stallClean().map(s -> (Object) (s.withinLimits()
