@@ -195,7 +195,7 @@ public final class BalanceCommand implements Callable<Integer>, OffersFormats {
             Map<String, Object> st = new LinkedHashMap<>();
             st.put("cg_x", s.cgX());
             st.putAll(asMap(one.get("stall_speed_trimmed")));
-            st.put("elevator_deg", one.get("elevator_at_stall"));
+            st.put("elevator_at_stall", one.get("elevator_at_stall"));
             st.put("problem", s.stallProblem().orElse(null));
             stall.add(st);
             for (Balance.TrimPoint t : trims.get(i)) {

@@ -188,7 +188,8 @@ class VocabularyOutputsTest {
     @Test
     void everyKeyIsDeclaredOnceWithAUnitLabelAndDescription() {
         List<List<? extends ResultKey<?>>> groups = List.of(Vocabulary.WING, Vocabulary.POINT, Vocabulary.ONSET,
-                Vocabulary.MAX_LIFT, Vocabulary.STUDY, Vocabulary.LOADS, Vocabulary.CONTROL);
+                Vocabulary.MAX_LIFT, Vocabulary.STUDY, Vocabulary.LOADS, Vocabulary.CONTROL, Vocabulary.BALANCE,
+                Vocabulary.TRIM);
         for (List<? extends ResultKey<?>> g : groups) {
             assertEquals(g.size(), g.stream().map(ResultKey::key).distinct().count(), "keys unique in a group");
             for (ResultKey<?> k : g) {
