@@ -16,6 +16,7 @@ import java.util.concurrent.Callable;
 import org.spanlift.balance.Balance;
 import org.spanlift.balance.BalanceStudy;
 import org.spanlift.balance.CentreOfGravity;
+import org.spanlift.cli.options.BalanceOptions;
 import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
@@ -66,10 +67,8 @@ public final class BalanceCommand implements Callable<Integer>, OffersFormats {
     @Parameters(index = "0", paramLabel = "FILE", description = "The wing file (.wing.yaml).")
     Path file;
 
-    @Option(names = "--cg", paramLabel = "X", required = true,
-            description = "Centre of gravity: a length with its unit, the x of the wing file's axes (0.62m, 24in), or a "
-                    + "percentage of the wing's mean aerodynamic chord (25%mac). Repeatable.")
-    List<String> cgs;
+    @Mixin
+    BalanceOptions balance;
 
     @Option(names = "--trim-speed", paramLabel = "V",
             description = "An equivalent airspeed of the trim table, with a unit (90kt, 45m/s). Repeatable. Default: "
@@ -98,14 +97,11 @@ public final class BalanceCommand implements Callable<Integer>, OffersFormats {
         units.check(format);
         FlightOptions.refuse(spec, "balance trims level flight at 1 g; give the trim table's speeds with --trim-speed",
                 "--speed", "--true-speed", "--load-factor");
-        List<CentreOfGravity> centres = new ArrayList<>();
-        for (String c : cgs) {
-            try {
-                centres.add(CentreOfGravity.parse(c));
-            } catch (QuantityFormatException e) {
-                throw new InputException("--cg", 0, "", e.getMessage());
-            }
+        if (!balance.asked()) {
+            throw new InputException("--cg", 0, "", "missing; expected at least one centre of gravity, such as --cg "
+                    + "25%mac or --cg 0.62m");
         }
+        List<CentreOfGravity> centres = balance.centres();
         List<Double> speeds = new ArrayList<>();
         for (String v : trimSpeeds) {
             try {

@@ -1,6 +1,7 @@
 package org.spanlift.cli;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.Collections;
 import java.util.EnumSet;
 import java.util.List;
@@ -10,6 +11,9 @@ import java.util.concurrent.Callable;
 
 import org.spanlift.cli.options.LongSolveNotice;
 import org.spanlift.cli.options.AlphaList;
+import org.spanlift.balance.BalanceStudy;
+import org.spanlift.balance.CentreOfGravity;
+import org.spanlift.cli.options.BalanceOptions;
 import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.CommonLift;
 import org.spanlift.cli.options.FlightOptions;
@@ -86,6 +90,9 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
     @Mixin
     WashoutOptions washout;
 
+    @Mixin
+    BalanceOptions balance;
+
     @Spec
     CommandSpec spec;
 
@@ -130,9 +137,17 @@ public final class ReportCommand implements Callable<Integer>, OffersFormats {
             washoutAnswer = Optional.of(new ReportPage.Washout(requirements, r, Plots.washoutTrade(wing.name(), r,
                     requirements, cl, FigureContext.of(wing, clean, condition))));
         }
+        List<BalanceStudy> balances = new ArrayList<>();
+        for (CentreOfGravity cg : balance.centres()) {
+            try {
+                balances.add(BalanceStudy.of(analysis, asked, cg, condition, clMax.assumed()));
+            } catch (MissingSectionDataException e) {
+                throw new InputException(file.toString(), 0, "sections", e.getMessage());
+            }
+        }
         String html = ReportPage.build(new ReportPage.Inputs(summary, flaps, fine, stall, stallFine, unavailable,
                 condition, flight.reynoldsRule(wing), FigureContext.of(wing, drawn, condition), alphas, curve,
-                units.units(wing.displayUnit()), new VersionProvider().getVersion()[0], washoutAnswer));
+                units.units(wing.displayUnit()), new VersionProvider().getVersion()[0], washoutAnswer, balances));
         assert format == Format.HTML;
         output.write(html, spec.commandLine().getOut());
         return 0;

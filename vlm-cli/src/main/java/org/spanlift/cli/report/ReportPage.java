@@ -7,7 +7,9 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.spanlift.atmosphere.Airspeed;
+import org.spanlift.balance.BalanceStudy;
 import org.spanlift.cli.output.DisplayUnits;
+import org.spanlift.cli.output.Cautions;
 import org.spanlift.cli.output.Results;
 import org.spanlift.flight.FlightCondition;
 import org.spanlift.flight.FlightPoint;
@@ -61,7 +63,7 @@ public final class ReportPage {
     public record Inputs(WingSummary clean, Optional<WingSummary> flaps, WingSummary fine, Optional<StallStudy> stall,
             Optional<StallStudy> stallFine, String unavailable, Optional<FlightCondition> condition,
             ReynoldsRule reynolds, FigureContext context, List<Double> alphasDeg, List<Double> rangeDeg,
-            DisplayUnits units, String version, Optional<Washout> washout) {
+            DisplayUnits units, String version, Optional<Washout> washout, List<BalanceStudy> balance) {
 
         /** The configuration the figures draw: with flaps when asked, else clean. */
         WingSummary drawn() {
@@ -100,6 +102,9 @@ public final class ReportPage {
 
         keyResults(h, in);
         in.washout().ifPresent(w -> washout(h, w, summary.wing()));
+        if (!in.balance().isEmpty()) {
+            balance(h, in.balance(), u);
+        }
         description(h, summary, u);
         h.el("h2", "Figures");
         String drawn = in.flaps().isPresent() ? "The figures show the wing with flaps ("
@@ -198,6 +203,46 @@ public final class ReportPage {
         h.line("</figure>");
     }
 
+    /** The configuration in balance at each centre of gravity asked for. */
+    private static void balance(Html h, List<BalanceStudy> studies, DisplayUnits u) {
+        h.el("h2", "Balance");
+        BalanceStudy first = studies.get(0);
+        h.el("p", String.format(Locale.ROOT, "Stick-fixed neutral point (dCm/dCL at small angles of attack): %s of the "
+                + "mean aerodynamic chord%s.", Html.fixed(100 * first.neutralPoint().macFraction(), 1) + "%",
+                first.downwashGradient().isPresent() ? "; downwash gradient at the tail "
+                        + Html.fixed(first.downwashGradient().getAsDouble(), 3) + " (the lattice's, the tail removed)"
+                        : ""));
+        List<ResultKey<BalanceStudy>> keys = new ArrayList<>(Vocabulary.select(Vocabulary.BALANCE, "cg.x",
+                "cg.mac_fraction", "static_margin", "derivatives.Cm_alpha", "derivatives.Cm_q", "derivatives.Cm_de"));
+        if (first.stallClean().isPresent()) {
+            keys.addAll(Vocabulary.select(Vocabulary.BALANCE, "stall_speed_trimmed.clean_eas",
+                    "elevator_at_stall.clean_deg"));
+        }
+        if (first.stallFlaps().isPresent()) {
+            keys.addAll(Vocabulary.select(Vocabulary.BALANCE, "stall_speed_trimmed.flaps_eas",
+                    "elevator_at_stall.flaps_deg"));
+        }
+        if (first.stallClean().isPresent()) {
+            keys.add(Vocabulary.find(Vocabulary.BALANCE, "elevator_at_stall.within_limits"));
+        }
+        List<List<String>> rows = new ArrayList<>();
+        for (BalanceStudy s : studies) {
+            rows.add(keys.stream().map(k -> value(k, s, u)).toList());
+        }
+        h.table("balance", "At each centre of gravity (derivatives per radian; trimmed stall power off)",
+                keys.stream().map(k -> Results.label(k, u)).toList(), rows);
+        first.stallClean().ifPresent(st -> h.el("p", "class=\"meta\"", "Trimmed stall speeds at " + (st.basis()
+                == org.spanlift.balance.Balance.StallBasis.MAX_LIFT ? "the maximum lift of the section lift curves"
+                        : "the linear stall onset, which errs safe") + ", with the tail's load."));
+        if (first.forwardLimit().isPresent()) {
+            h.el("p", String.format(Locale.ROOT, "Forward limit of the centre of gravity, the elevator at its up stop at "
+                    + "the stall%s: %s of the mean aerodynamic chord.", first.flaps().isPresent() ? " with flaps" : "",
+                    Html.fixed(100 * first.clean().macFraction(first.forwardLimit().getAsDouble()), 1) + "%"));
+        }
+        first.stallProblem().ifPresent(p -> h.el("p", "class=\"missing\"", "No trimmed stall: " + p + "."));
+        h.el("p", "class=\"meta\"", Cautions.BALANCE);
+    }
+
     /** One row of the clean-and-flapped table: a label and a cell per configuration. */
     private interface Cell {
         String of(WingSummary summary, Optional<StallStudy.Configuration> stall);
@@ -235,6 +280,11 @@ public final class ReportPage {
                 "stall speed, flaps", Html.fixed(Airspeed.knots(v), 1) + " kt EAS",
                 Html.fixed(Airspeed.knots(f.headlineTrue().getAsDouble()), 1) + " kt TAS; " + basisText(f) + "; "
                         + deflectionText(s.wing(), f.deflections()))));
+        in.balance().stream().findFirst().ifPresent(b -> b.stallClean().ifPresent(st -> key(h,
+                "trimmed stall speed, clean", Html.fixed(Airspeed.knots(st.equivalentSpeed()), 1) + " kt EAS",
+                "with the tail's load at the centre of gravity at " + Html.fixed(100 * b.cgMacFraction(), 1)
+                        + "% of the MAC, power off; " + b.stallFlaps().map(f -> "with flaps "
+                        + Html.fixed(Airspeed.knots(f.equivalentSpeed()), 1) + " kt EAS").orElse("see Balance"))));
         h.line("</ul>");
         if (in.stall().isEmpty()) {
             h.el("p", "class=\"missing\"", "No stall results: " + in.unavailable());
