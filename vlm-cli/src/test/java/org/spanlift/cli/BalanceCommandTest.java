@@ -114,4 +114,19 @@ class BalanceCommandTest {
         assertEquals(2, r.exitCode());
         assertTrue(r.err().contains("--weight"), r.err());
     }
+
+    @Test
+    void theReportGainsABalanceSectionWithTheSameMarginAndTrimmedStallSpeed() {
+        CliRun report = CliRun.of("report", TRAINER, "--cg", "25%mac", "--weight", "750kg", "--format", "html");
+        assertEquals(0, report.exitCode(), report.err());
+        YamlValue j = json(CliRun.of("balance", TRAINER, "--cg", "25%mac", "--weight", "750kg", "--format", "json"));
+        String html = report.out();
+        int section = html.indexOf("<h2>Balance</h2>");
+        assertTrue(section > 0, "a balance section");
+        String rest = html.substring(section);
+        assertTrue(rest.contains(String.format(java.util.Locale.ROOT, "%.3f", number(j, "static_margin.0"))), rest);
+        assertTrue(rest.contains(String.format(java.util.Locale.ROOT, "%.2f",
+                number(j, "stall_speed_trimmed.0.clean_eas"))), "the trimmed stall speed");
+        assertTrue(html.contains("trimmed stall speed, clean"), "among the key results");
+    }
 }
