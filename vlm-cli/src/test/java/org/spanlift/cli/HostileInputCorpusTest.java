@@ -75,6 +75,8 @@ class HostileInputCorpusTest {
                 out.resolve("stall.json").toString()});
             runs.add(new String[] {"loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "102kt",
                 "--output", out.resolve("loads.csv").toString()});
+            runs.add(new String[] {"balance", wing, "--cg", "25%mac", "--weight", "750kg", "--assume-cl-max",
+                "--output", out.resolve("balance.txt").toString()});
         }
         switch (folder) {
             case "bad-cases" -> runs.add(new String[] {"loads", TRAINER, "--cases", file.toString(), "--output",
