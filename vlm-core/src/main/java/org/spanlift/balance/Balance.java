@@ -445,8 +445,9 @@ public final class Balance {
                 break;
             }
         }
-        throw new RefusedException("the trimmed stall did not settle: no elevator angle within 60 degrees balances "
-                + "the configuration at its stall; check the centre of gravity and the tail");
+        throw new RefusedException("no elevator deflection within 60 degrees balances the configuration at its "
+                + "stall: the elevator lacks the power at this centre of gravity (move it aft, or give the tail more "
+                + "area, arm or incidence)");
     }
 
     /**

@@ -6,7 +6,8 @@ package org.spanlift.stall;
  *
  * @param alpha          angle of attack, rad
  * @param status         converged, or why not
- * @param lift           the whole lattice's CL (NaN unless converged)
+ * @param lift           the wing's (first surface's) CL on the reference area; for a wing alone the whole
+ *                       lattice's (NaN unless converged)
  * @param corrections    incidence correction per unknown, rad (the last iterate when not converged)
  * @param cl             section cl per unknown
  * @param sectionAngles  effective section angle of attack per unknown, rad

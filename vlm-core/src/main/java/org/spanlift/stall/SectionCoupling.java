@@ -13,6 +13,7 @@ import org.spanlift.lattice.Strip;
 import org.spanlift.results.Solution;
 import org.spanlift.solve.BasisSolutions;
 import org.spanlift.solve.StripBasis;
+import org.spanlift.solve.LiftCurve;
 import org.spanlift.solve.WingAnalysis;
 
 /**
@@ -83,6 +84,8 @@ public final class SectionCoupling {
     private final int[][] neighbours;
     private final double[][] smoothing;
     private final double[] liftPerCorrection;
+    /** The wing's lift line without corrections (Kutta-Joukowski, freestream only). */
+    private final LiftCurve wingLift;
 
     private SectionCoupling(WingAnalysis analysis, double[] deflections, StripCurves curves) {
         this.analysis = analysis;
@@ -131,10 +134,25 @@ public final class SectionCoupling {
             }
         }
         double area = wing.reference().area();
+        boolean[] onWing = new boolean[lattice.panelCount()];
+        double liftX = 0;
+        double liftZ = 0;
+        for (int p = 0; p < lattice.panelCount(); p++) {
+            onWing[p] = lattice.strips().get(lattice.stripOf(p)).surface() == 0;
+            if (onWing[p]) {
+                double ly = lattice.by(p) - lattice.ay(p);
+                liftX += 2 * linear.alongX(p, deflections) * ly;
+                liftZ += 2 * linear.alongZ(p) * ly;
+            }
+        }
+        // as WingAnalysis.liftCurve sums the whole lattice, so that a wing alone gets the same bits
+        this.wingLift = new LiftCurve(Math.hypot(liftX, liftZ) / area, Math.atan2(-liftX, liftZ));
         for (int j = 0; j < m; j++) {
             double sum = 0;
             for (int p = 0; p < lattice.panelCount(); p++) {
-                sum += 2 * basis.circulation(j, p) * (lattice.by(p) - lattice.ay(p));
+                if (onWing[p]) {
+                    sum += 2 * basis.circulation(j, p) * (lattice.by(p) - lattice.ay(p));
+                }
             }
             liftPerCorrection[j] = sum / area;
         }
@@ -493,9 +511,13 @@ public final class SectionCoupling {
         }
     }
 
-    /** The whole lattice's CL at alpha with corrections x. */
+    /**
+     * The wing's CL (the first surface's lift on the reference area; for a wing alone the whole lattice's) at alpha
+     * with corrections x: what the trace through the stall follows and maximizes. The other surfaces' lift is
+     * linear and would otherwise carry the configuration's CL on past the wing's own maximum.
+     */
     private double lift(double alpha, double[] x) {
-        double cl = analysis.liftCurve(deflections).lift(alpha);
+        double cl = wingLift.lift(alpha);
         double c = Math.cos(alpha);
         for (int j = 0; j < x.length; j++) {
             cl += c * liftPerCorrection[j] * x[j];

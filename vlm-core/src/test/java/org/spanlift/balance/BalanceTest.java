@@ -260,4 +260,44 @@ class BalanceTest {
         assertEquals(Math.toDegrees(kf * 1 * 1 * 6 / (10 * 1.0)), slope, 1e-12);
         assertTrue(Optional.of(kf).get() > 0.007 && kf < 0.010);
     }
+
+    @Test
+    void withMeasuredLiftCurvesTheTrimmedStallStandsOnTheMaximumLiftAndBalancesThere() {
+        // Demo section data (invented): a lift curve through the stall, zero lift at -2 degrees, peak 1.45 at 15.
+        Wing w = wing("""
+                name: curves and tail
+                units: m
+                surfaces:
+                  - name: wing
+                    section: main
+                    trapezoid: {span: 9.6, root-chord: 1.45, taper: 0.6, sweep: 0, washout: 2}
+                    lattice: {strips: 16, rows: 4}
+                  - name: tail
+                    role: tail
+                    trapezoid: {span: 3.2, root-chord: 0.8, taper: 1, sweep: 0, root-twist: -3, root-nose: [4.6, 0.4]}
+                    controls:
+                      - {name: elevator, kind: elevator, from: 0, to: 1.6, chord-fraction: 0.4, limits: [-25, 15]}
+                    lattice: {strips: 8, rows: 4}
+                sections:
+                  main:
+                    camber: NACA 2412
+                    lift-curve:
+                      alpha: [-8, -4, -2, 0, 4, 8, 10, 12, 13, 14, 15, 16, 17, 18, 20, 22]
+                      cl: [-0.60, -0.21, 0.00, 0.21, 0.63, 1.04, 1.21, 1.34, 1.39, 1.43, 1.45, 1.43, 1.38, 1.30,
+                           1.13, 1.00]
+                """);
+        WingAnalysis a = WingAnalysis.of(w);
+        BalanceStudy study = BalanceStudy.of(a, a.fileDeflections(), CentreOfGravity.parse("30%mac"),
+                Optional.of(SEA_LEVEL_750_KG), OptionalDouble.empty());
+        Balance.TrimmedStall st = study.stallClean().orElseThrow(() -> new AssertionError(study.stallProblem()));
+        assertEquals(Balance.StallBasis.MAX_LIFT, st.basis());
+        Balance b = study.clean();
+        StripLimits limits = StripLimits.of(w, a.lattice(), b.deflectionsWith(0), OptionalDouble.empty());
+        double re = st.trueSpeed() / SEA_LEVEL_750_KG.atmosphere().kinematicViscosity();
+        Solution top = org.spanlift.stall.CoupledLift.of(a, b.deflectionsWith(st.elevator()), limits, re)
+                .maximumSolution();
+        assertEquals(0, top.about(b.centreAt(study.cgX())).coefficients().pitchingMoment(), 1e-9, "balanced there");
+        assertEquals(st.lift(), top.coefficients().lift(), 1e-9);
+        assertEquals(SEA_LEVEL_750_KG.equivalentSpeedFor(st.lift(), w.reference()), st.equivalentSpeed(), 1e-9);
+    }
 }

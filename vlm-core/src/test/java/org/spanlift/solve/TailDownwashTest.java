@@ -14,6 +14,7 @@ import org.spanlift.geometry.Section;
 import org.spanlift.geometry.Spacing;
 import org.spanlift.geometry.Surface;
 import org.spanlift.geometry.Trapezoid;
+import org.spanlift.geometry.SurfaceRole;
 import org.spanlift.geometry.Wing;
 import org.spanlift.results.SpanLoad;
 import org.spanlift.section.CamberLines;
@@ -114,8 +115,10 @@ class TailDownwashTest {
     @Test
     void theTailIsFoundByItsIndexWhateverTheOrder() {
         Wing w = configuration(0.1, 16, 4);
-        Wing reversed = new Wing(w.name(), w.displayUnit(), w.reference(), List.of(w.surfaces().get(1),
-                w.surfaces().get(0)), w.sections());
+        // roles cleared: the first surface of a wing becomes its wing
+        Wing reversed = new Wing(w.name(), w.displayUnit(), w.reference(),
+                List.of(w.surfaces().get(1).withRole(SurfaceRole.OTHER), w.surfaces().get(0).withRole(SurfaceRole.OTHER)),
+                w.sections());
         TailDownwash a = TailDownwash.of(w, 1, 4 * DEG);
         TailDownwash b = TailDownwash.of(reversed, 0, 4 * DEG);
         assertEquals(a.angle(), b.angle(), 1e-14);
