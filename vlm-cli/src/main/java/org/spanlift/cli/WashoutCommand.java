@@ -159,7 +159,8 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
             } catch (MissingSectionDataException e) {
                 throw new InputException(file.toString(), 0, "sections", e.getMessage());
             }
-            WashoutOutput out = new WashoutOutput(wing, requirements, result, twist, twistShape, cruiseCl);
+            WashoutOutput out = new WashoutOutput(wing, requirements, result, twist, twistShape, cruiseCl,
+                    org.spanlift.stall.StallStudy.anyFlapDeflected(wing, deflections));
             output.write(format == Format.JSON ? Json.write(out.json()) : out.table(), spec.commandLine().getOut());
             return 0;
         }

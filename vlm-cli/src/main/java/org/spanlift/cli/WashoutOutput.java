@@ -32,9 +32,11 @@ final class WashoutOutput {
     private final TwistDesign.Result twist;
     private final TwistDesign.Shape shape;
     private final double cruiseCl;
+    private final boolean flapsDown;
 
     WashoutOutput(Wing wing, List<WashoutRequirement> requirements, WashoutDesign.Result linear,
-            TwistDesign.Result twist, TwistDesign.Shape shape, double cruiseCl) {
+            TwistDesign.Result twist, TwistDesign.Shape shape, double cruiseCl, boolean flapsDown) {
+        this.flapsDown = flapsDown;
         this.wing = wing;
         this.requirements = requirements;
         this.linear = linear;
@@ -99,16 +101,16 @@ final class WashoutOutput {
         c.put("CL", cruiseCl);
         c.put("e", at.map(p -> box(p.cruiseE())).orElse(null));
         c.put("CDi", at.map(p -> (Object) p.cruiseDrag()).orElse(null));
-        c.put("e_without_washout", box(linear.unwashed().cruiseE()));
-        c.put("CDi_without_washout", linear.unwashed().cruiseDrag());
-        c.put("e_linear_washout", linear.washout().map(p -> box(p.cruiseE())).orElse(null));
-        c.put("CDi_linear_washout", linear.washout().map(p -> (Object) p.cruiseDrag()).orElse(null));
+        c.put("e_without_washout", box(twist.unwashed().cruiseE()));
+        c.put("CDi_without_washout", twist.unwashed().cruiseDrag());
+        c.put("e_linear_washout", twist.linear().map(p -> box(p.cruiseE())).orElse(null));
+        c.put("CDi_linear_washout", twist.linear().map(p -> (Object) p.cruiseDrag()).orElse(null));
         root.put("cruise", c);
         Map<String, Object> lin = new LinkedHashMap<>();
         lin.put("met", linear.met());
         lin.put("washout_deg", linear.washout().map(p -> (Object) Math.toDegrees(p.washout())).orElse(null));
         lin.put("washout_change_deg", linear.washout().map(p -> (Object) Math.toDegrees(p.change())).orElse(null));
-        lin.put("stall", linear.washout().map(p -> (Object) stall(p)).orElse(null));
+        lin.put("stall", twist.linear().map(p -> (Object) stall(p)).orElse(null));
         root.put("linear_washout", lin);
         root.put("caution", Cautions.STALL);
         return root;
@@ -129,8 +131,8 @@ final class WashoutOutput {
         if (twist.design().isEmpty()) {
             b.append(String.format(Locale.ROOT, "%n  NO twist within these bounds and this smoothness meets them.%n"));
             if (!twist.settled()) {
-                b.append(TextTable.wrap("(The search did not settle; see DEVELOPERS.md, twist distribution.)"))
-                        .append('\n');
+                b.append(TextTable.wrap(String.format(Locale.ROOT, "(The search did not settle in %d rounds.)",
+                        twist.rounds()))).append('\n');
             }
             b.append('\n').append(TextTable.wrap(Cautions.STALL)).append('\n');
             return b.toString();
@@ -138,7 +140,9 @@ final class WashoutOutput {
         WashoutPoint p = twist.design().get();
         b.append(TextTable.wrap(String.format(Locale.ROOT, "Washout (root twist minus tip twist) %.2f deg: the file's "
                 + "%.2f deg %+.2f deg.%s", Math.toDegrees(p.washout()), fileWashout, Math.toDegrees(p.change()),
-                twist.fromLinear() ? " The least linear washout was the best twist found." : ""))).append("\n\n");
+                twist.fromLinear() ? " The least linear washout was the best twist found." : "")
+                + (twist.settled() ? "" : String.format(Locale.ROOT, " (The search did not settle in %d rounds; "
+                        + "this is the best twist it found that meets them.)", twist.rounds())))).append("\n\n");
         TextTable st = new TextTable(List.of("station y [" + unit + "]", "eta", "file twist [deg]", "change [deg]",
                 "twist [deg]"));
         Planform file = wing.main().planform();
@@ -167,15 +171,18 @@ final class WashoutOutput {
                                         Airspeed.knots(p.stallSpeed().getAsDouble())) : ""));
         TextTable cost = new TextTable(List.of("at cruise CL " + TextTable.fixed(cruiseCl, 2), "washout [deg]",
                 "onset CL", "aileron margin", "e", "CDi", "CDi change"));
-        WashoutPoint zero = linear.unwashed();
+        WashoutPoint zero = twist.unwashed();
         cost.row(row("zero washout", zero, zero));
-        linear.washout().ifPresent(l -> cost.row(row("least linear washout", l, zero)));
+        twist.linear().ifPresent(l -> cost.row(row("least linear washout", l, zero)));
         cost.row(row("twist distribution", p, zero));
         b.append(cost.render());
-        linear.washout().ifPresent(l -> b.append(TextTable.wrap(String.format(Locale.ROOT, "Against the least linear "
+        if (flapsDown) {
+            b.append(TextTable.wrap("Cruise e and CDi with the flaps up; the onsets with them as asked.")).append('\n');
+        }
+        twist.linear().ifPresent(l -> b.append(TextTable.wrap(String.format(Locale.ROOT, "Against the least linear "
                 + "washout: CDi %+.5f (%+.1f%%).", p.cruiseDrag() - l.cruiseDrag(),
                 100 * (p.cruiseDrag() / l.cruiseDrag() - 1)))).append('\n'));
-        if (linear.washout().isEmpty()) {
+        if (twist.linear().isEmpty()) {
             b.append(TextTable.wrap("No linear washout within --between meets them.")).append('\n');
         }
         b.append('\n').append(TextTable.wrap(Cautions.STALL)).append('\n');

@@ -213,4 +213,15 @@ class WashoutCommandTest {
             assertFalse(r.err().contains("Exception") || r.err().contains("NaN"), r.err());
         }
     }
+
+    @Test
+    void theCruiseOfATwistDistributionIsFlownWithTheFlapsUpWhateverTheStallIsStudiedWith() {
+        String trainer = CliRun.demo("trainer.wing.yaml");
+        YamlValue clean = json(CliRun.of("washout", trainer, "--aileron-margin", "0.05", "--twist-stations", "4",
+                "--format", "json"));
+        YamlValue flapped = json(CliRun.of("washout", trainer, "--aileron-margin", "0.05", "--flaps", "20",
+                "--twist-stations", "4", "--format", "json"));
+        assertEquals(number(clean, "cruise.CDi_without_washout"), number(flapped, "cruise.CDi_without_washout"), 0);
+        assertTrue(number(clean, "stall.CL") != number(flapped, "stall.CL"), "the stall is studied with the flaps");
+    }
 }

@@ -38,7 +38,8 @@ import org.spanlift.stall.StripLimits;
  * lift, the strip cl and the Trefftz-plane drag are linear, linear and quadratic in (t, tan a), with cos a as a
  * factor.
  *
- * <p><b>Cruise.</b> At the cruise CL, with c = cos a held, the lift condition {@code c (Lx + L.t + tan a Lz) = CL}
+ * <p><b>Cruise.</b> Cruise is flown clean: every flap at zero (ailerons as asked). At the cruise CL, with c = cos a
+ * held, the lift condition {@code c (Lx + L.t + tan a Lz) = CL}
  * gives tan a affine in t; substituted, {@code CDi = c^2 (h0 + D t)' Q (h0 + D t)}, a convex quadratic form in
  * t (Q the Trefftz-plane form of {@link LeastDragTwist}). It is strictly convex while the twist change cannot
  * be the same on every strip (for a flat wing that would be an angle-of-attack change, which the drag at a fixed
@@ -108,12 +109,16 @@ public final class TwistDesign {
      *                   less the file's washout)
      * @param change     the twist change at each knot, rad (knot order; the root's is zero)
      * @param fromLinear true when the linear washout's answer was the best candidate
-     * @param settled    true when the held values settled
+     * @param settled    true when the rounds ended by settling or because no program was feasible (false: they
+     *                   ran out, {@value #MAX_ROUNDS} rounds, and the answer is the best twist they met)
      * @param rounds     the rounds of held values done
      * @param critical   the y of the strip whose program gave the answer (its onset station), when one did
+     * @param linear     the linear washout's answer analysed as this design analyses a twist (cruise clean), if any
+     * @param unwashed   the wing with zero washout (the file's twist less a linear change), analysed so
      */
     public record Result(boolean met, Optional<WashoutPoint> design, double[] change, boolean fromLinear,
-            boolean settled, int rounds, OptionalDouble critical) {
+            boolean settled, int rounds, OptionalDouble critical, Optional<WashoutPoint> linear,
+            WashoutPoint unwashed) {
         public Result {
             change = change.clone();
         }
@@ -126,6 +131,7 @@ public final class TwistDesign {
 
     private final Wing wing;
     private final double[] deflections;
+    private final double[] cruiseDeflections;
     private final List<WashoutRequirement> requirements;
     private final double cruiseCl;
     private final OptionalDouble assumedClMax;
@@ -157,6 +163,7 @@ public final class TwistDesign {
             OptionalDouble assumedClMax, Optional<FlightCondition> condition, Shape shape) {
         this.wing = wing;
         this.deflections = deflections.clone();
+        this.cruiseDeflections = StallStudy.cleanDeflections(wing, deflections);
         this.requirements = List.copyOf(requirements);
         this.cruiseCl = cruiseCl;
         this.assumedClMax = assumedClMax;
@@ -203,7 +210,7 @@ public final class TwistDesign {
             for (int r = 0; r < st.rows(); r++) {
                 int p = st.firstPanel() + r;
                 double ly = 2 * (lattice.by(p) - lattice.ay(p)) / area;
-                double x = b.alongX(p, this.deflections);
+                double x = b.alongX(p, cruiseDeflections);
                 gx[s] += x;
                 gz[s] += b.alongZ(p);
                 lx += x * ly;
@@ -332,7 +339,8 @@ public final class TwistDesign {
     /**
      * Finds the twist.
      *
-     * @param deflections  control deflections, rad, control order (the stall is studied with them)
+     * @param deflections  control deflections, rad, control order (the stall is studied with them; the cruise
+     *                     with the flaps at zero)
      * @param requirements stall onset inboard of a control and the aileron margin at onset; none: cruise alone
      * @param cruiseCl     the CL of the cruise drag
      * @param linear       the linear washout's answer for the same requirements, if any (a candidate)
@@ -362,8 +370,8 @@ public final class TwistDesign {
         Wing w = wing.withTwistChange(shape.knots(), change);
         WingAnalysis analysis = WingAnalysis.of(w, cache, deflections);
         StallStudy.Configuration c = StallStudy.configuration("twist", analysis, deflections, assumedClMax, condition);
-        double alpha = analysis.liftCurve(deflections).alphaForTarget(cruiseCl);
-        Coefficients cruise = analysis.solve(alpha, deflections).coefficients();
+        double alpha = analysis.liftCurve(cruiseDeflections).alphaForTarget(cruiseCl);
+        Coefficients cruise = analysis.solve(alpha, cruiseDeflections).coefficients();
         double washout = w.main().planform().washout();
         WashoutPoint p = new WashoutPoint(washout, washout - wing.main().planform().washout(), w, c.estimate(),
                 c.speed().map(s -> OptionalDouble.of(s.equivalent())).orElse(OptionalDouble.empty()), Optional.empty(),
@@ -377,14 +385,11 @@ public final class TwistDesign {
     }
 
     private Result search(Optional<WashoutPoint> linear) {
-        double[] knots = shape.knots();
-        double span = wing.main().planform().yEnd() - root;
         double[] linearChange = null;
         if (linear.isPresent()) {
-            linearChange = new double[k];
+            linearChange = linearAt(linear.get().change());
             boolean within = true;
             for (int j = 0; j < k; j++) {
-                linearChange[j] = -linear.get().change() * (knots[j] - root) / span;
                 within &= linearChange[j] >= shape.lower() && linearChange[j] <= shape.upper();
             }
             if (!within) {
@@ -396,14 +401,13 @@ public final class TwistDesign {
         double[] bestChange = null;
         boolean fromLinear = false;
         OptionalDouble critical = OptionalDouble.empty();
-        if (linearChange != null) {
-            WashoutPoint p = at(linearChange);
-            if (meets(p)) {
-                best = p;
-                bestChange = linearChange.clone();
-                fromLinear = true;
-            }
+        Optional<WashoutPoint> linearPoint = linear.map(l -> at(linearAt(l.change())));
+        if (linearChange != null && meets(linearPoint.orElseThrow())) {
+            best = linearPoint.get();
+            bestChange = linearChange.clone();
+            fromLinear = true;
         }
+        WashoutPoint unwashed = at(linearAt(-wing.main().planform().washout()));
         boolean settled = false;
         int rounds = 0;
         WashoutPoint current = at(t);
@@ -411,6 +415,7 @@ public final class TwistDesign {
             rounds++;
             Optional<double[]> next = round(t, current);
             if (next.isEmpty()) {
+                settled = true;
                 break;
             }
             double[] tn = next.get();
@@ -432,7 +437,18 @@ public final class TwistDesign {
             }
         }
         return new Result(best != null, Optional.ofNullable(best), bestChange != null ? bestChange : new double[k],
-                fromLinear, settled, rounds, fromLinear ? OptionalDouble.empty() : critical);
+                fromLinear, settled, rounds, fromLinear ? OptionalDouble.empty() : critical, linearPoint, unwashed);
+    }
+
+    /** A linear washout change (rad) as changes at the knots: exact, the change being linear in y. */
+    private double[] linearAt(double washoutChange) {
+        double[] knots = shape.knots();
+        double span = wing.main().planform().yEnd() - root;
+        double[] t = new double[k];
+        for (int j = 0; j < k; j++) {
+            t[j] = -washoutChange * (knots[j] - root) / span;
+        }
+        return t;
     }
 
     /**
