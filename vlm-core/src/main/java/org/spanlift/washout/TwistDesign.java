@@ -16,6 +16,7 @@ import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Wing;
 import org.spanlift.input.RefusedException;
 import org.spanlift.lattice.Lattice;
+import org.spanlift.lattice.LatticeBuilder;
 import org.spanlift.lattice.Strip;
 import org.spanlift.results.Coefficients;
 import org.spanlift.solve.BasisSolutions;
@@ -242,7 +243,7 @@ public final class TwistDesign {
         List<Integer> kept = new ArrayList<>();
         for (int i = 0; i < ids.size(); i++) {
             Strip st = strips.get(ids.get(i));
-            if (st.surface() == 0 && (!symmetric || st.right())) {
+            if (!symmetric || st.right()) {
                 kept.add(ids.get(i));
             }
         }
@@ -310,7 +311,7 @@ public final class TwistDesign {
         if (count < 1) {
             throw new RefusedException("give at least one twist station");
         }
-        Lattice lattice = WingAnalysis.of(wing).lattice();
+        Lattice lattice = LatticeBuilder.build(wing);
         TreeSet<Double> edges = new TreeSet<>();
         for (Strip st : lattice.strips()) {
             if (st.surface() == 0 && st.right()) {
