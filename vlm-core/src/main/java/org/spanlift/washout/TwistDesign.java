@@ -111,7 +111,7 @@ public final class TwistDesign {
      * @param change     the twist change at each knot, rad (knot order; the root's is zero)
      * @param fromLinear true when the linear washout's answer was the best candidate
      * @param settled    true when the rounds ended by settling or because no program was feasible (false: they
-     *                   ran out, {@value #MAX_ROUNDS} rounds, and the answer is the best twist they met)
+     *                   ran out, {@value TwistDesign#MAX_ROUNDS} rounds, and the answer is the best twist they met)
      * @param rounds     the rounds of held values done
      * @param critical   the y of the strip whose program gave the answer (its onset station), when one did
      * @param linear     the linear washout's answer analysed as this design analyses a twist (cruise clean), if any
