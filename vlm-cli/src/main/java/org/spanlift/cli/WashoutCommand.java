@@ -14,6 +14,7 @@ import java.util.Set;
 import java.util.concurrent.Callable;
 
 import org.spanlift.atmosphere.Airspeed;
+import org.spanlift.cli.options.Angles;
 import org.spanlift.cli.options.ClMaxOptions;
 import org.spanlift.cli.options.FlightOptions;
 import org.spanlift.cli.options.Format;
@@ -34,6 +35,7 @@ import org.spanlift.input.InputException;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.stall.MissingSectionDataException;
 import org.spanlift.washout.LeastDragTwist;
+import org.spanlift.washout.TwistDesign;
 import org.spanlift.washout.WashoutDesign;
 import org.spanlift.washout.WashoutPoint;
 import org.spanlift.washout.WashoutRequirement;
@@ -51,8 +53,14 @@ import picocli.CommandLine.Model.CommandSpec;
                 + "stall requirements, and what it costs at a cruise CL; with the trade curve of washout against "
                 + "the stall onset, the aileron margin and the cruise span efficiency.",
             "Give at least one requirement. For a trapezoid or elliptic wing the answer replaces the file's washout; "
-                + "for a wing given by stations a linear twist change is added to the stations' twists."})
+                + "for a wing given by stations a linear twist change is added to the stations' twists.",
+            "With --twist-stations K: instead, the twist change of least cruise induced drag meeting the onset "
+                + "requirements, piecewise linear through K stations (root unchanged), within --twist-bounds and "
+                + "--smoothness, against zero washout and the least linear washout."})
 public final class WashoutCommand implements Callable<Integer>, OffersFormats {
+
+    /** The most twist stations asked for. */
+    static final int MAX_TWIST_STATIONS = 16;
 
     static final Set<Format> FORMATS = Collections.unmodifiableSet(EnumSet.of(Format.TABLE, Format.JSON, Format.SVG,
             Format.PNG));
@@ -66,6 +74,22 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
     @Option(names = "--cl", paramLabel = "CL", defaultValue = "0.5",
             description = "The cruise CL of the cost (span efficiency and induced drag). Default: ${DEFAULT-VALUE}.")
     String cruise;
+
+    @Option(names = "--twist-stations", paramLabel = "K",
+            description = "Design a twist distribution instead of a linear washout: a twist change piecewise linear "
+                    + "through K stations at even fractions of the semi-span (each on the nearest strip edge), the "
+                    + "root's unchanged; 1 to " + MAX_TWIST_STATIONS + ".")
+    String twistStations;
+
+    @Option(names = "--twist-bounds", paramLabel = "FROM:TO",
+            description = "With --twist-stations: the least and largest twist change at each station, degrees "
+                    + "(positive nose-up). Default: -10:10.")
+    String twistBounds;
+
+    @Option(names = "--smoothness", paramLabel = "DEG",
+            description = "With --twist-stations: the largest kink at an inner station, degrees (the second "
+                    + "difference of the changes for even stations). Default: 0.5.")
+    String smoothness;
 
     @Mixin
     OutputOptions output;
@@ -88,10 +112,33 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
         output.check(InputFiles.wing(file));
         FlightOptions.refuse(spec, "washout finds the stall speed itself; give --weight (and --altitude) for it",
                 "--speed", "--true-speed");
+        TwistDesign.Shape twistShape = null;
+        int stations = 0;
+        double[] twistRange = null;
+        double kink = 0;
+        if (twistStations != null) {
+            if (format == Format.SVG || format == Format.PNG) {
+                throw new InputException("--format", 0, "", "with --twist-stations, washout writes a table or JSON");
+            }
+            stations = twistStationCount(twistStations);
+            twistRange = twistBounds == null ? new double[] {-10, 10} : range("--twist-bounds", twistBounds);
+            kink = smoothness == null ? 0.5 : Angles.parse("--smoothness", smoothness, "a kink", 10);
+            if (kink < 0) {
+                throw new InputException("--smoothness", 0, "", "expected a kink from 0 to 10 degrees, got "
+                        + smoothness.strip());
+            }
+        } else if (twistBounds != null || smoothness != null) {
+            throw new InputException(twistBounds != null ? "--twist-bounds" : "--smoothness", 0, "",
+                    "goes with --twist-stations");
+        }
         double[] range = washout.bounds();
         double cruiseCl = OptionNumber.parse("--cl", cruise);
         Wing wing = WingFileReader.read(file);
         List<WashoutRequirement> requirements = washout.requirements(wing);
+        if (twistStations != null && requirements.stream().anyMatch(WashoutRequirement::needsMaximumLift)) {
+            throw new InputException("--ailerons-below-peak", 0, "", "does not go with --twist-stations: the lift at "
+                    + "the maximum is not linear in twist; give --onset-inboard-of or --aileron-margin");
+        }
         double[] deflections = org.spanlift.solve.WingAnalysis.of(wing).deflections(flight.deflections(wing));
         Optional<FlightCondition> condition = flight.condition();
         WashoutDesign.Result result;
@@ -102,6 +149,21 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
             throw new InputException(file.toString(), 0, "sections", e.getMessage());
         }
         LeastDragTwist leastDrag = LeastDragTwist.of(org.spanlift.solve.WingAnalysis.of(wing), deflections, cruiseCl);
+        if (twistStations != null) {
+            twistShape = new TwistDesign.Shape(TwistDesign.evenKnots(wing, stations), Math.toRadians(twistRange[0]),
+                    Math.toRadians(twistRange[1]), Math.toRadians(kink));
+            TwistDesign.Result twist;
+            try {
+                twist = TwistDesign.find(wing, deflections, requirements, cruiseCl, clMax.assumed(), condition,
+                        twistShape, result.washout());
+            } catch (MissingSectionDataException e) {
+                throw new InputException(file.toString(), 0, "sections", e.getMessage());
+            }
+            WashoutOutput out = new WashoutOutput(wing, requirements, result, twist, twistShape, cruiseCl,
+                    org.spanlift.stall.StallStudy.anyFlapDeflected(wing, deflections));
+            output.write(format == Format.JSON ? Json.write(out.json()) : out.table(), spec.commandLine().getOut());
+            return 0;
+        }
         switch (format) {
             case JSON -> output.write(Json.write(json(wing, requirements, result, cruiseCl, leastDrag)),
                     spec.commandLine().getOut());
@@ -116,7 +178,7 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
             WashoutDesign.Result r, double cruiseCl, LeastDragTwist leastDrag) {
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("name", wing.name());
-        root.put("units", Map.of("angle", "deg", "length", "m", "speed", "m/s"));
+        root.put("units", WashoutOutput.units());
         WashoutPoint at = r.washout().orElse(r.atUpper());
         root.put("met", r.met());
         root.put("washout_deg", r.washout().map(p -> (Object) Math.toDegrees(p.washout())).orElse(null));
@@ -134,26 +196,26 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
         }
         root.put("requirements", reqs);
         root.put("requirements_read_at_deg", Math.toDegrees(at.washout()));
-        root.put("stall", stall(at));
+        root.put("stall", WashoutOutput.stall(at));
         Map<String, Object> c = new LinkedHashMap<>();
         c.put("CL", cruiseCl);
-        c.put("e", box(at.cruiseE()));
+        c.put("e", WashoutOutput.box(at.cruiseE()));
         c.put("CDi", at.cruiseDrag());
-        c.put("e_without_washout", box(r.unwashed().cruiseE()));
+        c.put("e_without_washout", WashoutOutput.box(r.unwashed().cruiseE()));
         c.put("CDi_without_washout", r.unwashed().cruiseDrag());
         root.put("cruise", c);
         List<Object> trade = new ArrayList<>();
         for (WashoutPoint p : r.trade()) {
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("washout_deg", Math.toDegrees(p.washout()));
-            m.putAll(stall(p));
-            m.put("cruise_e", box(p.cruiseE()));
+            m.putAll(WashoutOutput.stall(p));
+            m.put("cruise_e", WashoutOutput.box(p.cruiseE()));
             m.put("cruise_CDi", p.cruiseDrag());
             trade.add(m);
         }
         root.put("trade", trade);
         Map<String, Object> least = new LinkedHashMap<>();
-        least.put("e", box(leastDrag.solution().coefficients().spanEfficiency()));
+        least.put("e", WashoutOutput.box(leastDrag.solution().coefficients().spanEfficiency()));
         least.put("CDi", leastDrag.solution().coefficients().inducedDrag());
         double[] tw = leastDrag.twist();
         least.put("washout_deg", Math.toDegrees(tw[0] - tw[tw.length - 1]));
@@ -166,24 +228,6 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
         root.put("least_drag_twist", least);
         root.put("caution", Cautions.STALL);
         return root;
-    }
-
-    private static Map<String, Object> stall(WashoutPoint p) {
-        Map<String, Object> m = new LinkedHashMap<>();
-        m.put("CL", p.onset().lift());
-        m.put("y", p.onset().y());
-        m.put("eta", p.onset().eta());
-        m.put("aileron_margin", p.onset().aileronMargin().map(a -> (Object) Map.of("dcl", a.dcl())).orElse(null));
-        m.put("stall_speed_eas", box(p.stallSpeed()));
-        p.maximum().ifPresent(x -> {
-            m.put("max_lift_CL", x.lift());
-            m.put("ailerons_below_peak_at_max_lift", x.aileron().map(a -> (Object) a.belowPeak()).orElse(null));
-        });
-        return m;
-    }
-
-    private static Object box(OptionalDouble v) {
-        return v.isPresent() ? (Object) v.getAsDouble() : null;
     }
 
     private static String table(Wing wing, List<WashoutRequirement> requirements, WashoutDesign.Result r,
@@ -217,13 +261,13 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
                                 ? String.format(Locale.ROOT, ", stall speed %.1f kt EAS (onset)",
                                         Airspeed.knots(at.stallSpeed().getAsDouble())) : ""));
         b.append(String.format(Locale.ROOT, "  cruise at CL %.2f: e %s, CDi %.5f (without washout: e %s, CDi %.5f)%n%n",
-                cruiseCl, e(at.cruiseE()), at.cruiseDrag(), e(r.unwashed().cruiseE()), r.unwashed().cruiseDrag()));
+                cruiseCl, WashoutOutput.e(at.cruiseE()), at.cruiseDrag(), WashoutOutput.e(r.unwashed().cruiseE()), r.unwashed().cruiseDrag()));
         double[] tw = leastDrag.twist();
         b.setLength(b.length() - 1);
         b.append(TextTable.wrap(String.format(Locale.ROOT, "For comparison, the twist of least induced drag at CL %.2f "
                 + "(no stall requirement; the elliptic load, Munk): e %s, CDi %.5f, %.2f deg from root to tip (not "
                 + "linear; JSON least_drag_twist gives it strip by strip).", cruiseCl,
-                e(leastDrag.solution().coefficients().spanEfficiency()), leastDrag.solution().coefficients().inducedDrag(),
+                WashoutOutput.e(leastDrag.solution().coefficients().spanEfficiency()), leastDrag.solution().coefficients().inducedDrag(),
                 Math.toDegrees(tw[0] - tw[tw.length - 1])))).append("\n\n");
         TextTable t = new TextTable(List.of("washout [deg]", "onset CL", "onset eta", "aileron margin",
                 "Vs onset [kt]", "cruise e", "cruise CDi", "meets"));
@@ -232,7 +276,7 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
             t.row(List.of(TextTable.fixed(Math.toDegrees(p.washout()), 2), TextTable.fixed(p.onset().lift(), 3),
                     TextTable.fixed(p.onset().eta(), 3), p.onset().aileronMargin().map(m -> TextTable.fixed(m.dcl(), 3))
                             .orElse("-"), p.stallSpeed().isPresent() ? TextTable.fixed(Airspeed.knots(
-                                    p.stallSpeed().getAsDouble()), 1) : "-", e(p.cruiseE()),
+                                    p.stallSpeed().getAsDouble()), 1) : "-", WashoutOutput.e(p.cruiseE()),
                     TextTable.fixed(p.cruiseDrag(), 5), meets ? "yes" : "no"));
         }
         b.append(t.render());
@@ -240,8 +284,28 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
         return b.toString();
     }
 
-    private static String e(OptionalDouble e) {
-        return e.isPresent() ? TextTable.fixed(e.getAsDouble(), 4) : "-";
+    private static int twistStationCount(String text) {
+        String t = text.strip();
+        if (!t.matches("[0-9]{1,3}") || Integer.parseInt(t) < 1 || Integer.parseInt(t) > MAX_TWIST_STATIONS) {
+            String shown = t.length() > 20 ? t.substring(0, 17) + "..." : t;
+            throw new InputException("--twist-stations", 0, "", "expected a whole number of stations from 1 to "
+                    + MAX_TWIST_STATIONS + ", got '" + shown + "'");
+        }
+        return Integer.parseInt(t);
+    }
+
+    private static double[] range(String option, String text) {
+        String[] parts = text.split(":", -1);
+        if (parts.length != 2) {
+            throw new InputException(option, 0, "", "expected FROM:TO in degrees, such as -10:10, got '"
+                    + (text.length() > 40 ? text.substring(0, 37) + "..." : text.strip()) + "'");
+        }
+        double from = Angles.parse(option, parts[0], "a twist change", 20);
+        double to = Angles.parse(option, parts[1], "a twist change", 20);
+        if (!(to >= from)) {
+            throw new InputException(option, 0, "", "expected FROM no larger than TO, got '" + text.strip() + "'");
+        }
+        return new double[] {from, to};
     }
 
     @Override

@@ -30,6 +30,9 @@ class JsonAcrossRunsTest {
                 List.of("loads", trainer, "--cases", CliRun.demo("trainer.cases.yaml"), "--format", "json"),
                 List.of("loads", trainer, "--envelope", CliRun.demo("trainer.envelope.yaml"), "--format", "json"),
                 List.of("compare", trainer, CliRun.demo("tourer.wing.yaml"), "--weight", "750kg", "--assume-cl-max",
+                        "--format", "json"),
+                List.of("washout", trainer, "--aileron-margin", "0.1", "--weight", "750kg", "--format", "json"),
+                List.of("washout", trainer, "--aileron-margin", "0.1", "--weight", "750kg", "--twist-stations", "4",
                         "--format", "json"));
         for (List<String> command : commands) {
             byte[] first = run(command, "a");

@@ -7,7 +7,7 @@ import java.util.List;
  * z, and twist (radians, positive nose-up). The lattice lies on the flat, untwisted surface; twist enters
  * the boundary condition only.
  */
-public sealed interface Planform permits StationPlanform, EllipticPlanform {
+public sealed interface Planform permits StationPlanform, EllipticPlanform, RetwistedPlanform {
 
     /** Smallest y the surface covers (the root of a mirrored surface). */
     double yStart();

@@ -86,6 +86,17 @@ public record Surface(String name, boolean mirrored, Planform planform, List<Con
                 role);
     }
 
+    /**
+     * The same surface with a twist change piecewise linear through knots (zero at the root; see
+     * {@link RetwistedPlanform}): same lattice, other incidences. A planform already changed so is changed
+     * again from its base.
+     */
+    public Surface withTwistChange(double[] knots, double[] change) {
+        Planform base = planform instanceof RetwistedPlanform r ? r.base() : planform;
+        return new Surface(name, mirrored, new RetwistedPlanform(base, knots, change), controls, lattice,
+                fuselageHalfWidth);
+    }
+
     public Surface withLattice(LatticeSpec spec) {
         return new Surface(name, mirrored, planform, controls, spec, fuselageHalfWidth, role);
     }

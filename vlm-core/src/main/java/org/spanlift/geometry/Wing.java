@@ -69,7 +69,8 @@ public record Wing(String name, LengthUnit displayUnit, Reference reference, Lis
      */
     private static void requireSections(Surface surface, Map<String, Section> sections) {
         String where = "surface '" + surface.name() + "'";
-        if (surface.planform() instanceof StationPlanform p) {
+        Planform planform = surface.planform() instanceof RetwistedPlanform r ? r.base() : surface.planform();
+        if (planform instanceof StationPlanform p) {
             List<Station> stations = p.stations();
             for (int i = 0; i < stations.size(); i++) {
                 Station st = stations.get(i);
@@ -78,7 +79,7 @@ public record Wing(String name, LengthUnit displayUnit, Reference reference, Lis
                             sections);
                 }
             }
-        } else if (surface.planform() instanceof EllipticPlanform e && !sections.containsKey(e.sectionName())) {
+        } else if (planform instanceof EllipticPlanform e && !sections.containsKey(e.sectionName())) {
             throw missingSection(where + " (elliptic planform)", e.sectionName(), sections);
         }
     }
@@ -128,6 +129,16 @@ public record Wing(String name, LengthUnit displayUnit, Reference reference, Lis
     public Wing withLattice(LatticeSpec spec) {
         return new Wing(name, displayUnit, reference, surfaces.stream().map(s -> s.withLattice(spec)).toList(),
                 sections, fuselage, thrustLineHeight);
+    }
+
+    /**
+     * The same wing with a twist change on its first surface, piecewise linear through knots (y, m) from zero
+     * at the root, rad ({@link Surface#withTwistChange}).
+     */
+    public Wing withTwistChange(double[] knots, double[] change) {
+        List<Surface> changed = new ArrayList<>(surfaces);
+        changed.set(0, surfaces.get(0).withTwistChange(knots, change));
+        return new Wing(name, displayUnit, reference, changed, sections);
     }
 
     /** The same wing with the washout of its first surface larger by {@code change}, rad. */

@@ -132,7 +132,7 @@ public record LeastDragTwist(double lift, double alpha, double[] twist, double[]
      * The symmetric matrix Q with CDi = G' Q G for strip circulations G (per unit speed): the Trefftz-plane
      * sum, each strip's normalwash linear in G, evaluated column by column.
      */
-    private static DMatrixRMaj dragForm(List<Strip> strips, double area) {
+    static DMatrixRMaj dragForm(List<Strip> strips, double area) {
         int n = strips.size();
         DMatrixRMaj w = new DMatrixRMaj(n, n);
         double[] unit = new double[n];
