@@ -466,10 +466,11 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         if (stall.isPresent()) {
             MaximumLift m = stall.get().maximum();
             b.append(TextTable.wrap(String.format(Locale.ROOT, "Through the stall: the lattice coupled with the "
-                    + "section lift curves (%s). Maximum CL %.4f at alpha %.2f deg, %s; %.0f%% of the span past "
+                    + "section lift curves (%s). Maximum %s %.4f at alpha %.2f deg, %s; %.0f%% of the span past "
                     + "its section peak there. \"past peak\" is the share of the span past its section peak; "
                     + "\"CL linear\" is linear theory's CL.", m.synthetic() ? "some built from cl-max, synthetic"
-                            : "measured", m.lift(), Math.toDegrees(m.alpha()), m.peak() ? "where the lift rounds over"
+                            : "measured", wing.surfaces().size() > 1 ? "wing CL (the wing's own lift; the other "
+                                    + "surfaces stay linear)" : "CL", m.lift(), Math.toDegrees(m.alpha()), m.peak() ? "where the lift rounds over"
                             : "where the lift breaks off or the traced curve ends (" + m.end().name().toLowerCase(Locale.ROOT)
                                     .replace('_', '-') + ")", 100 * m.stalledSpanFraction()))).append("\n\n");
         }
