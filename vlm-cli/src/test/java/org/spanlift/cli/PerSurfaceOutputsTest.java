@@ -139,6 +139,14 @@ class PerSurfaceOutputsTest {
         assertFalse(table.out().contains("spanlift balance"), table.out());
     }
 
+    @Test
+    void washoutWithATailCarriesTheUntrimmedCautionAndAWingAloneItsOwn() {
+        CliRun tail = CliRun.of("washout", TAIL, "--weight", "750kg", "--aileron-margin", "0.05", "--format", "json");
+        assertTrue(text(at(json(tail), "caution")).contains("spanlift balance gives the trimmed stall speeds"));
+        CliRun alone = CliRun.of("washout", ALONE, "--weight", "750kg", "--aileron-margin", "0.05", "--format", "json");
+        assertTrue(text(at(json(alone), "caution")).contains("for the wing alone (the tail's download"));
+    }
+
     private static YamlValue json(CliRun run) {
         assertEquals(0, run.exitCode(), run.err());
         assertFalse(run.out().contains("NaN"), run.out());
