@@ -39,6 +39,7 @@ import org.spanlift.flight.ReynoldsRule;
 import org.spanlift.input.RefusedException;
 import org.spanlift.vocabulary.Need;
 import org.spanlift.vocabulary.ResultKey;
+import org.spanlift.vocabulary.SurfaceResult;
 import org.spanlift.vocabulary.Vocabulary;
 import org.spanlift.vocabulary.WingResult;
 import org.spanlift.geometry.ControlSurface;
@@ -315,8 +316,7 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
             List<Object> surfaces = new ArrayList<>();
             for (int k = 0; k < wing.surfaces().size(); k++) {
                 Map<String, Object> one = new LinkedHashMap<>();
-                one.put("name", wing.surfaces().get(k).name());
-                one.put("CL", s.coefficients(k).lift());
+                Results.put(one, Vocabulary.SURFACE, SurfaceResult.of(wing.surfaces().get(k), s, k));
                 one.put("span_load", spanLoadJson(s.spanLoad(k), dims.circulationScale()));
                 surfaces.add(one);
             }
@@ -441,9 +441,6 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         List<ResultKey<FlightPoint>> keys = TABLE_KEYS.stream().filter(key -> drag || !key.needs(Need.POLARS)).toList();
         List<String> headers = new ArrayList<>(keys.stream().map(key -> Results.label(key, unit)).toList());
         boolean several = wing.surfaces().size() > 1;
-        if (several) {
-            wing.surfaces().forEach(s -> headers.add("CL " + s.name()));
-        }
         if (stall.isPresent()) {
             headers.addAll(List.of("CL linear", "past peak"));
         }
@@ -452,11 +449,6 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
             Solution s = points.get(i);
             FlightPoint point = dims.point(s);
             List<String> row = new ArrayList<>(keys.stream().map(key -> Results.cell(key, point, unit)).toList());
-            if (several) {
-                for (int k2 = 0; k2 < wing.surfaces().size(); k2++) {
-                    row.add(TextTable.fixed(s.coefficients(k2).lift(), 4));
-                }
-            }
             if (stall.isPresent()) {
                 row.add(TextTable.fixed(line.lift(s.alpha()), 4));
                 row.add(TextTable.fixed(stall.get().stalled().get(i), 2));
@@ -475,17 +467,41 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
                                     .replace('_', '-') + ")", 100 * m.stalledSpanFraction()))).append("\n\n");
         }
         b.append(t.render());
+        if (several) {
+            b.append('\n').append(surfaceTable(wing, points, unit));
+        }
         stall.filter(st -> !st.missingDeg().isEmpty()).ifPresent(st -> b.append(TextTable.wrap(String.format(
                 Locale.ROOT, "No solution on the path of a rising angle of attack at %s deg: beyond the traced "
                         + "curve, or where the lift depends on how the angle was reached.", st.missingDeg().stream()
                                 .map(a -> TextTable.fixed(a, 1)).collect(java.util.stream.Collectors.joining(", ")))))
                 .append('\n'));
+        if (several) {
+            b.append("\n  CL, CDi and Cm are the whole configuration's; \"each surface\" gives every surface's share on the\n"
+                    + "  reference area and chord (the shares add up to the whole).\n");
+        }
         b.append("\n  e is shown only where |CL| >= 0.05. CDi from the Trefftz plane. Cm positive nose-up; C_roll\n"
                 + "  positive right wing down, on the reference span. Use --format json for span loads.\n");
         if (drag) {
             b.append("  CD adds the sections' profile drag (strip integration of their polars) to CDi.\n");
         }
         return b.toString();
+    }
+
+    /** Each surface's share of every point: CL, CDi and Cm on the reference area and chord. */
+    private static String surfaceTable(Wing wing, List<Solution> points, DisplayUnits unit) {
+        ResultKey<FlightPoint> alphaKey = Vocabulary.find(Vocabulary.POINT, "alpha_deg");
+        List<String> headers = new ArrayList<>(List.of(Results.label(alphaKey, unit)));
+        Vocabulary.SURFACE.forEach(key -> headers.add(Results.label(key, unit)));
+        TextTable t = new TextTable(headers);
+        for (Solution s : points) {
+            for (int k = 0; k < wing.surfaces().size(); k++) {
+                SurfaceResult share = SurfaceResult.of(wing.surfaces().get(k), s, k);
+                List<String> row = new ArrayList<>(List.of(Results.cellOf(alphaKey, Math.toDegrees(s.alpha()), unit)));
+                Vocabulary.SURFACE.forEach(key -> row.add(Results.cell(key, share, unit)));
+                t.row(row);
+            }
+        }
+        return "  each surface\n" + t.render();
     }
 
     @Override

@@ -40,6 +40,7 @@ import org.spanlift.stall.StallEstimate;
 import org.spanlift.stall.SyntheticCurve;
 import org.spanlift.stall.StallStudy;
 import org.spanlift.stall.StallStudy.Configuration;
+import org.spanlift.vocabulary.Need;
 import org.spanlift.vocabulary.ResultKey;
 import org.spanlift.vocabulary.Vocabulary;
 import org.spanlift.vocabulary.WingResult;
@@ -104,10 +105,28 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         return 0;
     }
 
-    private static Map<String, Object> stallJson(Configuration c) {
+    /** The onset keys a configuration shows: a surface's own share only where the wing file has several. */
+    private static List<ResultKey<StallEstimate>> onsetKeys(Wing wing) {
+        boolean several = wing.surfaces().size() > 1;
+        return Vocabulary.ONSET.stream().filter(k -> several || !k.needs(Need.SURFACES)).toList();
+    }
+
+    /** What the onset's stations and CLs are, where the wing file has other surfaces besides the wing. */
+    private static String configurationNote(Wing wing) {
+        List<String> others = wing.surfaces().stream().skip(1).map(s -> s.name().equals(s.role().word()) ? s.name()
+                : s.name() + " (" + s.role().word() + ")").toList();
+        return "The onset's stations are those of the wing (surface " + wing.main().name() + "); the onset's CL is "
+                + "the configuration's: the wing with " + String.join(", ", others) + ", untrimmed, at the "
+                + "deflections given (the file's, or --deflect), with the wing's own CL at onset beside it. The lift "
+                + "traced through the stall, and its maximum, is the wing's own (the other surfaces stay linear). "
+                + "The onset's stall speeds rest on the configuration's CL, those at maximum lift on the wing's.";
+    }
+
+    private static Map<String, Object> stallJson(Wing wing, Configuration c) {
         Map<String, Object> m = new LinkedHashMap<>();
-        Results.put(m, Vocabulary.ONSET, c.estimate());
-        m.put("method", "critical section, linear theory");
+        Results.put(m, onsetKeys(wing), c.estimate());
+        m.put("method", wing.surfaces().size() > 1 ? "critical section, linear theory. " + configurationNote(wing)
+                : "critical section, linear theory");
         List<StallEstimate.StripStall> right = c.estimate().strips().stream().filter(s -> s.y() > 0).toList();
         Map<String, Object> spread = new LinkedHashMap<>();
         spread.put("y", right.stream().mapToDouble(StallEstimate.StripStall::y).toArray());
@@ -214,10 +233,10 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         atm.put("pressure", atmosphere.pressure());
         root.put("atmosphere", atm);
         root.put("fuselage_half_width", wing.main().fuselageHalfWidth());
-        root.put("stall", stallJson(study.clean()));
+        root.put("stall", stallJson(wing, study.clean()));
         root.put("max_lift", maxLiftJson(wing, study.clean()));
         study.flaps().ifPresent(flaps -> {
-            Map<String, Object> f = stallJson(flaps);
+            Map<String, Object> f = stallJson(wing, flaps);
             f.put("deflections_deg", deflections(wing, flaps.deflections()));
             root.put("stall_flaps", f);
             root.put("max_lift_flaps", maxLiftJson(wing, flaps));
@@ -236,7 +255,7 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
             sp.put("weight", fc.weight());
             sp.put("load_factor", fc.loadFactor());
         });
-        root.put("caution", Cautions.STALL);
+        root.put("caution", Cautions.stall(wing.surfaces().size()));
         return root;
     }
 
@@ -253,6 +272,10 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         double k = unit.length().metres();
         StringBuilder b = new StringBuilder(wing.name()).append('\n');
         b.append("  stall onset by the critical-section method (linear theory)\n");
+        boolean several = wing.surfaces().size() > 1;
+        if (several) {
+            b.append(TextTable.wrap(configurationNote(wing))).append('\n');
+        }
         double fuselage = wing.main().fuselageHalfWidth();
         if (fuselage > 0) {
             b.append(String.format(Locale.ROOT, "  stations inside the fuselage (|y| < %.3f %s) are not stall candidates%n",
@@ -271,8 +294,14 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         List<String> headers = new ArrayList<>(List.of(""));
         configs.forEach(c -> headers.add(c.label()));
         TextTable t = new TextTable(headers);
-        for (ResultKey<StallEstimate> key : Vocabulary.select(Vocabulary.ONSET, "CL", "alpha_deg", "y", "eta",
-                "section", "section_alpha_deg", "aileron_margin.dcl", "aileron_margin.y", "half_span_CL")) {
+        List<ResultKey<StallEstimate>> onsetRows = new ArrayList<>(Vocabulary.select(Vocabulary.ONSET, "CL",
+                "alpha_deg", "y", "eta", "section", "section_alpha_deg", "aileron_margin.dcl", "aileron_margin.y",
+                "half_span_CL"));
+        if (several) {
+            onsetRows.add(1, Vocabulary.find(Vocabulary.ONSET, "wing_CL"));
+        }
+        for (ResultKey<StallEstimate> onsetKey : onsetRows) {
+            ResultKey<StallEstimate> key = several ? Vocabulary.forSeveralSurfaces(onsetKey) : onsetKey;
             t.row(cells(Results.label(key, unit), configs, c -> Results.cell(key, c.estimate(), unit)));
         }
         if (study.condition().isPresent()) {
@@ -284,9 +313,10 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         }
         t.row(cells("", configs, c -> ""));
         t.row(cells("maximum lift (section lift curves)", configs, c -> ""));
-        for (ResultKey<MaximumLift> key : Vocabulary.select(Vocabulary.MAX_LIFT, "CL", "alpha_deg", "rounds_over", "trace_end",
+        for (ResultKey<MaximumLift> maxKey : Vocabulary.select(Vocabulary.MAX_LIFT, "CL", "alpha_deg", "rounds_over", "trace_end",
                 "stalled_span_fraction", "first_stall.eta", "first_stall.CL", "aileron.below_peak",
                 "aileron.margin_dcl", "synthetic_curves")) {
+            ResultKey<MaximumLift> key = several ? Vocabulary.forSeveralSurfaces(maxKey) : maxKey;
             t.row(cells(Results.label(key, unit), configs, c -> c.maximumLiftIfAny()
                     .map(m -> Results.cell(key, m, unit)).orElse("-")));
         }
@@ -366,7 +396,7 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         if (study.condition().isEmpty()) {
             b.append("\n  No --weight given: no stall speeds; cl-max tables read at their lowest Reynolds number.\n");
         }
-        b.append('\n').append(TextTable.wrap(Cautions.STALL)).append('\n');
+        b.append('\n').append(TextTable.wrap(Cautions.stall(wing.surfaces().size()))).append('\n');
         return b.toString();
     }
 

@@ -226,7 +226,7 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
         }
         least.put("twist_change_deg", deg);
         root.put("least_drag_twist", least);
-        root.put("caution", Cautions.STALL);
+        root.put("caution", Cautions.stall(wing.surfaces().size()));
         return root;
     }
 
@@ -280,7 +280,7 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
                     TextTable.fixed(p.cruiseDrag(), 5), meets ? "yes" : "no"));
         }
         b.append(t.render());
-        b.append('\n').append(TextTable.wrap(Cautions.STALL)).append('\n');
+        b.append('\n').append(TextTable.wrap(Cautions.stall(wing.surfaces().size()))).append('\n');
         return b.toString();
     }
 

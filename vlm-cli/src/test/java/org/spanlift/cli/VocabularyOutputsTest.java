@@ -22,6 +22,7 @@ import org.spanlift.geometry.Wing;
 import org.spanlift.input.YamlParser;
 import org.spanlift.input.YamlValue;
 import org.spanlift.io.WingFileReader;
+import org.spanlift.vocabulary.Need;
 import org.spanlift.vocabulary.ResultKey;
 import org.spanlift.vocabulary.ResultUnit;
 import org.spanlift.vocabulary.Vocabulary;
@@ -113,8 +114,41 @@ class VocabularyOutputsTest {
     @Test
     void everyOnsetKeyInTheSweepEqualsStallCleanAndFlapped() {
         for (ResultKey<?> k : Vocabulary.ONSET) {
-            same(k, at(stall, "stall." + k.key()), sweepRow.get(Vocabulary.CLEAN + k.key()));
-            same(k, at(stall, "stall_flaps." + k.key()), sweepRow.get(Vocabulary.FLAPS + k.key()));
+            // a surface's own share is written only where there are several; a wing alone's is the whole's
+            String printedKey = k.needs(Need.SURFACES) ? "CL" : k.key();
+            assertEquals(k.needs(Need.SURFACES), at(stall, "stall." + k.key()) == null, k.key());
+            same(k, at(stall, "stall." + printedKey), sweepRow.get(Vocabulary.CLEAN + k.key()));
+            same(k, at(stall, "stall_flaps." + printedKey), sweepRow.get(Vocabulary.FLAPS + k.key()));
+        }
+    }
+
+    @Test
+    void everyOnsetKeyOfSeveralSurfacesInTheSweepEqualsStallWithATail() throws IOException {
+        Path tailFile = dir.resolve("t.wing.yaml");
+        Files.copy(CliRun.GEOMETRIES.resolve("trainer-tail.wing.yaml"), tailFile);
+        YamlValue printed = json(CliRun.of("stall", tailFile.toString(), "--weight", WEIGHT, "--flaps", FLAPS,
+                "--format", "json"));
+        List<ResultKey<?>> keys = new ArrayList<>();
+        Vocabulary.ONSET.stream().filter(k -> k.needs(Need.SURFACES)).forEach(keys::add);
+        assertFalse(keys.isEmpty());
+        StringBuilder sweep = new StringBuilder("base: t.wing.yaml\n"
+                + "parameters:\n  surfaces.wing.controls.aileron.deflection: [0]\n"
+                + "flight: {weight: " + WEIGHT + ", flaps: " + FLAPS + "}\ncolumns:\n");
+        for (ResultKey<?> k : keys) {
+            sweep.append("  - \"").append(Vocabulary.CLEAN).append(k.key()).append("\"\n");
+            sweep.append("  - \"").append(Vocabulary.FLAPS).append(k.key()).append("\"\n");
+        }
+        Path sweepFile = Files.writeString(dir.resolve("tail.sweep.yaml"), sweep.toString());
+        Path out = dir.resolve("tail.csv");
+        CliRun run = CliRun.of("sweep", sweepFile.toString(), "--output", out.toString());
+        assertEquals(0, run.exitCode(), run.err());
+        List<String> lines = Files.readAllLines(out, StandardCharsets.UTF_8);
+        List<String> header = cells(lines.get(0));
+        List<String> row = cells(lines.get(1));
+        assertEquals("", row.get(header.indexOf("error")), "the case ran");
+        for (ResultKey<?> k : keys) {
+            same(k, at(printed, "stall." + k.key()), row.get(header.indexOf(Vocabulary.CLEAN + k.key())));
+            same(k, at(printed, "stall_flaps." + k.key()), row.get(header.indexOf(Vocabulary.FLAPS + k.key())));
         }
     }
 
@@ -188,8 +222,8 @@ class VocabularyOutputsTest {
     @Test
     void everyKeyIsDeclaredOnceWithAUnitLabelAndDescription() {
         List<List<? extends ResultKey<?>>> groups = List.of(Vocabulary.WING, Vocabulary.POINT, Vocabulary.ONSET,
-                Vocabulary.MAX_LIFT, Vocabulary.STUDY, Vocabulary.LOADS, Vocabulary.CONTROL, Vocabulary.BALANCE,
-                Vocabulary.TRIM);
+                Vocabulary.MAX_LIFT, Vocabulary.STUDY, Vocabulary.LOADS, Vocabulary.CONTROL, Vocabulary.SURFACE,
+                Vocabulary.BALANCE, Vocabulary.TRIM);
         for (List<? extends ResultKey<?>> g : groups) {
             assertEquals(g.size(), g.stream().map(ResultKey::key).distinct().count(), "keys unique in a group");
             for (ResultKey<?> k : g) {

@@ -197,6 +197,25 @@ public final class Lattice {
     }
 
     /**
+     * The squared Rankine core radius of the trailing leg at one edge of a strip, m^2, as the Trefftz plane
+     * sees it: the smallest of the cores of the strip's legs there (one per row; the legs of an edge share
+     * its y-z point, and their cores differ only where a neighbouring strip shares some of them and not
+     * others, as beside a control's end, where its rows are cut differently).
+     *
+     * @param strip index in {@link #strips()}
+     * @param right the right edge (larger y, the bound legs' ends B), else the left edge (A)
+     */
+    public double stripEdgeCoreSquared(int strip, boolean right) {
+        Strip st = strips.get(strip);
+        double core2 = Double.POSITIVE_INFINITY;
+        for (int r = 0; r < st.rows(); r++) {
+            int p = st.firstPanel() + r;
+            core2 = Math.min(core2, trailingCore2[right ? bPoint[p] : aPoint[p]]);
+        }
+        return core2;
+    }
+
+    /**
      * True when the other lattice has the same panels, control points, normals, cut-offs and symmetry, so
      * that its influence systems are this one's (incidence and control membership may differ: they enter
      * the right-hand sides only).

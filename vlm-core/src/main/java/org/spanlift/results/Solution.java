@@ -47,7 +47,7 @@ public final class Solution {
             stripCirculation[s] = g;
         }
         this.normalwash = new double[strips.size()];
-        TrefftzPlane.normalwash(strips, stripCirculation, normalwash);
+        TrefftzPlane.normalwash(lattice, stripCirculation, normalwash);
     }
 
     public double alpha() {

@@ -29,6 +29,7 @@ public final class StallAnalysis {
 
     private final WingAnalysis analysis;
     private final double[] deflections;
+    private final double[] lifting;
     private final StripLimits limits;
     private final LiftCurve line;
     private final double semi;
@@ -41,7 +42,7 @@ public final class StallAnalysis {
         this.analysis = analysis;
         this.deflections = deflections.clone();
         this.limits = limits;
-        double[] lifting = FlapLift.deflections(analysis.wing(), deflections);
+        this.lifting = FlapLift.deflections(analysis.wing(), deflections);
         this.line = analysis.liftCurve(lifting);
         Lattice lattice = analysis.lattice();
         BasisSolutions basis = analysis.basis();
@@ -144,7 +145,11 @@ public final class StallAnalysis {
         OptionalDouble half = halfSpan(lattice, ids, strips);
         List<StallEstimate.StripStall> sorted = new ArrayList<>(strips);
         sorted.sort(Comparator.comparingDouble(StallEstimate.StripStall::y));
-        return new StallEstimate(line.lift(alpha), alpha, Math.abs(onset.y()), Math.abs(onset.y()) / semi,
+        // the wing's own lift at the onset, with the flaps at their handbook lift as the line has them; a wing
+        // alone is the whole configuration
+        double wingLift = analysis.wing().surfaces().size() == 1 ? line.lift(alpha)
+                : analysis.solve(alpha, lifting).coefficients(0).lift();
+        return new StallEstimate(line.lift(alpha), wingLift, alpha, Math.abs(onset.y()), Math.abs(onset.y()) / semi,
                 limits.section(first), margin, half, List.copyOf(sorted), limits.assumed(),
                 limits.defaultFlapIncrement(), controlEndAt(onset, sorted), line, tipFrom);
     }

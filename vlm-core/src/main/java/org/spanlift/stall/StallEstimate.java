@@ -7,10 +7,14 @@ import java.util.OptionalDouble;
 import org.spanlift.solve.LiftCurve;
 
 /**
- * Stall onset of the wing by the critical-section method in linear theory: the lowest wing CL at which
- * some strip's section cl reaches its cl_max. Angles in radians, lengths in metres.
+ * Stall onset of the wing by the critical-section method in linear theory: the lowest CL at which some
+ * strip of the wing (the first surface; other surfaces are never stall candidates) reaches its cl_max. Angles in radians, lengths in metres.
  *
- * @param lift                 wing CL at stall onset
+ * @param lift                 CL at stall onset: the wing's, or where the wing file has other surfaces, the
+ *                             configuration's (wing and other surfaces, untrimmed, at the deflections given);
+ *                             the stall speeds rest on it
+ * @param wingLift             the wing's own CL at stall onset (the first surface's lift on the reference
+ *                             area, from the solution at the onset); equal to {@code lift} for a wing alone
  * @param alpha                angle of attack at stall onset
  * @param y                    spanwise station where stall starts (the right-hand one of a symmetric pair)
  * @param eta                  that station over the semi-span
@@ -32,7 +36,7 @@ import org.spanlift.solve.LiftCurve;
  *                             aerodynamic chord begin (|y|, toward a tip ending in a point): they are left out
  *                             of the onset; absent when there are none
  */
-public record StallEstimate(double lift, double alpha, double y, double eta, String section,
+public record StallEstimate(double lift, double wingLift, double alpha, double y, double eta, String section,
         Optional<AileronMargin> aileronMargin, OptionalDouble halfSpanLift, List<StripStall> strips,
         boolean assumedClMax, boolean defaultFlapIncrement, Optional<ControlEnd> besideControlEnd, LiftCurve line,
         OptionalDouble pointedTipFrom) {

@@ -11,5 +11,10 @@ public enum Need {
     /** A drag polar for every section. */
     POLARS,
     /** A centre of gravity. */
-    CG
+    CG,
+    /**
+     * A configuration of more than one surface: a surface's own share of a result, which for a wing alone
+     * repeats the whole's (writers leave such a key out there, so a wing alone's outputs keep their keys).
+     */
+    SURFACES
 }

@@ -41,6 +41,7 @@ import org.spanlift.washout.WashoutDesign;
  * <li>{@link #WING}: the wing at its deflections (reference values, lattice, lift curve);</li>
  * <li>{@link #POINT}: one flight point, named in a sweep with {@code @CL=} or {@code @alpha=}
  * ({@code e@CL=0.5});</li>
+ * <li>{@link #SURFACE}: one surface's share of a flight point (where the wing file has several surfaces);</li>
  * <li>{@link #ONSET}: a stall onset, under {@link #CLEAN} ({@code stall.eta}) or {@link #FLAPS}
  * ({@code stall_flaps.CL});</li>
  * <li>{@link #MAX_LIFT}: a maximum lift from the section lift curves, under {@link #MAX_CLEAN}
@@ -121,7 +122,12 @@ public final class Vocabulary {
 
     /** A stall onset (critical-section method, linear theory). */
     public static final List<ResultKey<StallEstimate>> ONSET = List.of(
-            key("CL", NONE, "wing CL at onset", "wing CL at stall onset", 3, CL_MAX, StallEstimate::lift),
+            key("CL", NONE, "wing CL at onset", "CL at stall onset: the wing's; where the wing file has other "
+                    + "surfaces, the configuration's (wing and other surfaces, untrimmed, at the deflections given), "
+                    + "on which the stall speeds rest", 3, CL_MAX, StallEstimate::lift),
+            key("wing_CL", NONE, "wing's own CL at onset", "the wing's own CL at stall onset (its lift on the "
+                    + "reference area, the other surfaces' left out); written where the wing file has other surfaces",
+                    3, Set.of(Need.CL_MAX, Need.SURFACES), StallEstimate::wingLift),
             key("alpha_deg", DEGREE, "alpha at onset", "angle of attack at stall onset", 2, CL_MAX,
                     e -> Math.toDegrees(e.alpha())),
             key("y", METRE, "onset station y", "spanwise station where stall starts", 3, CL_MAX, StallEstimate::y),
@@ -138,7 +144,8 @@ public final class Vocabulary {
             key("aileron_margin.y", METRE, "  at y", "where that least aileron margin is", 3, CL_MAX,
                     e -> e.aileronMargin().map(m -> (Object) Math.abs(m.y())).orElse(null)),
             key("half_span_CL", NONE, "CL with half span at cl_max",
-                    "wing CL at which half the span has reached cl_max (linear theory)", 3, CL_MAX,
+                    "CL (as the onset's CL) at which half the wing's span has reached cl_max (linear theory)", 3,
+                    CL_MAX,
                     e -> boxed(e.halfSpanLift())),
             key("assumed_cl_max", FLAG, "cl_max assumed", "true when some section's cl_max was assumed", 0,
                     CL_MAX, StallEstimate::assumedClMax),
@@ -154,16 +161,31 @@ public final class Vocabulary {
             key("beside_control_end.y", METRE, "  that end at y", "the y of that control end", 3, CL_MAX,
                     e -> e.besideControlEnd().map(c -> (Object) c.y()).orElse(null)),
             key("beside_control_end.first_on_control.CL", NONE, "  first on the control at CL",
-                    "the wing CL at which a strip on that control itself first reaches cl_max", 3, CL_MAX,
+                    "the CL (as the onset's CL) at which a strip on that control itself first reaches cl_max", 3,
+                    CL_MAX,
                     e -> e.besideControlEnd().flatMap(StallEstimate.ControlEnd::firstOnControl)
                             .map(f -> (Object) f.lift()).orElse(null)),
             key("beside_control_end.first_on_control.y", METRE, "  at y", "that strip's y", 3, CL_MAX,
                     e -> e.besideControlEnd().flatMap(StallEstimate.ControlEnd::firstOnControl)
                             .map(f -> (Object) Math.abs(f.y())).orElse(null)));
 
+    /** One surface's share of a flight point, on the wing's reference area, span and chord. */
+    public static final List<ResultKey<SurfaceResult>> SURFACE = List.of(
+            key("name", TEXT, "surface", "the surface's name in the wing file", 0, s -> s.name()),
+            key("role", TEXT, "role", "what the surface does: wing, tail, canard or other", 0,
+                    s -> s.role().word()),
+            key("CL", NONE, "CL", "the surface's lift coefficient on the reference area", 4,
+                    s -> s.coefficients().lift()),
+            key("CDi", NONE, "CDi", "the surface's induced drag coefficient on the reference area (Trefftz plane: "
+                    + "its circulation in the downwash of every surface's wake)", 5,
+                    s -> s.coefficients().inducedDrag()),
+            key("Cm", NONE, "Cm", "the surface's pitching moment coefficient about the moment point, on the "
+                    + "reference area and chord, positive nose-up", 4, s -> s.coefficients().pitchingMoment()));
+
     /** A maximum lift from the section lift curves (the lattice coupled with them, traced through the stall). */
     public static final List<ResultKey<MaximumLift>> MAX_LIFT = List.of(
-            key("CL", NONE, "maximum CL", "the highest wing CL of the coupled lift curve", 3, CL_MAX,
+            key("CL", NONE, "maximum CL", "the highest CL of the coupled lift curve: the wing's; where the wing file "
+                    + "has other surfaces, the configuration's (untrimmed, at the deflections given)", 3, CL_MAX,
                     MaximumLift::lift),
             key("alpha_deg", DEGREE, "alpha at maximum CL", "its angle of attack", 2, CL_MAX,
                     m -> Math.toDegrees(m.alpha())),
@@ -181,7 +203,7 @@ public final class Vocabulary {
             key("first_stall.eta", NONE, "first past its peak at eta",
                     "the station that first passes its section cl peak, over the semi-span", 3, CL_MAX,
                     m -> m.firstStall().map(f -> (Object) f.eta()).orElse(null)),
-            key("first_stall.CL", NONE, "  at wing CL", "the wing CL when it does", 3, CL_MAX,
+            key("first_stall.CL", NONE, "  at wing CL", "the CL (as max_lift.CL's) when it does", 3, CL_MAX,
                     m -> m.firstStall().map(f -> (Object) f.lift()).orElse(null)),
             key("aileron.below_peak", FLAG, "ailerons below their peak",
                     "true when every aileron station is below its section cl peak at the maximum", 0, CL_MAX,
@@ -382,7 +404,30 @@ public final class Vocabulary {
             key("deflection_deg", DEGREE, "deflection", "the file's deflection, trailing edge down", 2,
                     c -> Math.toDegrees(c.control().deflection())));
 
+    /**
+     * The table labels of keys that call the configuration's CL the wing's, as a wing alone has it, for a wing
+     * file with other surfaces besides the wing (same key, unit and value; see {@link #forSeveralSurfaces}).
+     */
+    private static final List<ResultKey<?>> CONFIGURATION_LABELS = List.of(
+            relabelled(find(ONSET, "CL"), "configuration CL at onset"),
+            relabelled(find(MAX_LIFT, "CL"), "maximum wing CL"));
+
     private Vocabulary() {
+    }
+
+    /**
+     * The key as a table labels it where the wing file has other surfaces besides the wing: the onset's CL is
+     * then the configuration's (untrimmed), while the lift traced through the stall is the wing's own (the
+     * other surfaces stay linear), so their labels say which; any other key as it is.
+     */
+    @SuppressWarnings("unchecked")
+    public static <S> ResultKey<S> forSeveralSurfaces(ResultKey<S> key) {
+        for (ResultKey<?> k : CONFIGURATION_LABELS) {
+            if (k.value() == key.value()) {
+                return (ResultKey<S>) k;
+            }
+        }
+        return key;
     }
 
     /**
@@ -411,6 +456,11 @@ public final class Vocabulary {
     /** The names of a group's keys, for messages. */
     public static List<String> names(List<? extends ResultKey<?>> group) {
         return group.stream().map(k -> k.key()).map(String::valueOf).toList();
+    }
+
+    private static <S> ResultKey<S> relabelled(ResultKey<S> key, String label) {
+        return new ResultKey<>(key.key(), key.unit(), label, key.description(), key.decimals(), key.needs(),
+                key.value());
     }
 
     private static int unknowns(Lattice lattice) {

@@ -66,7 +66,7 @@ public record LeastDragTwist(double lift, double alpha, double[] twist, double[]
             }
             liftPer[j] = sum / area;
         }
-        DMatrixRMaj q = dragForm(strips, area);
+        DMatrixRMaj q = dragForm(lattice, area);
         // minimise (g0 + G t)' Q (g0 + G t) subject to liftPer . t = 0 (the CL stays that of the base)
         DMatrixRMaj gm = new DMatrixRMaj(n, m);
         for (int j = 0; j < m; j++) {
@@ -132,14 +132,15 @@ public record LeastDragTwist(double lift, double alpha, double[] twist, double[]
      * The symmetric matrix Q with CDi = G' Q G for strip circulations G (per unit speed): the Trefftz-plane
      * sum, each strip's normalwash linear in G, evaluated column by column.
      */
-    static DMatrixRMaj dragForm(List<Strip> strips, double area) {
+    static DMatrixRMaj dragForm(Lattice lattice, double area) {
+        List<Strip> strips = lattice.strips();
         int n = strips.size();
         DMatrixRMaj w = new DMatrixRMaj(n, n);
         double[] unit = new double[n];
         double[] out = new double[n];
         for (int k = 0; k < n; k++) {
             unit[k] = 1;
-            org.spanlift.results.TrefftzPlane.normalwash(strips, unit, out);
+            org.spanlift.results.TrefftzPlane.normalwash(lattice, unit, out);
             unit[k] = 0;
             for (int s = 0; s < n; s++) {
                 w.set(s, k, out[s]);

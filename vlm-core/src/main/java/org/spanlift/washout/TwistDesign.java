@@ -224,7 +224,7 @@ public final class TwistDesign {
         }
         liftX = lx;
         liftZ = lz;
-        q = LeastDragTwist.dragForm(strips, area);
+        q = LeastDragTwist.dragForm(lattice, area);
         StripLimits limits = StripLimits.of(wing, lattice, this.deflections, assumedClMax);
         List<Integer> ids = limits.strips();
         boolean symmetric = symmetricDeflections(wing, this.deflections);

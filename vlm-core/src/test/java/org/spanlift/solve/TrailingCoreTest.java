@@ -42,7 +42,7 @@ class TrailingCoreTest {
     }
 
     /** Wings alone of every kind the lattice builder meets: sweep, taper, dihedral, controls, both spacings. */
-    private static List<Wing> wingsAlone() {
+    static List<Wing> wingsAlone() {
         List<ControlSurface> controls = List.of(
                 new ControlSurface("flap", ControlKind.FLAP, 0.4, 2.1, 0.25, 0),
                 new ControlSurface("aileron", ControlKind.AILERON, 2.1, 4.3, 0.22, 0));

@@ -11,6 +11,20 @@ public final class Cautions {
             + "(the tail's download, which raises the real stall speed, is not included); not a substitute for "
             + "flight test, airworthiness standards or licensed engineering judgement.";
 
+    /**
+     * Stall onset and stall speeds of a wing file with other surfaces besides the wing: the configuration as
+     * given, untrimmed.
+     */
+    public static final String STALL_UNTRIMMED = "Caution: an estimate from linear theory and section data for the "
+            + "configuration untrimmed (without the trim load of the tail or canard, which changes the real stall "
+            + "speed; a tail's download raises it): spanlift balance gives the trimmed stall speeds. Not a substitute "
+            + "for flight test, airworthiness standards or licensed engineering judgement.";
+
+    /** The stall caution for a wing file of {@code surfaces} surfaces: {@link #STALL} for a wing alone. */
+    public static String stall(int surfaces) {
+        return surfaces > 1 ? STALL_UNTRIMMED : STALL;
+    }
+
     /** Spanwise loads. */
     public static final String LOADS = "Caution: loads for preliminary sizing only. Structural design and "
             + "substantiation follow the applicable airworthiness standards and licensed engineering practice, with "
