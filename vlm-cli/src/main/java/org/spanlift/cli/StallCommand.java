@@ -119,7 +119,7 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
                 + "the configuration's: the wing with " + String.join(", ", others) + ", untrimmed, at the "
                 + "deflections given (the file's, or --deflect), with the wing's own CL at onset beside it. The lift "
                 + "traced through the stall, and its maximum, is the wing's own (the other surfaces stay linear). "
-                + "The onset's stall speeds rest on the configuration's CL, those at maximum lift on the wing's.";
+                + "The stall speeds rest on the configuration's CL, at the onset and at the wing's maximum.";
     }
 
     private static Map<String, Object> stallJson(Wing wing, Configuration c) {
@@ -151,8 +151,10 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
             return o;
         }
         MaximumLift m = c.maximumLift();
-        List<ResultKey<MaximumLift>> keys = m.speed().isPresent() ? Vocabulary.MAX_LIFT
-                : Vocabulary.MAX_LIFT.stream().filter(k -> !k.key().startsWith("stall_speed")).toList();
+        boolean several = wing.surfaces().size() > 1;
+        List<ResultKey<MaximumLift>> keys = Vocabulary.MAX_LIFT.stream()
+                .filter(k -> m.speed().isPresent() || !k.key().startsWith("stall_speed"))
+                .filter(k -> several || !k.needs(Need.SURFACES)).toList();
         Results.put(o, keys, m);
         o.put("method", "lattice coupled with the section lift curves (strip incidence corrections), traced "
                 + "through the stall");
@@ -313,9 +315,13 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         }
         t.row(cells("", configs, c -> ""));
         t.row(cells("maximum lift (section lift curves)", configs, c -> ""));
-        for (ResultKey<MaximumLift> maxKey : Vocabulary.select(Vocabulary.MAX_LIFT, "CL", "alpha_deg", "rounds_over", "trace_end",
+        List<String> maxNames = new ArrayList<>(List.of("CL", "alpha_deg", "rounds_over", "trace_end",
                 "stalled_span_fraction", "first_stall.eta", "first_stall.CL", "aileron.below_peak",
-                "aileron.margin_dcl", "synthetic_curves")) {
+                "aileron.margin_dcl", "synthetic_curves"));
+        if (several) {
+            maxNames.add(2, "configuration_CL");
+        }
+        for (ResultKey<MaximumLift> maxKey : Vocabulary.select(Vocabulary.MAX_LIFT, maxNames.toArray(String[]::new))) {
             ResultKey<MaximumLift> key = several ? Vocabulary.forSeveralSurfaces(maxKey) : maxKey;
             t.row(cells(Results.label(key, unit), configs, c -> c.maximumLiftIfAny()
                     .map(m -> Results.cell(key, m, unit)).orElse("-")));

@@ -130,13 +130,20 @@ class VocabularyOutputsTest {
                 "--format", "json"));
         List<ResultKey<?>> keys = new ArrayList<>();
         Vocabulary.ONSET.stream().filter(k -> k.needs(Need.SURFACES)).forEach(keys::add);
+        List<ResultKey<?>> maxKeys = new ArrayList<>();
+        Vocabulary.MAX_LIFT.stream().filter(k -> k.needs(Need.SURFACES)).forEach(maxKeys::add);
         assertFalse(keys.isEmpty());
+        assertFalse(maxKeys.isEmpty());
         StringBuilder sweep = new StringBuilder("base: t.wing.yaml\n"
                 + "parameters:\n  surfaces.wing.controls.aileron.deflection: [0]\n"
                 + "flight: {weight: " + WEIGHT + ", flaps: " + FLAPS + "}\ncolumns:\n");
         for (ResultKey<?> k : keys) {
             sweep.append("  - \"").append(Vocabulary.CLEAN).append(k.key()).append("\"\n");
             sweep.append("  - \"").append(Vocabulary.FLAPS).append(k.key()).append("\"\n");
+        }
+        for (ResultKey<?> k : maxKeys) {
+            sweep.append("  - \"").append(Vocabulary.MAX_CLEAN).append(k.key()).append("\"\n");
+            sweep.append("  - \"").append(Vocabulary.MAX_FLAPS).append(k.key()).append("\"\n");
         }
         Path sweepFile = Files.writeString(dir.resolve("tail.sweep.yaml"), sweep.toString());
         Path out = dir.resolve("tail.csv");
@@ -150,13 +157,21 @@ class VocabularyOutputsTest {
             same(k, at(printed, "stall." + k.key()), row.get(header.indexOf(Vocabulary.CLEAN + k.key())));
             same(k, at(printed, "stall_flaps." + k.key()), row.get(header.indexOf(Vocabulary.FLAPS + k.key())));
         }
+        for (ResultKey<?> k : maxKeys) {
+            same(k, at(printed, "max_lift." + k.key()), row.get(header.indexOf(Vocabulary.MAX_CLEAN + k.key())));
+            same(k, at(printed, "max_lift_flaps." + k.key()),
+                    row.get(header.indexOf(Vocabulary.MAX_FLAPS + k.key())));
+        }
     }
 
     @Test
     void everyMaximumLiftKeyInTheSweepEqualsStallCleanAndFlapped() {
         for (ResultKey<?> k : Vocabulary.MAX_LIFT) {
-            same(k, at(stall, "max_lift." + k.key()), sweepRow.get(Vocabulary.MAX_CLEAN + k.key()));
-            same(k, at(stall, "max_lift_flaps." + k.key()), sweepRow.get(Vocabulary.MAX_FLAPS + k.key()));
+            // the configuration's CL is written only where there are several surfaces; a wing alone's is its CL
+            String printedKey = k.needs(Need.SURFACES) ? "CL" : k.key();
+            assertEquals(k.needs(Need.SURFACES), at(stall, "max_lift." + k.key()) == null, k.key());
+            same(k, at(stall, "max_lift." + printedKey), sweepRow.get(Vocabulary.MAX_CLEAN + k.key()));
+            same(k, at(stall, "max_lift_flaps." + printedKey), sweepRow.get(Vocabulary.MAX_FLAPS + k.key()));
         }
     }
 

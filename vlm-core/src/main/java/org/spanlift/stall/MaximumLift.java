@@ -40,11 +40,13 @@ import org.spanlift.solve.WingAnalysis;
  *                             the curve ended there), rad
  * @param curve                the coupled lift curve on that path, alpha ascending
  * @param speed                the stall speed at this maximum, with a flight condition
+ * @param configurationLift    the whole configuration's CL at the wing's maximum (every surface, untrimmed;
+ *                             equal to {@code lift} for a wing alone): the CL the stall speed rests on
  */
 public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.End end, double stalledSpanFraction,
         Optional<FirstStall> firstStall, Optional<AileronState> aileron, boolean synthetic, boolean handbookFlap, boolean inviscidFlap,
         Optional<double[]> multipleSolutions, List<StripState> strips, double beyondAlpha, List<CurvePoint> curve,
-        Optional<Speed> speed) {
+        Optional<Speed> speed, double configurationLift) {
 
     /** Relative change of the stall speed below which the Reynolds-number iteration stops. */
     public static final double SPEED_TOLERANCE = 1e-7;
@@ -111,11 +113,12 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
         double vt = 30;
         for (int k = 1; k <= MAX_ITERATIONS; k++) {
             MaximumLift m = of(analysis, deflections, limits, vt / nu);
-            double ve = condition.equivalentSpeedFor(m.lift(), analysis.wing().reference());
+            double ve = condition.equivalentSpeedFor(m.configurationLift(), analysis.wing().reference());
             double next = Airspeed.trueFromEquivalent(ve, condition.atmosphere());
             if (Math.abs(next - vt) <= SPEED_TOLERANCE * next) {
                 MaximumLift settled = of(analysis, deflections, limits, next / nu);
-                double veSettled = condition.equivalentSpeedFor(settled.lift(), analysis.wing().reference());
+                double veSettled = condition.equivalentSpeedFor(settled.configurationLift(),
+                        analysis.wing().reference());
                 Speed speed = new Speed(veSettled, Airspeed.trueFromEquivalent(veSettled, condition.atmosphere()));
                 return settled.withSpeed(speed);
             }
@@ -127,7 +130,8 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
 
     private MaximumLift withSpeed(Speed s) {
         return new MaximumLift(lift, alpha, peak, end, stalledSpanFraction, firstStall, aileron, synthetic,
-                handbookFlap, inviscidFlap, multipleSolutions, strips, beyondAlpha, curve, Optional.of(s));
+                handbookFlap, inviscidFlap, multipleSolutions, strips, beyondAlpha, curve, Optional.of(s),
+                configurationLift);
     }
 
     static MaximumLift from(WingAnalysis analysis, LiftBranch branch) {
@@ -153,7 +157,8 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
         }
         return new MaximumLift(top.lift(), top.alpha(), branch.maximumIsPeak(), branch.end(),
                 stalledFraction(c, top), firstStall(c, branch, semi, wing.main().meanAerodynamicChord()), aileron(wing, c, top), c.curves().synthetic(),
-                c.curves().handbookFlap(), c.curves().inviscidFlap(), branch.multipleSolutions(), states, beyond.alpha(), curve, Optional.empty());
+                c.curves().handbookFlap(), c.curves().inviscidFlap(), branch.multipleSolutions(), states, beyond.alpha(), curve, Optional.empty(),
+                wing.surfaces().size() == 1 ? top.lift() : c.solution(top).coefficients().lift());
     }
 
     /**

@@ -189,6 +189,9 @@ public final class Vocabulary {
                     MaximumLift::lift),
             key("alpha_deg", DEGREE, "alpha at maximum CL", "its angle of attack", 2, CL_MAX,
                     m -> Math.toDegrees(m.alpha())),
+            key("configuration_CL", NONE, "  configuration CL there", "the whole configuration's CL at the wing's "
+                    + "maximum (every surface, untrimmed): what its stall speed rests on", 3,
+                    Set.of(Need.CL_MAX, Need.SURFACES), MaximumLift::configurationLift),
             key("rounds_over", FLAG, "lift rounds over at the maximum",
                     "true when the lift rounds over at the maximum (a gentle stall); false when the maximum lies at "
                             + "a fold, where a station stalls abruptly and the lift breaks off, or where the traced "
