@@ -1,0 +1,106 @@
+package org.spanlift.spark;
+
+import java.util.ArrayDeque;
+import java.util.List;
+import java.util.concurrent.ExecutionException;
+import java.util.function.Consumer;
+
+import org.apache.spark.api.java.JavaFutureAction;
+import org.apache.spark.api.java.JavaSparkContext;
+import org.apache.spark.broadcast.Broadcast;
+import org.spanlift.cli.sweep.RowFormat;
+
+/**
+ * Runs cases {@code first} up to {@code end} of a sweep as Spark jobs and hands the rows to a sink in case
+ * order, as the local runner does with threads. Each task is one job over a contiguous run of cases ({@link
+ * CaseTask}); at most {@link #JOBS_PER_CORE} times the cluster's default parallelism jobs are in flight, so the
+ * driver holds at most that many tasks' rows whatever the number of cases, and the executors stay busy while
+ * the driver waits for the oldest. The sweep's files travel once per executor, as a broadcast {@link
+ * SweepBundle}. A task that fails (a lost executor) is run again by Spark; its rows are the same, so the output
+ * does not change.
+ */
+public final class SparkSweepRunner {
+
+    /** Jobs in flight per core of the cluster. */
+    public static final int JOBS_PER_CORE = 2;
+    /** Fewest and most cases in a task when the size is chosen automatically. */
+    public static final int MIN_CASES_PER_TASK = 16;
+    public static final int MAX_CASES_PER_TASK = 4096;
+    /** Tasks per core aimed at when the size is chosen automatically (for balance at the end of a run). */
+    public static final int TASKS_PER_CORE = 8;
+
+    private SparkSweepRunner() {
+    }
+
+    /** What a run did. */
+    public record Outcome(long cases, long tasks) {
+    }
+
+    /**
+     * The automatic task size: about {@link #TASKS_PER_CORE} tasks per core, within {@link #MIN_CASES_PER_TASK}
+     * and {@link #MAX_CASES_PER_TASK} cases.
+     */
+    public static int casesPerTask(long cases, int cores) {
+        long per = Math.max(1, cases) / ((long) TASKS_PER_CORE * Math.max(1, cores));
+        return (int) Math.max(MIN_CASES_PER_TASK, Math.min(MAX_CASES_PER_TASK, per));
+    }
+
+    /**
+     * @param sink receives each row (with its line feed) in case order, on the calling thread
+     * @param fault a fault to inject into the tasks (tests only), or null
+     */
+    static Outcome run(JavaSparkContext jsc, SweepBundle bundle, RowFormat format, long first, long end,
+            int casesPerTask, CaseTask.TaskFault fault, Consumer<String> sink) {
+        Broadcast<SweepBundle> shared = jsc.broadcast(bundle);
+        CaseTask task = new CaseTask(shared, format, casesPerTask, end, fault);
+        ArrayDeque<JavaFutureAction<List<String>>> window = new ArrayDeque<>();
+        long cases = 0;
+        long tasks = 0;
+        try {
+            long next = first;
+            while (next < end || !window.isEmpty()) {
+                int limit = Math.max(2, JOBS_PER_CORE * jsc.defaultParallelism());
+                while (next < end && window.size() < limit) {
+                    long start = next;
+                    next = Math.min(end, next + casesPerTask);
+                    jsc.setJobDescription("spanlift sweep: cases " + start + " to " + (next - 1));
+                    window.add(jsc.parallelize(List.of(start), 1).mapPartitions(task).collectAsync());
+                    tasks++;
+                }
+                for (String row : take(window.poll())) {
+                    sink.accept(row);
+                    cases++;
+                }
+            }
+        } finally {
+            for (JavaFutureAction<List<String>> f : window) {
+                f.cancel(true);
+            }
+            shared.destroy();
+        }
+        return new Outcome(cases, tasks);
+    }
+
+    private static List<String> take(JavaFutureAction<List<String>> job) {
+        try {
+            return job.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("the sweep was interrupted", e);
+        } catch (ExecutionException e) {
+            Throwable cause = e.getCause() == null ? e : e.getCause();
+            throw new ClusterFailure(cause.getMessage() == null ? cause.getClass().getSimpleName()
+                    : cause.getMessage().lines().findFirst().orElse(""), cause);
+        }
+    }
+
+    /** Spark gave up on a task (after its retries): the rows written so far stay, and --resume finishes the run. */
+    public static final class ClusterFailure extends RuntimeException {
+
+        private static final long serialVersionUID = 1L;
+
+        ClusterFailure(String message, Throwable cause) {
+            super(message, cause);
+        }
+    }
+}
