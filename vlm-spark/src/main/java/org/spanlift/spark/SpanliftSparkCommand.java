@@ -3,6 +3,7 @@ package org.spanlift.spark;
 import java.io.PrintWriter;
 
 import org.spanlift.cli.SpanliftCommand;
+import org.spanlift.cli.VersionProvider;
 
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -11,7 +12,7 @@ import picocli.CommandLine.Command;
  * {@code spanlift-spark}: Spanlift's batch runs on Apache Spark. Run by the {@code ./spanlift-spark} launcher
  * (an embedded local master) or by {@code spark-submit} with the module's application jar.
  */
-@Command(name = "spanlift-spark", mixinStandardHelpOptions = true,
+@Command(name = "spanlift-spark", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Spanlift's sweeps on Apache Spark: the same sweep file and results file as spanlift sweep.",
         subcommands = SparkSweepCommand.class,
         footer = {"", "Exit codes: 0 success; 1 the run finished but some case failed; 2 bad input, usage, an "

@@ -48,6 +48,9 @@ public final class SparkSweepCommand implements Callable<Integer> {
     /** The master when none is given here or by spark-submit. */
     public static final String DEFAULT_MASTER = "local[*]";
 
+    private static final java.util.regex.Pattern LOCAL = java.util.regex.Pattern.compile(
+            "local(\\[(\\*|[1-9]\\d{0,3})(,[1-9]\\d{0,2})?])?");
+
     @Parameters(index = "0", paramLabel = "FILE", description = "The sweep file (.sweep.yaml).")
     Path file;
 
@@ -63,8 +66,9 @@ public final class SparkSweepCommand implements Callable<Integer> {
     boolean force;
 
     @Option(names = "--master", paramLabel = "URL",
-            description = "Spark master when not run by spark-submit (which sets its own). Default: " + DEFAULT_MASTER
-                    + ", on the loopback address, without the web UI.")
+            description = "A local Spark master when not run by spark-submit: local, local[N], local[*] or local[N,F] "
+                    + "(F tries per task). Default: " + DEFAULT_MASTER + ", on the loopback address, without the web UI. "
+                    + "For a cluster, use spark-submit with its --master.")
     String master;
 
     @Option(names = "--cases-per-task", paramLabel = "N",
@@ -102,6 +106,10 @@ public final class SparkSweepCommand implements Callable<Integer> {
             throw new InputException("--master", 0, "", "spark-submit has set the master (" + System.getProperty(
                     "spark.master") + "); give it to spark-submit only");
         }
+        if (master != null && !LOCAL.matcher(master).matches()) {
+            throw new InputException("--master", 0, "", "expected local, local[N], local[*] or local[N,F], got '"
+                    + master + "'; for a cluster, run the application jar with spark-submit --master " + master);
+        }
         Sweep sweep = SweepFileReader.read(file, force);
         List<Path> inputs = new ArrayList<>(List.of(file, sweep.basePath()));
         inputs.addAll(InputFiles.sectionFiles(sweep.baseTree(), sweep.basePath()));
@@ -118,11 +126,13 @@ public final class SparkSweepCommand implements Callable<Integer> {
         long end = sweep.design().count();
         Path ranked = null;
         String where;
+        long ready;
         SparkSweepRunner.Outcome outcome;
         int perTask;
         try (ResultsFile results = ResultsFile.open(target, sweep, Shard.ALL, format, resume, tally);
                 Session session = Session.start(master, "spanlift sweep " + file.getFileName())) {
             JavaSparkContext jsc = session.context();
+            ready = System.nanoTime();
             where = jsc.master();
             perTask = casesPerTask != null ? casesPerTask
                     : SparkSweepRunner.casesPerTask(end - results.next(), jsc.defaultParallelism());
@@ -146,10 +156,11 @@ public final class SparkSweepCommand implements Callable<Integer> {
                     + "); the rows written so far are whole: run again with --resume to finish");
         }
         Ranker.Tally counts = tally.tally();
-        double s = (System.nanoTime() - started) / 1e9;
+        long now = System.nanoTime();
         err.println(String.format(Locale.ROOT, "sweep: %d cases (%s), %d failed; %d run in %.1f s on Spark (%s, %d "
-                + "task%s of up to %d cases)", counts.cases(), sweep.design().describe(), counts.failed(),
-                outcome.cases(), s, where, outcome.tasks(), outcome.tasks() == 1 ? "" : "s", perTask));
+                + "task%s of up to %d cases) after %.1f s to start it", counts.cases(), sweep.design().describe(),
+                counts.failed(), outcome.cases(), (now - ready) / 1e9, where, outcome.tasks(),
+                outcome.tasks() == 1 ? "" : "s", perTask, (ready - started) / 1e9));
         err.println("  results in " + output + " (case order)");
         if (ranked != null) {
             err.println("  ranked summary in " + ranked + ": best " + counts.ranked().size() + " by " + ranking.by() + " ("

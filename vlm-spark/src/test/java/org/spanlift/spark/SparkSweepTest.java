@@ -132,6 +132,14 @@ class SparkSweepTest {
         assertEquals(2, zero.exitCode(), zero.err());
         assertEquals("spanlift-spark: --cases-per-task: expected 1 to 100000 cases, got 0", zero.err().strip());
         assertFalse(Files.exists(out));
+
+        TestSpark.Run cluster = TestSpark.spark(null, "sweep", EXAMPLE, "--output", out.toString(), "--master",
+                "spark://head:7077");
+        assertEquals(2, cluster.exitCode(), cluster.err());
+        assertEquals("spanlift-spark: --master: expected local, local[N], local[*] or local[N,F], got 'spark://head:7077'; "
+                + "for a cluster, run the application jar with spark-submit --master spark://head:7077",
+                cluster.err().strip());
+        assertFalse(Files.exists(out));
     }
 
     /**
