@@ -88,7 +88,7 @@ class SparkSweepTest {
     }
 
     @Test
-    void aTaskThatKeepsFailingEndsTheRunInOneLineWithWholeRowsAndResumeFinishesIt(@TempDir Path dir)
+    void aTaskThatKeepsFailingEndsTheRunInOneLineWithWholeRowsThatEitherRunnerResumes(@TempDir Path dir)
             throws IOException {
         Path sweep = smallSweep(dir);
         Path local = Files.createDirectory(dir.resolve("local")).resolve("r.csv");
@@ -110,6 +110,14 @@ class SparkSweepTest {
         // cut the last row in half, as a kill during a write would
         byte[] cut = partial.substring(0, partial.length() - 7).getBytes(StandardCharsets.UTF_8);
         Files.write(spark, cut);
+        // the files are the local runner's, so spanlift sweep --resume finishes them as well
+        Path other = Files.createDirectory(dir.resolve("other")).resolve("r.csv");
+        Files.write(other, cut);
+        Files.copy(spark.resolveSibling("r.csv.manifest.json"), other.resolveSibling("r.csv.manifest.json"));
+        TestSpark.Run locally = TestSpark.local("sweep", sweep.toString(), "--output", other.toString(), "--progress",
+                "none", "--resume");
+        assertEquals(1, locally.exitCode(), locally.err());
+        sameFiles(local.getParent(), other.getParent(), "r.csv", "r.ranked.csv", "r.csv.manifest.json");
         TestSpark.Run resumed = TestSpark.spark(null, "sweep", sweep.toString(), "--output", spark.toString(),
                 "--progress", "none", "--cases-per-task", "2", "--resume");
         assertEquals(1, resumed.exitCode(), resumed.err());
