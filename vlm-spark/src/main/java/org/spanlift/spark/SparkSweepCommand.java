@@ -161,6 +161,8 @@ public final class SparkSweepCommand implements Callable<Integer> {
                 + "task%s of up to %d cases) after %.1f s to start it", counts.cases(), sweep.design().describe(),
                 counts.failed(), outcome.cases(), (now - ready) / 1e9, where, outcome.tasks(),
                 outcome.tasks() == 1 ? "" : "s", perTask, (ready - started) / 1e9));
+        err.println(String.format(Locale.ROOT, "  tasks ran %.1f s (%.1f s on a processor); the driver wrote the rows in "
+                + "%.2f s", outcome.taskSeconds(), outcome.taskCpuSeconds(), outcome.sinkSeconds()));
         err.println("  results in " + output + " (case order)");
         if (ranked != null) {
             err.println("  ranked summary in " + ranked + ": best " + counts.ranked().size() + " by " + ranking.by() + " ("

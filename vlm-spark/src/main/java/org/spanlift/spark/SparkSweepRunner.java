@@ -3,11 +3,15 @@ package org.spanlift.spark;
 import java.util.ArrayDeque;
 import java.util.List;
 import java.util.concurrent.ExecutionException;
+import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.Consumer;
 
 import org.apache.spark.api.java.JavaFutureAction;
 import org.apache.spark.api.java.JavaSparkContext;
 import org.apache.spark.broadcast.Broadcast;
+import org.apache.spark.executor.TaskMetrics;
+import org.apache.spark.scheduler.SparkListener;
+import org.apache.spark.scheduler.SparkListenerTaskEnd;
 import org.spanlift.cli.sweep.RowFormat;
 
 /**
@@ -32,8 +36,27 @@ public final class SparkSweepRunner {
     private SparkSweepRunner() {
     }
 
-    /** What a run did. */
-    public record Outcome(long cases, long tasks) {
+    /**
+     * What a run did: cases and tasks; the time the tasks ran on the executors and the processor time they used
+     * (Spark's task metrics, of the attempts that finished, retried ones included), and the driver's time
+     * handing rows to the sink.
+     */
+    public record Outcome(long cases, long tasks, double taskSeconds, double taskCpuSeconds, double sinkSeconds) {
+    }
+
+    /** Adds up the run time and processor time of the tasks that end. */
+    private static final class TaskTimes extends SparkListener {
+        private final AtomicLong runMs = new AtomicLong();
+        private final AtomicLong cpuNs = new AtomicLong();
+
+        @Override
+        public void onTaskEnd(SparkListenerTaskEnd end) {
+            TaskMetrics m = end.taskMetrics();
+            if (m != null) {
+                runMs.addAndGet(m.executorRunTime());
+                cpuNs.addAndGet(m.executorCpuTime());
+            }
+        }
     }
 
     /**
@@ -56,6 +79,9 @@ public final class SparkSweepRunner {
         ArrayDeque<JavaFutureAction<List<String>>> window = new ArrayDeque<>();
         long cases = 0;
         long tasks = 0;
+        long sinkNs = 0;
+        TaskTimes times = new TaskTimes();
+        jsc.sc().addSparkListener(times);
         try {
             long next = first;
             while (next < end || !window.isEmpty()) {
@@ -67,18 +93,22 @@ public final class SparkSweepRunner {
                     window.add(jsc.parallelize(List.of(start), 1).mapPartitions(task).collectAsync());
                     tasks++;
                 }
-                for (String row : take(window.poll())) {
+                List<String> rows = take(window.poll());
+                long t = System.nanoTime();
+                for (String row : rows) {
                     sink.accept(row);
                     cases++;
                 }
+                sinkNs += System.nanoTime() - t;
             }
         } finally {
             for (JavaFutureAction<List<String>> f : window) {
                 f.cancel(true);
             }
             shared.destroy();
+            jsc.sc().removeSparkListener(times);
         }
-        return new Outcome(cases, tasks);
+        return new Outcome(cases, tasks, times.runMs.get() / 1e3, times.cpuNs.get() / 1e9, sinkNs / 1e9);
     }
 
     private static List<String> take(JavaFutureAction<List<String>> job) {
