@@ -90,13 +90,13 @@ public final class SparkSweepCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         OutputTarget target = OutputTarget.resolve("--output", output);
-        RowFormat format = RowFormat.of(output.getFileName().toString());
-        if (format == null) {
-            throw new InputException("--output", 0, "", "expected a .csv or .jsonl file, got " + output);
-        }
         if (target.kind() != OutputTarget.Kind.FILE) {
             throw new InputException("--output", 0, "", "expected a results file; " + output
                     + " is a device or FIFO (spanlift sweep streams into those)");
+        }
+        RowFormat format = RowFormat.of(output.getFileName().toString());
+        if (format == null) {
+            throw new InputException("--output", 0, "", "expected a .csv or .jsonl file, got " + output);
         }
         if (casesPerTask != null && (casesPerTask < 1 || casesPerTask > 100_000)) {
             throw new InputException("--cases-per-task", 0, "", "expected 1 to 100000 cases, got " + casesPerTask);

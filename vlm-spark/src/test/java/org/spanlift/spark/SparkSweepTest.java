@@ -141,6 +141,11 @@ class SparkSweepTest {
         assertEquals("spanlift-spark: --cases-per-task: expected 1 to 100000 cases, got 0", zero.err().strip());
         assertFalse(Files.exists(out));
 
+        TestSpark.Run device = TestSpark.spark(null, "sweep", EXAMPLE, "--output", "/dev/null");
+        assertEquals(2, device.exitCode(), device.err());
+        assertEquals("spanlift-spark: --output: expected a results file; /dev/null is a device or FIFO (spanlift sweep "
+                + "streams into those)", device.err().strip());
+
         TestSpark.Run cluster = TestSpark.spark(null, "sweep", EXAMPLE, "--output", out.toString(), "--master",
                 "spark://head:7077");
         assertEquals(2, cluster.exitCode(), cluster.err());
