@@ -1,5 +1,6 @@
 package org.spanlift.spark;
 
+import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
@@ -64,7 +65,7 @@ final class CaseTask implements FlatMapFunction<Iterator<Long>, String> {
     }
 
     /** A fault injected into a task's work, for tests of the retries: it throws to kill the attempt. */
-    interface TaskFault extends java.io.Serializable {
+    interface TaskFault extends Serializable {
 
         /** Called after case {@code index} was evaluated in the task's attempt {@code attempt} (0 first). */
         void after(long index, int attempt);

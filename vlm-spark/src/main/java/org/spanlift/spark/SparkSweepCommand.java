@@ -1,11 +1,14 @@
 package org.spanlift.spark;
 
 import java.io.PrintWriter;
+import java.io.Writer;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
+import java.util.regex.Pattern;
 
 import org.apache.spark.api.java.JavaSparkContext;
 import org.apache.spark.sql.SparkSession;
@@ -48,7 +51,7 @@ public final class SparkSweepCommand implements Callable<Integer> {
     /** The master when none is given here or by spark-submit. */
     public static final String DEFAULT_MASTER = "local[*]";
 
-    private static final java.util.regex.Pattern LOCAL = java.util.regex.Pattern.compile(
+    private static final Pattern LOCAL = Pattern.compile(
             "local(\\[(\\*|[1-9]\\d{0,3})(,[1-9]\\d{0,2})?])?");
 
     @Parameters(index = "0", paramLabel = "FILE", description = "The sweep file (.sweep.yaml).")
@@ -137,13 +140,13 @@ public final class SparkSweepCommand implements Callable<Integer> {
             perTask = casesPerTask != null ? casesPerTask
                     : SparkSweepRunner.casesPerTask(end - results.next(), jsc.defaultParallelism());
             Progress progress = new Progress(progressMode == ProgressMode.NONE
-                    ? new PrintWriter(java.io.Writer.nullWriter()) : err, progressMode.bar(), end, results.next(),
+                    ? new PrintWriter(Writer.nullWriter()) : err, progressMode.bar(), end, results.next(),
                     System::nanoTime);
             RowFormat f = format;
             outcome = SparkSweepRunner.run(jsc, bundle, format, results.next(), end, perTask, fault, row -> {
                 results.write(row);
                 String line = row.substring(0, row.length() - 1);
-                java.util.Map<String, String> cells = f.parse(names, line);
+                Map<String, String> cells = f.parse(names, line);
                 tally.add(cells, line, output.toString(), 0);
                 progress.step(cells.get("error") != null);
             });
