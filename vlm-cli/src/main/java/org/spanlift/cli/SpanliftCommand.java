@@ -48,28 +48,37 @@ public final class SpanliftCommand implements Runnable {
             }
         }
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        return handleErrors(cl, "spanlift");
+    }
+
+    /**
+     * Installs this command line's error handling on {@code cl} (also the Spark launcher's): bad input and usage
+     * in one line prefixed with {@code program} and exit code 2, anything else one line and exit code 3.
+     */
+    public static CommandLine handleErrors(CommandLine cl, String program) {
+        String prefix = program + ": ";
         cl.setExecutionExceptionHandler((e, line, parse) -> {
             PrintWriter err = line.getErr();
             if (e instanceof InputException) {
-                err.println("spanlift: " + e.getMessage());
+                err.println(prefix + e.getMessage());
                 return EXIT_BAD_INPUT;
             }
             if (e instanceof SingularSystemException) {
-                err.println("spanlift: " + inputFile(parse) + "cannot solve this geometry: " + e.getMessage());
+                err.println(prefix + inputFile(parse) + "cannot solve this geometry: " + e.getMessage());
                 return EXIT_BAD_INPUT;
             }
             if (e instanceof RefusedException) {
-                err.println("spanlift: " + inputFile(parse) + e.getMessage());
+                err.println(prefix + inputFile(parse) + e.getMessage());
                 return EXIT_BAD_INPUT;
             }
             if (e.getCause() instanceof Error error) {
-                return internalError(error, err);
+                return internalError(error, err, prefix);
             }
-            return internalError(e, err);
+            return internalError(e, err, prefix);
         });
         cl.setParameterExceptionHandler((e, args) -> {
             PrintWriter err = e.getCommandLine().getErr();
-            err.println(InputException.oneLine("spanlift: " + e.getMessage().lines().findFirst().orElse("bad usage")
+            err.println(InputException.oneLine(prefix + e.getMessage().lines().findFirst().orElse("bad usage")
                     + " (see '" + e.getCommandLine().getCommandSpec().qualifiedName() + " --help')"));
             return EXIT_BAD_INPUT;
         });
@@ -80,7 +89,7 @@ public final class SpanliftCommand implements Runnable {
             try {
                 return run.execute(parse);
             } catch (Error e) {
-                return internalError(e, parse.commandSpec().commandLine().getErr());
+                return internalError(e, parse.commandSpec().commandLine().getErr(), prefix);
             }
         });
         return cl;
@@ -91,11 +100,16 @@ public final class SpanliftCommand implements Runnable {
      * the inputs are checked against limits that should prevent it.
      */
     static int internalError(Throwable e, PrintWriter err) {
+        return internalError(e, err, "spanlift: ");
+    }
+
+    /** As {@link #internalError(Throwable, PrintWriter)}, the line starting with {@code prefix} ({@code "program: "}). */
+    public static int internalError(Throwable e, PrintWriter err, String prefix) {
         if (e instanceof OutOfMemoryError) {
-            err.println(InputException.oneLine("spanlift: internal error: ran out of memory" + (e.getMessage() == null
+            err.println(InputException.oneLine(prefix + "internal error: ran out of memory" + (e.getMessage() == null
                     ? "" : " (" + e.getMessage() + ")") + "; please report it, with the input that caused it"));
         } else {
-            err.println(InputException.oneLine("spanlift: internal error (" + e.getClass().getSimpleName()
+            err.println(InputException.oneLine(prefix + "internal error (" + e.getClass().getSimpleName()
                     + (e.getMessage() == null ? "" : ": " + firstLine(e.getMessage())) + "); please report it"));
         }
         err.flush();

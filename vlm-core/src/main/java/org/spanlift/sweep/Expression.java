@@ -1,6 +1,7 @@
 package org.spanlift.sweep;
 
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
@@ -110,7 +111,9 @@ public final class Expression {
     private Expression(String text, Node root, Set<Integer> slots) {
         this.text = text;
         this.root = root;
-        this.slots = Set.copyOf(slots);
+        // in the order the expression first uses them: a failing case's message lists the names so, the same in
+        // every JVM (Set.copyOf's order changes from one JVM to the next)
+        this.slots = Collections.unmodifiableSet(new LinkedHashSet<>(slots));
     }
 
     /**
@@ -138,7 +141,7 @@ public final class Expression {
         return text;
     }
 
-    /** The slots of the names the expression uses. */
+    /** The slots of the names the expression uses, in the order it first uses them. */
     public Set<Integer> slots() {
         return slots;
     }

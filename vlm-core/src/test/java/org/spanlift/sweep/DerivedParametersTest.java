@@ -185,6 +185,22 @@ class DerivedParametersTest {
     }
 
     @Test
+    void aFailingExpressionListsItsNamesInTheOrderItUsesThemInEveryRun() {
+        Sweep s = read("""
+                parameters:
+                  surfaces.wing.trapezoid.taper: [0.5]
+                names: {taper: surfaces.wing.trapezoid.taper}
+                constants: {e: 5, d: 4, c: 3, b: 2, a: 1}
+                derived:
+                  surfaces.wing.trapezoid.washout: a + b + c + d + e + 1 / (taper - 0.5)
+                columns: [lift_slope_per_rad]
+                """);
+        CaseResult r = new CaseEvaluator(s).evaluate(0);
+        assertTrue(r.error().endsWith("division by zero (1 / 0) (with a = 1, b = 2, c = 3, d = 4, e = 5, taper = 0.5)"),
+                r.error());
+    }
+
+    @Test
     void aDerivedValueOutsideWhatAWingFileHoldsFailsItsCase() {
         Sweep s = read("""
                 parameters:
