@@ -49,7 +49,7 @@ public final class InfluenceSystem {
     public static InfluenceSystem of(Lattice lattice, Symmetry symmetry, LuOptions options) {
         int n = symmetry == Symmetry.FULL ? lattice.panelCount() : lattice.halfCount();
         SolveBudget.require(n, 1);
-        return new InfluenceSystem(symmetry, assemble(lattice, symmetry).data, n, options);
+        return new InfluenceSystem(symmetry, assemble(lattice, symmetry, options.threads()), n, options);
     }
 
     /** The symmetric and antisymmetric systems of a mirrored lattice. */
@@ -73,69 +73,45 @@ public final class InfluenceSystem {
         SolveBudget.require(n, 2);
         double[] sym = new double[n * n];
         double[] anti = new double[n * n];
-        double[] row = new double[lattice.panelCount()];
-        double[] trailing = new double[lattice.trailingPointCount()];
-        for (int i = 0; i < n; i++) {
-            influenceRow(lattice, i, row, trailing);
+        new InfluenceRows(lattice).build(n, options.threads(), (i, row) -> {
             for (int j = 0; j < n; j++) {
                 sym[i * n + j] = row[j] + row[j + n];
                 anti[i * n + j] = row[j] - row[j + n];
             }
-        }
+        });
         InfluenceSystem symmetric = new InfluenceSystem(Symmetry.SYMMETRIC, sym, n, options);
         return new Pair(symmetric, new InfluenceSystem(Symmetry.ANTISYMMETRIC, anti, n, options));
     }
 
-    /** The influence matrix alone (for tests and benchmarks). */
+    /** The influence matrix alone (for tests and benchmarks), assembled on one thread. */
     public static DMatrixRMaj assemble(Lattice lattice, Symmetry symmetry) {
+        int n = symmetry == Symmetry.FULL ? lattice.panelCount() : lattice.halfCount();
+        return DMatrixRMaj.wrap(n, n, assemble(lattice, symmetry, 1));
+    }
+
+    /**
+     * The row-major influence matrix, its rows split between up to {@code threads} threads (the matrix does
+     * not depend on how many).
+     */
+    static double[] assemble(Lattice lattice, Symmetry symmetry, int threads) {
         if (symmetry != Symmetry.FULL && !lattice.mirrored()) {
             throw new IllegalArgumentException("a " + symmetry + " system needs a mirrored lattice");
         }
         int n = symmetry == Symmetry.FULL ? lattice.panelCount() : lattice.halfCount();
         int half = lattice.halfCount();
-        double sign = symmetry == Symmetry.ANTISYMMETRIC ? -1 : 1;
-        DMatrixRMaj a = new DMatrixRMaj(n, n);
-        double[] row = new double[lattice.panelCount()];
-        double[] trailing = new double[lattice.trailingPointCount()];
-        for (int i = 0; i < n; i++) {
-            influenceRow(lattice, i, row, trailing);
-            for (int j = 0; j < n; j++) {
-                a.data[i * n + j] = symmetry == Symmetry.FULL ? row[j] : row[j] + sign * row[j + half];
-            }
+        double[] a = new double[n * n];
+        InfluenceRows rows = new InfluenceRows(lattice);
+        if (symmetry == Symmetry.FULL) {
+            rows.build(n, threads, (i, row) -> System.arraycopy(row, 0, a, i * n, n));
+        } else {
+            double sign = symmetry == Symmetry.ANTISYMMETRIC ? -1 : 1;
+            rows.build(n, threads, (i, row) -> {
+                for (int j = 0; j < n; j++) {
+                    a[i * n + j] = row[j] + sign * row[j + half];
+                }
+            });
         }
         return a;
-    }
-
-    /**
-     * Writes into {@code row} (length panel count, overwritten) the normalwash at control point i of every
-     * horseshoe at unit circulation; {@code trailing} (length trailing-point count) is work space. Each
-     * shared trailing leg is evaluated once.
-     */
-    static void influenceRow(Lattice lattice, int i, double[] row, double[] trailing) {
-        double px = lattice.cx(i);
-        double py = lattice.cy(i);
-        double pz = lattice.cz(i);
-        double nx = lattice.nx(i);
-        double ny = lattice.ny(i);
-        double nz = lattice.nz(i);
-        double[] v = new double[3];
-        for (int k = 0; k < trailing.length; k++) {
-            v[0] = 0;
-            v[1] = 0;
-            v[2] = 0;
-            HorseshoeKernel.trailing(lattice.trailingX(k), lattice.trailingY(k), lattice.trailingZ(k), px, py, pz,
-                    lattice.trailingCutoff(k), lattice.trailingCoreSquared(k), 1, v);
-            trailing[k] = v[1] * ny + v[2] * nz;
-        }
-        for (int j = 0; j < row.length; j++) {
-            v[0] = 0;
-            v[1] = 0;
-            v[2] = 0;
-            HorseshoeKernel.segment(lattice.ax(j), lattice.ay(j), lattice.az(j), lattice.bx(j), lattice.by(j),
-                    lattice.bz(j), px, py, pz, lattice.cutoff(j), v);
-            row[j] = v[0] * nx + v[1] * ny + v[2] * nz + trailing[lattice.trailingPointB(j)]
-                    - trailing[lattice.trailingPointA(j)];
-        }
     }
 
     public Symmetry symmetry() {

@@ -132,15 +132,15 @@ public final class TiledLu implements DenseLu {
      * (zeros on entry) the accumulators and then the factors, {@code piv} the pivot of each step.
      */
     static void decompose(double[] a, double[] f, int[] piv, int n, int threads) {
-        Work work = new Work();
+        Work work = new Work(n);
         for (int start = 0; start < n; start += PANEL) {
             int k0 = start;
             int k1 = Math.min(k0 + PANEL, n);
-            panel(a, f, piv, n, k0, k1);
+            panel(a, f, piv, n, k0, k1, work);
             if (k1 == n) {
                 break;
             }
-            rowBlock(a, f, n, k0, k1);
+            rowBlock(a, f, n, k0, k1, work);
             int rows = n - k1;
             if (threads > 1 && rows >= PARALLEL_ROWS) {
                 int parts = Math.min(threads, rows / (PARALLEL_ROWS / 2));
@@ -161,63 +161,109 @@ public final class TiledLu implements DenseLu {
         }
     }
 
-    /** Columns k0..k1-1, every row from k0 down: pivot search, row swaps, multipliers, the panel's own update. */
-    private static void panel(double[] a, double[] f, int[] piv, int n, int k0, int k1) {
-        for (int k = k0; k < k1; k++) {
-            int p = k;
-            double max = -1;
-            for (int i = k; i < n; i++) {
-                int ik = i * n + k;
-                double v = a[ik] - f[ik];
-                f[ik] = v;
-                double m = Math.abs(v);
-                if (i == k) {
-                    max = m;
-                } else if (m > max) {
-                    p = i;
-                    max = m;
+    /**
+     * Columns k0..k1-1, every row from k0 down: pivot search, row swaps, multipliers, the panel's own update.
+     * The panel is worked on as column copies ({@code work.colA} the original entries, {@code work.colF} the
+     * accumulators and factors), so that its loops run down a column with every array indexed alike.
+     */
+    private static void panel(double[] a, double[] f, int[] piv, int n, int k0, int k1, Work work) {
+        int nb = k1 - k0;
+        int m = n - k0;
+        double[][] colA = work.colA;
+        double[][] colF = work.colF;
+        for (int r = 0; r < m; r++) {
+            int base = (k0 + r) * n + k0;
+            for (int c = 0; c < nb; c++) {
+                colA[c][r] = a[base + c];
+                colF[c][r] = f[base + c];
+            }
+        }
+        for (int c = 0; c < nb; c++) {
+            double[] ac = colA[c];
+            double[] fc = colF[c];
+            for (int r = c; r < m; r++) {
+                fc[r] = ac[r] - fc[r];
+            }
+            int p = c;
+            double max = Math.abs(fc[c]);
+            for (int r = c + 1; r < m; r++) {
+                double v = Math.abs(fc[r]);
+                if (v > max) {
+                    p = r;
+                    max = v;
                 }
             }
-            if (p != k) {
-                swapRows(a, n, p, k);
-                swapRows(f, n, p, k);
+            if (p != c) {
+                swapRows(a, n, k0 + p, k0 + c);
+                swapRows(f, n, k0 + p, k0 + c);
+                for (int d = 0; d < nb; d++) {
+                    swap(colA[d], p, c);
+                    swap(colF[d], p, c);
+                }
             }
-            piv[k] = p;
-            int rk = k * n;
-            double pivot = f[rk + k];
+            piv[k0 + c] = k0 + p;
+            double pivot = fc[c];
             if (pivot != 0) {
-                for (int i = k + 1; i < n; i++) {
-                    f[i * n + k] /= pivot;
+                for (int r = c + 1; r < m; r++) {
+                    fc[r] /= pivot;
                 }
             }
-            // Row k of U within the panel is due now; the rows below take its products.
-            for (int j = k + 1; j < k1; j++) {
-                f[rk + j] = a[rk + j] - f[rk + j];
-            }
-            for (int i = k + 1; i < n; i++) {
-                int ri = i * n;
-                double l = f[ri + k];
-                for (int j = k + 1; j < k1; j++) {
-                    f[ri + j] += l * f[rk + j];
+            // Row c of U within the panel is due now; the rows below take its products.
+            for (int d = c + 1; d < nb; d++) {
+                double[] fd = colF[d];
+                double u = colA[d][c] - fd[c];
+                fd[c] = u;
+                for (int r = c + 1; r < m; r++) {
+                    fd[r] = fd[r] + fc[r] * u;
                 }
+            }
+        }
+        for (int r = 0; r < m; r++) {
+            int base = (k0 + r) * n + k0;
+            for (int c = 0; c < nb; c++) {
+                f[base + c] = colF[c][r];
             }
         }
     }
 
-    /** Rows k0..k1-1 of U right of the panel: the products with the panel's L, then the subtraction. */
-    private static void rowBlock(double[] a, double[] f, int n, int k0, int k1) {
+    /**
+     * Rows k0..k1-1 of U right of the panel: the products with the panel's L (k ascending), then the
+     * subtraction from the original entries; worked on as row copies in {@code work.rows}.
+     */
+    private static void rowBlock(double[] a, double[] f, int n, int k0, int k1, Work work) {
+        int w = n - k1;
+        double[][] rows = work.rows;
+        double[] orig = work.orig;
         for (int i = k0; i < k1; i++) {
             int ri = i * n;
-            for (int k = k0; k < i; k++) {
-                double l = f[ri + k];
-                int rk = k * n;
-                for (int j = k1; j < n; j++) {
-                    f[ri + j] += l * f[rk + j];
+            double[] t = rows[i - k0];
+            System.arraycopy(f, ri + k1, t, 0, w);
+            int k = k0;
+            for (; k + 3 < i; k += 4) {
+                double l0 = f[ri + k];
+                double l1 = f[ri + k + 1];
+                double l2 = f[ri + k + 2];
+                double l3 = f[ri + k + 3];
+                double[] u0 = rows[k - k0];
+                double[] u1 = rows[k + 1 - k0];
+                double[] u2 = rows[k + 2 - k0];
+                double[] u3 = rows[k + 3 - k0];
+                for (int j = 0; j < w; j++) {
+                    t[j] = t[j] + l0 * u0[j] + l1 * u1[j] + l2 * u2[j] + l3 * u3[j];
                 }
             }
-            for (int j = k1; j < n; j++) {
-                f[ri + j] = a[ri + j] - f[ri + j];
+            for (; k < i; k++) {
+                double l = f[ri + k];
+                double[] u = rows[k - k0];
+                for (int j = 0; j < w; j++) {
+                    t[j] = t[j] + l * u[j];
+                }
             }
+            System.arraycopy(a, ri + k1, orig, 0, w);
+            for (int j = 0; j < w; j++) {
+                t[j] = orig[j] - t[j];
+            }
+            System.arraycopy(t, 0, f, ri + k1, w);
         }
     }
 
@@ -295,11 +341,39 @@ public final class TiledLu implements DenseLu {
         }
     }
 
-    /** One thread's work space for {@link #trailing}: the packed U rows of a tile and two accumulator rows. */
+    /**
+     * One thread's work space: for {@link #trailing} the U rows of a tile and two accumulator rows; for the
+     * calling thread also the panel's column copies and the row block's rows (n long).
+     */
     static final class Work {
         final double[][] u = new double[PANEL][TILE];
         final double[] t0 = new double[TILE];
         final double[] t1 = new double[TILE];
+        final double[][] colA;
+        final double[][] colF;
+        final double[][] rows;
+        final double[] orig;
+
+        Work(int n) {
+            colA = new double[PANEL][n];
+            colF = new double[PANEL][n];
+            rows = new double[PANEL][n];
+            orig = new double[n];
+        }
+
+        /** Work space for the trailing update alone. */
+        Work() {
+            colA = null;
+            colF = null;
+            rows = null;
+            orig = null;
+        }
+    }
+
+    private static void swap(double[] v, int i, int j) {
+        double t = v[i];
+        v[i] = v[j];
+        v[j] = t;
     }
 
     private static void swapRows(double[] m, int n, int r, int s) {
