@@ -91,11 +91,23 @@ final class InfluenceRows {
         }
     }
 
-    /** Row work space of one thread. */
+    /** Row work space of one thread: the row, and per trailing point and per bound leg the loop's terms. */
     final class Work {
         final double[] row = new double[panels];
         final double[] trailing = new double[points];
         final double[] distance = new double[points];
+        final double[] d2 = new double[points];
+        final double[] num = new double[points];
+        final double[] den = new double[points];
+        final double[] r1 = new double[panels];
+        final double[] r2 = new double[panels];
+        final double[] c2 = new double[panels];
+        final double[] cx = new double[panels];
+        final double[] cy = new double[panels];
+        final double[] cz = new double[panels];
+        final double[] dot1 = new double[panels];
+        final double[] dot2 = new double[panels];
+        final double[] wash = new double[panels];
     }
 
     /** Receives each finished row (length panel count) with its index; called on the thread that built it. */
@@ -136,7 +148,10 @@ final class InfluenceRows {
 
     /**
      * Writes into {@code work.row} the normalwash at control point i of every horseshoe at unit circulation
-     * (each shared trailing leg evaluated once; see {@link HorseshoeKernel} for the laws).
+     * (each shared trailing leg evaluated once; see {@link HorseshoeKernel} for the laws). The loops are split
+     * so that the square roots and divisions run in loops without branches, which the JIT vectorizes; the
+     * cut-offs and the core's choice follow in plain loops. Each value is formed by the same operations in
+     * the same order as the kernel's.
      */
     void row(int i, Work work) {
         double px = lattice.cx(i);
@@ -147,26 +162,54 @@ final class InfluenceRows {
         double nz = lattice.nz(i);
         double[] trailing = work.trailing;
         double[] distance = work.distance;
-        double[] row = work.row;
+        double[] d2s = work.d2;
+        double[] num = work.num;
+        double[] den = work.den;
         for (int k = 0; k < points; k++) {
             double rx = px - qx[k];
             double ry = py - qy[k];
             double rz = pz - qz[k];
             distance[k] = Math.sqrt(rx * rx + ry * ry + rz * rz); // a bound leg's |P - A| or |P - B|
-            double d2 = ry * ry + rz * rz;
-            double eps = qCut[k];
-            double vy = 0;
-            double vz = 0;
-            if (!(d2 <= eps * eps)) {
-                double r = Math.sqrt(rx * rx + d2);
-                double core2 = qCore2[k];
-                double c = (1 + rx / r) / (FOUR_PI * (d2 < core2 ? core2 : d2));
-                vy -= c * rz;
-                vz += c * ry;
-            }
+        }
+        for (int k = 0; k < points; k++) {
+            double ry = py - qy[k];
+            double rz = pz - qz[k];
+            d2s[k] = ry * ry + rz * rz;
+        }
+        for (int k = 0; k < points; k++) {
+            double rx = px - qx[k];
+            num[k] = 1 + rx / Math.sqrt(rx * rx + d2s[k]);
+        }
+        for (int k = 0; k < points; k++) {
+            double d2 = d2s[k];
+            double core2 = qCore2[k];
+            den[k] = FOUR_PI * (d2 < core2 ? core2 : d2);
+        }
+        for (int k = 0; k < points; k++) {
+            double c = num[k] / den[k];
+            double vy = 0 - c * (pz - qz[k]);
+            double vz = 0 + c * (py - qy[k]);
             trailing[k] = vy * ny + vz * nz;
         }
+        double noTrailing = 0.0 * ny + 0.0 * nz; // a point within a leg's cut-off gets no velocity from it
+        for (int k = 0; k < points; k++) {
+            double eps = qCut[k];
+            if (d2s[k] <= eps * eps) {
+                trailing[k] = noTrailing;
+            }
+        }
+        double[] r1s = work.r1;
+        double[] r2s = work.r2;
+        double[] c2s = work.c2;
+        double[] cxs = work.cx;
+        double[] cys = work.cy;
+        double[] czs = work.cz;
+        double[] dot1 = work.dot1;
+        double[] dot2 = work.dot2;
+        double[] wash = work.wash;
         for (int j = 0; j < panels; j++) {
+            r1s[j] = distance[aPoint[j]];
+            r2s[j] = distance[bPoint[j]];
             double r1x = px - ax[j];
             double r1y = py - ay[j];
             double r1z = pz - az[j];
@@ -176,24 +219,23 @@ final class InfluenceRows {
             double cx = r1y * r2z - r1z * r2y;
             double cy = r1z * r2x - r1x * r2z;
             double cz = r1x * r2y - r1y * r2x;
-            double c2 = cx * cx + cy * cy + cz * cz;
-            double r1 = distance[aPoint[j]];
-            double r2 = distance[bPoint[j]];
+            cxs[j] = cx;
+            cys[j] = cy;
+            czs[j] = cz;
+            c2s[j] = cx * cx + cy * cy + cz * cz;
+            dot1[j] = r0x[j] * r1x + r0y[j] * r1y + r0z[j] * r1z;
+            dot2[j] = r0x[j] * r2x + r0y[j] * r2y + r0z[j] * r2z;
+        }
+        for (int j = 0; j < panels; j++) {
+            double c = (dot1[j] / r1s[j] - dot2[j] / r2s[j]) / (FOUR_PI * c2s[j]);
+            wash[j] = (0 + c * cxs[j]) * nx + (0 + c * cys[j]) * ny + (0 + c * czs[j]) * nz;
+        }
+        double noBound = 0.0 * nx + 0.0 * ny + 0.0 * nz;
+        double[] row = work.row;
+        for (int j = 0; j < panels; j++) {
             double eps = cut[j];
-            double vx = 0;
-            double vy = 0;
-            double vz = 0;
-            if (!(c2 <= crossLimit[j] || r1 <= eps || r2 <= eps)) {
-                double x0 = r0x[j];
-                double y0 = r0y[j];
-                double z0 = r0z[j];
-                double c = ((x0 * r1x + y0 * r1y + z0 * r1z) / r1 - (x0 * r2x + y0 * r2y + z0 * r2z) / r2)
-                        / (FOUR_PI * c2);
-                vx += c * cx;
-                vy += c * cy;
-                vz += c * cz;
-            }
-            row[j] = vx * nx + vy * ny + vz * nz + trailing[bPoint[j]] - trailing[aPoint[j]];
+            double w = c2s[j] <= crossLimit[j] || r1s[j] <= eps || r2s[j] <= eps ? noBound : wash[j];
+            row[j] = w + trailing[bPoint[j]] - trailing[aPoint[j]];
         }
     }
 }
