@@ -210,24 +210,36 @@ final class InfluenceRows {
         for (int j = 0; j < panels; j++) {
             r1s[j] = distance[aPoint[j]];
             r2s[j] = distance[bPoint[j]];
-            double r1x = px - ax[j];
-            double r1y = py - ay[j];
-            double r1z = pz - az[j];
-            double r2x = px - bx[j];
-            double r2y = py - by[j];
-            double r2z = pz - bz[j];
-            double cx = r1y * r2z - r1z * r2y;
-            double cy = r1z * r2x - r1x * r2z;
-            double cz = r1x * r2y - r1y * r2x;
-            cxs[j] = cx;
-            cys[j] = cy;
-            czs[j] = cz;
-            c2s[j] = cx * cx + cy * cy + cz * cz;
-            dot1[j] = r0x[j] * r1x + r0y[j] * r1y + r0z[j] * r1z;
-            dot2[j] = r0x[j] * r2x + r0y[j] * r2y + r0z[j] * r2z;
         }
         for (int j = 0; j < panels; j++) {
-            double c = (dot1[j] / r1s[j] - dot2[j] / r2s[j]) / (FOUR_PI * c2s[j]);
+            cxs[j] = (py - ay[j]) * (pz - bz[j]) - (pz - az[j]) * (py - by[j]);
+        }
+        for (int j = 0; j < panels; j++) {
+            cys[j] = (pz - az[j]) * (px - bx[j]) - (px - ax[j]) * (pz - bz[j]);
+        }
+        for (int j = 0; j < panels; j++) {
+            czs[j] = (px - ax[j]) * (py - by[j]) - (py - ay[j]) * (px - bx[j]);
+        }
+        for (int j = 0; j < panels; j++) {
+            c2s[j] = cxs[j] * cxs[j] + cys[j] * cys[j] + czs[j] * czs[j];
+        }
+        for (int j = 0; j < panels; j++) {
+            dot1[j] = r0x[j] * (px - ax[j]) + r0y[j] * (py - ay[j]) + r0z[j] * (pz - az[j]);
+        }
+        for (int j = 0; j < panels; j++) {
+            dot2[j] = r0x[j] * (px - bx[j]) + r0y[j] * (py - by[j]) + r0z[j] * (pz - bz[j]);
+        }
+        for (int j = 0; j < panels; j++) {
+            dot1[j] = dot1[j] / r1s[j];
+        }
+        for (int j = 0; j < panels; j++) {
+            dot2[j] = dot2[j] / r2s[j];
+        }
+        for (int j = 0; j < panels; j++) {
+            dot1[j] = (dot1[j] - dot2[j]) / (FOUR_PI * c2s[j]);
+        }
+        for (int j = 0; j < panels; j++) {
+            double c = dot1[j];
             wash[j] = (0 + c * cxs[j]) * nx + (0 + c * cys[j]) * ny + (0 + c * czs[j]) * nz;
         }
         double noBound = 0.0 * nx + 0.0 * ny + 0.0 * nz;
