@@ -18,7 +18,8 @@
 # Step 3 times `spanlift solve geometries/trainer.wing.yaml` (9 alphas by default), JVM start included,
 # with hyperfine when installed (apt-get install -y hyperfine), otherwise a loop of 10 runs timed with
 # date +%s%N; it uses ./spanlift when that launcher exists, else java -jar vlm-cli/target/spanlift.jar.
-# Then the jar's size, its start-up (--version), and the planform sweep (benchmarks/planform.sweep.yaml) with
+# Then the jar's size, its start-up (--version), solve of the trainer at 100 x 10 per half (2000 panels) and at
+# its default lattice (best of 3 each), and the planform sweep (benchmarks/planform.sweep.yaml) with
 # --jobs 1 and 2 from the command line, JVM start included, with a check that both outputs are the same bytes.
 set -euo pipefail
 
@@ -131,6 +132,9 @@ if [ "$cli" = 1 ]; then
     echo "Jar and start-up (load average before: $(load))"
     echo "  vlm-cli/target/spanlift.jar: $(( $(stat -c %s vlm-cli/target/spanlift.jar) / 1024 )) KiB"
     echo "  ${launcher[*]} --version: best of 3 $(best "${launcher[@]}" --version) ms wall (JVM start and class loading)"
+    sed 's/^    mirror: true$/    mirror: true\n    lattice: {strips: 100, rows: 10}/' "$WING" > "$OUT/trainer-2000.wing.yaml"
+    echo "  solve of the trainer at 100 x 10 per half (2000 panels): best of 3 $(best "${launcher[@]}" solve "$OUT/trainer-2000.wing.yaml") ms wall"
+    echo "  solve of the trainer at its default lattice (512 panels): best of 3 $(best "${launcher[@]}" solve "$WING") ms wall"
     echo "Planform sweep from the command line, JVM start included (benchmarks/planform.sweep.yaml, 429 cases)"
     for j in 1 2; do
       t=$(best "${launcher[@]}" sweep benchmarks/planform.sweep.yaml --jobs "$j" -o "$OUT/planform-jobs$j.csv")
