@@ -25,7 +25,7 @@ import java.util.concurrent.ForkJoinTask;
  * the block is large enough to pay for it.
  *
  * <p>Memory: the factor (n^2 doubles) besides the matrix given, which serves as the original entries and
- * is overwritten (rows swapped). Golub and Van Loan, Matrix Computations, 4th ed., sections 3.2 and 3.4
+ * is overwritten (rows swapped), and work space of three panels of {@link #PANEL} x n doubles. Golub and Van Loan, Matrix Computations, 4th ed., sections 3.2 and 3.4
  * (block LU, partial pivoting).
  */
 public final class TiledLu implements DenseLu {
