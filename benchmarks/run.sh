@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # Builds and runs the Spanlift benchmarks, then times the command-line tool JVM start included.
 #
-#   benchmarks/run.sh                 full default run (about 4-5 minutes on 2 cores)
+#   benchmarks/run.sh                 full default run (about 6-8 minutes on 2 cores)
 #   benchmarks/run.sh --quick         smoke run: one short iteration each (about 1 minute)
 #   benchmarks/run.sh --no-cli        JMH only;  --no-jmh: CLI timing only;  --no-build: use the jars as built
 #   benchmarks/run.sh -- ARGS...      ARGS go to JMH (e.g. -- -p unknowns=500 'SystemBenchmark')
@@ -13,9 +13,14 @@
 # Defaults (set by annotations in the benchmark classes): one fork each; trainer 4 x 1 s warm-up and
 # 5 x 1 s measurement; systems 2 x 1 s warm-up and 3 x 1 s measurement (at 2000 unknowns an iteration is
 # a single multi-second call). Results: benchmarks/target/jmh-result.json and benchmark-report.txt.
+# After JMH, when python3 with NumPy and SciPy is present, benchmarks/openblas_lu.py times OpenBLAS's LU (the
+# machine's limit) on the same sizes and prints it beside the JMH LU figures.
 # Step 3 times `spanlift solve geometries/trainer.wing.yaml` (9 alphas by default), JVM start included,
 # with hyperfine when installed (apt-get install -y hyperfine), otherwise a loop of 10 runs timed with
 # date +%s%N; it uses ./spanlift when that launcher exists, else java -jar vlm-cli/target/spanlift.jar.
+# Then the jar's size, its start-up (--version), solve of the trainer at 100 x 10 per half (2000 panels) and at
+# its default lattice (best of 3 each), and the planform sweep (benchmarks/planform.sweep.yaml) with
+# --jobs 1 and 2 from the command line, JVM start included, with a check that both outputs are the same bytes.
 set -euo pipefail
 
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
@@ -33,7 +38,7 @@ while [ $# -gt 0 ]; do
     --no-jmh) jmh=0 ;;
     --no-build) build=0 ;;
     --) shift; jmh_args+=("$@"); break ;;
-    -h|--help) sed -n '2,20p' "$0"; exit 0 ;;
+    -h|--help) sed -n '2,24p' "$0"; exit 0 ;;
     *) echo "run.sh: unknown option $1 (JMH arguments go after --)" >&2; exit 2 ;;
   esac
   shift
@@ -56,6 +61,14 @@ if [ "$jmh" = 1 ]; then
     -rf json -rff "$OUT/jmh-result.json" "${jmh_args[@]}" | tee "$OUT/jmh-output.txt"
   # The summary is the tail of the output, from its heading on.
   sed -n '/^=== Spanlift benchmark summary/,$p' "$OUT/jmh-output.txt" > "$OUT/benchmark-report.txt"
+  # The machine's limit, in the same run: OpenBLAS's LU through SciPy, side by side with the JMH figures.
+  if command -v python3 > /dev/null && python3 -c 'import numpy, scipy.linalg' 2> /dev/null; then
+    echo "== OpenBLAS LU through SciPy (load average before: $(load))"
+    python3 benchmarks/openblas_lu.py "$OUT/jmh-result.json" | tee -a "$OUT/benchmark-report.txt"
+    echo "  (load average after: $(load))" | tee -a "$OUT/benchmark-report.txt"
+  else
+    echo "(no python3 with NumPy and SciPy: OpenBLAS's LU not measured)" | tee -a "$OUT/benchmark-report.txt"
+  fi
 fi
 
 if [ "$cli" = 1 ]; then
@@ -107,6 +120,32 @@ for r in json.load(open(sys.argv[1])):
           printf "  so %.0f%% of the CLI mean is JVM start, class loading, JIT warm-up, file reading and output\n", 100 * (c - s) / c }'
       fi
     fi
+  } | tee -a "$OUT/benchmark-report.txt"
+fi
+if [ "$cli" = 1 ]; then
+  # Start-up, jar size, and the planform sweep from the command line, JVM start included; the sweep's output
+  # must be the same bytes whatever --jobs.
+  ms() { local t0 t1; t0=$(date +%s%N); "$@" > /dev/null 2>&1; t1=$(date +%s%N); echo $(( (t1 - t0) / 1000000 )); }
+  best() { local b="" t; for _ in 1 2 3; do t=$(ms "$@"); if [ -z "$b" ] || [ "$t" -lt "$b" ]; then b=$t; fi; done; echo "$b"; }
+  {
+    echo
+    echo "Jar and start-up (load average before: $(load))"
+    echo "  vlm-cli/target/spanlift.jar: $(( $(stat -c %s vlm-cli/target/spanlift.jar) / 1024 )) KiB"
+    echo "  ${launcher[*]} --version: best of 3 $(best "${launcher[@]}" --version) ms wall (JVM start and class loading)"
+    sed 's/^    mirror: true$/    mirror: true\n    lattice: {strips: 100, rows: 10}/' "$WING" > "$OUT/trainer-2000.wing.yaml"
+    echo "  solve of the trainer at 100 x 10 per half (2000 panels): best of 3 $(best "${launcher[@]}" solve "$OUT/trainer-2000.wing.yaml") ms wall"
+    echo "  solve of the trainer at its default lattice (512 panels): best of 3 $(best "${launcher[@]}" solve "$WING") ms wall"
+    echo "Planform sweep from the command line, JVM start included (benchmarks/planform.sweep.yaml, 429 cases)"
+    for j in 1 2; do
+      t=$(best "${launcher[@]}" sweep benchmarks/planform.sweep.yaml --jobs "$j" -o "$OUT/planform-jobs$j.csv")
+      awk -v j="$j" -v t="$t" 'BEGIN { printf "  --jobs %d: best of 3 %d ms wall, %.0f cases/s\n", j, t, 429 / (t / 1000) }'
+    done
+    if cmp -s "$OUT/planform-jobs1.csv" "$OUT/planform-jobs2.csv"; then
+      echo "  outputs of --jobs 1 and --jobs 2: identical bytes"
+    else
+      echo "  outputs of --jobs 1 and --jobs 2: DIFFER"
+    fi
+    echo "  (load average after: $(load))"
   } | tee -a "$OUT/benchmark-report.txt"
 fi
 [ -f "$OUT/benchmark-report.txt" ] && echo "(summary saved in $OUT/benchmark-report.txt)"

@@ -84,7 +84,12 @@ public final class BenchmarkReport {
                 cpu = sec.get("cpuNanos").getScore() / sec.get("calls").getScore() * 1e-9;
             }
             double alloc = sec.containsKey("gc.alloc.rate.norm") ? sec.get("gc.alloc.rate.norm").getScore() : Double.NaN;
-            String n = r.getParams().getParamsKeys().contains("unknowns") ? r.getParams().getParam("unknowns") : "";
+            String n = "";
+            for (String key : List.of("unknowns", "lattice", "jobs")) {
+                if (r.getParams().getParamsKeys().contains(key)) {
+                    n = r.getParams().getParam(key);
+                }
+            }
             rows.add(new Row(name, n, seconds(p.getScore(), p.getScoreUnit()),
                     seconds(p.getScoreError(), p.getScoreUnit()), cpu, alloc));
         }
@@ -96,19 +101,24 @@ public final class BenchmarkReport {
                         ? " -- LOADED: wall times are inflated, prefer the CPU columns" : ""));
         out.append("wall = JMH mean wall time per call (+- 99.9% error); cpu = benchmark-thread CPU time per call;\n");
         out.append("alloc = bytes allocated per call (GC profiler)\n\n");
-        trainer(rows, out);
+        for (String lattice : List.of("24x6", "32x8")) {
+            trainer(rows, lattice, out);
+        }
         systems(rows, out);
+        sweep(rows, out);
         return out.toString();
     }
 
-    private static void trainer(List<Row> rows, StringBuilder out) {
-        Optional<Row> sweep = find(rows, "TrainerBenchmark.sweep", "");
-        Optional<Row> analysis = find(rows, "TrainerBenchmark.analysis", "");
-        Optional<Row> solves = find(rows, "TrainerBenchmark.solves", "");
+    private static void trainer(List<Row> rows, String lattice, StringBuilder out) {
+        Optional<Row> sweep = find(rows, "TrainerBenchmark.sweep", lattice);
+        Optional<Row> analysis = find(rows, "TrainerBenchmark.analysis", lattice);
+        Optional<Row> solves = find(rows, "TrainerBenchmark.solves", lattice);
         if (sweep.isEmpty() && analysis.isEmpty() && solves.isEmpty()) {
             return;
         }
-        out.append("Trainer wing, 24 x 6 per half (144 unknowns per system), 9 alphas with coefficients\n");
+        String[] sr = lattice.split("x");
+        out.append(String.format(Locale.ROOT, "Trainer wing, %s per half (%d unknowns per system), 9 alphas with coefficients%n",
+                lattice.replace("x", " x "), Integer.parseInt(sr[0]) * Integer.parseInt(sr[1])));
         out.append(String.format(Locale.ROOT, "  %-34s %12s %10s %10s %12s %9s%n", "benchmark", "wall ms", "+-", "cpu ms",
                 "alloc kB", "cpu share"));
         double total = sweep.map(Row::cpu).orElse(Double.NaN);
@@ -123,67 +133,70 @@ public final class BenchmarkReport {
         out.append('\n');
     }
 
+    /** Benchmarks of the system table, in column order. */
+    private static final List<String> SYSTEM_COLUMNS = List.of("assemble", "luEjml", "luTiled1", "luTiled2", "system1",
+            "system2");
+
     private static void systems(List<Row> rows, StringBuilder out) {
         Map<Integer, Row[]> bySize = new TreeMap<>();
         for (Row r : rows) {
             if (!r.name().startsWith("SystemBenchmark.")) {
                 continue;
             }
-            Row[] slot = bySize.computeIfAbsent(Integer.parseInt(r.unknowns()), k -> new Row[3]);
-            switch (r.name()) {
-                case "SystemBenchmark.assemble" -> slot[0] = r;
-                case "SystemBenchmark.factorize" -> slot[1] = r;
-                default -> slot[2] = r;
+            int column = SYSTEM_COLUMNS.indexOf(r.name().substring("SystemBenchmark.".length()));
+            if (column >= 0) {
+                bySize.computeIfAbsent(Integer.parseInt(r.unknowns()), k -> new Row[SYSTEM_COLUMNS.size()])[column] = r;
             }
         }
         if (bySize.isEmpty()) {
             return;
         }
-        out.append("Symmetric half-span system: assembly and LU factorization (trapezoid wing, 10 rows)\n");
-        out.append("  GFLOP/s = (2/3 n^3) / time; share = assembly / (assembly + engine LU);\n");
-        out.append("  blocked = the cache-blocked reference LU in this module (not engine code)\n");
-        out.append(String.format(Locale.ROOT, "  %6s | %-30s | %-30s | %-30s | %-13s | %s%n", "n",
-                "assembly ms (wall/cpu) ns/eval", "engine LU ms (wall/cpu) GF/s", "blocked LU ms (wall/cpu) GF/s",
-                "share w/c", "engine/blocked cpu"));
+        out.append("Symmetric half-span system (trapezoid wing): assembly, LU by each implementation, the whole system\n");
+        out.append("  LU: ms wall and GFLOP/s = (2/3 n^3) / wall time; tiled 1 and 2 = the engine's LU on one and two threads\n");
+        out.append("  (bit-identical to EJML's); system = InfluenceSystem.of (assembly + LU) with the tiled LU, 1 and 2 threads\n");
+        out.append(String.format(Locale.ROOT, "  %5s | %-19s | %-14s | %-14s | %-14s | %-6s %-6s | %-17s%n", "n",
+                "assembly ms wall/cpu", "EJML LU", "tiled LU 1 thr", "tiled LU 2 thr", "EJML/", "EJML/",
+                "system ms 1 / 2"));
+        out.append(String.format(Locale.ROOT, "  %5s | %-19s | %-14s | %-14s | %-14s | %-6s %-6s | %-17s%n", "",
+                "", "ms     GF/s", "ms     GF/s", "ms     GF/s", "tiled1", "tiled2", "thr (wall)"));
         for (Map.Entry<Integer, Row[]> e : bySize.entrySet()) {
             int n = e.getKey();
             Row[] s = e.getValue();
             double flops = 2.0 / 3.0 * n * (double) n * n;
-            double evals = 2.0 * n * n;
-            out.append(String.format(Locale.ROOT, "  %6d | %s | %s | %s | %s | %s%n", n,
-                    s[0] == null ? pad("-", 30) : String.format(Locale.ROOT, "%8.1f %8.1f %12.0f", s[0].wall() * 1e3,
-                            s[0].cpu() * 1e3, s[0].cpu() / evals * 1e9),
-                    lu(s[1], flops), lu(s[2], flops),
-                    s[0] == null || s[1] == null ? pad("-", 13) : String.format(Locale.ROOT, "%5.1f%% %5.1f%%",
-                            100 * s[0].wall() / (s[0].wall() + s[1].wall()), 100 * s[0].cpu() / (s[0].cpu() + s[1].cpu())),
-                    s[1] == null || s[2] == null ? "-" : String.format(Locale.ROOT, "%.2fx", s[1].cpu() / s[2].cpu())));
+            out.append(String.format(Locale.ROOT, "  %5d | %s | %s | %s | %s | %s %s | %s%n", n,
+                    s[0] == null ? pad("-", 19) : String.format(Locale.ROOT, "%8.2f %8.2f  ", s[0].wall() * 1e3,
+                            s[0].cpu() * 1e3),
+                    lu(s[1], flops), lu(s[2], flops), lu(s[3], flops), times(s[1], s[2]), times(s[1], s[3]),
+                    s[4] == null || s[5] == null ? "-" : String.format(Locale.ROOT, "%8.2f %8.2f", s[4].wall() * 1e3,
+                            s[5].wall() * 1e3)));
         }
-        out.append("  growth from the previous size (cpu time; ideal: assembly (n2/n1)^2, LU (n2/n1)^3)\n");
-        Row[] prev = null;
-        int prevN = 0;
-        for (Map.Entry<Integer, Row[]> e : bySize.entrySet()) {
-            Row[] s = e.getValue();
-            if (prev != null) {
-                double f = (double) e.getKey() / prevN;
-                out.append(String.format(Locale.ROOT, "  %5d -> %-5d  assembly %s (ideal %.1f)  engine LU %s  blocked LU %s (ideal %.1f)%n",
-                        prevN, e.getKey(), ratio(s[0], prev[0]), f * f, ratio(s[1], prev[1]), ratio(s[2], prev[2]),
-                        f * f * f));
-            }
-            prev = s;
-            prevN = e.getKey();
+        out.append("  (OpenBLAS's LU on the same sizes, when Python with SciPy is present, follows from run.sh)\n\n");
+    }
+
+    private static void sweep(List<Row> rows, StringBuilder out) {
+        Optional<Row> one = find(rows, "SweepBenchmark.run", "1");
+        Optional<Row> two = find(rows, "SweepBenchmark.run", "2");
+        if (one.isEmpty() && two.isEmpty()) {
+            return;
         }
+        out.append("Planform sweep, default lattice 32 x 8 (benchmarks/planform.sweep.yaml, 429 cases, each a new geometry),\n");
+        out.append("  steady (warm JVM), through the sweep command's runner\n");
+        for (Optional<Row> o : List.of(one, two)) {
+            o.ifPresent(r -> out.append(String.format(Locale.ROOT, "  --jobs %s: %8.1f ms per sweep, %6.0f cases/s%n",
+                    r.unknowns(), r.wall() * 1e3, 429 / r.wall())));
+        }
+        out.append('\n');
     }
 
     private static String lu(Row r, double flops) {
         if (r == null) {
-            return pad("-", 30);
+            return pad("-", 14);
         }
-        return String.format(Locale.ROOT, "%8.1f %8.1f %5.2f/%5.2f", r.wall() * 1e3, r.cpu() * 1e3, flops / r.wall() * 1e-9,
-                flops / r.cpu() * 1e-9);
+        return String.format(Locale.ROOT, "%7.2f %6.2f", r.wall() * 1e3, flops / r.wall() * 1e-9);
     }
 
-    private static String ratio(Row a, Row b) {
-        return a == null || b == null ? "  -  " : String.format(Locale.ROOT, "%5.2f", a.cpu() / b.cpu());
+    private static String times(Row a, Row b) {
+        return a == null || b == null ? pad("-", 6) : String.format(Locale.ROOT, "%5.1fx", a.wall() / b.wall());
     }
 
     private static String pad(String s, int w) {
@@ -198,7 +211,7 @@ public final class BenchmarkReport {
 
     private static String label(String name) {
         return switch (name) {
-            case "TrainerBenchmark.sweep" -> "sweep: of(wing) + 9 x solve+coeffs";
+            case "TrainerBenchmark.sweep" -> "whole: of(wing) + 9 x solve+coeffs";
             case "TrainerBenchmark.analysis" -> "  of(wing) alone";
             case "TrainerBenchmark.solves" -> "  9 x solve+coeffs alone";
             default -> name;

@@ -3,8 +3,6 @@ package org.spanlift.benchmarks;
 import java.util.concurrent.TimeUnit;
 
 import org.ejml.data.DMatrixRMaj;
-import org.ejml.dense.row.decomposition.lu.LUDecompositionAlt_DDRM;
-import org.ejml.dense.row.linsol.lu.LinearSolverLu_DDRM;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -16,33 +14,36 @@ import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.Warmup;
-import org.openjdk.jmh.infra.BenchmarkParams;
 import org.spanlift.geometry.Wing;
 import org.spanlift.io.WingFileReader;
 import org.spanlift.lattice.Lattice;
 import org.spanlift.lattice.LatticeBuilder;
 import org.spanlift.solve.InfluenceSystem;
 import org.spanlift.solve.Symmetry;
+import org.spanlift.solve.linear.DenseLu;
+import org.spanlift.solve.linear.LuOptions;
 
 /**
- * Influence assembly alone and LU factorization alone, for a given number of unknowns of the half-span
- * symmetric system (the system {@code WingAnalysis} solves for alpha and flaps).
+ * The symmetric half-span system (the one {@code WingAnalysis} solves for alpha and flaps) at a given number
+ * of unknowns: assembly alone, factorization alone by each implementation behind the solver seam, and the
+ * whole system as the engine builds it.
  *
- * <p>The wing is a tapered, swept trapezoid with dihedral and washout, no controls, 10 chordwise rows and
- * unknowns / 10 cosine-spaced strips per half, so the lattice has exactly {@code unknowns} panels per half.
+ * <p>The wing is a tapered, swept trapezoid with dihedral and washout, no controls, cosine-spaced strips of
+ * 8 rows (256, 512 unknowns) or 10 rows (1000, 2000), so the lattice has exactly {@code unknowns} panels per
+ * half (256: the default lattice's 32 x 8).
  *
  * <ul>
- * <li>{@link #assemble}: {@code InfluenceSystem.assemble(lattice, SYMMETRIC)}, n^2 entries, each two
- * horseshoe evaluations (the panel and its mirror image);</li>
- * <li>{@link #factorize}: the factorization {@code InfluenceSystem} performs on that matrix, EJML's
- * {@code LinearSolverLu_DDRM} over {@code LUDecompositionAlt_DDRM} (LU with partial pivoting, about
- * 2/3 n^3 flops), a new solver per call as in the engine. The input matrix is copied, not modified.</li>
- * <li>{@link #factorizeBlocked}: a measuring stick, not engine code: {@link BlockedLu}, the same
- * factorization blocked for the cache, checked in setup against the engine's solution.</li>
+ * <li>{@link #assemble}: {@code InfluenceSystem.assemble(lattice, SYMMETRIC)}, one thread, n^2 entries, each
+ * two horseshoes (the panel and its mirror image);</li>
+ * <li>{@link #luEjml}, {@link #luTiled1}, {@link #luTiled2}: {@code DenseLu} with EJML's LU, the tiled LU on
+ * one thread and on two (about 2/3 n^3 flops each; the input is copied, since a factorization may overwrite
+ * it, and the copy is timed with it);</li>
+ * <li>{@link #system1}, {@link #system2}: {@code InfluenceSystem.of(lattice, SYMMETRIC, options)} with the
+ * tiled LU on one thread and on two: assembly and factorization, both split between the threads in the
+ * second.</li>
  * </ul>
- *
- * At 2000 unknowns one factorization takes seconds, so an iteration is a single call there: the counts
- * are kept small to hold a full run within a few minutes.
+ * Every LU is checked in setup to give EJML's solution bit for bit. With two threads the benchmark thread's
+ * CPU time leaves out the other thread's: read their wall times.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
@@ -52,28 +53,41 @@ import org.spanlift.solve.Symmetry;
 @Measurement(iterations = 3, time = 1)
 public class SystemBenchmark {
 
-    /** Chordwise rows per strip of the benchmark wing. */
-    static final int ROWS = 10;
+    static final LuOptions EJML = new LuOptions(LuOptions.Method.EJML, 1);
+    static final LuOptions TILED_1 = new LuOptions(LuOptions.Method.TILED, 1);
+    static final LuOptions TILED_2 = new LuOptions(LuOptions.Method.TILED, 2);
 
-    @Param({"500", "1000", "2000"})
+    @Param({"256", "512", "1000", "2000"})
     public int unknowns;
 
     private Lattice lattice;
     private DMatrixRMaj matrix;
 
     @Setup
-    public void setup(BenchmarkParams params) {
+    public void setup() {
         lattice = LatticeBuilder.build(wing(unknowns));
         if (lattice.halfCount() != unknowns) {
             throw new IllegalStateException("lattice has " + lattice.halfCount() + " unknowns, not " + unknowns);
         }
         matrix = InfluenceSystem.assemble(lattice, Symmetry.SYMMETRIC);
-        if (new LinearSolverLu_DDRM(new LUDecompositionAlt_DDRM()).modifiesA()) {
-            throw new IllegalStateException("the factorization modifies its input; the benchmark needs a copy");
+        double[] b = new double[unknowns];
+        for (int i = 0; i < unknowns; i++) {
+            b[i] = -lattice.nz(i);
         }
-        if (params.getBenchmark().endsWith(".factorizeBlocked")) {
-            checkBlocked();
+        double[] reference = solve(EJML, b);
+        for (LuOptions o : new LuOptions[] {TILED_1, TILED_2}) {
+            if (!java.util.Arrays.equals(reference, solve(o, b))) {
+                throw new IllegalStateException(o + " does not give EJML's solution bit for bit");
+            }
         }
+    }
+
+    private double[] solve(LuOptions options, double[] b) {
+        DenseLu lu = DenseLu.create(options);
+        lu.factor(matrix.data.clone(), unknowns);
+        double[] x = new double[unknowns];
+        lu.solve(b, x);
+        return x;
     }
 
     @Benchmark
@@ -83,48 +97,47 @@ public class SystemBenchmark {
     }
 
     @Benchmark
-    public LinearSolverLu_DDRM factorize(CpuClock clock) {
-        clock.count();
-        LinearSolverLu_DDRM solver = new LinearSolverLu_DDRM(new LUDecompositionAlt_DDRM());
-        if (!solver.setA(matrix)) {
-            throw new IllegalStateException("singular benchmark matrix");
-        }
-        return solver;
+    public DenseLu luEjml(CpuClock clock) {
+        return factor(EJML, clock);
     }
 
     @Benchmark
-    public Object factorizeBlocked(CpuClock clock) {
+    public DenseLu luTiled1(CpuClock clock) {
+        return factor(TILED_1, clock);
+    }
+
+    @Benchmark
+    public DenseLu luTiled2(CpuClock clock) {
+        return factor(TILED_2, clock);
+    }
+
+    @Benchmark
+    public InfluenceSystem system1(CpuClock clock) {
         clock.count();
-        return BlockedLu.factor(matrix.data, unknowns);
+        return InfluenceSystem.of(lattice, Symmetry.SYMMETRIC, TILED_1);
     }
 
-    /** The reference factorization must solve the system as well as the engine's does. */
-    private void checkBlocked() {
-        int n = unknowns;
-        double[] b = new double[n];
-        for (int i = 0; i < n; i++) {
-            b[i] = -lattice.nz(i);
-        }
-        double[] x = BlockedLu.factor(matrix.data, n).solve(b);
-        LinearSolverLu_DDRM engine = new LinearSolverLu_DDRM(new LUDecompositionAlt_DDRM());
-        engine.setA(matrix);
-        DMatrixRMaj y = new DMatrixRMaj(n, 1);
-        engine.solve(new DMatrixRMaj(n, 1, true, b), y);
-        double diff = 0;
-        double norm = 0;
-        for (int i = 0; i < n; i++) {
-            diff = Math.max(diff, Math.abs(x[i] - y.data[i]));
-            norm = Math.max(norm, Math.abs(y.data[i]));
-        }
-        if (!(diff <= 1e-9 * norm)) {
-            throw new IllegalStateException("blocked LU disagrees with the engine's: " + diff + " over " + norm);
-        }
+    @Benchmark
+    public InfluenceSystem system2(CpuClock clock) {
+        clock.count();
+        return InfluenceSystem.of(lattice, Symmetry.SYMMETRIC, TILED_2);
     }
 
-    /** A trapezoid wing with {@code unknowns} panels per half: unknowns / 10 strips of 10 rows. */
+    private DenseLu factor(LuOptions options, CpuClock clock) {
+        clock.count();
+        DenseLu lu = DenseLu.create(options);
+        lu.factor(matrix.data.clone(), unknowns);
+        if (!(lu.pivotRatio() > 0)) {
+            throw new IllegalStateException("singular benchmark matrix");
+        }
+        return lu;
+    }
+
+    /** A trapezoid wing with {@code unknowns} panels per half: 8 rows below 1000 unknowns, else 10. */
     static Wing wing(int unknowns) {
-        if (unknowns % ROWS != 0) {
-            throw new IllegalArgumentException("unknowns must be a multiple of " + ROWS + ", got " + unknowns);
+        int rows = unknowns < 1000 ? 8 : 10;
+        if (unknowns % rows != 0) {
+            throw new IllegalArgumentException("unknowns must be a multiple of " + rows + ", got " + unknowns);
         }
         String yaml = """
                 name: Benchmark trapezoid
@@ -133,7 +146,7 @@ public class SystemBenchmark {
                   - name: wing
                     trapezoid: {span: 10.0, root-chord: 1.6, taper: 0.5, sweep: 5, dihedral: 3, washout: 2}
                     lattice: {strips: %d, rows: %d, strip-spacing: cosine, row-spacing: uniform}
-                """.formatted(unknowns / ROWS, ROWS);
+                """.formatted(unknowns / rows, rows);
         return WingFileReader.parse(yaml, "benchmark-" + unknowns + ".wing.yaml");
     }
 }

@@ -23,8 +23,8 @@ import org.spanlift.results.Solution;
 import org.spanlift.solve.WingAnalysis;
 
 /**
- * The demo trainer wing at 24 strips x 6 rows per half (set here; the file takes the default lattice), 144
- * unknowns in each of the symmetric and antisymmetric systems, solved over the nine angles of attack of
+ * The demo trainer wing at 24 strips x 6 rows per half (144 unknowns in each of the symmetric and
+ * antisymmetric systems) and at the default lattice, 32 x 8 (256 unknowns; {@code lattice} sets it), solved over the nine angles of attack of
  * {@code spanlift solve}'s
  * default list (-4 to 12 degrees in steps of 2), coefficients included. The file is read once, in setup.
  *
@@ -44,8 +44,9 @@ import org.spanlift.solve.WingAnalysis;
 @Measurement(iterations = 5, time = 1)
 public class TrainerBenchmark {
 
-    /** The lattice the speed aim refers to: 24 x 6 per half, cosine both ways. */
-    static final LatticeSpec BENCHMARK_LATTICE = new LatticeSpec(24, 6, Spacing.COSINE, Spacing.COSINE);
+    /** Strips x rows per half, cosine both ways: 24x6 (the first speed aim's) and 32x8 (the default lattice). */
+    @Param({"24x6", "32x8"})
+    public String lattice;
 
     /** Angles of attack of the sweep, degrees: the default list of {@code spanlift solve}. */
     static final double[] ALPHAS_DEG = {-4, -2, 0, 2, 4, 6, 8, 10, 12};
@@ -60,7 +61,9 @@ public class TrainerBenchmark {
 
     @Setup
     public void setup() {
-        wing = WingFileReader.read(locate(wingFile)).withLattice(BENCHMARK_LATTICE);
+        String[] sr = lattice.split("x");
+        wing = WingFileReader.read(locate(wingFile)).withLattice(new LatticeSpec(Integer.parseInt(sr[0]),
+                Integer.parseInt(sr[1]), Spacing.COSINE, Spacing.COSINE));
         built = WingAnalysis.of(wing);
         alphas = new double[ALPHAS_DEG.length];
         for (int i = 0; i < alphas.length; i++) {

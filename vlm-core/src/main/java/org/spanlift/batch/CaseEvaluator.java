@@ -22,6 +22,7 @@ import org.spanlift.io.WingFileReader;
 import org.spanlift.loads.LoadsAnalysis;
 import org.spanlift.loads.SpanwiseLoads;
 import org.spanlift.solve.InfluenceCache;
+import org.spanlift.solve.linear.LuOptions;
 import org.spanlift.solve.LiftCurve;
 import org.spanlift.solve.SingularSystemException;
 import org.spanlift.solve.WingAnalysis;
@@ -64,10 +65,17 @@ public final class CaseEvaluator {
     private final boolean wantFlaps;
     private final boolean wantLoads;
     private final boolean wantBalance;
-    private final InfluenceCache cache = new InfluenceCache(CACHE_SIZE);
+    private final InfluenceCache cache;
 
+    /** An evaluator that factorizes with {@link LuOptions#DEFAULT}. */
     public CaseEvaluator(Sweep sweep) {
+        this(sweep, LuOptions.DEFAULT);
+    }
+
+    /** An evaluator that factorizes as {@code options} say (results do not depend on them). */
+    public CaseEvaluator(Sweep sweep, LuOptions options) {
         this.sweep = sweep;
+        this.cache = new InfluenceCache(CACHE_SIZE, options);
         this.baseFile = sweep.basePath().toString();
         this.columns = sweep.columns();
         this.wantStall = columns.stream().anyMatch(ResultColumn::needsClMax);

@@ -4,6 +4,7 @@ import java.util.ArrayDeque;
 import java.util.Iterator;
 
 import org.spanlift.lattice.Lattice;
+import org.spanlift.solve.linear.LuOptions;
 
 /**
  * Factorized influence systems of the last few lattice geometries, so that cases that change only the
@@ -14,16 +15,26 @@ import org.spanlift.lattice.Lattice;
 public final class InfluenceCache {
 
     private final int capacity;
+    private final LuOptions options;
     private final ArrayDeque<Systems> entries = new ArrayDeque<>();
     private long factorizations;
     private long reuses;
 
-    /** @param capacity how many geometries to keep (at least 1) */
+    /** @param capacity how many geometries to keep (at least 1); factorized with {@link LuOptions#DEFAULT} */
     public InfluenceCache(int capacity) {
+        this(capacity, LuOptions.DEFAULT);
+    }
+
+    /**
+     * @param capacity how many geometries to keep (at least 1)
+     * @param options  how to factorize (in a sweep: one thread per job when the jobs fill the machine)
+     */
+    public InfluenceCache(int capacity, LuOptions options) {
         if (capacity < 1) {
             throw new IllegalArgumentException("a cache keeps at least one geometry");
         }
         this.capacity = capacity;
+        this.options = options;
     }
 
     /** A cache that keeps nothing between calls beyond the one lattice in use. */
@@ -82,7 +93,7 @@ public final class InfluenceCache {
         public InfluenceSystem symmetric() {
             if (symmetric == null) {
                 count();
-                symmetric = InfluenceSystem.of(lattice, Symmetry.SYMMETRIC);
+                symmetric = InfluenceSystem.of(lattice, Symmetry.SYMMETRIC, options);
             }
             return symmetric;
         }
@@ -91,11 +102,11 @@ public final class InfluenceCache {
             if (antisymmetric == null) {
                 count();
                 if (symmetric == null) {
-                    InfluenceSystem.Pair pair = InfluenceSystem.pair(lattice);
+                    InfluenceSystem.Pair pair = InfluenceSystem.pair(lattice, options);
                     symmetric = pair.symmetric();
                     antisymmetric = pair.antisymmetric();
                 } else {
-                    antisymmetric = InfluenceSystem.of(lattice, Symmetry.ANTISYMMETRIC);
+                    antisymmetric = InfluenceSystem.of(lattice, Symmetry.ANTISYMMETRIC, options);
                 }
             }
             return antisymmetric;
@@ -104,7 +115,7 @@ public final class InfluenceCache {
         public InfluenceSystem full() {
             if (full == null) {
                 count();
-                full = InfluenceSystem.of(lattice, Symmetry.FULL);
+                full = InfluenceSystem.of(lattice, Symmetry.FULL, options);
             }
             return full;
         }

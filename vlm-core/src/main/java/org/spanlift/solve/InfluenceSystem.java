@@ -1,17 +1,18 @@
 package org.spanlift.solve;
 
 import org.ejml.data.DMatrixRMaj;
-import org.ejml.dense.row.decomposition.lu.LUDecompositionAlt_DDRM;
-import org.ejml.dense.row.linsol.lu.LinearSolverLu_DDRM;
 import org.spanlift.lattice.Lattice;
+import org.spanlift.solve.linear.DenseLu;
+import org.spanlift.solve.linear.LuOptions;
 
 /**
  * The aerodynamic influence matrix of a lattice, A[i][j] = n_i . v_j(P_i) (normalwash at control point i
- * of horseshoe j at unit circulation), factorized once by LU with partial pivoting (EJML). It depends on
- * the planform only; every right-hand side is then one forward and back substitution.
+ * of horseshoe j at unit circulation), factorized once by LU with partial pivoting behind the solver seam
+ * ({@link DenseLu}, chosen by {@link LuOptions}; {@link LuOptions#DEFAULT} unless a caller says otherwise). It
+ * depends on the planform only; every right-hand side is then one forward and back substitution.
  *
  * <p>Symmetric and antisymmetric systems have the right-half panels as unknowns and add (subtract) the
- * influence of each panel's mirror image. A solve holds the instance's lock (EJML's solver keeps work arrays).
+ * influence of each panel's mirror image. Solves may run from several threads at once.
  */
 public final class InfluenceSystem {
 
@@ -20,38 +21,35 @@ public final class InfluenceSystem {
 
     private final Symmetry symmetry;
     private final int size;
-    private final LinearSolverLu_DDRM solver;
-    private final DMatrixRMaj rhs;
-    private final DMatrixRMaj solution;
+    private final DenseLu lu;
 
-    private InfluenceSystem(Symmetry symmetry, DMatrixRMaj matrix) {
+    /** Factorizes the row-major {@code n} x {@code n} matrix {@code a}, which the factorization may overwrite. */
+    private InfluenceSystem(Symmetry symmetry, double[] a, int n, LuOptions options) {
         this.symmetry = symmetry;
-        this.size = matrix.numRows;
-        this.solver = new LinearSolverLu_DDRM(new LUDecompositionAlt_DDRM());
-        if (!solver.setA(matrix)) {
+        this.size = n;
+        this.lu = DenseLu.create(options);
+        lu.factor(a, n);
+        double ratio = lu.pivotRatio();
+        if (ratio == 0) {
             throw new SingularSystemException("the influence matrix is singular (coincident or crossing panels)");
         }
-        double[] lu = solver.getDecomposition().getLU().data;
-        double min = Double.POSITIVE_INFINITY;
-        double max = 0;
-        for (int i = 0; i < size; i++) {
-            double d = Math.abs(lu[i * size + i]);
-            min = Math.min(min, d);
-            max = Math.max(max, d);
-        }
-        if (!(min > PIVOT_RATIO_LIMIT * max)) {
+        if (!(ratio > PIVOT_RATIO_LIMIT)) {
             throw new SingularSystemException(String.format(
                     "the influence matrix is singular or badly conditioned (pivot ratio %.1e); "
-                            + "check for coincident, crossing or degenerate panels", min / max));
+                            + "check for coincident, crossing or degenerate panels", ratio));
         }
-        this.rhs = new DMatrixRMaj(size, 1);
-        this.solution = new DMatrixRMaj(size, 1);
     }
 
-    /** Assembles and factorizes the system of the given symmetry. */
+    /** Assembles and factorizes the system of the given symmetry with the default factorization. */
     public static InfluenceSystem of(Lattice lattice, Symmetry symmetry) {
-        SolveBudget.require(symmetry == Symmetry.FULL ? lattice.panelCount() : lattice.halfCount(), 1);
-        return new InfluenceSystem(symmetry, assemble(lattice, symmetry));
+        return of(lattice, symmetry, LuOptions.DEFAULT);
+    }
+
+    /** Assembles and factorizes the system of the given symmetry as the options say. */
+    public static InfluenceSystem of(Lattice lattice, Symmetry symmetry, LuOptions options) {
+        int n = symmetry == Symmetry.FULL ? lattice.panelCount() : lattice.halfCount();
+        SolveBudget.require(n, 1);
+        return new InfluenceSystem(symmetry, assemble(lattice, symmetry, options.threads()), n, options);
     }
 
     /** The symmetric and antisymmetric systems of a mirrored lattice. */
@@ -63,75 +61,57 @@ public final class InfluenceSystem {
      * evaluated once, and A_sym = D + M, A_anti = D - M.
      */
     public static Pair pair(Lattice lattice) {
+        return pair(lattice, LuOptions.DEFAULT);
+    }
+
+    /** Both half-span systems, factorized as the options say. */
+    public static Pair pair(Lattice lattice, LuOptions options) {
         if (!lattice.mirrored()) {
             throw new IllegalArgumentException("a symmetric pair of systems needs a mirrored lattice");
         }
         int n = lattice.halfCount();
         SolveBudget.require(n, 2);
-        DMatrixRMaj sym = new DMatrixRMaj(n, n);
-        DMatrixRMaj anti = new DMatrixRMaj(n, n);
-        double[] row = new double[lattice.panelCount()];
-        double[] trailing = new double[lattice.trailingPointCount()];
-        for (int i = 0; i < n; i++) {
-            influenceRow(lattice, i, row, trailing);
+        double[] sym = new double[n * n];
+        double[] anti = new double[n * n];
+        new InfluenceRows(lattice).build(n, options.threads(), (i, row) -> {
             for (int j = 0; j < n; j++) {
-                sym.data[i * n + j] = row[j] + row[j + n];
-                anti.data[i * n + j] = row[j] - row[j + n];
+                sym[i * n + j] = row[j] + row[j + n];
+                anti[i * n + j] = row[j] - row[j + n];
             }
-        }
-        return new Pair(new InfluenceSystem(Symmetry.SYMMETRIC, sym), new InfluenceSystem(Symmetry.ANTISYMMETRIC, anti));
+        });
+        InfluenceSystem symmetric = new InfluenceSystem(Symmetry.SYMMETRIC, sym, n, options);
+        return new Pair(symmetric, new InfluenceSystem(Symmetry.ANTISYMMETRIC, anti, n, options));
     }
 
-    /** The influence matrix alone (for tests and benchmarks). */
+    /** The influence matrix alone (for tests and benchmarks), assembled on one thread. */
     public static DMatrixRMaj assemble(Lattice lattice, Symmetry symmetry) {
+        int n = symmetry == Symmetry.FULL ? lattice.panelCount() : lattice.halfCount();
+        return DMatrixRMaj.wrap(n, n, assemble(lattice, symmetry, 1));
+    }
+
+    /**
+     * The row-major influence matrix, its rows split between up to {@code threads} threads (the matrix does
+     * not depend on how many).
+     */
+    static double[] assemble(Lattice lattice, Symmetry symmetry, int threads) {
         if (symmetry != Symmetry.FULL && !lattice.mirrored()) {
             throw new IllegalArgumentException("a " + symmetry + " system needs a mirrored lattice");
         }
         int n = symmetry == Symmetry.FULL ? lattice.panelCount() : lattice.halfCount();
         int half = lattice.halfCount();
-        double sign = symmetry == Symmetry.ANTISYMMETRIC ? -1 : 1;
-        DMatrixRMaj a = new DMatrixRMaj(n, n);
-        double[] row = new double[lattice.panelCount()];
-        double[] trailing = new double[lattice.trailingPointCount()];
-        for (int i = 0; i < n; i++) {
-            influenceRow(lattice, i, row, trailing);
-            for (int j = 0; j < n; j++) {
-                a.data[i * n + j] = symmetry == Symmetry.FULL ? row[j] : row[j] + sign * row[j + half];
-            }
+        double[] a = new double[n * n];
+        InfluenceRows rows = new InfluenceRows(lattice);
+        if (symmetry == Symmetry.FULL) {
+            rows.build(n, threads, (i, row) -> System.arraycopy(row, 0, a, i * n, n));
+        } else {
+            double sign = symmetry == Symmetry.ANTISYMMETRIC ? -1 : 1;
+            rows.build(n, threads, (i, row) -> {
+                for (int j = 0; j < n; j++) {
+                    a[i * n + j] = row[j] + sign * row[j + half];
+                }
+            });
         }
         return a;
-    }
-
-    /**
-     * Writes into {@code row} (length panel count, overwritten) the normalwash at control point i of every
-     * horseshoe at unit circulation; {@code trailing} (length trailing-point count) is work space. Each
-     * shared trailing leg is evaluated once.
-     */
-    static void influenceRow(Lattice lattice, int i, double[] row, double[] trailing) {
-        double px = lattice.cx(i);
-        double py = lattice.cy(i);
-        double pz = lattice.cz(i);
-        double nx = lattice.nx(i);
-        double ny = lattice.ny(i);
-        double nz = lattice.nz(i);
-        double[] v = new double[3];
-        for (int k = 0; k < trailing.length; k++) {
-            v[0] = 0;
-            v[1] = 0;
-            v[2] = 0;
-            HorseshoeKernel.trailing(lattice.trailingX(k), lattice.trailingY(k), lattice.trailingZ(k), px, py, pz,
-                    lattice.trailingCutoff(k), lattice.trailingCoreSquared(k), 1, v);
-            trailing[k] = v[1] * ny + v[2] * nz;
-        }
-        for (int j = 0; j < row.length; j++) {
-            v[0] = 0;
-            v[1] = 0;
-            v[2] = 0;
-            HorseshoeKernel.segment(lattice.ax(j), lattice.ay(j), lattice.az(j), lattice.bx(j), lattice.by(j),
-                    lattice.bz(j), px, py, pz, lattice.cutoff(j), v);
-            row[j] = v[0] * nx + v[1] * ny + v[2] * nz + trailing[lattice.trailingPointB(j)]
-                    - trailing[lattice.trailingPointA(j)];
-        }
     }
 
     public Symmetry symmetry() {
@@ -145,12 +125,10 @@ public final class InfluenceSystem {
 
     /**
      * Solves A x = b. Writes the solution into {@code x} (length {@link #size()}, overwritten);
-     * {@code b} is not modified.
+     * {@code b} is not modified and must not be {@code x}.
      */
-    public synchronized void solve(double[] b, double[] x) {
-        System.arraycopy(b, 0, rhs.data, 0, size);
-        solver.solve(rhs, solution);
-        System.arraycopy(solution.data, 0, x, 0, size);
+    public void solve(double[] b, double[] x) {
+        lu.solve(b, x);
         for (int i = 0; i < size; i++) {
             if (!Double.isFinite(x[i])) {
                 throw new SingularSystemException("the influence system gave a non-finite circulation");

@@ -13,6 +13,7 @@ import java.util.function.Function;
 
 import org.spanlift.batch.CaseEvaluator;
 import org.spanlift.batch.CaseResult;
+import org.spanlift.solve.linear.LuOptions;
 import org.spanlift.sweep.Sweep;
 
 /**
@@ -44,8 +45,11 @@ public final class SweepRunner {
     public static Outcome run(Sweep sweep, long first, long end, int jobs, Function<CaseResult, String> format,
             BiConsumer<CaseResult, String> sink) {
         List<CaseEvaluator> evaluators = new CopyOnWriteArrayList<>();
+        // The jobs share the processors: each factorization gets its share, so the jobs never oversubscribe
+        // them (results do not depend on the thread count).
+        LuOptions lu = LuOptions.DEFAULT.withThreads(Math.max(1, LuOptions.DEFAULT.threads() / jobs));
         ThreadLocal<CaseEvaluator> local = ThreadLocal.withInitial(() -> {
-            CaseEvaluator e = new CaseEvaluator(sweep);
+            CaseEvaluator e = new CaseEvaluator(sweep, lu);
             evaluators.add(e);
             return e;
         });
