@@ -89,6 +89,7 @@ class ErrorReportingTest {
     }
 
     @ParameterizedTest(name = "{0} {1}")
+    // CHECKSTYLE.OFF: LineLength
     @CsvSource(delimiter = '|', value = {
         "--speed       | 1e160m/s  | --speed: a speed must be from 0.1 m/s to 1000 m/s",
         "--true-speed  | 1e-300kt  | --true-speed: a speed must be from 0.1 m/s to 1000 m/s",
@@ -100,6 +101,7 @@ class ErrorReportingTest {
         "--load-factor | 2d        | --load-factor: expected a decimal number",
         "--load-factor | 1e-99999  | --load-factor: expected a decimal number (such as 1.25 or 3e-2) with an exponent of at most 3 digits",
     })
+    // CHECKSTYLE.ON: LineLength
     void flightValuesOutsideTheirRangeAreRefusedUnderTheirOption(String option, String value, String fragment) {
         Map<String, String> options = new LinkedHashMap<>(Map.of("--weight", "750kg", "--speed", "102kt",
                 "--load-factor", "3.8"));

@@ -34,6 +34,7 @@ class HelpTest {
 
     /** The help of --format lists what the command writes, and a format outside that list is refused. */
     @ParameterizedTest(name = "{0}")
+    // CHECKSTYLE.OFF: LineLength
     @CsvSource(delimiter = '|', value = {
         "solve    | Output format: table, json, csv. Default: from the output file's extension, else table. | html  | W",
         "stall    | Output format: table, json. Default: from the output file's extension, else table.      | csv   | W",
@@ -43,6 +44,7 @@ class HelpTest {
         "compare  | Output format: table, json, csv, html. Default: from the output file's extension, else table. | png | W W",
         "validate | Output format: table, json. Default: from the output file's extension, else table.      | csv   | --case 2d-lift-slope",
     })
+    // CHECKSTYLE.ON: LineLength
     void formatHelpListsOnlyTheCommandsFormats(String command, String help, String refused, String rest) {
         CommandLine.Model.OptionSpec option = SpanliftCommand.commandLine().getSubcommands().get(command)
                 .getCommandSpec().findOption("--format");

@@ -32,12 +32,14 @@ class CaseEvaluatorTest {
     @TempDir
     Path dir;
 
+    // CHECKSTYLE.OFF: LineLength
     private static final String COLUMNS = """
             columns: [lift_slope_per_rad, zero_lift_angle_deg, e@CL=0.5, CDi@CL=0.5, alpha_deg@CL=0.5, CL@alpha=4,
               C_roll@alpha=4, stall.CL, stall.eta, stall.alpha_deg, stall.aileron_margin.dcl, stall.half_span_CL,
               stall_flaps.CL, stall_flaps.beside_control_end.control, flap_increment_CL, stall_speed.clean_eas, stall_speed.flaps_tas,
               controls.aileron.from_eta]
             """;
+    // CHECKSTYLE.ON: LineLength
 
     private Sweep sweep(String parameters) {
         SweepFixtures.write(dir, "w.wing.yaml", SweepFixtures.WING);

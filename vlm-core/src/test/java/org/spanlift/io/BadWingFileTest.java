@@ -30,6 +30,7 @@ class BadWingFileTest {
 
     private static final Path BAD = Path.of("src", "test", "resources", "bad-wings");
 
+    // CHECKSTYLE.OFF: LineLength
     /** file | line | field path (empty: the fault is in the YAML itself) | fragment of the message. */
     private static final String TABLE = """
             missing-units                | 2  | units                                  | missing key; expected the length unit of the file: m, ft or in
@@ -206,6 +207,7 @@ class BadWingFileTest {
             thrust-line-unknown-key                 | 5  | thrust-line.angle                      | unknown key; expected one of height
             flap-cl-max-disagrees-with-flap-curve   | 9  | sections.main.flap-cl-max              | gives an increment of 0.5 at 20 degrees, but the flap curve at 20 degrees (line 11) reaches 1.7, 0.3 above the clean curve's 1.4; expected the two within 0.02
             """;
+    // CHECKSTYLE.ON: LineLength
 
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', quoteCharacter = '`', textBlock = TABLE)

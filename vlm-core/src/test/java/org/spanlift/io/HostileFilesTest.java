@@ -34,6 +34,7 @@ class HostileFilesTest {
     private static final List<String> FOLDERS = List.of("bad-cases", "bad-envelopes", "bad-sweeps", "bad-coordinates",
             "bad-lift-curves");
 
+    // CHECKSTYLE.OFF: LineLength
     /**
      * folder/file | the file the message names (empty: the file itself) | line | field | fragment of the message.
      */
@@ -130,6 +131,7 @@ class HostileFilesTest {
             bad-lift-curves/utf16-without-bom.csv |                                    | 1  |                     | a NUL character on this line: the file holds binary data or UTF-16 text without a byte-order mark; expected a CSV file of a section lift curve saved as UTF-8
             bad-lift-curves/wrong-count.csv       |                                    | 3  |                     | 3 values on the line; expected 2, one per column of the header (line 1)
             """;
+    // CHECKSTYLE.ON: LineLength
 
     private static void read(String folder, Path path) {
         switch (folder) {

@@ -267,6 +267,7 @@ class DerivedParametersTest {
     }
 
     @ParameterizedTest(name = "[{index}] {2}")
+    // CHECKSTYLE.OFF: LineLength
     @CsvSource(delimiter = '|', quoteCharacter = '`', textBlock = """
             `surfaces.wing.trapezoid.root-chord: 2 * area / (span * (1 + taper))` | `surfaces.wing.trapezoid.taper: 2 * area / span` | 7 | derived.surfaces.wing.trapezoid.taper | this value is also swept (parameters.surfaces.wing.trapezoid.taper); a value is either swept or derived
             `surfaces.wing.trapezoid.root-chord: 2 * area / (span * (1 + taper))` | `surfaces[0].trapezoid.taper: 0.5` | 7 | derived.surfaces[0].trapezoid.taper | this value is also swept (parameters.surfaces.wing.trapezoid.taper)
@@ -283,6 +284,7 @@ class DerivedParametersTest {
             `span: surfaces.wing.trapezoid.span` | `span: sections.main.camber` | 4 | names.span | the base file's value at sections.main.camber is 'NACA 4415', not a plain number
             `span: surfaces.wing.trapezoid.span` | `span: surfaces.wing.trapezoid.spam` | 4 | names.span | unknown key 'spam'
             """)
+    // CHECKSTYLE.ON: LineLength
     void aFaultTheFileAloneDecidesIsRefusedUpFrontWithItsLineAndField(String from, String to, int line, String field,
             String fragment) {
         InputException e = refused(OK.replace(from, to));

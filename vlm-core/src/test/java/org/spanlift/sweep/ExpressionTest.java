@@ -84,6 +84,7 @@ class ExpressionTest {
     }
 
     @ParameterizedTest(name = "[{index}] {0}")
+    // CHECKSTYLE.OFF: LineLength
     @CsvSource(delimiter = '|', quoteCharacter = '`', textBlock = """
             2 * (3 + 4                 | 11 | the expression ends too soon; expected ')' to close the '(' of character 5
             2 + * 3                    | 5  | unexpected '*'; expected a number, a name, '(' or '-'
@@ -104,6 +105,7 @@ class ExpressionTest {
             ``                         | 1  | the expression ends too soon; expected a number, a name, '(' or '-'
             area +                     | 7  | the expression ends too soon
             """)
+    // CHECKSTYLE.ON: LineLength
     void aParseErrorNamesTheCharacterWhereItIs(String text, int position, String fragment) {
         Expression.ExpressionException e = parseFailure(text);
         assertEquals(position, e.position(), e.getMessage());
@@ -138,6 +140,7 @@ class ExpressionTest {
     }
 
     @ParameterizedTest(name = "{0}")
+    // CHECKSTYLE.OFF: LineLength
     @CsvSource(delimiter = '|', textBlock = """
             2 * area / (span - 10)  | 10 | division by zero (30 / 0)
             sqrt(taper - 1)         | 1  | the square root of a negative number (sqrt(-0.5))
@@ -148,6 +151,7 @@ class ExpressionTest {
             (taper - 1) ^ 0.5       | 13 | a negative number to a power that is not whole (-0.5 ^ 0.5) is not a real number
             (span - 10) ^ -1        | 13 | zero to a negative power (0 ^ -1) is a division by zero
             """)
+    // CHECKSTYLE.ON: LineLength
     void anEvaluationErrorNamesTheOperatorOrFunctionWhereTheValueStopsBeingFinite(String text, int position,
             String fragment) {
         Expression.ExpressionException e = evaluationFailure(text, VALUES);
