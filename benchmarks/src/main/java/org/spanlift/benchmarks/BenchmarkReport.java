@@ -83,7 +83,8 @@ public final class BenchmarkReport {
             if (sec.containsKey("cpuNanos") && sec.containsKey("calls") && sec.get("calls").getScore() > 0) {
                 cpu = sec.get("cpuNanos").getScore() / sec.get("calls").getScore() * 1e-9;
             }
-            double alloc = sec.containsKey("gc.alloc.rate.norm") ? sec.get("gc.alloc.rate.norm").getScore() : Double.NaN;
+            double alloc = sec.containsKey("gc.alloc.rate.norm") ? sec.get("gc.alloc.rate.norm").getScore()
+                    : Double.NaN;
             String n = "";
             for (String key : List.of("unknowns", "lattice", "jobs")) {
                 if (r.getParams().getParamsKeys().contains(key)) {
@@ -117,17 +118,19 @@ public final class BenchmarkReport {
             return;
         }
         String[] sr = lattice.split("x");
-        out.append(String.format(Locale.ROOT, "Trainer wing, %s per half (%d unknowns per system), 9 alphas with coefficients%n",
+        out.append(String.format(Locale.ROOT, "Trainer wing, %s per half (%d unknowns per system), 9 alphas with "
+                + "coefficients%n",
                 lattice.replace("x", " x "), Integer.parseInt(sr[0]) * Integer.parseInt(sr[1])));
-        out.append(String.format(Locale.ROOT, "  %-34s %12s %10s %10s %12s %9s%n", "benchmark", "wall ms", "+-", "cpu ms",
-                "alloc kB", "cpu share"));
+        out.append(String.format(Locale.ROOT, "  %-34s %12s %10s %10s %12s %9s%n", "benchmark", "wall ms", "+-",
+                "cpu ms", "alloc kB", "cpu share"));
         double total = sweep.map(Row::cpu).orElse(Double.NaN);
         for (Optional<Row> o : List.of(sweep, analysis, solves)) {
             o.ifPresent(r -> out.append(String.format(Locale.ROOT, "  %-34s %s %s %s %s %s%%%n",
                     label(r.name()), num(r.wall() * 1e3, 3, 12), num(r.wallError() * 1e3, 3, 10),
                     num(r.cpu() * 1e3, 3, 10), num(r.allocated() / 1024, 1, 12), num(100 * r.cpu() / total, 0, 8))));
         }
-        sweep.ifPresent(r -> out.append(String.format(Locale.ROOT, "  target: under 5 ms warm -> %s (wall %.2f ms, cpu %.2f ms)%n",
+        sweep.ifPresent(r -> out.append(String.format(Locale.ROOT, "  target: under 5 ms warm -> %s (wall %.2f ms, cpu "
+                + "%.2f ms)%n",
                 r.wall() < 5e-3 ? "met" : (r.cpu() < 5e-3 ? "met on CPU time, not on wall time" : "NOT met"),
                 r.wall() * 1e3, r.cpu() * 1e3)));
         out.append('\n');
@@ -151,9 +154,12 @@ public final class BenchmarkReport {
         if (bySize.isEmpty()) {
             return;
         }
-        out.append("Symmetric half-span system (trapezoid wing): assembly, LU by each implementation, the whole system\n");
-        out.append("  LU: ms wall and GFLOP/s = (2/3 n^3) / wall time; tiled 1 and 2 = the engine's LU on one and two threads\n");
-        out.append("  (bit-identical to EJML's); system = InfluenceSystem.of (assembly + LU) with the tiled LU, 1 and 2 threads\n");
+        out.append("Symmetric half-span system (trapezoid wing): assembly, LU by each implementation, the whole "
+                + "system\n");
+        out.append("  LU: ms wall and GFLOP/s = (2/3 n^3) / wall time; tiled 1 and 2 = the engine's LU on one and two "
+                + "threads\n");
+        out.append("  (bit-identical to EJML's); system = InfluenceSystem.of (assembly + LU) with the tiled LU, 1 and "
+                + "2 threads\n");
         out.append(String.format(Locale.ROOT, "  %5s | %-19s | %-14s | %-14s | %-14s | %-6s %-6s | %-17s%n", "n",
                 "assembly ms wall/cpu", "EJML LU", "tiled LU 1 thr", "tiled LU 2 thr", "EJML/", "EJML/",
                 "system ms 1 / 2"));
@@ -179,7 +185,8 @@ public final class BenchmarkReport {
         if (one.isEmpty() && two.isEmpty()) {
             return;
         }
-        out.append("Planform sweep, default lattice 32 x 8 (benchmarks/planform.sweep.yaml, 429 cases, each a new geometry),\n");
+        out.append("Planform sweep, default lattice 32 x 8 (benchmarks/planform.sweep.yaml, 429 cases, each a new "
+                + "geometry),\n");
         out.append("  steady (warm JVM), through the sweep command's runner\n");
         for (Optional<Row> o : List.of(one, two)) {
             o.ifPresent(r -> out.append(String.format(Locale.ROOT, "  --jobs %s: %8.1f ms per sweep, %6.0f cases/s%n",

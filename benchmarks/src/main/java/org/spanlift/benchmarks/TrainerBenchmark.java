@@ -24,8 +24,8 @@ import org.spanlift.solve.WingAnalysis;
 
 /**
  * The demo trainer wing at 24 strips x 6 rows per half (144 unknowns in each of the symmetric and
- * antisymmetric systems) and at the default lattice, 32 x 8 (256 unknowns; {@code lattice} sets it), solved over the nine angles of attack of
- * {@code spanlift solve}'s
+ * antisymmetric systems) and at the default lattice, 32 x 8 (256 unknowns; {@code lattice} sets it), solved over the
+ * nine angles of attack of {@code spanlift solve}'s
  * default list (-4 to 12 degrees in steps of 2), coefficients included. The file is read once, in setup.
  *
  * <ul>

@@ -361,14 +361,16 @@ public final class BalanceCommand implements Callable<Integer>, OffersFormats {
         }
         BalanceStudy first = studies.get(0);
         String basis = first.stallClean().map(x -> x.basis() == Balance.StallBasis.MAX_LIFT
-                ? "the maximum lift of the section lift curves" : "the linear stall onset, which errs safe").orElse("-");
+                ? "the maximum lift of the section lift curves" : "the linear stall onset, which errs safe")
+                .orElse("-");
         StringBuilder b = new StringBuilder("Trimmed stall, power off, at " + basis + ":\n").append(t.render());
         for (String p : problems) {
             b.append(TextTable.wrap("  " + p)).append('\n');
         }
         if (first.forwardLimit().isPresent()) {
             double x = first.forwardLimit().getAsDouble();
-            b.append(String.format(Locale.ROOT, "Forward limit of the centre of gravity (elevator at its up stop at the "
+            b.append(String.format(Locale.ROOT, "Forward limit of the centre of gravity (elevator at its up stop "
+                    + "at the "
                     + "stall%s): x %s, %.1f%% of the MAC%n", first.flaps().isPresent() ? " with flaps" : "",
                     length(x, u), 100 * first.clean().macFraction(x)));
         } else if (first.stallProblem().isEmpty()) {

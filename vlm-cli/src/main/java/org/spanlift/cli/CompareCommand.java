@@ -64,7 +64,8 @@ import picocli.CommandLine.Model.CommandSpec;
 public final class CompareCommand implements Callable<Integer>, OffersFormats {
 
     /** The formats this command writes. */
-    static final Set<Format> FORMATS = Collections.unmodifiableSet(EnumSet.of(Format.TABLE, Format.JSON, Format.CSV, Format.HTML));
+    static final Set<Format> FORMATS = Collections.unmodifiableSet(EnumSet.of(Format.TABLE, Format.JSON, Format.CSV,
+            Format.HTML));
 
     private static final int MAX_WINGS = 12;
 

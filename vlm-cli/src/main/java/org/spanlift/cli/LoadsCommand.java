@@ -101,7 +101,8 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
 
 
 
-    @Parameters(index = "0", paramLabel = "FILE", description = "The wing file (.wing.yaml), with its structure section.")
+    @Parameters(index = "0", paramLabel = "FILE", description = "The wing file (.wing.yaml), with its structure "
+            + "section.")
     Path file;
 
     @Option(names = "--cases", paramLabel = "FILE", description = "A cases file (.cases.yaml): load cases, each with "
@@ -254,7 +255,8 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
             if (beyondStall(i, results) && !beyondStallAllowed) {
                 SpanwiseLoads l = results.get(i);
                 throw new InputException(caseSource(), 0, l.loadCase().name(), String.format(Locale.ROOT,
-                        "the case needs a wing CL of %.3f, above the wing's stall-onset CL %.3f at its Reynolds number: "
+                        "the case needs a wing CL of %.3f, above the wing's stall-onset CL %.3f at its "
+                                + "Reynolds number: "
                                 + "it cannot be flown at that speed; lower the load factor or raise the speed, or give "
                                 + "--beyond-stall to compute it anyway (flagged)", l.liftCoefficient(),
                         onsets.get(i).getAsDouble()));
@@ -272,7 +274,8 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
 
     private String factorNote() {
         return safetyFactor == null ? "limit loads: no safety factor applied"
-                : String.format(Locale.ROOT, "ultimate loads: limit loads times the safety factor %.2f (--safety-factor)",
+                : String.format(Locale.ROOT, "ultimate loads: limit loads times the safety factor %.2f "
+                        + "(--safety-factor)",
                         safetyFactor);
     }
 
@@ -306,8 +309,9 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         root.put("caution", Cautions.LOADS);
         root.put("load_factor_definition", DEFINITION);
         root.put("longitudinal_axis_deg", Math.toDegrees(loads.axisAngle()));
-        root.put("longitudinal_axis", loads.structure().longitudinalAxis().isPresent() ? "given in the structure section"
-                : "the wing's root chord line");
+        root.put("longitudinal_axis",
+                loads.structure().longitudinalAxis().isPresent() ? "given in the structure section"
+                        : "the wing's root chord line");
         root.put("tail", NO_TAIL);
         root.put("stall_check", stallNote == null ? STALL_CHECK : stallNote);
         root.put("safety_factor", safetyFactor);
@@ -344,7 +348,8 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
             m.put("load_factor", c.loadFactor());
             m.put("speed", c.equivalentSpeed());
             m.put("altitude", c.altitude());
-            Results.put(m, Vocabulary.select(Vocabulary.LOADS, "dynamic_pressure", "CN", "CL", "CD", "CC", "alpha_deg"), l);
+            Results.put(m, Vocabulary.select(Vocabulary.LOADS, "dynamic_pressure", "CN", "CL", "CD", "CC", "alpha_deg"),
+                    l);
             int index = results.indexOf(l);
             m.put("stall_onset_CL", onsets.get(index).isPresent() ? (Object) onsets.get(index).getAsDouble() : null);
             m.put("beyond_stall", onsets.get(index).isPresent() ? (Object) beyondStall(index, results) : null);
@@ -410,7 +415,8 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
             double[] chordShear = l.chordShear();
             double[] chordBending = l.chordBending();
             for (int k = 0; k < l.stations(); k++) {
-                c.row(i, l.loadCase().name(), l.side().name().toLowerCase(Locale.ROOT), l.loadCase().loadFactor(), l.loadCase().equivalentSpeed(), y[k],
+                c.row(i, l.loadCase().name(), l.side().name().toLowerCase(Locale.ROOT), l.loadCase().loadFactor(),
+                        l.loadCase().equivalentSpeed(), y[k],
                         shear[k], bending[k], torsion[k], chordShear[k], chordBending[k], factorNote(), caution);
             }
         }
@@ -426,18 +432,21 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         WingStructure st = loads.structure();
         StringBuilder b = new StringBuilder(wing.name()).append('\n');
         b.append("  spanwise loads of the right half-wing; ").append(factorNote()).append('\n');
-        b.append(String.format(Locale.ROOT, "  spar line at %.0f%% chord; half-wing mass %.2f %s (distributed %.2f %s, %s, "
+        b.append(String.format(Locale.ROOT, "  spar line at %.0f%% chord; half-wing mass %.2f %s (distributed "
+                + "%.2f %s, %s, "
                 + "centre at %.0f%% chord", 100 * st.sparFraction(), du.mass(loads.halfWingMass()), m,
                 du.mass(loads.distributedHalfMass()), m, st.table().isPresent() ? "mass table" : "by chord",
                 100 * st.massCentreFraction()));
         for (PointMass p : st.pointMasses()) {
-            b.append(String.format(Locale.ROOT, "; %s %.2f %s at y %.3f %s", p.name(), du.mass(p.mass()), m, p.y() / k, u));
+            b.append(String.format(Locale.ROOT, "; %s %.2f %s at y %.3f %s", p.name(), du.mass(p.mass()), m, p.y() / k,
+                    u));
         }
         b.append(")\n");
         if (!st.hasMass()) {
             b.append("  NOTE: no wing mass given: no inertia relief (larger loads in magnitude).\n");
         }
-        b.append("  signs: shear up +, bending up-bending +, torsion nose-up + (about the spar line; see the README)\n\n");
+        b.append("  signs: shear up +, bending up-bending +, torsion nose-up + (about the spar line; see the "
+                + "README)\n\n");
         List<ResultKey<SpanwiseLoads>> keys = Vocabulary.select(Vocabulary.LOADS, "CN", "CL", "alpha_deg", "root.shear",
                 "root.bending", "root.torsion");
         List<String> header = new ArrayList<>(List.of("#", "case", "n", "EAS [kt]"));
@@ -459,7 +468,8 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         }
         b.append(cases.render());
         if (anyBeyond) {
-            b.append("  * beyond the stall onset: computed because --beyond-stall was given; the wing cannot fly that case.\n");
+            b.append("  * beyond the stall onset: computed because --beyond-stall was given; the wing cannot fly that "
+                    + "case.\n");
         }
         b.append('\n');
         b.append("  governing case at each station: value (case #)\n");
@@ -487,7 +497,8 @@ public final class LoadsCommand implements Callable<Integer>, OffersFormats {
         b.append(t.render());
         if (envelope != null) {
             b.append('\n').append(TextTable.wrap("Gust load factors: " + GUST_FORMULA + "; a = "
-                    + String.format(Locale.ROOT, "%.3f", loads.liftCurve().slope()) + " per rad (the wing's own unless the "
+                    + String.format(Locale.ROOT, "%.3f", loads.liftCurve().slope())
+                    + " per rad (the wing's own unless the "
                     + "envelope file gives lift-slope), c = S/b. " + ENVELOPE_NOTE)).append('\n');
         }
         b.append('\n').append(TextTable.wrap(stallNote == null ? STALL_CHECK : stallNote)).append('\n');

@@ -75,11 +75,13 @@ public final class MergeCommand implements Callable<Integer> {
             Manifest m = Manifest.read(real(f));
             if (m == null) {
                 throw new InputException(f.toString(), 0, "", "has no sweep manifest beside it ("
-                        + Manifest.pathFor(real(f)).getFileName() + "); merge joins the outputs of spanlift sweep --shard");
+                        + Manifest.pathFor(real(f)).getFileName() + "); merge joins the outputs of spanlift sweep "
+                        + "--shard");
             }
             if (RowFormat.of(f.getFileName().toString()) != format
                     || !m.get("format").equals(format.name().toLowerCase(Locale.ROOT))) {
-                throw new InputException(f.toString(), 0, "", "is not in the output's format (" + format.extension() + ")");
+                throw new InputException(f.toString(), 0, "", "is not in the output's format (" + format.extension()
+                        + ")");
             }
             parts.add(new Part(f, m, m.number("first_case"), m.number("end_case")));
         }
@@ -87,7 +89,8 @@ public final class MergeCommand implements Callable<Integer> {
         int count = parts.get(0).manifest().shard().count();
         for (Part p : parts) {
             if (!p.manifest().whole().sameRun(whole) || p.manifest().shard().count() != count) {
-                throw new InputException(p.file().toString(), 0, "", "belongs to another sweep or another division into "
+                throw new InputException(p.file().toString(), 0, "", "belongs to another sweep or another "
+                        + "division into "
                         + "shards than " + parts.get(0).file());
             }
         }
@@ -135,7 +138,8 @@ public final class MergeCommand implements Callable<Integer> {
         }
         Ranker.Tally counts = tally.tally();
         var err = spec.commandLine().getErr();
-        err.println("merge: " + counts.cases() + " cases from " + parts.size() + " file" + (parts.size() == 1 ? "" : "s")
+        err.println("merge: " + counts.cases() + " cases from " + parts.size() + " file"
+                + (parts.size() == 1 ? "" : "s")
                 + ", " + counts.failed() + " failed; results in " + output + " (case order)");
         if (ranked != null) {
             err.println("  ranked summary in " + ranked + ": best " + counts.ranked().size() + " by " + by);
@@ -175,7 +179,8 @@ public final class MergeCommand implements Callable<Integer> {
                 String record;
                 while ((record = r.next()) != null) {
                     if (expected >= p.end()) {
-                        throw new InputException(shown, r.line(), "", "holds more rows than its shard's cases " + p.first()
+                        throw new InputException(shown, r.line(), "", "holds more rows than its shard's cases "
+                                + p.first()
                                 + " to " + (p.end() - 1) + "; " + advice);
                     }
                     tally.add(check.check(record, r.line(), expected), record, shown, r.line());
@@ -187,7 +192,8 @@ public final class MergeCommand implements Callable<Integer> {
                 throw new InputException(shown, r.line(), "", "the file is not UTF-8 text; " + advice);
             }
             if (r.partial() || expected != p.end()) {
-                throw new InputException(shown, r.partial() ? r.line() : 0, "", "is unfinished: it has cases " + p.first()
+                throw new InputException(shown, r.partial() ? r.line() : 0, "", "is unfinished: it has cases "
+                        + p.first()
                         + " to " + (expected - 1) + " of " + p.first() + " to " + (p.end() - 1)
                         + (r.partial() ? " and an incomplete last row" : "") + "; finish it with spanlift sweep "
                         + "--resume --shard " + p.manifest().get("shard"));

@@ -69,7 +69,8 @@ public final class PlotCommand implements Callable<Integer>, OffersFormats {
 
     @Option(names = {"-a", "--alpha"}, paramLabel = "DEG",
             description = "span-load: the angle of attack in degrees (default: the angle where CL = 0.5). lift and "
-                    + "polar: the angles, a list 0,2,4 or a range from:to:step (default " + AlphaList.DEFAULT_CURVE + ").")
+                    + "polar: the angles, a list 0,2,4 or a range from:to:step (default " + AlphaList.DEFAULT_CURVE
+                    + ").")
     String alpha;
 
     @Mixin

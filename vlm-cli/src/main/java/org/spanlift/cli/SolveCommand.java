@@ -76,7 +76,8 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
     Path file;
 
     @Option(names = {"-a", "--alpha"}, paramLabel = "LIST", defaultValue = "-4:12:2",
-            description = "Angles of attack in degrees: a list 0,2,4 or a range from:to:step. Default: ${DEFAULT-VALUE}.")
+            description = "Angles of attack in degrees: a list 0,2,4 or a range from:to:step. Default: "
+                    + "${DEFAULT-VALUE}.")
     String alpha;
 
     @Option(names = "--cl", paramLabel = "LIST", split = ",",
@@ -187,7 +188,8 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
     @Override
     public Integer call() {
         Format format = output.format(FORMATS);
-        OutputTarget spanLoadTarget = output.check(InputFiles.wing(file), OutputOptions.also("--span-load", spanLoadFile))
+        OutputTarget spanLoadTarget = output.check(InputFiles.wing(file),
+                OutputOptions.also("--span-load", spanLoadFile))
                 .get("--span-load");
         units.check(format);
         if (!spec.commandLine().getParseResult().hasMatchedOption("--weight")) {
@@ -335,7 +337,8 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         Map<String, Object> d = new LinkedHashMap<>();
         List<ControlSurface> controls = wing.controls();
         for (int i = 0; i < controls.size(); i++) {
-            d.put(controls.get(i).name(), Math.toDegrees(points.isEmpty() ? fileDeflections[i] : points.get(0).deflection(i)));
+            d.put(controls.get(i).name(),
+                    Math.toDegrees(points.isEmpty() ? fileDeflections[i] : points.get(0).deflection(i)));
         }
         return d;
     }
@@ -407,7 +410,8 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
         Reference r = wing.reference();
         StringBuilder b = new StringBuilder();
         b.append(wing.name()).append('\n');
-        b.append(String.format(Locale.ROOT, "  reference    area %.3f %s^2, span %.3f %s, chord %.3f %s, aspect ratio %.3f%n",
+        b.append(String.format(Locale.ROOT, "  reference    area %.3f %s^2, span %.3f %s, chord %.3f %s, aspect ratio "
+                + "%.3f%n",
                 r.area() / (k * k), u, r.span() / k, u, r.chord() / k, u, r.aspectRatio()));
         b.append(String.format(Locale.ROOT, "  moments about (%.3f, %.3f, %.3f) %s%n",
                 r.momentPoint().x() / k, r.momentPoint().y() / k, r.momentPoint().z() / k, u));
@@ -427,7 +431,8 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
                 double deg = Math.toDegrees(shown != null ? shown[i] : points.get(0).deflection(i));
                 d.add(controls.get(i).name() + " " + TextTable.fixed(deg, 1) + " deg");
             }
-            b.append("  controls     ").append(String.join(", ", d)).append(" (trailing edge down; aileron: right side)\n");
+            b.append("  controls     ").append(String.join(", ", d)).append(" (trailing edge down; aileron: right "
+                    + "side)\n");
         }
         level.ifPresent(l -> b.append(String.format(Locale.ROOT,
                 "  flight       weight %s, n = %.2f, %s EAS (%s TAS) at %s pressure altitude:%n"
@@ -462,9 +467,11 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
                     + "its section peak there. \"past peak\" is the share of the span past its section peak; "
                     + "\"CL linear\" is linear theory's CL.", m.synthetic() ? "some built from cl-max, synthetic"
                             : "measured", wing.surfaces().size() > 1 ? "wing CL (the wing's own lift; the other "
-                                    + "surfaces stay linear)" : "CL", m.lift(), Math.toDegrees(m.alpha()), m.peak() ? "where the lift rounds over"
-                            : "where the lift breaks off or the traced curve ends (" + m.end().name().toLowerCase(Locale.ROOT)
-                                    .replace('_', '-') + ")", 100 * m.stalledSpanFraction()))).append("\n\n");
+                                    + "surfaces stay linear)" : "CL", m.lift(), Math.toDegrees(m.alpha()),
+                    m.peak() ? "where the lift rounds over"
+                            : "where the lift breaks off or the traced curve ends ("
+                                    + m.end().name().toLowerCase(Locale.ROOT).replace('_', '-') + ")",
+                    100 * m.stalledSpanFraction()))).append("\n\n");
         }
         b.append(t.render());
         if (several) {
@@ -476,7 +483,8 @@ public final class SolveCommand implements Callable<Integer>, OffersFormats {
                                 .map(a -> TextTable.fixed(a, 1)).collect(java.util.stream.Collectors.joining(", ")))))
                 .append('\n'));
         if (several) {
-            b.append("\n  CL, CDi and Cm are the whole configuration's; \"each surface\" gives every surface's share on the\n"
+            b.append("\n  CL, CDi and Cm are the whole configuration's; \"each surface\" gives every surface's share "
+                    + "on the\n"
                     + "  reference area and chord (the shares add up to the whole).\n");
         }
         b.append("\n  e is shown only where |CL| >= 0.05. CDi from the Trefftz plane. Cm positive nose-up; C_roll\n"

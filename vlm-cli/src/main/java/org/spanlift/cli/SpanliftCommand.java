@@ -103,7 +103,9 @@ public final class SpanliftCommand implements Runnable {
         return internalError(e, err, "spanlift: ");
     }
 
-    /** As {@link #internalError(Throwable, PrintWriter)}, the line starting with {@code prefix} ({@code "program: "}). */
+    /**
+     * As {@link #internalError(Throwable, PrintWriter)}, the line starting with {@code prefix} ({@code "program: "}).
+     */
     public static int internalError(Throwable e, PrintWriter err, String prefix) {
         if (e instanceof OutOfMemoryError) {
             err.println(InputException.oneLine(prefix + "internal error: ran out of memory" + (e.getMessage() == null

@@ -52,7 +52,9 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
 
-/** {@code spanlift stall}: where and at what lift the wing starts to stall, clean and with flaps, and the stall speeds. */
+/**
+ * {@code spanlift stall}: where and at what lift the wing starts to stall, clean and with flaps, and the stall speeds.
+ */
 @Command(name = "stall", mixinStandardHelpOptions = true,
         description = "Stall onset by the critical-section method: station, CL, aileron margin, spread; stall speeds.")
 public final class StallCommand implements Callable<Integer>, OffersFormats {
@@ -172,8 +174,10 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
                 one.put("chord_fraction", v.chordFraction());
                 one.put("deflection_deg", Math.toDegrees(v.deflection()));
                 one.put("tau", v.tau());
-                one.put("effectiveness_ratio", v.effectivenessRatio().isPresent() ? v.effectivenessRatio().getAsDouble() : null);
-                one.put("large_deflection_factor", v.largeDeflection().isPresent() ? v.largeDeflection().getAsDouble() : null);
+                one.put("effectiveness_ratio", v.effectivenessRatio().isPresent() ? v.effectivenessRatio().getAsDouble()
+                        : null);
+                one.put("large_deflection_factor", v.largeDeflection().isPresent() ? v.largeDeflection().getAsDouble()
+                        : null);
                 one.put("section_lift_increment", v.liftIncrement());
                 one.put("section_cl_max_increment", v.clMaxIncrement());
                 one.put("within_handbook_data", v.covered());
@@ -280,7 +284,8 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         }
         double fuselage = wing.main().fuselageHalfWidth();
         if (fuselage > 0) {
-            b.append(String.format(Locale.ROOT, "  stations inside the fuselage (|y| < %.3f %s) are not stall candidates%n",
+            b.append(String.format(Locale.ROOT, "  stations inside the fuselage (|y| < %.3f %s) are not stall "
+                    + "candidates%n",
                     fuselage / k, u));
         }
         study.condition().ifPresent(fc -> {
@@ -307,10 +312,13 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
             t.row(cells(Results.label(key, unit), configs, c -> Results.cell(key, c.estimate(), unit)));
         }
         if (study.condition().isPresent()) {
-            t.row(cells("onset stall speed EAS [kt]", configs, c -> TextTable.fixed(Airspeed.knots(c.speed().orElseThrow().equivalent()), 1)));
-            t.row(cells("onset stall speed TAS [kt]", configs, c -> TextTable.fixed(Airspeed.knots(c.speed().orElseThrow().trueSpeed()), 1)));
+            t.row(cells("onset stall speed EAS [kt]", configs,
+                    c -> TextTable.fixed(Airspeed.knots(c.speed().orElseThrow().equivalent()), 1)));
+            t.row(cells("onset stall speed TAS [kt]", configs,
+                    c -> TextTable.fixed(Airspeed.knots(c.speed().orElseThrow().trueSpeed()), 1)));
             if (!unit.us()) {
-                t.row(cells("onset stall speed EAS [m/s]", configs, c -> TextTable.fixed(c.speed().orElseThrow().equivalent(), 2)));
+                t.row(cells("onset stall speed EAS [m/s]", configs,
+                        c -> TextTable.fixed(c.speed().orElseThrow().equivalent(), 2)));
             }
         }
         t.row(cells("", configs, c -> ""));
@@ -348,20 +356,23 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
                                     + "ends, before the lift has fallen; the maximum shown is the highest found "
                                     + "(extend the section's lift curve to higher angles)";
                             case DEEP_STALL -> "the traced lift curve ends where a station is 10 degrees past its "
-                                    + "section peak, before the lift has fallen; the maximum shown is the highest found";
+                                    + "section peak, before the lift has fallen; the maximum shown is the highest "
+                                    + "found";
                             default -> "the lift breaks off at the maximum: a station stalls abruptly there (a "
                                     + "fold of the coupled solution)";
                         }))).append('\n');
             }
             m.multipleSolutions().ifPresent(r -> b.append(TextTable.wrap(String.format(Locale.ROOT,
                     "NOTE (%s, maximum lift): two or more coupled solutions exist from alpha %.2f to %.2f deg (more or "
-                            + "less of the span stalled): the lift there depends on the way the angle was reached.", c.label(),
+                            + "less of the span stalled): the lift there depends on the way the angle was reached.",
+                            c.label(),
                     Math.toDegrees(r[0]), Math.toDegrees(r[1])))).append('\n'));
         }
         study.flapIncrement().ifPresent(inc -> b.append(String.format(Locale.ROOT,
                 "%n  flaps raise the stall-onset CL by %.3f%n", inc)));
         for (Configuration c : configs) {
-            c.estimate().besideControlEnd().ifPresent(end -> b.append('\n').append(TextTable.wrap(String.format(Locale.ROOT,
+            c.estimate().besideControlEnd().ifPresent(end -> b.append('\n')
+                    .append(TextTable.wrap(String.format(Locale.ROOT,
                     "NOTE (%s): stall starts beside the end of the %s at y = %.3f %s. Linear theory concentrates a "
                             + "deflected control's lift in a peak at its ends, narrower than the chord, so this "
                             + "onset depends on the lattice (finer strips resolve more of the peak and lower it) and "
@@ -375,9 +386,10 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
         }
         for (Configuration c : configs) {
             for (FlapLift.Values v : FlapLift.values(wing, c.deflections())) {
-                b.append('\n').append(TextTable.wrap(String.format(Locale.ROOT, "NOTE (%s): %s, %.0f%% chord at %.1f deg: "
-                        + "%s; section lift %+.3f, cl_max %+.3f. Both the onset and the maximum lift use it.", c.label(),
-                        v.control(), 100 * v.chordFraction(), Math.toDegrees(v.deflection()), v.covered()
+                b.append('\n').append(TextTable.wrap(String.format(Locale.ROOT,
+                        "NOTE (%s): %s, %.0f%% chord at %.1f deg: "
+                                + "%s; section lift %+.3f, cl_max %+.3f. Both the onset and the maximum lift use it.",
+                        c.label(), v.control(), 100 * v.chordFraction(), Math.toDegrees(v.deflection()), v.covered()
                                 ? String.format(Locale.ROOT, "the handbook plain-flap lift, effectiveness ratio %.3f x "
                                         + "K' %.3f = %.3f of the thin-airfoil lift 2 pi tau delta, tau %.3f (%s)",
                                         v.effectivenessRatio().getAsDouble(), v.largeDeflection().getAsDouble(),
@@ -397,7 +409,8 @@ public final class StallCommand implements Callable<Integer>, OffersFormats {
             b.append("\n  NOTE: some sections give no cl-max; an assumed value was used (--assume-cl-max).\n");
         }
         if (study.flaps().isPresent() && study.flaps().get().estimate().defaultFlapIncrement()) {
-            b.append("  NOTE: flapped stations use the handbook default plain-flap cl_max increment (no flap-cl-max table).\n");
+            b.append("  NOTE: flapped stations use the handbook default plain-flap cl_max increment (no flap-cl-max "
+                    + "table).\n");
         }
         if (study.condition().isEmpty()) {
             b.append("\n  No --weight given: no stall speeds; cl-max tables read at their lowest Reynolds number.\n");

@@ -142,7 +142,8 @@ public final class SweepCommand implements Callable<Integer> {
         Ranker.Tally counts = tally.tally();
         summary(err, sweep, counts.cases(), counts.failed(), started, threads, ranked, counts);
         if (ranking != null && !slice.whole()) {
-            err.println("  shard " + slice + " of the cases; join the shards with spanlift merge for the ranked summary");
+            err.println("  shard " + slice + " of the cases; join the shards with spanlift merge for the ranked "
+                    + "summary");
         }
         err.flush();
         return counts.failed() > 0 ? SpanliftCommand.EXIT_FAILED_CASES : 0;

@@ -109,7 +109,8 @@ public final class ValidateCommand implements Callable<Integer>, OffersFormats {
     }
 
     private static String lattice(LatticeSpec l) {
-        return l.strips() + "x" + l.rows() + " " + spacing(l.stripSpacing().name()) + "/" + spacing(l.rowSpacing().name());
+        return l.strips() + "x" + l.rows() + " " + spacing(l.stripSpacing().name()) + "/"
+                + spacing(l.rowSpacing().name());
     }
 
     private static String spacing(String name) {

@@ -169,7 +169,8 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
                     spec.commandLine().getOut());
             case SVG, PNG -> FigureOutput.write(Plots.washoutTrade(wing.name(), result, requirements, cruiseCl,
                     FigureContext.of(wing, deflections, condition)), format, output, spec.commandLine().getOut());
-            default -> output.write(table(wing, requirements, result, cruiseCl, leastDrag), spec.commandLine().getOut());
+            default -> output.write(table(wing, requirements, result, cruiseCl, leastDrag),
+                    spec.commandLine().getOut());
         }
         return 0;
     }
@@ -261,13 +262,15 @@ public final class WashoutCommand implements Callable<Integer>, OffersFormats {
                                 ? String.format(Locale.ROOT, ", stall speed %.1f kt EAS (onset)",
                                         Airspeed.knots(at.stallSpeed().getAsDouble())) : ""));
         b.append(String.format(Locale.ROOT, "  cruise at CL %.2f: e %s, CDi %.5f (without washout: e %s, CDi %.5f)%n%n",
-                cruiseCl, WashoutOutput.e(at.cruiseE()), at.cruiseDrag(), WashoutOutput.e(r.unwashed().cruiseE()), r.unwashed().cruiseDrag()));
+                cruiseCl, WashoutOutput.e(at.cruiseE()), at.cruiseDrag(), WashoutOutput.e(r.unwashed().cruiseE()),
+                r.unwashed().cruiseDrag()));
         double[] tw = leastDrag.twist();
         b.setLength(b.length() - 1);
         b.append(TextTable.wrap(String.format(Locale.ROOT, "For comparison, the twist of least induced drag at CL %.2f "
                 + "(no stall requirement; the elliptic load, Munk): e %s, CDi %.5f, %.2f deg from root to tip (not "
                 + "linear; JSON least_drag_twist gives it strip by strip).", cruiseCl,
-                WashoutOutput.e(leastDrag.solution().coefficients().spanEfficiency()), leastDrag.solution().coefficients().inducedDrag(),
+                WashoutOutput.e(leastDrag.solution().coefficients().spanEfficiency()),
+                leastDrag.solution().coefficients().inducedDrag(),
                 Math.toDegrees(tw[0] - tw[tw.length - 1])))).append("\n\n");
         TextTable t = new TextTable(List.of("washout [deg]", "onset CL", "onset eta", "aileron margin",
                 "Vs onset [kt]", "cruise e", "cruise CDi", "meets"));

@@ -29,7 +29,8 @@ class CommandIndependenceTest {
         for (JavaClass command : CLI.that(SUBCOMMAND)) {
             noClasses().that().haveFullyQualifiedName(command.getName())
                     .should().dependOnClassesThat(SUBCOMMAND.and(DescribedPredicate.describe("another one",
-                            c -> !c.getName().equals(command.getName()) && !c.getName().startsWith(command.getName() + "$"))))
+                            c -> !c.getName().equals(command.getName())
+                            && !c.getName().startsWith(command.getName() + "$"))))
                     .check(CLI);
         }
     }

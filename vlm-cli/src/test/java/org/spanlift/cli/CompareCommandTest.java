@@ -68,7 +68,8 @@ class CompareCommandTest {
                 "lift_slope_per_rad", "zero_lift_angle_deg", "alpha_deg@CL=0.6", "e@CL=0.6", "CDi@CL=0.6"};
             for (int k = 0; k < keys.length; k++) {
                 double got = Double.parseDouble(rows.get(keys[k])[i]);
-                assertEquals(expected[k], got, 1e-8 * Math.max(1, Math.abs(expected[k])), keys[k] + " of " + WINGS.get(i));
+                assertEquals(expected[k], got, 1e-8 * Math.max(1, Math.abs(expected[k])), keys[k] + " of "
+                        + WINGS.get(i));
                 if (i == 0) {
                     base[k] = expected[k];
                 } else {

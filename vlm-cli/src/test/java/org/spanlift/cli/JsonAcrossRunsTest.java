@@ -51,7 +51,8 @@ class JsonAcrossRunsTest {
                 SpanliftCommand.class.getName()));
         args.addAll(command);
         args.addAll(List.of("--output", out.toString()));
-        Process p = new ProcessBuilder(args).redirectErrorStream(true).redirectOutput(dir.resolve(tag + ".log").toFile())
+        Process p = new ProcessBuilder(args).redirectErrorStream(true)
+                .redirectOutput(dir.resolve(tag + ".log").toFile())
                 .start();
         assertEquals(0, p.waitFor(), () -> command + ": " + read(dir.resolve(tag + ".log")));
         return Files.readAllBytes(out);

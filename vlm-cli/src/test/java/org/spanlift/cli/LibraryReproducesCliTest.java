@@ -58,8 +58,10 @@ class LibraryReproducesCliTest {
                 OptionalDouble.empty());
         StallStudy study = StallStudy.of(analysis, analysis.deflections(Map.of("flap", Math.toRadians(30))),
                 OptionalDouble.empty(), Optional.of(condition));
-        assertEquals(study.clean().speed().orElseThrow().equivalent(), number(printed, "stall_speed", -1, "clean_eas"), 0);
-        assertEquals(study.clean().speed().orElseThrow().trueSpeed(), number(printed, "stall_speed", -1, "clean_tas"), 0);
+        assertEquals(study.clean().speed().orElseThrow().equivalent(), number(printed, "stall_speed", -1, "clean_eas"),
+                0);
+        assertEquals(study.clean().speed().orElseThrow().trueSpeed(), number(printed, "stall_speed", -1, "clean_tas"),
+                0);
         assertEquals(study.flaps().orElseThrow().speed().orElseThrow().equivalent(),
                 number(printed, "stall_speed", -1, "flaps_eas"), 0);
         assertEquals(study.flaps().orElseThrow().estimate().lift(), number(printed, "stall_flaps", -1, "CL"), 0);

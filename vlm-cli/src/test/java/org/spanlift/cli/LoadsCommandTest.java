@@ -63,9 +63,10 @@ class LoadsCommandTest {
     @Test
     void safetyFactorMultipliesAndSaysSo() throws IOException {
         String wing = trainerWithStructure();
-        CliRun limit = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "110kt", "-f", "csv");
-        CliRun ult = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "110kt", "-f", "csv",
-                "--safety-factor", "1.5");
+        CliRun limit = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "110kt", "-f",
+                "csv");
+        CliRun ult = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "110kt", "-f",
+                "csv", "--safety-factor", "1.5");
         assertEquals(0, ult.exitCode(), ult.err());
         // the CSV is data from its first line: the caution and the factor are columns of every row
         assertTrue(ult.out().startsWith("case,name,"), ult.out().lines().findFirst().orElse(""));
@@ -82,7 +83,8 @@ class LoadsCommandTest {
         CliRun r = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "1", "--speed", "80kt", "-f", "json",
                 "--wing-mass", "0kg");
         assertEquals(0, r.exitCode(), r.err());
-        assertTrue(r.out().contains("\"distributed_mass_per_half\": 0"), r.out().lines().filter(l -> l.contains("distributed"))
+        assertTrue(r.out().contains("\"distributed_mass_per_half\": 0"),
+                r.out().lines().filter(l -> l.contains("distributed"))
                 .findFirst().orElse(""));
     }
 
@@ -117,7 +119,8 @@ class LoadsCommandTest {
         String wing = CliRun.demo("trainer.wing.yaml");
         CliRun refused = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "95kt");
         assertEquals(2, refused.exitCode(), refused.out());
-        assertTrue(refused.err().contains("above the wing's stall-onset CL") && refused.err().contains("--beyond-stall"),
+        assertTrue(refused.err().contains("above the wing's stall-onset CL")
+                && refused.err().contains("--beyond-stall"),
                 refused.err());
         assertEquals(1, refused.err().lines().count(), refused.err());
         CliRun flagged = CliRun.of("loads", wing, "--weight", "750kg", "--load-factor", "3.8", "--speed", "95kt",

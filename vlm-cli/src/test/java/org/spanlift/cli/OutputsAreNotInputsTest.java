@@ -99,8 +99,8 @@ class OutputsAreNotInputsTest {
     void twoOutputsOfOneRunMustBeTwoFiles() {
         String wing = CliRun.demo("rectangular.wing.yaml");
         Path points = dir.resolve("o.csv");
-        refused(CliRun.of("solve", wing, "--output", points.toString(), "--span-load", points.toString()), "--span-load",
-                points);
+        refused(CliRun.of("solve", wing, "--output", points.toString(), "--span-load", points.toString()),
+                "--span-load", points);
         Path same = dir.resolve(".").resolve("o.csv");
         refused(CliRun.of("solve", wing, "--output", points.toString(), "--span-load", same.toString()), "--span-load",
                 same);
@@ -121,7 +121,8 @@ class OutputsAreNotInputsTest {
         Path manifest = Files.createSymbolicLink(dir.resolve("r.csv.manifest.json"), base);
         CliRun r = Runs.of("sweep", sweep.toString(), "--output", results.toString());
         assertEquals(2, r.exitCode(), r.err());
-        assertTrue(r.err().startsWith("spanlift: the manifest of --output: " + manifest + " is the input file"), r.err());
+        assertTrue(r.err().startsWith("spanlift: the manifest of --output: " + manifest + " is the input file"),
+                r.err());
         unchanged(sweep, s);
         unchanged(base, b);
         assertFalse(Files.exists(results));

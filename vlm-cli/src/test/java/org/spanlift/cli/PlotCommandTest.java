@@ -136,7 +136,8 @@ class PlotCommandTest {
     @Test
     void stallMapShadesTheDeflectedFlapsOnly() throws Exception {
         String fill = "fill:" + rgb(Palette.FLAP_FILL);
-        assertTrue(Files.readString(plot("trainer.wing.yaml", PlotKind.STALL, "f.svg", "--flaps", "20")).contains(fill));
+        assertTrue(Files.readString(plot("trainer.wing.yaml", PlotKind.STALL, "f.svg", "--flaps", "20"))
+                .contains(fill));
         assertFalse(Files.readString(plot("trainer.wing.yaml", PlotKind.STALL, "c.svg")).contains(fill));
     }
 
@@ -161,7 +162,8 @@ class PlotCommandTest {
         Path pdf = dir.resolve("x.pdf");
         assertBad("plot", wing, "--what", "flutter", "--output", dir.resolve("x.svg").toString());
         // the tourer's section gives no cl-max: no stall map unless one is assumed
-        assertBad("plot", CliRun.demo("tourer.wing.yaml"), "--what", "stall", "--output", dir.resolve("w.svg").toString());
+        assertBad("plot", CliRun.demo("tourer.wing.yaml"), "--what", "stall", "--output",
+                dir.resolve("w.svg").toString());
         assertBad("plot", wing, "--what", "lift", "--output", pdf.toString());
         assertBad("plot", wing, "--what", "lift", "--format", "png", "--output", dir.resolve("x.svg").toString());
         assertBad("plot", wing, "--what", "lift", "--format", "png");

@@ -114,7 +114,8 @@ class ReportCommandTest {
         String weight = String.format(java.util.Locale.ROOT, "weight %.0f N", 750 * 9.80665);
         for (Element caption : captions) {
             String text = caption.getTextContent();
-            assertTrue(text.contains("Drawn for flap 20\u00b0 trailing edge down; " + weight + "; pressure altitude 0 m."),
+            assertTrue(text.contains("Drawn for flap 20\u00b0 trailing edge down; " + weight
+                    + "; pressure altitude 0 m."),
                     text);
         }
     }

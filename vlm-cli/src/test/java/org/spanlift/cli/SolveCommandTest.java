@@ -19,9 +19,9 @@ class SolveCommandTest {
         CliRun r = CliRun.of("solve", CliRun.demo("trainer.wing.yaml"), "--alpha", "0,4", "--format", "json");
         assertEquals(0, r.exitCode(), r.err());
         for (String key : List.of("\"name\"", "\"reference\"", "\"area\"", "\"span\"", "\"chord\"", "\"aspect_ratio\"",
-                "\"lattice\"", "\"panels\"", "\"lift_slope_per_rad\"", "\"zero_lift_angle_deg\"", "\"units\"", "\"points\"",
-                "\"alpha_deg\"", "\"CL\"", "\"CDi\"", "\"e\"", "\"Cm\"", "\"C_roll\"", "\"span_load\"", "\"y\"", "\"cl\"",
-                "\"cl_c\"", "\"circulation\"", "\"induced_angle_deg\"")) {
+                "\"lattice\"", "\"panels\"", "\"lift_slope_per_rad\"", "\"zero_lift_angle_deg\"", "\"units\"",
+                "\"points\"", "\"alpha_deg\"", "\"CL\"", "\"CDi\"", "\"e\"", "\"Cm\"", "\"C_roll\"", "\"span_load\"",
+                "\"y\"", "\"cl\"", "\"cl_c\"", "\"circulation\"", "\"induced_angle_deg\"")) {
             assertTrue(r.out().contains(key), "missing " + key);
         }
         assertTrue(r.out().contains("\"panels\": 512"), "2 halves x 32 strips x 8 rows (the default lattice)");
@@ -128,7 +128,8 @@ class SolveCommandTest {
     @Test
     void badWingFileExitsTwoWithOneLineAndNoOutputFile(@TempDir Path dir) throws IOException {
         Path bad = dir.resolve("bad.wing.yaml");
-        Files.writeString(bad, "name: x\nunits: m\nsurfaces:\n  - name: wing\n    trapezoid: {span: -9, root-chord: 1}\n");
+        Files.writeString(bad, "name: x\nunits: m\nsurfaces:\n  - name: wing\n    trapezoid: {span: -9, root-chord: "
+                + "1}\n");
         Path out = dir.resolve("out.json");
         CliRun r = CliRun.of("solve", bad.toString(), "--output", out.toString());
         assertEquals(2, r.exitCode());

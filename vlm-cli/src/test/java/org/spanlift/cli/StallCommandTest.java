@@ -19,10 +19,10 @@ class StallCommandTest {
         CliRun r = CliRun.of("stall", CliRun.demo("trainer.wing.yaml"), "--weight", "750kg", "--altitude", "1500m",
                 "--flaps", "20", "--format", "json");
         assertEquals(0, r.exitCode(), r.err());
-        for (String key : List.of("\"stall\"", "\"CL\"", "\"alpha_deg\"", "\"eta\"", "\"section\"", "\"aileron_margin\"",
-                "\"dcl\"", "\"stall_speed\"", "\"clean_eas\"", "\"clean_tas\"", "\"flaps_eas\"", "\"flaps_tas\"",
-                "\"atmosphere\"", "\"density\"", "\"temperature\"", "\"pressure\"", "\"reference\"", "\"area\"",
-                "\"caution\"", "\"stall_flaps\"", "\"half_span_CL\"")) {
+        for (String key : List.of("\"stall\"", "\"CL\"", "\"alpha_deg\"", "\"eta\"", "\"section\"",
+                "\"aileron_margin\"", "\"dcl\"", "\"stall_speed\"", "\"clean_eas\"", "\"clean_tas\"", "\"flaps_eas\"",
+                "\"flaps_tas\"", "\"atmosphere\"", "\"density\"", "\"temperature\"", "\"pressure\"", "\"reference\"",
+                "\"area\"", "\"caution\"", "\"stall_flaps\"", "\"half_span_CL\"")) {
             assertTrue(r.out().contains(key), "missing " + key);
         }
         assertFalse(r.out().contains("NaN"));
@@ -50,7 +50,8 @@ class StallCommandTest {
         assertTrue(json.out().contains("\"beside_control_end\": null"), "clean: none");
         assertTrue(json.out().contains("\"beside_control_end\": {\n      \"control\": \"flap\",\n      \"y\": 2.6,\n"
                 + "      \"first_on_control\": {\n        \"CL\": "), json.out());
-        assertTrue(table.out().replace("\n  ", " ").contains("On the flap itself the first station reaches cl_max at CL"),
+        assertTrue(table.out().replace("\n  ", " ").contains("On the flap itself the first station reaches cl_max at "
+                + "CL"),
                 table.out());
     }
 
@@ -98,7 +99,8 @@ class StallCommandTest {
         Files.writeString(dir.resolve("bad.dat"), "my section\n1.0 0.0\n0.5 zero\n");
         Path wing = dir.resolve("w.wing.yaml");
         Files.writeString(wing, String.join("\n", "units: m", "surfaces:", "  - name: wing", "    section: a",
-                "    trapezoid: {span: 9, root-chord: 1.2}", "sections:", "  a: {camber-file: bad.dat, cl-max: 1.4}", ""));
+                "    trapezoid: {span: 9, root-chord: 1.2}", "sections:", "  a: {camber-file: bad.dat, cl-max: 1.4}",
+                ""));
         CliRun r = CliRun.of("stall", wing.toString());
         assertEquals(2, r.exitCode());
         assertEquals(1, r.err().lines().count(), r.err());

@@ -50,7 +50,8 @@ class VersionTest {
         }
         Process git;
         try {
-            git = new ProcessBuilder("git", "rev-parse", "--short=12", "HEAD").redirectError(ProcessBuilder.Redirect.DISCARD)
+            git = new ProcessBuilder("git", "rev-parse", "--short=12", "HEAD")
+                    .redirectError(ProcessBuilder.Redirect.DISCARD)
                     .start();
         } catch (IOException noGit) {
             return Optional.empty();

@@ -37,7 +37,8 @@ public record CentreOfGravity(String text, OptionalDouble x, OptionalDouble macF
         if (lower.endsWith("%mac")) {
             String number = body.substring(0, body.length() - 4).strip();
             if (!Decimal.matches(number)) {
-                throw new QuantityFormatException("expected " + EXPECTED + ", got '" + shown(body) + "': the percentage "
+                throw new QuantityFormatException("expected " + EXPECTED + ", got '" + shown(body)
+                        + "': the percentage "
                         + "is not a decimal number");
             }
             double percent = Decimal.parse(number);

@@ -156,7 +156,8 @@ public final class CaseEvaluator {
         for (int c = 0; c < nc; c++) {
             asked[c] = controls.get(c).deflection();
             boolean flap = controls.get(c).kind() == ControlKind.FLAP;
-            flapped[c] = flap && sweep.flapsDeg().isPresent() ? Math.toRadians(sweep.flapsDeg().getAsDouble()) : asked[c];
+            flapped[c] = flap && sweep.flapsDeg().isPresent() ? Math.toRadians(sweep.flapsDeg().getAsDouble())
+                    : asked[c];
         }
         double[] clean = StallStudy.cleanDeflections(wing, asked);
         boolean flapCase = wantFlaps && StallStudy.anyFlapDeflected(wing, flapped);

@@ -110,7 +110,8 @@ public final class YamlParser {
                     + "; expected " + expected);
         }
         if (root.isEmpty()) {
-            throw new InputException(file, 1, "", (text.isBlank() ? "the file is empty" : "the file holds only comments")
+            throw new InputException(file, 1, "", (text.isBlank() ? "the file is empty"
+                    : "the file holds only comments")
                     + "; expected " + expected);
         }
         return convert(root.get(), file, "");

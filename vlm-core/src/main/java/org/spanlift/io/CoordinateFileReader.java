@@ -180,7 +180,8 @@ public final class CoordinateFileReader {
         }
         if (jump < 4 || n - jump < 4) {
             throw refuse(file, ln[jump < 4 ? 0 : jump],
-                    "a surface block of only " + Math.min(jump, n - jump) + " points", "at least 4 points per surface block");
+                    "a surface block of only " + Math.min(jump, n - jump) + " points",
+                    "at least 4 points per surface block");
         }
         // First block ordered trailing edge to leading edge, second leading edge to trailing edge.
         int[] first = range(0, jump, x[0] < x[jump - 1]);
@@ -380,7 +381,8 @@ public final class CoordinateFileReader {
     private static CubicSpline surface(Path file, int[] idx, double[] xn, double[] yn, int[] ln) {
         if (idx.length < 4) {
             throw refuse(file, ln[idx[idx.length - 1]],
-                    "a surface of only " + idx.length + " points from the leading edge", "at least 4 points per surface");
+                    "a surface of only " + idx.length + " points from the leading edge",
+                    "at least 4 points per surface");
         }
         double[] s = new double[idx.length];
         double[] v = new double[idx.length];

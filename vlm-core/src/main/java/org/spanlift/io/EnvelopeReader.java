@@ -64,7 +64,8 @@ public final class EnvelopeReader {
 
         Field lf = root.required("load-factors", "{positive, negative, negative-at-vd}");
         lf.allowOnly(FACTOR_KEYS);
-        double n1 = lf.required("positive", "the positive limit manoeuvring load factor").inRange(1, CasesReader.MAX_LOAD_FACTOR);
+        double n1 = lf.required("positive", "the positive limit manoeuvring load factor")
+                .inRange(1, CasesReader.MAX_LOAD_FACTOR);
         Field n2f = lf.required("negative", "the negative limit manoeuvring load factor (below 0)");
         double n2 = n2f.inRange(-CasesReader.MAX_LOAD_FACTOR, 0);
         if (!(n2 < 0)) {
@@ -88,7 +89,8 @@ public final class EnvelopeReader {
         if (!(vd > vc)) {
             throw vdf.error("VD must be above VC");
         }
-        OptionalDouble vb = sf.optional("vb").map(f -> OptionalDouble.of(Quantities.speed(f))).orElse(OptionalDouble.empty());
+        OptionalDouble vb = sf.optional("vb").map(f -> OptionalDouble.of(Quantities.speed(f)))
+                .orElse(OptionalDouble.empty());
 
         Field gf = root.required("gusts", "the derived gust velocities {vc, vd} (vb with a vb speed)");
         gf.allowOnly(GUST_KEYS);
@@ -101,7 +103,8 @@ public final class EnvelopeReader {
         if (vb.isPresent()) {
             ub = OptionalDouble.of(Quantities.speed(gf.required("vb", "")));
         }
-        OptionalDouble slope = root.optional("lift-slope").map(f -> OptionalDouble.of(f.inRange(0.5, 2 * Math.PI + 1e-9)))
+        OptionalDouble slope = root.optional("lift-slope")
+                .map(f -> OptionalDouble.of(f.inRange(0.5, 2 * Math.PI + 1e-9)))
                 .orElse(OptionalDouble.empty());
         OptionalDouble clMin = root.optional("cl-min").map(f -> {
             double c = f.inRange(-3, 0);

@@ -426,7 +426,8 @@ public final class SectionLiftCurveReader {
             }
             if (zero < 0) {
                 throw t.place().at(r, 0, "the curve" + at + " does not rise through zero lift below its maximum (no "
-                        + "angle below " + Field.brief(a[peak]) + " degrees has cl at or below 0 with cl above 0 at the "
+                        + "angle below " + Field.brief(a[peak]) + " degrees has cl at or below 0 with cl above 0 "
+                        + "at the "
                         + "next); expected the curve to start at or below zero lift, so that it holds its zero-lift "
                         + "angle");
             }

@@ -45,7 +45,8 @@ public final class SectionReader {
         if (f.has("camber") && f.has("camber-file")) {
             throw f.error("give either camber or camber-file, not both");
         }
-        CamberLine camber = f.optional("camber").map(SectionReader::camber).orElseGet(() -> f.optional("camber-file").<CamberLine>map(c -> {
+        CamberLine camber = f.optional("camber").map(SectionReader::camber)
+                .orElseGet(() -> f.optional("camber-file").<CamberLine>map(c -> {
             Path folder = wingFile.toAbsolutePath().getParent();
             Path coordinates;
             try {
@@ -87,7 +88,8 @@ public final class SectionReader {
         // A four-digit designation with camber but with its position digit 0 puts the highest camber at the
         // leading edge: not a defined mean line of that family.
         if (compact.matches("NACA[1-9]0\\d\\d")) {
-            throw c.error("the camber designation '" + Field.shown(text) + "' has camber but no camber position (its second "
+            throw c.error("the camber designation '" + Field.shown(text)
+                    + "' has camber but no camber position (its second "
                     + "digit is 0); expected a position digit from 1 to 9, or 00 for a symmetric section");
         }
         try {

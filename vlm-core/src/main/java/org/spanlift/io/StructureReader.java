@@ -133,7 +133,8 @@ public final class StructureReader {
                 points.add(new PointMass(name, m, x, y));
             }
         });
-        OptionalDouble axis = f.optional("longitudinal-axis").map(a -> OptionalDouble.of(Math.toRadians(a.inRange(-30, 30))))
+        OptionalDouble axis = f.optional("longitudinal-axis")
+                .map(a -> OptionalDouble.of(Math.toRadians(a.inRange(-30, 30))))
                 .orElse(OptionalDouble.empty());
         return new WingStructure(spar, centre, mass, table, points, axis);
     }

@@ -112,11 +112,13 @@ public final class SweepFileReader {
                     + "file, relative to the sweep file");
         }
         if (Files.exists(basePath) && !Files.isRegularFile(basePath)) {
-            throw baseField.error("'" + Field.shown(baseName) + "' is not a regular file (a folder or a device); expected the "
+            throw baseField.error("'" + Field.shown(baseName) + "' is not a regular file (a folder or a device); "
+                    + "expected the "
                     + "base wing file, relative to the sweep file");
         }
         if (!Files.isRegularFile(basePath)) {
-            throw baseField.error("no wing file '" + Field.shown(baseName) + "' beside the sweep file (in " + folder + ")");
+            throw baseField.error("no wing file '" + Field.shown(baseName) + "' beside the sweep file (in " + folder
+                    + ")");
         }
         String baseText = TextFile.read(basePath, "wing file");
         YamlValue baseTree = YamlParser.parse(baseText, basePath.toString());
@@ -502,7 +504,8 @@ public final class SweepFileReader {
             derived.add(new Derivation.Derived(derivedPaths.get(i), d.file(), d.line(), d.path(), e));
         }
         for (Parameter p : parameters) {
-            if (p.isVariable() && derived.stream().noneMatch(d -> d.expression().slots().contains(slots.get(p.key())))) {
+            if (p.isVariable()
+                    && derived.stream().noneMatch(d -> d.expression().slots().contains(slots.get(p.key())))) {
                 throw unusedVariable(root, p);
             }
         }
@@ -671,7 +674,8 @@ public final class SweepFileReader {
             if (d.isPresent() && d.get().value() instanceof YamlValue.Mapping) {
                 for (String k : List.of("cases", "seed")) {
                     if (d.get().has(k)) {
-                        throw d.get().required(k, "").error("a full grid takes no " + k + "; use kind: latin-hypercube");
+                        throw d.get().required(k, "").error("a full grid takes no " + k
+                                + "; use kind: latin-hypercube");
                     }
                 }
             }
@@ -784,7 +788,8 @@ public final class SweepFileReader {
             wing = baseWing;
         }
         try {
-            StripLimits.of(wing, LatticeBuilder.build(wing), new double[wing.controls().size()], OptionalDouble.empty());
+            StripLimits.of(wing, LatticeBuilder.build(wing), new double[wing.controls().size()],
+                    OptionalDouble.empty());
         } catch (MissingSectionDataException e) {
             throw at.error("stall columns need section cl-max data, and " + baseName + " gives none for section"
                     + (e.sections().size() > 1 ? "s " : " ") + String.join(", ", e.sections())

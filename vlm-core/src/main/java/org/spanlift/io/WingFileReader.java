@@ -251,7 +251,8 @@ public final class WingFileReader {
     private static String name(Field f, String what) {
         String name = f.text().trim();
         if (name.isEmpty() || name.contains("=") || name.contains(",")) {
-            throw f.error("'" + Field.shown(f.text()) + "' cannot name " + what + "; expected a name that is not blank and "
+            throw f.error("'" + Field.shown(f.text()) + "' cannot name " + what
+                    + "; expected a name that is not blank and "
                     + "holds neither '=' nor ','");
         }
         return name;
@@ -534,7 +535,8 @@ public final class WingFileReader {
         for (ControlSurface c : earlier) {
             if (from < c.to() - tol && to > c.from() + tol) {
                 throw fromField.error("the span from " + Field.format(from / k) + " to " + Field.format(to / k)
-                        + " overlaps control '" + Field.shown(c.name()) + "' (y from " + Field.format(c.from() / k) + " to "
+                        + " overlaps control '" + Field.shown(c.name()) + "' (y from " + Field.format(c.from() / k)
+                        + " to "
                         + Field.format(c.to() / k) + "); expected controls that do not overlap");
             }
         }
@@ -555,7 +557,8 @@ public final class WingFileReader {
                 }
             }
             if (!(v[0] < v[1])) {
-                throw l.error("is [" + Field.brief(v[0]) + ", " + Field.brief(v[1]) + "]; expected [least, greatest] in "
+                throw l.error("is [" + Field.brief(v[0]) + ", " + Field.brief(v[1])
+                        + "]; expected [least, greatest] in "
                         + "degrees, the least first");
             }
             double lo = Math.toRadians(v[0]);

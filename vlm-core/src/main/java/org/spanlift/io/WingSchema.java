@@ -32,7 +32,8 @@ public final class WingSchema {
                 "lattice", lattice), false);
         Node clMaxTable = YamlSchema.mapping(SectionReader.CL_MAX_TABLE_KEYS,
                 Map.of("reynolds", Node.NUMBERS, "values", Node.NUMBERS), true);
-        Node flap = YamlSchema.mapping(SectionReader.FLAP_KEYS, Map.of("deflection", Node.NUMBERS, "increment", Node.NUMBERS),
+        Node flap = YamlSchema.mapping(SectionReader.FLAP_KEYS,
+                Map.of("deflection", Node.NUMBERS, "increment", Node.NUMBERS),
                 false);
         Node polar = YamlSchema.mapping(SectionReader.POLAR_KEYS, Map.of("reynolds", Node.NUMBERS, "cl", Node.NUMBERS,
                 "cd", new Node(Kind.INDEXED_LIST, Map.of(), Node.NUMBERS, true)), false);

@@ -62,7 +62,8 @@ public final class Envelope {
         for (double w : spec.weights()) {
             String wt = String.format(Locale.ROOT, "%.0f N", w);
             double stallAtVa = maxNormal.isPresent()
-                    ? maxNormal.getAsDouble() * 0.5 * LoadCase.RHO0 * spec.va() * spec.va() * area / w : Double.POSITIVE_INFINITY;
+                    ? maxNormal.getAsDouble() * 0.5 * LoadCase.RHO0 * spec.va() * spec.va() * area / w
+                    : Double.POSITIVE_INFINITY;
             if (stallAtVa < spec.positive()) {
                 manoeuvre(out, "VA on the stall line", spec.va(), stallAtVa, w, h, wt);
                 double corner = Math.sqrt(2 * spec.positive() * w / (LoadCase.RHO0 * area * maxNormal.getAsDouble()));
@@ -72,7 +73,8 @@ public final class Envelope {
             }
             manoeuvre(out, "VD", spec.vd(), spec.positive(), w, h, wt);
             if (spec.minimumLift().isPresent()) {
-                double v = Math.sqrt(2 * -spec.negative() * w / (LoadCase.RHO0 * area * -spec.minimumLift().getAsDouble()));
+                double v = Math.sqrt(2 * -spec.negative() * w
+                        / (LoadCase.RHO0 * area * -spec.minimumLift().getAsDouble()));
                 if (v < spec.vc()) {
                     manoeuvre(out, "negative stall", v, spec.negative(), w, h, wt);
                 }
@@ -88,7 +90,8 @@ public final class Envelope {
         return out;
     }
 
-    private static void manoeuvre(List<Point> out, String speedName, double v, double n, double w, double h, String wt) {
+    private static void manoeuvre(List<Point> out, String speedName, double v, double n, double w, double h,
+            String wt) {
         String name = String.format(Locale.ROOT, "manoeuvre n %+.2f at %s, %s", n, speedName, wt);
         out.add(new Point(new LoadCase(name, w, n, v, h, "manoeuvre " + speedName), "manoeuvre", speedName,
                 Double.NaN, Double.NaN, Double.NaN));

@@ -231,7 +231,8 @@ public final class LoadsAnalysis {
             throw beyondRange(c, target);
         }
         Aero aero = aero(alpha, reynoldsPerMetre, deflections);
-        for (int k = 0; k < MAX_ITERATIONS && Math.abs(aero.normal(theta) - target) > 1e-13 * Math.max(1, Math.abs(target)); k++) {
+        for (int k = 0; k < MAX_ITERATIONS
+                && Math.abs(aero.normal(theta) - target) > 1e-13 * Math.max(1, Math.abs(target)); k++) {
             double h = 1e-6;
             double slope = (aero(alpha + h, reynoldsPerMetre, deflections).normal(theta)
                     - aero(alpha - h, reynoldsPerMetre, deflections).normal(theta)) / (2 * h);
@@ -309,7 +310,8 @@ public final class LoadsAnalysis {
         double a = alpha + theta;
         double cl = aero.lift();
         double cd = aero.drag();
-        return new SpanwiseLoads(c, alpha, cl, cd, cl * Math.cos(a) + cd * Math.sin(a), cd * Math.cos(a) - cl * Math.sin(a),
+        return new SpanwiseLoads(c, alpha, cl, cd, cl * Math.cos(a) + cd * Math.sin(a),
+                cd * Math.cos(a) - cl * Math.sin(a),
                 theta, q, edges, shear, bending, torsion, chordShear, chordBending, normalLoad, 1, side);
     }
 

@@ -45,7 +45,8 @@ public final class CamberLines {
             }
             if (d.length == 5) {
                 if (d[0] != 2) {
-                    throw refuse(s, "design lift digit " + d[0] + " (cl " + String.format(Locale.ROOT, "%.2f", 0.15 * d[0])
+                    throw refuse(s, "design lift digit " + d[0] + " (cl "
+                            + String.format(Locale.ROOT, "%.2f", 0.15 * d[0])
                             + ") is not provided, only 2 (cl 0.3)");
                 }
                 if (d[2] != 0) {

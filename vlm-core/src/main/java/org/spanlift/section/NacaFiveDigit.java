@@ -47,10 +47,12 @@ public final class NacaFiveDigit implements CamberLine {
     public NacaFiveDigit(int positionDigit, int thicknessDigits) {
         if (positionDigit < 1 || positionDigit > 5) {
             throw new IllegalArgumentException(
-                    "NACA five-digit mean line 2" + positionDigit + "0 is not provided: accepted are 210, 220, 230, 240, 250");
+                    "NACA five-digit mean line 2" + positionDigit + "0 is not provided: accepted are 210, 220, 230, "
+                    + "240, 250");
         }
         if (thicknessDigits < 1 || thicknessDigits > 99) {
-            throw new IllegalArgumentException("NACA five-digit thickness must be 01 to 99 per cent, got " + thicknessDigits);
+            throw new IllegalArgumentException("NACA five-digit thickness must be 01 to 99 per cent, got "
+                    + thicknessDigits);
         }
         this.positionDigit = positionDigit;
         this.thicknessDigits = thicknessDigits;

@@ -35,7 +35,8 @@ public final class NacaFourDigit implements CamberLine {
             throw new IllegalArgumentException("NACA four-digit camber digit must be 0 to 9, got " + camberDigit);
         }
         if (positionDigit < 0 || positionDigit > 9) {
-            throw new IllegalArgumentException("NACA four-digit camber-position digit must be 0 to 9, got " + positionDigit);
+            throw new IllegalArgumentException("NACA four-digit camber-position digit must be 0 to 9, got "
+                    + positionDigit);
         }
         if (camberDigit == 0 && positionDigit != 0) {
             throw new IllegalArgumentException(String.format(
@@ -44,10 +45,12 @@ public final class NacaFourDigit implements CamberLine {
         }
         if (camberDigit != 0 && positionDigit == 0) {
             throw new IllegalArgumentException(String.format(
-                    "NACA %d0%02d: a cambered section needs a camber-position digit 1 to 9", camberDigit, thicknessDigits));
+                    "NACA %d0%02d: a cambered section needs a camber-position digit 1 to 9", camberDigit,
+                    thicknessDigits));
         }
         if (thicknessDigits < 1 || thicknessDigits > 99) {
-            throw new IllegalArgumentException("NACA four-digit thickness must be 01 to 99 per cent, got " + thicknessDigits);
+            throw new IllegalArgumentException("NACA four-digit thickness must be 01 to 99 per cent, got "
+                    + thicknessDigits);
         }
         this.camberDigit = camberDigit;
         this.positionDigit = positionDigit;

@@ -83,7 +83,9 @@ public final class SectionCoordinates {
             return sb.toString();
         }
 
-        /** The file text as two blocks (upper, then lower, each from leading to trailing edge), a blank line between. */
+        /**
+         * The file text as two blocks (upper, then lower, each from leading to trailing edge), a blank line between.
+         */
         public String toTwoBlockText() {
             StringBuilder sb = new StringBuilder(name).append('\n');
             for (int i = stations; i >= 0; i--) {
@@ -118,7 +120,8 @@ public final class SectionCoordinates {
         } else if (line instanceof NacaFiveDigit five) {
             t = five.thickness();
         } else {
-            throw new IllegalArgumentException("section '" + designation + "' has no thickness; expected a NACA designation");
+            throw new IllegalArgumentException("section '" + designation
+                    + "' has no thickness; expected a NACA designation");
         }
         return build(line, t, stations, trailingEdge);
     }

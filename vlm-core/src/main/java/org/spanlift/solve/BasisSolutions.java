@@ -122,7 +122,8 @@ public final class BasisSolutions {
     /** Refuses a deflection of a control that was solved without its basis. */
     public void checkDeflections(double[] deflections) {
         if (deflections.length != controls.length) {
-            throw new IllegalArgumentException("expected " + controls.length + " deflections, got " + deflections.length);
+            throw new IllegalArgumentException("expected " + controls.length + " deflections, got "
+                    + deflections.length);
         }
         for (int k = 0; k < controls.length; k++) {
             if (deflections[k] != 0 && controls[k] == null) {

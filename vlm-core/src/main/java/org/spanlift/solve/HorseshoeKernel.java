@@ -10,9 +10,9 @@ package org.spanlift.solve;
  * from it, so a point on a vortex line never yields NaN.
  *
  * <p>Trailing legs have a Rankine core (W. J. M. Rankine, 1858; the Rankine vortex of vortex-dynamics texts,
- * e.g. Saffman, Vortex Dynamics, 1992, reference recalled from memory): at distance d from the leg (in the y-z plane) the swirl is the potential one,
- * (1 + cos) / (4 pi d) with cos = rx / r, for d &gt;= r_c, and solid-body rotation inside the core,
- * (1 + cos) d / (4 pi r_c^2) for d &lt; r_c, continuous at d = r_c. Outside the core the arithmetic is
+ * e.g. Saffman, Vortex Dynamics, 1992, reference recalled from memory): at distance d from the leg (in the y-z plane)
+ * the swirl is the potential one, (1 + cos) / (4 pi d) with cos = rx / r, for d &gt;= r_c, and solid-body rotation
+ * inside the core, (1 + cos) d / (4 pi r_c^2) for d &lt; r_c, continuous at d = r_c. Outside the core the arithmetic is
  * exactly that of the potential leg, so a point never inside a core sees bit-identical velocities. The
  * core radius is the lattice's ({@code Lattice.trailingCoreSquared}); the cut-off still applies first.
  */

@@ -158,7 +158,8 @@ public final class WingAnalysis {
             }
         }
         throw new IllegalArgumentException("no control named '" + name + "'; the wing has "
-                + (controls.isEmpty() ? "none" : String.join(", ", controls.stream().map(ControlSurface::name).toList())));
+                + (controls.isEmpty() ? "none" : String.join(", ", controls.stream().map(ControlSurface::name)
+                        .toList())));
     }
 
     /** The condition at angle of attack {@code alpha} (rad) with the file's deflections. */

@@ -72,7 +72,8 @@ public final class FlapLift {
                         f.liftIncrement(size), f.clMaxIncrement(size), true));
             } else {
                 out.add(new Values(cs.name(), cs.chordFraction(), deflections[c], tau, OptionalDouble.empty(),
-                        OptionalDouble.empty(), 2 * Math.PI * tau * size, StripLimits.defaultIncrement(cs.chordFraction(), size), false));
+                        OptionalDouble.empty(), 2 * Math.PI * tau * size,
+                        StripLimits.defaultIncrement(cs.chordFraction(), size), false));
             }
         }
         return out;

@@ -15,9 +15,9 @@ import org.spanlift.input.RefusedException;
  * <p>The solution curve of {@link SectionCoupling} is traced by pseudo-arclength continuation (Keller, 1977)
  * in the corrections and the angle of attack together, from the linear zero-lift angle (rounded down to a
  * whole degree): a secant predictor, then the corrector on the hyperplane normal to it, the arclength step
- * {@value #STEP_DEG} degree at most, halved on failure down to {@value #MIN_STEP}, grown after easy steps; where even that fails (a branch point,
- * where the corrector's system is singular) the trace leaps two or four longest steps ahead. A
- * strip that passes its section peak can make the curve fold: the angle of attack turns back, along an
+ * {@value #STEP_DEG} degree at most, halved on failure down to {@value #MIN_STEP}, grown after easy steps; where even
+ * that fails (a branch point, where the corrector's system is singular) the trace leaps two or four longest steps
+ * ahead. A strip that passes its section peak can make the curve fold: the angle of attack turns back, along an
  * unstable stretch, and turns forward again with that strip stalled. The trace follows it round. Folds show
  * as changes of sign of the Jacobian's determinant; points with the sign of the linear start are stable.
  *

@@ -44,9 +44,9 @@ import org.spanlift.solve.WingAnalysis;
  *                             equal to {@code lift} for a wing alone): the CL the stall speed rests on
  */
 public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.End end, double stalledSpanFraction,
-        Optional<FirstStall> firstStall, Optional<AileronState> aileron, boolean synthetic, boolean handbookFlap, boolean inviscidFlap,
-        Optional<double[]> multipleSolutions, List<StripState> strips, double beyondAlpha, List<CurvePoint> curve,
-        Optional<Speed> speed, double configurationLift) {
+        Optional<FirstStall> firstStall, Optional<AileronState> aileron, boolean synthetic, boolean handbookFlap,
+        boolean inviscidFlap, Optional<double[]> multipleSolutions, List<StripState> strips, double beyondAlpha,
+        List<CurvePoint> curve, Optional<Speed> speed, double configurationLift) {
 
     /** Relative change of the stall speed below which the Reynolds-number iteration stops. */
     public static final double SPEED_TOLERANCE = 1e-7;
@@ -153,11 +153,13 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
         List<CurvePoint> curve = new ArrayList<>();
         for (CoupledPoint p : branch.upward()) {
             Coefficients co = c.solution(p).coefficients();
-            curve.add(new CurvePoint(p.alpha(), p.lift(), co.inducedDrag(), co.pitchingMoment(), stalledFraction(c, p)));
+            curve.add(new CurvePoint(p.alpha(), p.lift(), co.inducedDrag(), co.pitchingMoment(),
+                    stalledFraction(c, p)));
         }
         return new MaximumLift(top.lift(), top.alpha(), branch.maximumIsPeak(), branch.end(),
-                stalledFraction(c, top), firstStall(c, branch, semi, wing.main().meanAerodynamicChord()), aileron(wing, c, top), c.curves().synthetic(),
-                c.curves().handbookFlap(), c.curves().inviscidFlap(), branch.multipleSolutions(), states, beyond.alpha(), curve, Optional.empty(),
+                stalledFraction(c, top), firstStall(c, branch, semi, wing.main().meanAerodynamicChord()),
+                aileron(wing, c, top), c.curves().synthetic(), c.curves().handbookFlap(), c.curves().inviscidFlap(),
+                branch.multipleSolutions(), states, beyond.alpha(), curve, Optional.empty(),
                 wing.surfaces().size() == 1 ? top.lift() : c.solution(top).coefficients().lift());
     }
 

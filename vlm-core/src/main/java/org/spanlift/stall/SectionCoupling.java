@@ -38,9 +38,9 @@ import org.spanlift.solve.WingAnalysis;
  *
  * <p>S is a spanwise smoothing of the corrections' departure from those of the straight-line problem (every
  * curve replaced by its straight part, a linear system; the d_j in S stand for that departure), a second
- * difference scaled by the local chord squared (h_i the strip's width, s = {@value #SMOOTHING}). Without it the coupled problem is ill-posed past a
- * section's peak: a strip's lift answers its own correction less the narrower the strip, so once one strip
- * passes its peak it can run away alone, the curve folds there and the maximum falls as the strips are
+ * difference scaled by the local chord squared (h_i the strip's width, s = {@value #SMOOTHING}). Without it the coupled
+ * problem is ill-posed past a section's peak: a strip's lift answers its own correction less the narrower the strip, so
+ * once one strip passes its peak it can run away alone, the curve folds there and the maximum falls as the strips are
  * refined. The smoothing ties each correction to its neighbours over about a chord, so a stalled region is
  * at least that wide whatever the strips; the maximum then converges with the strips
  * (validation/CONVERGENCE.md). While every strip is on the straight part of its curve it adds nothing (the

@@ -218,7 +218,8 @@ public final class StallAnalysis {
         return Optional.ofNullable(best);
     }
 
-    private static Optional<StallEstimate.AileronMargin> aileronMargin(Wing wing, List<StallEstimate.StripStall> strips) {
+    private static Optional<StallEstimate.AileronMargin> aileronMargin(Wing wing,
+            List<StallEstimate.StripStall> strips) {
         StallEstimate.AileronMargin best = null;
         for (ControlSurface c : wing.main().controls()) {
             if (c.kind() != ControlKind.AILERON) {

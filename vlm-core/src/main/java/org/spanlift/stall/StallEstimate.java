@@ -8,7 +8,8 @@ import org.spanlift.solve.LiftCurve;
 
 /**
  * Stall onset of the wing by the critical-section method in linear theory: the lowest CL at which some
- * strip of the wing (the first surface; other surfaces are never stall candidates) reaches its cl_max. Angles in radians, lengths in metres.
+ * strip of the wing (the first surface; other surfaces are never stall candidates) reaches its cl_max. Angles in
+ * radians, lengths in metres.
  *
  * @param lift                 CL at stall onset: the wing's, or where the wing file has other surfaces, the
  *                             configuration's (wing and other surfaces, untrimmed, at the deflections given);

@@ -53,8 +53,8 @@ public record Constraint(String text, String left, double leftValue, String op, 
         if (rv == null) {
             ResultColumn.parse(r, controls);
         }
-        return new Constraint(text.trim(), lv == null ? l : null, lv == null ? 0 : lv, m.group(2), rv == null ? r : null,
-                rv == null ? 0 : rv);
+        return new Constraint(text.trim(), lv == null ? l : null, lv == null ? 0 : lv, m.group(2),
+                rv == null ? r : null, rv == null ? 0 : rv);
     }
 
     private static Double number(String s) {

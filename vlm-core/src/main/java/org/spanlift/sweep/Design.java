@@ -118,7 +118,8 @@ public interface Design {
             String[] out = new String[parameters.size()];
             for (int p = 0; p < parameters.size(); p++) {
                 long stratum = permute(p, index);
-                double jitter = (mix(seed ^ mix(0x5157L + p) ^ mix(index * 0x9E3779B97F4A7C15L + 1)) >>> 11) * 0x1.0p-53;
+                double jitter = (mix(seed ^ mix(0x5157L + p) ^ mix(index * 0x9E3779B97F4A7C15L + 1)) >>> 11)
+                        * 0x1.0p-53;
                 out[p] = parameters.get(p).sample((stratum + jitter) / count);
             }
             return out;

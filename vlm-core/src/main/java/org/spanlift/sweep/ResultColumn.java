@@ -51,7 +51,8 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
     /** The flag column added when a sweep assumes cl-max for sections that give none. */
     public static final String ASSUMED_CL_MAX = "assumed_cl_max";
 
-    private static final Pattern POINT = Pattern.compile("(.+)@(CL|alpha)=([-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][-+]?\\d+)?)");
+    private static final Pattern POINT =
+            Pattern.compile("(.+)@(CL|alpha)=([-+]?(?:\\d+\\.?\\d*|\\.\\d+)(?:[eE][-+]?\\d+)?)");
     private static final Pattern CONTROL = Pattern.compile("controls\\.([^.]+)\\.([^.]+)");
 
     /** A bad column name. */
@@ -86,7 +87,8 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
             boolean atLift = p.group(2).equals("CL");
             double at = Double.parseDouble(p.group(3));
             if (!atLift && Math.abs(at) > 30) {
-                throw new ColumnException("angles of attack must lie within -30 to 30 degrees (linear theory), got " + at);
+                throw new ColumnException("angles of attack must lie within -30 to 30 degrees (linear theory), got "
+                        + at);
             }
             if (atLift && Math.abs(at) > 4) {
                 throw new ColumnException("a target CL must lie within -4 to 4, got " + at);
@@ -138,7 +140,8 @@ public record ResultColumn(String name, Group group, ResultKey<?> key, String co
         if (n.startsWith(Vocabulary.BALANCE_PREFIX)) {
             String rest = n.substring(Vocabulary.BALANCE_PREFIX.length());
             ResultKey<?> k = Vocabulary.lookup(Vocabulary.BALANCE, rest).orElseThrow(() -> new ColumnException(
-                    "unknown balance result '" + rest + "'; expected " + Vocabulary.BALANCE_PREFIX + " followed by one of "
+                    "unknown balance result '" + rest + "'; expected " + Vocabulary.BALANCE_PREFIX
+                            + " followed by one of "
                             + String.join(", ", Vocabulary.names(Vocabulary.BALANCE))));
             return new ResultColumn(n, Group.BALANCE, k, null, false, 0);
         }

@@ -36,8 +36,9 @@ import org.spanlift.structure.LoadCase;
  * @param fingerprint SHA-256 of the sweep file and the base wing file: a run's output belongs to it
  */
 public record Sweep(String file, String baseName, Path basePath, YamlValue baseTree, Wing baseWing,
-        List<Parameter> parameters, Derivation derivation, Design design, List<ResultColumn> columns, List<Constraint> constraints,
-        Optional<Ranking> ranking, Optional<FlightCondition> condition, OptionalDouble flapsDeg,
+        List<Parameter> parameters, Derivation derivation, Design design, List<ResultColumn> columns,
+        List<Constraint> constraints, Optional<Ranking> ranking, Optional<FlightCondition> condition,
+        OptionalDouble flapsDeg,
         OptionalDouble assumeClMax, Optional<LoadCase> loadCase, Optional<CentreOfGravity> centreOfGravity,
         String fingerprint) {
 

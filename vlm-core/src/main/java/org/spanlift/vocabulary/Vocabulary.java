@@ -250,9 +250,11 @@ public final class Vocabulary {
                     s -> s.flaps().map(f -> boxed(f.headlineTrue())).orElse(null)),
             key("stall_speed.basis", TEXT, "stall speed basis",
                     "the clean headline's: max-lift (every section gives a measured lift curve) or onset (the linear "
-                            + "onset, which errs safe)", 0, Set.of(Need.CL_MAX, Need.WEIGHT), s -> s.clean().speedBasis()),
+                            + "onset, which errs safe)", 0, Set.of(Need.CL_MAX, Need.WEIGHT),
+                            s -> s.clean().speedBasis()),
             key("stall_speed.flaps_basis", TEXT, "stall speed basis with flaps",
-                    "the flapped headline's basis, as stall_speed.basis", 0, Set.of(Need.CL_MAX, Need.FLAPS, Need.WEIGHT),
+                    "the flapped headline's basis, as stall_speed.basis", 0,
+                    Set.of(Need.CL_MAX, Need.FLAPS, Need.WEIGHT),
                     s -> s.flaps().map(f -> (Object) f.speedBasis()).orElse(null)),
             key("assumed_cl_max", FLAG, "cl_max assumed",
                     "true when some section's cl_max was assumed, clean or with flaps", 0, CL_MAX,

@@ -330,7 +330,8 @@ public final class TwistDesign {
                     : target - below <= above - target ? below : above;
             knots[j - 1] = j == count ? y1 : near;
             if (!(knots[j - 1] > (j == 1 ? y0 : knots[j - 2]))) {
-                throw new RefusedException(count + " twist stations need more strips: two fall on one strip edge of the "
+                throw new RefusedException(count + " twist stations need more strips: two fall on one strip "
+                        + "edge of the "
                         + (edges.size() - 1) + " strips of the half-wing");
             }
         }

@@ -125,7 +125,8 @@ public sealed interface WashoutRequirement {
      */
     static void check(Wing wing, WashoutRequirement r) {
         boolean ailerons = wing.main().controls().stream().anyMatch(c -> c.kind() == ControlKind.AILERON);
-        if (r instanceof OnsetInboard o && wing.main().controls().stream().noneMatch(c -> c.name().equals(o.control()))) {
+        if (r instanceof OnsetInboard o && wing.main().controls().stream()
+                .noneMatch(c -> c.name().equals(o.control()))) {
             throw new RefusedException("the wing has no control named '" + o.control() + "' on its first surface");
         }
         if (!(r instanceof OnsetInboard) && !ailerons) {

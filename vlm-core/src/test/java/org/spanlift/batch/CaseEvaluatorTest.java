@@ -43,7 +43,8 @@ class CaseEvaluatorTest {
 
     private Sweep sweep(String parameters) {
         SweepFixtures.write(dir, "w.wing.yaml", SweepFixtures.WING);
-        return SweepFileReader.read(SweepFixtures.write(dir, "s.sweep.yaml", "base: w.wing.yaml\nparameters:\n" + parameters
+        return SweepFileReader.read(SweepFixtures.write(dir, "s.sweep.yaml", "base: w.wing.yaml\nparameters:\n"
+                + parameters
                 + "flight: {weight: 9000N, altitude: 1500m, flaps: 25}\n" + COLUMNS), false);
     }
 
@@ -102,8 +103,10 @@ class CaseEvaluatorTest {
                     flaps[k] = Math.toRadians(25);
                 }
             }
-            StallSpeed sc = StallSpeed.of(a, clean, StripLimits.of(wing, a.lattice(), clean, OptionalDouble.empty()), fc);
-            StallSpeed sf = StallSpeed.of(a, flaps, StripLimits.of(wing, a.lattice(), flaps, OptionalDouble.empty()), fc);
+            StallSpeed sc = StallSpeed.of(a, clean, StripLimits.of(wing, a.lattice(), clean, OptionalDouble.empty()),
+                    fc);
+            StallSpeed sf = StallSpeed.of(a, flaps, StripLimits.of(wing, a.lattice(), flaps, OptionalDouble.empty()),
+                    fc);
             StallEstimate e = sc.estimate();
             assertEquals(e.lift(), value(s, r, "stall.CL"), 1e-12);
             assertEquals(e.eta(), value(s, r, "stall.eta"), 1e-12);

@@ -21,7 +21,8 @@ class TextFileTest {
     @Test
     void fileLargerThanTheLimitIsRefusedOnTheLineWhereTheLimitIsPassed(@TempDir Path dir) throws IOException {
         Path path = dir.resolve("long.wing.yaml");
-        byte[] line = "# a comment line of sixty-four characters, repeated to the end.\n".getBytes(StandardCharsets.UTF_8);
+        byte[] line = "# a comment line of sixty-four characters, repeated to the end.\n"
+                .getBytes(StandardCharsets.UTF_8);
         assertEquals(64, line.length);
         try (OutputStream out = Files.newOutputStream(path)) {
             for (int i = 0; i <= TextFile.MAX_BYTES / 64; i++) {
@@ -29,7 +30,8 @@ class TextFileTest {
             }
         }
         InputException e = assertThrows(InputException.class, () -> TextFile.read(path, "wing file"));
-        assertEquals(TextFile.MAX_BYTES / 64 + 1, e.line(), "the limit falls at the start of the line after 2^18 lines");
+        assertEquals(TextFile.MAX_BYTES / 64 + 1, e.line(), "the limit falls at the start of the line after 2^18 "
+                + "lines");
         assertEquals(path + ":" + e.line() + ": the file goes on past 16 MiB (the limit is reached on this line); "
                 + "expected a wing file of at most 16 MiB", e.getMessage());
     }

@@ -72,7 +72,8 @@ class LoadsInputTest {
 
     @Test
     void aPointMassOutsideTheSpanIsRefused() {
-        InputException e = badStructure("structure:\n  point-masses:\n    - {name: tank, mass: 40kg, y: 5.5, x: 0.5}\n");
+        InputException e = badStructure("structure:\n  point-masses:\n    - {name: tank, mass: 40kg, y: 5.5, x: "
+                + "0.5}\n");
         assertEquals("structure.point-masses[0].y", e.field());
         assertTrue(e.problem().contains("on the half-wing"), e.problem());
         assertThrows(InputException.class, () -> WingFileReader.parse(WING
@@ -98,7 +99,8 @@ class LoadsInputTest {
 
     @Test
     void readsCasesWithTheirUnits() {
-        List<LoadCase> cases = CasesReader.parse("cases:\n  - {name: a, weight: 1100kg, load-factor: 3.8, speed: 105kt}\n"
+        List<LoadCase> cases = CasesReader.parse("cases:\n  - {name: a, weight: 1100kg, load-factor: 3.8, speed: "
+                + "105kt}\n"
                 + "  - {weight: 2400lb, load-factor: -1.5, speed: 60m/s, altitude: 5000ft}\n", "c.cases.yaml");
         assertEquals(2, cases.size());
         assertEquals(1100 * StandardAtmosphere.G0, cases.get(0).weight(), 1e-9);

@@ -94,7 +94,8 @@ class SectionLiftCurveReaderTest {
     void withoutZeroLiftAngleTheSectionTakesTheCurvesSoTheLatticeCorrectionAgreesWithIt() throws IOException {
         // Zero lift between the points at -2 (cl -0.05) and 0 (0.15): at -1.5 degrees.
         Section s = main("camber: NACA 2412",
-                "lift-curve: {alpha: [-4, -2, 0, 2, 4, 6, 8, 10], cl: [-0.25, -0.05, 0.15, 0.35, 0.55, 0.7, 0.75, 0.6]}");
+                "lift-curve: {alpha: [-4, -2, 0, 2, 4, 6, 8, 10], cl: [-0.25, -0.05, 0.15, 0.35, 0.55, 0.7, 0.75, "
+                + "0.6]}");
         assertEquals(Math.toRadians(-1.5), s.measuredZeroLiftAngle().getAsDouble(), TIGHT);
         assertEquals(ThinAirfoil.zeroLiftAngle(s.camber()) - Math.toRadians(-1.5), s.incidenceCorrection(), TIGHT);
     }
@@ -187,7 +188,8 @@ class SectionLiftCurveReaderTest {
 
     @Test
     void aCurveThatEndsAtItsMaximumIsRefusedSayingItMustReachPastIt() throws IOException {
-        InputException e = refused("lift-curve: {alpha: [-4, -2, 0, 2, 4, 6],", "  cl: [-0.2, 0.0, 0.2, 0.4, 0.6, 0.8]}");
+        InputException e = refused("lift-curve: {alpha: [-4, -2, 0, 2, 4, 6],",
+                "  cl: [-0.2, 0.0, 0.2, 0.4, 0.6, 0.8]}");
         assertEquals("sections.main.lift-curve.cl[5]", e.field());
         assertTrue(e.problem().contains("expected the curve to reach past its maximum, to angles where cl falls"),
                 e.getMessage());
@@ -286,7 +288,8 @@ class SectionLiftCurveReaderTest {
         csv("f30.csv", "alpha_deg,cl\n-16,-0.2\n-14,0.0\n-10,0.4\n-4,1.0\n2,1.5\n6,1.8\n8,1.9\n10,1.85\n14,1.5\n");
         Section s = main("lift-curve: {alpha: " + ALPHA + ", cl: " + CL + "}",
                 "flap-lift-curves:",
-                "  - {deflection: 15, alpha: [-12, -10, -6, 0, 6, 10, 12, 14], cl: [-0.1, 0.1, 0.5, 1.1, 1.55, 1.7, 1.65,"
+                "  - {deflection: 15, alpha: [-12, -10, -6, 0, 6, 10, 12, 14], cl: [-0.1, 0.1, 0.5, 1.1, 1.55, 1.7, "
+                        + "1.65,"
                         + " 1.4]}",
                 "  - {deflection: 30, file: f30.csv}");
         assertEquals(List.of(15.0, 30.0), List.copyOf(s.flapLiftCurves().keySet()));
@@ -304,7 +307,8 @@ class SectionLiftCurveReaderTest {
         InputException e = refused("lift-curve: {alpha: " + ALPHA + ", cl: " + CL + "}",
                 "flap-cl-max: {deflection: [0, 20], increment: [0, 0.5]}",
                 "flap-lift-curves:",
-                "  - {deflection: 20, alpha: [-12, -10, -6, 0, 6, 10, 12, 14], cl: [-0.1, 0.1, 0.5, 1.1, 1.55, 1.7, 1.65,"
+                "  - {deflection: 20, alpha: [-12, -10, -6, 0, 6, 10, 12, 14], cl: [-0.1, 0.1, 0.5, 1.1, 1.55, 1.7, "
+                        + "1.65,"
                         + " 1.4]}");
         assertEquals("sections.main.flap-cl-max", e.field());
         assertTrue(e.problem().startsWith("gives an increment of 0.5 at 20 degrees, but the flap curve at 20 degrees "

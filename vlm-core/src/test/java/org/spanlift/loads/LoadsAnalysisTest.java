@@ -26,7 +26,8 @@ class LoadsAnalysisTest {
     private static final WingAnalysis ANALYSIS = WingAnalysis.of(WING);
 
     private static SpanwiseLoads loads(WingStructure s, double n) {
-        return LoadsAnalysis.of(ANALYSIS, s, ANALYSIS.fileDeflections()).loads(new LoadCase("c", 6000, n, 50, 0, "given"));
+        return LoadsAnalysis.of(ANALYSIS, s, ANALYSIS.fileDeflections())
+                .loads(new LoadCase("c", 6000, n, 50, 0, "given"));
     }
 
     private static WingStructure with(double spar, List<PointMass> points) {

@@ -18,7 +18,8 @@ class LoadsCopiesTest {
     private static SpanwiseLoads loads(double scale) {
         double[] y = {0, 1, 2};
         double[] v = {3 * scale, 2 * scale, 0};
-        return new SpanwiseLoads(CASE, 0.1, 1.2, 0.02, 1.19, 0.1, 0, 1500, y, v, v, v, v, v, 9000, 1, SpanwiseLoads.Side.BOTH);
+        return new SpanwiseLoads(CASE, 0.1, 1.2, 0.02, 1.19, 0.1, 0, 1500, y, v, v, v, v, v, 9000, 1,
+                SpanwiseLoads.Side.BOTH);
     }
 
     @Test
@@ -37,7 +38,8 @@ class LoadsCopiesTest {
     void spanwiseLoadsKeepTheirOwnCopyOfTheArraysTheyWereBuiltFrom() {
         double[] y = {0, 1};
         double[] v = {5, 1};
-        SpanwiseLoads l = new SpanwiseLoads(CASE, 0.1, 1.2, 0.02, 1.19, 0.1, 0, 1500, y, v, v, v, v, v, 9000, 1, SpanwiseLoads.Side.BOTH);
+        SpanwiseLoads l = new SpanwiseLoads(CASE, 0.1, 1.2, 0.02, 1.19, 0.1, 0, 1500, y, v, v, v, v, v, 9000, 1,
+                SpanwiseLoads.Side.BOTH);
         y[1] = 4;
         v[0] = 0;
         assertArrayEquals(new double[] {0, 1}, l.y(), 0.0);

@@ -69,7 +69,8 @@ class CoordinateMeanLineTest {
         CamberLine analytic = CamberLines.parse("NACA 2412");
         CoordinateMeanLine extracted = extract("NACA 2412", 80);
         assertEquals("NACA 2412", extracted.designation());
-        assertTrue(maxErrorInFileAxes(extracted, analytic) < 8e-4, "z error " + maxErrorInFileAxes(extracted, analytic));
+        assertTrue(maxErrorInFileAxes(extracted, analytic) < 8e-4, "z error "
+                + maxErrorInFileAxes(extracted, analytic));
         assertEquals(ThinAirfoil.zeroLiftAngle(analytic), zeroLiftAngleInFileAxes(extracted), Math.toRadians(0.05));
         // In its own chord frame (leading edge = foremost point, which for a cambered section lies slightly above
         // and ahead of the design leading edge) the chord line is inclined: measured 0.091 deg for this section.
@@ -85,7 +86,8 @@ class CoordinateMeanLineTest {
         // in the extracted chord frame is -0.874 deg; both checked here so that a change shows.
         CamberLine analytic = CamberLines.parse("NACA 23012");
         CoordinateMeanLine extracted = extract("NACA 23012", 80);
-        assertTrue(maxErrorInFileAxes(extracted, analytic) < 7e-4, "z error " + maxErrorInFileAxes(extracted, analytic));
+        assertTrue(maxErrorInFileAxes(extracted, analytic) < 7e-4, "z error "
+                + maxErrorInFileAxes(extracted, analytic));
         assertEquals(ThinAirfoil.zeroLiftAngle(analytic), zeroLiftAngleInFileAxes(extracted), Math.toRadians(0.05));
         assertEquals(0.259, Math.toDegrees(extracted.chordAngleInFile()), 0.01);
         assertEquals(-0.874, Math.toDegrees(ThinAirfoil.zeroLiftAngle(extracted)), 0.01);
@@ -105,7 +107,8 @@ class CoordinateMeanLineTest {
 
     @Test
     void twoBlockFileGivesTheSameLineAsTheLoop() throws IOException {
-        SectionCoordinates.Contour c = SectionCoordinates.naca("NACA 23012", 60, SectionCoordinates.TrailingEdge.CLOSED);
+        SectionCoordinates.Contour c = SectionCoordinates.naca("NACA 23012", 60,
+                SectionCoordinates.TrailingEdge.CLOSED);
         CoordinateMeanLine loop = extract(c.toText(), "loop.dat");
         CoordinateMeanLine blocks = extract(c.toTwoBlockText(), "blocks.dat");
         for (double x = 0.0; x <= 1.0; x += 0.01) {

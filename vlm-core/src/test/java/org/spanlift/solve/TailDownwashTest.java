@@ -117,7 +117,8 @@ class TailDownwashTest {
         Wing w = configuration(0.1, 16, 4);
         // roles cleared: the first surface of a wing becomes its wing
         Wing reversed = new Wing(w.name(), w.displayUnit(), w.reference(),
-                List.of(w.surfaces().get(1).withRole(SurfaceRole.OTHER), w.surfaces().get(0).withRole(SurfaceRole.OTHER)),
+                List.of(w.surfaces().get(1).withRole(SurfaceRole.OTHER),
+                        w.surfaces().get(0).withRole(SurfaceRole.OTHER)),
                 w.sections());
         TailDownwash a = TailDownwash.of(w, 1, 4 * DEG);
         TailDownwash b = TailDownwash.of(reversed, 0, 4 * DEG);

@@ -121,14 +121,16 @@ class TrailingCoreTest {
     @Test
     void theCoreIsHalfTheNarrowerStripOnARegularLattice() {
         // uniform strips of width 0.5 m: every core radius 0.25 m (0.125 m^2 would be the wrong square)
-        Wing w = wing(new Trapezoid(6, 1, 1, 0, 0, 0, 0, "s", 0, 0).surface("w", List.of(), spec(6, 2, Spacing.UNIFORM)));
+        Wing w = wing(new Trapezoid(6, 1, 1, 0, 0, 0, 0, "s", 0, 0).surface("w", List.of(),
+                spec(6, 2, Spacing.UNIFORM)));
         Lattice lattice = LatticeBuilder.build(w);
         for (int k = 0; k < lattice.trailingPointCount(); k++) {
             assertEquals(0.0625, lattice.trailingCoreSquared(k), 1e-15);
         }
         // cosine strips: at an edge between strips of widths w1 > w2, the radius is w2 / 2; at the tip, the
         // last strip's control point (at its midpoint in angle) lies nearer than half its width and bounds it
-        Wing c = wing(new Trapezoid(6, 1, 1, 0, 0, 0, 0, "s", 0, 0).surface("w", List.of(), spec(6, 1, Spacing.COSINE)));
+        Wing c = wing(new Trapezoid(6, 1, 1, 0, 0, 0, 0, "s", 0, 0).surface("w", List.of(),
+                spec(6, 1, Spacing.COSINE)));
         Lattice cl = LatticeBuilder.build(c);
         double[] edges = new double[7];
         for (int k = 0; k <= 6; k++) {

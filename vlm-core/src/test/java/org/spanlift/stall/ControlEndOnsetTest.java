@@ -91,7 +91,8 @@ class ControlEndOnsetTest {
     void withTheFlapStartingAtTheFuselageSideNeitherTheStubNorThatEndCounts() {
         for (int strips : new int[] {32, 128}) {
             StallEstimate e = onset(wing(30, strips, FLAP_FROM));
-            assertTrue(e.strips().stream().allMatch(st -> Math.abs(st.y()) >= FLAP_FROM), "no strip inside the fuselage");
+            assertTrue(e.strips().stream().allMatch(st -> Math.abs(st.y()) >= FLAP_FROM),
+                    "no strip inside the fuselage");
             assertTrue(e.y() >= FLAP_FROM, strips + " strips: onset at y = " + e.y());
             e.besideControlEnd().ifPresent(end -> assertEquals(FLAP_TO, end.y(), 1e-12, "only the outer end is free"));
         }

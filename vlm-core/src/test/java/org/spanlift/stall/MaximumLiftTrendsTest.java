@@ -42,7 +42,8 @@ class MaximumLiftTrendsTest {
     private static Both of(Wing w) {
         WingAnalysis a = WingAnalysis.of(w);
         StripLimits limits = StripLimits.of(w, a.lattice(), new double[0], OptionalDouble.empty());
-        return new Both(StallAnalysis.estimate(a, new double[0], limits, 0), MaximumLift.of(a, new double[0], limits, 0));
+        return new Both(StallAnalysis.estimate(a, new double[0], limits, 0),
+                MaximumLift.of(a, new double[0], limits, 0));
     }
 
     @Test

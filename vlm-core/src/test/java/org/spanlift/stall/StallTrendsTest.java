@@ -39,7 +39,8 @@ class StallTrendsTest {
         Station root = new Station(0, ROOT_CHORD, 0, 0, 0, "s");
         Station end = new Station(SEMI_SPAN, tip, 0.25 * (ROOT_CHORD - tip), 0, -Math.toRadians(washoutDeg), "s");
         List<ControlSurface> controls = flapDeg == 0 ? List.of()
-                : List.of(new ControlSurface("flap", ControlKind.FLAP, 0, 0.6 * SEMI_SPAN, 0.25, Math.toRadians(flapDeg)));
+                : List.of(new ControlSurface("flap", ControlKind.FLAP, 0, 0.6 * SEMI_SPAN, 0.25,
+                        Math.toRadians(flapDeg)));
         Surface s = new Surface("wing", true, new StationPlanform(List.of(root, end)), controls, LatticeSpec.DEFAULT);
         Section section = Section.of("s", CamberLines.parse("NACA 2412")).withClMax(Table.constant(CL_MAX));
         return new Wing("trend", LengthUnit.M, Wing.defaultReference(s), List.of(s), Map.of("s", section));
@@ -117,7 +118,8 @@ class StallTrendsTest {
         double alpha0 = org.spanlift.section.ThinAirfoil.zeroLiftAngle(thin.camber());
         StallEstimate.StripStall critical = b.strips().stream().filter(s -> s.y() == b.y()).findFirst().orElseThrow();
         assertEquals(alpha0 + CL_MAX / Math.toDegrees(0.1), critical.sectionAngle(), 1e-12);
-        StallEstimate.StripStall thinCritical = a.strips().stream().filter(s -> s.y() == a.y()).findFirst().orElseThrow();
+        StallEstimate.StripStall thinCritical = a.strips().stream().filter(s -> s.y() == a.y()).findFirst()
+                .orElseThrow();
         assertEquals(alpha0 + CL_MAX / (2 * Math.PI), thinCritical.sectionAngle(), 1e-12);
     }
 

@@ -211,7 +211,8 @@ class DerivedParametersTest {
                 columns: [lift_slope_per_rad]
                 """);
         CaseResult r = new CaseEvaluator(s).evaluate(1);
-        assertTrue(r.error().endsWith(":6: derived.surfaces.wing.trapezoid.root-chord: the value 1e13 is beyond 1e12 in "
+        assertTrue(r.error().endsWith(":6: derived.surfaces.wing.trapezoid.root-chord: the value 1e13 is "
+                + "beyond 1e12 in "
                 + "size; expected a value a wing file can hold (with taper = 1e-13)"), r.error());
     }
 
@@ -311,7 +312,8 @@ class DerivedParametersTest {
                 columns: [lift_slope_per_rad]
                 """);
         assertEquals("constants", e.field());
-        assertTrue(e.problem().startsWith("names and constants serve the expressions of derived entries"), e.getMessage());
+        assertTrue(e.problem().startsWith("names and constants serve the expressions of derived entries"),
+                e.getMessage());
     }
 
     @Test

@@ -18,7 +18,8 @@ import org.spanlift.io.WingSchema;
 class DesignTest {
 
     private static Parameter range(String path, String from, String to, String step) {
-        return Parameter.ofRange(ParameterPath.parse(path, WingSchema.ROOT), 1, new BigDecimal(from), new BigDecimal(to),
+        return Parameter.ofRange(ParameterPath.parse(path, WingSchema.ROOT), 1, new BigDecimal(from),
+                new BigDecimal(to),
                 step == null ? null : new BigDecimal(step));
     }
 
@@ -40,7 +41,8 @@ class DesignTest {
     @Test
     void theGridRunsTheLastParameterFastest() {
         Design d = Design.grid(List.of(range("surfaces.wing.trapezoid.taper", "0.4", "0.6", "0.1"),
-                Parameter.ofList(ParameterPath.parse("surfaces.wing.trapezoid.washout", WingSchema.ROOT), 1, List.of("0", "2"))));
+                Parameter.ofList(ParameterPath.parse("surfaces.wing.trapezoid.washout", WingSchema.ROOT), 1,
+                        List.of("0", "2"))));
         assertEquals(6, d.count());
         assertArrayEquals(new String[] {"0.4", "0"}, d.values(0));
         assertArrayEquals(new String[] {"0.4", "2"}, d.values(1));

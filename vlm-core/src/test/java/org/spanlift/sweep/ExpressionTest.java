@@ -170,6 +170,7 @@ class ExpressionTest {
                 () -> constantFault.fold(VALUES, known));
         assertEquals(11, e.position());
         Expression caseFault = Expression.parse("1 / (taper - 0.5)", SLOTS);
-        assertFalse(caseFault.fold(VALUES, known).isPresent(), "a fault that depends on the swept value waits for the case");
+        assertFalse(caseFault.fold(VALUES, known).isPresent(), "a fault that depends on the swept value waits for the "
+                + "case");
     }
 }

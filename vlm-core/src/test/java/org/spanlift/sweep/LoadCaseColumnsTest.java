@@ -112,9 +112,11 @@ class LoadCaseColumnsTest {
         assertTrue(unknown.problem().startsWith("unknown load-case result 'root.twist'"), unknown.getMessage());
 
         SweepFixtures.write(dir, "w.wing.yaml", WING.replace(
-                "structure: {mass: 80kg, point-masses: [{name: tank, mass: 30kg, y: 1.5, chord-fraction: 0.3}]}\n", ""));
+                "structure: {mass: 80kg, point-masses: [{name: tank, mass: 30kg, y: 1.5, chord-fraction: 0.3}]}\n",
+                ""));
         InputException noStructure = assertThrows(InputException.class, () -> SweepFileReader.read(
-                SweepFixtures.write(dir, "s.sweep.yaml", SWEEP.replace("  surfaces.wing.trapezoid.washout: [0, 3]\n", "")),
+                SweepFixtures.write(dir, "s.sweep.yaml", SWEEP.replace("  surfaces.wing.trapezoid.washout: [0, 3]\n",
+                        "")),
                 false));
         assertEquals("columns", noStructure.field());
         assertTrue(noStructure.problem().startsWith("loads.* columns need a structure section"),

@@ -47,25 +47,31 @@ class ParameterPathTest {
         String m = assertThrows(ParameterPath.PathException.class,
                 () -> ParameterPath.parse("surfaces.wing.trapezoid.tapper", WingSchema.ROOT)).getMessage();
         assertTrue(m.contains("unknown key 'tapper'") && m.contains("taper"), m);
-        m = assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("surfaces.wing.lattice", WingSchema.ROOT)).getMessage();
+        m = assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("surfaces.wing.lattice",
+                WingSchema.ROOT)).getMessage();
         assertTrue(m.contains("a mapping") && m.contains("strips"), m);
-        m = assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("surfaces.wing.stations.twist", WingSchema.ROOT))
+        m = assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("surfaces.wing.stations.twist",
+                WingSchema.ROOT))
                 .getMessage();
         assertTrue(m.contains("index in brackets"), m);
-        assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("surfaces.wing.controls.flap.name", WingSchema.ROOT));
+        assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("surfaces.wing.controls.flap.name",
+                WingSchema.ROOT));
         assertThrows(ParameterPath.PathException.class, () -> ParameterPath.parse("units.x", WingSchema.ROOT));
     }
 
     @Test
     void refusesWhatTheBaseFileLacks() {
         String m = assertThrows(ParameterPath.PathException.class,
-                () -> ParameterPath.parse("surfaces.wing.stations[3].twist", WingSchema.ROOT).apply(STATIONS, "1")).getMessage();
+                () -> ParameterPath.parse("surfaces.wing.stations[3].twist", WingSchema.ROOT).apply(STATIONS, "1"))
+                .getMessage();
         assertTrue(m.contains("has 3 elements"), m);
         m = assertThrows(ParameterPath.PathException.class,
-                () -> ParameterPath.parse("surfaces.tail.trapezoid.taper", WingSchema.ROOT).apply(TRAPEZOID, "1")).getMessage();
+                () -> ParameterPath.parse("surfaces.tail.trapezoid.taper", WingSchema.ROOT).apply(TRAPEZOID, "1"))
+                .getMessage();
         assertTrue(m.contains("no element named 'tail'") && m.contains("wing"), m);
         m = assertThrows(ParameterPath.PathException.class,
-                () -> ParameterPath.parse("surfaces.wing.trapezoid.taper", WingSchema.ROOT).apply(STATIONS, "1")).getMessage();
+                () -> ParameterPath.parse("surfaces.wing.trapezoid.taper", WingSchema.ROOT).apply(STATIONS, "1"))
+                .getMessage();
         assertTrue(m.contains("has stations, not trapezoid"), m);
         m = assertThrows(ParameterPath.PathException.class,
                 () -> ParameterPath.parse("sections.tip.cl-max", WingSchema.ROOT).apply(STATIONS, "1")).getMessage();
@@ -74,7 +80,8 @@ class ParameterPathTest {
 
     @Test
     void leavesTheBaseTreeUnchanged() {
-        YamlValue changed = ParameterPath.parse("surfaces.wing.trapezoid.taper", WingSchema.ROOT).apply(TRAPEZOID, "0.9");
+        YamlValue changed = ParameterPath.parse("surfaces.wing.trapezoid.taper", WingSchema.ROOT)
+                .apply(TRAPEZOID, "0.9");
         assertEquals(0.5 * 1.6, WingFileReader.fromTree(TRAPEZOID, "t").main().planform().chord(5.0), 1e-12);
         assertEquals(0.9 * 1.6, WingFileReader.fromTree(changed, "t").main().planform().chord(5.0), 1e-12);
     }

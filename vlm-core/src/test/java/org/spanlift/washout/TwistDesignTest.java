@@ -101,8 +101,10 @@ class TwistDesignTest {
             List<Strip> a1 = WingAnalysis.of(written).lattice().strips();
             List<Strip> a0 = WingAnalysis.of(w).lattice().strips();
             for (int i = 0; i < a0.size(); i++) {
-                assertEquals(a0.get(i).yLeft(), a1.get(i).yLeft(), 1e-12, "stations on strip edges leave the strips as they are, " + i);
-                assertEquals(a0.get(i).y(), a1.get(i).y(), 1e-12, "stations on strip edges leave the strips as they are, " + i);
+                assertEquals(a0.get(i).yLeft(), a1.get(i).yLeft(), 1e-12,
+                        "stations on strip edges leave the strips as they are, " + i);
+                assertEquals(a0.get(i).y(), a1.get(i).y(), 1e-12, "stations on strip edges leave the strips as they "
+                        + "are, " + i);
             }
             StallEstimate e = onset(written);
             assertTrue(e.aileronMargin().orElseThrow().dcl() >= 0.1 - 1e-6, "margin " + e.aileronMargin());

@@ -70,7 +70,8 @@ public final class SparkSweepCommand implements Callable<Integer> {
 
     @Option(names = "--master", paramLabel = "URL",
             description = "A local Spark master when not run by spark-submit: local, local[N], local[*] or local[N,F] "
-                    + "(F tries per task). Default: " + DEFAULT_MASTER + ", on the loopback address, without the web UI. "
+                    + "(F tries per task). Default: " + DEFAULT_MASTER
+                    + ", on the loopback address, without the web UI. "
                     + "For a cluster, use spark-submit with its --master.")
     String master;
 
@@ -124,7 +125,8 @@ public final class SparkSweepCommand implements Callable<Integer> {
         PrintWriter err = spec.commandLine().getErr();
         long started = System.nanoTime();
         Ranking ranking = sweep.ranking().orElse(null);
-        Ranker tally = new Ranker(names, ranking == null ? null : ranking.by(), ranking != null && ranking.highestFirst(),
+        Ranker tally = new Ranker(names, ranking == null ? null : ranking.by(), ranking != null
+                && ranking.highestFirst(),
                 ranking == null ? 1 : ranking.keep());
         long end = sweep.design().count();
         Path ranked = null;
@@ -155,7 +157,8 @@ public final class SparkSweepCommand implements Callable<Integer> {
                 ranked = Ranker.write(target.base(), format, names, tally.tally().ranked());
             }
         } catch (SparkSweepRunner.ClusterFailure e) {
-            throw new InputException(output.toString(), 0, "", "Spark gave up on a task after its retries (" + e.getMessage()
+            throw new InputException(output.toString(), 0, "", "Spark gave up on a task after its retries ("
+                    + e.getMessage()
                     + "); the rows written so far are whole: run again with --resume to finish");
         }
         Ranker.Tally counts = tally.tally();
@@ -164,11 +167,13 @@ public final class SparkSweepCommand implements Callable<Integer> {
                 + "task%s of up to %d cases) after %.1f s to start it", counts.cases(), sweep.design().describe(),
                 counts.failed(), outcome.cases(), (now - ready) / 1e9, where, outcome.tasks(),
                 outcome.tasks() == 1 ? "" : "s", perTask, (ready - started) / 1e9));
-        err.println(String.format(Locale.ROOT, "  tasks ran %.1f s (%.1f s on a processor); the driver wrote the rows in "
+        err.println(String.format(Locale.ROOT, "  tasks ran %.1f s (%.1f s on a processor); the driver wrote the rows "
+                + "in "
                 + "%.2f s", outcome.taskSeconds(), outcome.taskCpuSeconds(), outcome.sinkSeconds()));
         err.println("  results in " + output + " (case order)");
         if (ranked != null) {
-            err.println("  ranked summary in " + ranked + ": best " + counts.ranked().size() + " by " + ranking.by() + " ("
+            err.println("  ranked summary in " + ranked + ": best " + counts.ranked().size() + " by " + ranking.by()
+                    + " ("
                     + (ranking.highestFirst() ? "highest" : "lowest") + " first)"
                     + (sweep.constraints().isEmpty() ? "" : "; " + counts.feasible() + " of " + counts.cases()
                             + " cases meet the constraints"));

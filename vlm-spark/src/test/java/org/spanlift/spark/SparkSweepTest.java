@@ -34,7 +34,8 @@ class SparkSweepTest {
         assertEquals(0, l.exitCode(), l.err());
         assertEquals(0, s.exitCode(), s.err());
         assertEquals(64, Files.readAllLines(local).size(), "a header and 63 cases");
-        sameFiles(local.getParent(), spark.getParent(), "results.csv", "results.ranked.csv", "results.csv.manifest.json");
+        sameFiles(local.getParent(), spark.getParent(), "results.csv", "results.ranked.csv",
+                "results.csv.manifest.json");
         assertTrue(s.err().startsWith("sweep: 63 cases (full grid 7 x 9), 0 failed; 63 run in "), s.err());
     }
 
@@ -49,7 +50,8 @@ class SparkSweepTest {
         Files.createDirectories(spark);
         TestSpark.Run l = TestSpark.local("sweep", sweep.toString(), "--output", local.resolve("r.jsonl").toString(),
                 "--progress", "none");
-        TestSpark.Run s = TestSpark.spark(null, "sweep", sweep.toString(), "--output", spark.resolve("r.jsonl").toString(),
+        TestSpark.Run s = TestSpark.spark(null, "sweep", sweep.toString(), "--output",
+                spark.resolve("r.jsonl").toString(),
                 "--progress", "none", "--cases-per-task", "2");
         assertEquals(1, l.exitCode(), l.err());
         assertEquals(1, s.exitCode(), s.err());
@@ -71,7 +73,8 @@ class SparkSweepTest {
         Path sweep = smallSweep(dir);
         Path local = Files.createDirectory(dir.resolve("local")).resolve("r.csv");
         Path spark = Files.createDirectory(dir.resolve("spark")).resolve("r.csv");
-        TestSpark.Run l = TestSpark.local("sweep", sweep.toString(), "--output", local.toString(), "--progress", "none");
+        TestSpark.Run l = TestSpark.local("sweep", sweep.toString(), "--output", local.toString(), "--progress",
+                "none");
         KILLED.set(0);
         // The first attempt of the task holding cases 4 and 5 dies after case 5's work, as if its executor were lost.
         CaseTask.TaskFault fault = (index, attempt) -> {
@@ -136,7 +139,8 @@ class SparkSweepTest {
         assertFalse(Files.exists(out));
         assertFalse(Files.exists(dir.resolve("r.csv.manifest.json")));
 
-        TestSpark.Run zero = TestSpark.spark(null, "sweep", EXAMPLE, "--output", out.toString(), "--cases-per-task", "0");
+        TestSpark.Run zero = TestSpark.spark(null, "sweep", EXAMPLE, "--output", out.toString(), "--cases-per-task",
+                "0");
         assertEquals(2, zero.exitCode(), zero.err());
         assertEquals("spanlift-spark: --cases-per-task: expected 1 to 100000 cases, got 0", zero.err().strip());
         assertFalse(Files.exists(out));
@@ -149,7 +153,8 @@ class SparkSweepTest {
         TestSpark.Run cluster = TestSpark.spark(null, "sweep", EXAMPLE, "--output", out.toString(), "--master",
                 "spark://head:7077");
         assertEquals(2, cluster.exitCode(), cluster.err());
-        assertEquals("spanlift-spark: --master: expected local, local[N], local[*] or local[N,F], got 'spark://head:7077'; "
+        assertEquals("spanlift-spark: --master: expected local, local[N], local[*] or local[N,F], got "
+                + "'spark://head:7077'; "
                 + "for a cluster, run the application jar with spark-submit --master spark://head:7077",
                 cluster.err().strip());
         assertFalse(Files.exists(out));
@@ -169,7 +174,8 @@ class SparkSweepTest {
         return Files.writeString(dir.resolve("s.sweep.yaml"), String.join("\n", "base: w.wing.yaml", "parameters:",
                 "  sections.a.camber-file: [section.dat, missing.dat, bad.dat]", "  k: [0, 1, 2]",
                 "constants: {c: 2.4}", "derived:", "  surfaces.wing.trapezoid.root-chord: c / k",
-                "columns: [lift_slope_per_rad, e@CL=0.3, CDi@CL=0.3]", "rank: {by: e@CL=0.3, order: max, keep: 3}", ""));
+                "columns: [lift_slope_per_rad, e@CL=0.3, CDi@CL=0.3]", "rank: {by: e@CL=0.3, order: max, keep: 3}",
+                ""));
     }
 
     private static void sameFiles(Path localDir, Path sparkDir, String... names) throws IOException {

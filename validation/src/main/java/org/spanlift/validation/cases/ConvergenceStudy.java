@@ -44,7 +44,8 @@ public final class ConvergenceStudy {
         /** The wing: flap 0.10-0.55 of the semi-span (chord fraction 0.25), aileron 0.60-0.95 (0.22). */
         public Wing wing(LatticeSpec lattice) {
             List<ControlSurface> controls = List.of(
-                    new ControlSurface("flap", ControlKind.FLAP, 0.10 * Wings.SEMI_SPAN, 0.55 * Wings.SEMI_SPAN, 0.25, 0),
+                    new ControlSurface("flap", ControlKind.FLAP, 0.10 * Wings.SEMI_SPAN, 0.55 * Wings.SEMI_SPAN, 0.25,
+                            0),
                     new ControlSurface("aileron", ControlKind.AILERON, 0.60 * Wings.SEMI_SPAN, 0.95 * Wings.SEMI_SPAN,
                             0.22, 0));
             return Wings.trapezoid(aspectRatio, taper, Math.toRadians(sweepDeg), "flat", controls, lattice);
@@ -157,12 +158,13 @@ public final class ConvergenceStudy {
                     r.lattice().strips() * r.lattice().rows(), r.slopeErrPct(), r.eErrPct(), r.eFlapErrPct(),
                     r.flapLiftErrPct(), r.aileronRollErrPct(), r.meetsAim() ? "yes" : "no"));
         }
-        b.append("\nWorst over the planforms, per lattice:\n\n| lattice | lift slope | e | e (flap) | flap dCL/d delta | "
+        b.append("\nWorst over the planforms, per lattice:\n\n| lattice | lift slope | e | e (flap) | "
+                + "flap dCL/d delta | "
                 + "aileron C_roll | aim met everywhere |\n| --- | ---: | ---: | ---: | ---: | ---: | --- |\n");
         for (LatticeSpec l : candidates) {
             List<Row> mine = rows.stream().filter(r -> r.lattice().equals(l)).toList();
-            b.append(String.format(Locale.ROOT, "| %dx%d | %.3f | %.3f | %.3f | %.2f | %.2f | %s |%n", l.strips(), l.rows(),
-                    worst(mine, Row::slopeErrPct), worst(mine, Row::eErrPct), worst(mine, Row::eFlapErrPct),
+            b.append(String.format(Locale.ROOT, "| %dx%d | %.3f | %.3f | %.3f | %.2f | %.2f | %s |%n", l.strips(),
+                    l.rows(), worst(mine, Row::slopeErrPct), worst(mine, Row::eErrPct), worst(mine, Row::eFlapErrPct),
                     worst(mine, Row::flapLiftErrPct), worst(mine, Row::aileronRollErrPct),
                     mine.stream().allMatch(Row::meetsAim) ? "yes" : "no"));
         }

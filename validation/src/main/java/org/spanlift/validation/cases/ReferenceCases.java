@@ -130,7 +130,8 @@ public final class ReferenceCases {
                 + "of the camber slope (one point per panel) and a 3-D residual at A=200 remain; 1% of alpha_L0";
         for (String[] line : new String[][] {{"2412", "0.02", "0.4"}, {"4412", "0.04", "0.4"}, {"23012", "", ""}}) {
             boolean five = line[0].length() == 5;
-            double ref = Math.toDegrees(five ? ThinAirfoilReference.zeroLiftAngle(ThinAirfoilReference.line230Slope(), 0.2025)
+            double ref = Math.toDegrees(five ? ThinAirfoilReference.zeroLiftAngle(ThinAirfoilReference.line230Slope(),
+                    0.2025)
                     : ThinAirfoilReference.zeroLiftAngle(ThinAirfoilReference.fourDigitSlope(
                             Double.parseDouble(line[1]), Double.parseDouble(line[2])), Double.parseDouble(line[2])));
             c.add(new ReferenceCase("camber-naca" + line[0], "zero-lift angle deg, NACA " + line[0]
@@ -140,7 +141,8 @@ public final class ReferenceCases {
                     spec -> Measures.zeroLiftAngleDeg(Wings.trapezoid(200, 1, 0, "NACA " + line[0], List.of(), spec))));
         }
         double fraction = 0.25;
-        List<ControlSurface> flap = List.of(new ControlSurface("flap", ControlKind.FLAP, 0, Wings.SEMI_SPAN, fraction, 0));
+        List<ControlSurface> flap = List.of(new ControlSurface("flap", ControlKind.FLAP, 0, Wings.SEMI_SPAN, fraction,
+                0));
         List<LatticeSpec> flapRows = List.of(uniformRows(12, 12), uniformRows(12, 24), uniformRows(12, 48),
                 uniformRows(12, 96));
         c.add(new ReferenceCase("flap-effectiveness", "plain flap -d alpha_0/d delta, flap chord 0.25, full span, "

@@ -203,7 +203,8 @@ public record LiftingLineWing(
 
     private static void requirePositiveSlope(double a0) {
         if (!(a0 > 0.0) || !Double.isFinite(a0)) {
-            throw new IllegalArgumentException("section lift slope must be positive and finite (per radian), got " + a0);
+            throw new IllegalArgumentException("section lift slope must be positive and finite (per radian), got "
+                    + a0);
         }
     }
 }

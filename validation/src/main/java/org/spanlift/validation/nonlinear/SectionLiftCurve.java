@@ -315,14 +315,16 @@ public final class SectionLiftCurve {
     private void requireCovered(double alpha) {
         if (!covers(alpha)) {
             throw new IllegalArgumentException("effective angle " + Math.toDegrees(alpha)
-                    + " deg is outside the section data (" + Math.toDegrees(minAngle) + " to " + Math.toDegrees(maxAngle)
+                    + " deg is outside the section data (" + Math.toDegrees(minAngle) + " to "
+                    + Math.toDegrees(maxAngle)
                     + " deg)");
         }
     }
 
     private static void requireSlope(double a0) {
         if (!(a0 > 0.0) || !Double.isFinite(a0)) {
-            throw new IllegalArgumentException("section lift slope must be positive and finite (per radian), got " + a0);
+            throw new IllegalArgumentException("section lift slope must be positive and finite (per radian), got "
+                    + a0);
         }
     }
 

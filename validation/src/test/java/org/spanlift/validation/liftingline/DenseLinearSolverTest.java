@@ -31,7 +31,8 @@ class DenseLinearSolverTest {
     void refusesASingularMatrix() {
         double[][] singular = {{1.0, 2.0}, {2.0, 4.0}};
         assertThrows(IllegalArgumentException.class, () -> new DenseLinearSolver(singular));
-        assertThrows(IllegalArgumentException.class, () -> new DenseLinearSolver(new double[][] {{1.0, Double.NaN}, {0.0, 1.0}}));
+        assertThrows(IllegalArgumentException.class, () -> new DenseLinearSolver(new double[][] {{1.0, Double.NaN},
+                {0.0, 1.0}}));
     }
 
     /**

@@ -9,8 +9,8 @@ import org.junit.jupiter.params.provider.CsvSource;
  * Cross-checks the Fourier-series solution against a second, unrelated discretization of the same
  * Prandtl lifting-line equation, written in this test only: the line carries M piecewise-constant
  * circulation intervals (cosine spacing in the full span, control points at the angular midpoints) whose
- * trailing vortices induce the downwash w_i = sum_j (Gamma_j / (4 pi)) (1/(y_i - y_j) - 1/(y_i - y_{j+1})) (positive down);
- * each section obeys Gamma = (1/2) V c a0 (alpha - w/V). Lift and induced drag are the sums of
+ * trailing vortices induce the downwash w_i = sum_j (Gamma_j / (4 pi)) (1/(y_i - y_j) - 1/(y_i - y_{j+1})) (positive
+ * down); each section obeys Gamma = (1/2) V c a0 (alpha - w/V). Lift and induced drag are the sums of
  * rho V Gamma dy and rho w Gamma dy.
  *
  * <p>Tolerance: measured while writing this test, doubling M from 800 changes the discrete delta by less

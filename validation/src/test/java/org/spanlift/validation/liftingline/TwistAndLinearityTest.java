@@ -27,7 +27,8 @@ class TwistAndLinearityTest {
         LiftingLineSolution p = solver.solve(plain, alpha);
         LiftingLineSolution w = solver.solve(washed, alpha);
         assertTrue(w.liftCoefficient() < p.liftCoefficient(), "washout lowers CL");
-        assertTrue(w.zeroLiftAngle() > 0.0, "with the tips nose-down the wing needs a positive root angle to lift nothing");
+        assertTrue(w.zeroLiftAngle() > 0.0, "with the tips nose-down the wing needs a positive root angle to lift "
+                + "nothing");
         assertEquals(p.liftSlope(), w.liftSlope(), 1e-12 * p.liftSlope(), "twist leaves the lift slope unchanged");
     }
 
@@ -70,7 +71,8 @@ class TwistAndLinearityTest {
             double alpha = Math.toRadians(deg);
             LiftingLineSolution s = solver.solve(wing, alpha);
             double expected = ref.liftSlope() * (alpha - ref.zeroLiftAngle());
-            assertEquals(expected, s.liftCoefficient(), 1e-12 * Math.max(1.0, Math.abs(expected)), "CL at " + deg + " deg");
+            assertEquals(expected, s.liftCoefficient(), 1e-12 * Math.max(1.0, Math.abs(expected)), "CL at " + deg
+                    + " deg");
         }
     }
 

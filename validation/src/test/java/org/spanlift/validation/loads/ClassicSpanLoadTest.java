@@ -30,7 +30,8 @@ class ClassicSpanLoadTest {
 
     private static SpanwiseLoads solve(Wing wing, double weight, double speed) {
         WingAnalysis a = WingAnalysis.of(wing);
-        return LoadsAnalysis.of(a, MASSLESS, a.fileDeflections()).loads(new LoadCase("1 g", weight, 1.0, speed, 0, "given"));
+        return LoadsAnalysis.of(a, MASSLESS, a.fileDeflections()).loads(new LoadCase("1 g", weight, 1.0, speed, 0,
+                "given"));
     }
 
     /**

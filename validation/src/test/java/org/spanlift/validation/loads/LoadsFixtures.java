@@ -11,7 +11,8 @@ final class LoadsFixtures {
 
     static Wing elliptic(double span, double rootChord, int strips) {
         return WingFileReader.parse("name: elliptic\nunits: m\nsurfaces:\n  - name: wing\n    elliptic: {span: " + span
-                + ", root-chord: " + rootChord + "}\n    lattice: {strips: " + strips + ", rows: 4}\n", "elliptic.wing.yaml");
+                + ", root-chord: " + rootChord + "}\n    lattice: {strips: " + strips + ", rows: 4}\n",
+                "elliptic.wing.yaml");
     }
 
     static Wing trapezoid(double span, double rootChord, double taper, int strips) {

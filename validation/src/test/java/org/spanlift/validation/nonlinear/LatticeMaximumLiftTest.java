@@ -44,10 +44,10 @@ import org.spanlift.validation.liftingline.LiftingLineWing;
  *
  * <p><b>The section.</b> Both methods get the same tabulated curve, points every 0.25 degree from -10 to
  * 45 degrees, linear in between in the lifting line and the engine's monotone cubic through the same points in
- * the lattice (with points this close the two differ by less than 1e-4 in cl). The data are invented for this method-against-method check (no
- * measured section is claimed): cl = a0 (alpha - alpha0) with a0 = 6.0 per radian and alpha0 = -2 degrees
- * up to 0.7 cl_max, then a parabola tangent to the line that levels off at cl_max = 1.5 (x = a0 (alpha -
- * alpha0) / cl_max from 0.7 to 1.3, peak near 16.6 degrees), then a smooth fall, cl / cl_max = 1 - u^2 /
+ * the lattice (with points this close the two differ by less than 1e-4 in cl). The data are invented for this
+ * method-against-method check (no measured section is claimed): cl = a0 (alpha - alpha0) with a0 = 6.0 per radian and
+ * alpha0 = -2 degrees up to 0.7 cl_max, then a parabola tangent to the line that levels off at cl_max = 1.5 (x = a0
+ * (alpha - alpha0) / cl_max from 0.7 to 1.3, peak near 16.6 degrees), then a smooth fall, cl / cl_max = 1 - u^2 /
  * (2.4 (1 + 2 u)), u = x - 1.3. The lattice gets it as a section's measured lift curve with the measured
  * zero-lift angle -2 degrees and the incidence correction the wing reader would give it (thin-airfoil
  * zero-lift angle of its NACA 2412 mean line less the measured one), so the lattice's zero-lift angle is the
@@ -68,9 +68,10 @@ import org.spanlift.validation.liftingline.LiftingLineWing;
  *   taper .5 A 20 1.062%   0.505%   1.47600  1.48350  -0.506%    1.47866 peak   1.48507 peak    -0.432%
  * </pre>
  * (Measured with the engine's spanwise smoothing of the corrections and its monotone-cubic tables; with
- * straight segments and no smoothing the lattice's first stall came 0.1 to 0.6 % lower.) The rectangular wings stall first at the root in both (the lattice's innermost strip); the wings of
- * taper 0.5 at eta = 0.49 to 0.54 in the lattice and 0.56 in the lifting line (0.02 to 0.06 apart, where
- * the lifting line's stations are about 0.04 apart; not asserted).
+ * straight segments and no smoothing the lattice's first stall came 0.1 to 0.6 % lower.) The rectangular wings stall
+ * first at the root in both (the lattice's innermost strip); the wings of taper 0.5 at eta = 0.49 to 0.54 in the
+ * lattice and 0.56 in the lifting line (0.02 to 0.06 apart, where the lifting line's stations are about 0.04 apart; not
+ * asserted).
  */
 class LatticeMaximumLiftTest {
 
@@ -172,7 +173,9 @@ class LatticeMaximumLiftTest {
         return LiftBranch.trace(coupling(analysis), analysis.liftCurve(new double[0]).zeroLiftAngle());
     }
 
-    /** The first stall of a lattice branch: alpha (rad), CL, and the lattice strip index that reaches its peak first. */
+    /**
+     * The first stall of a lattice branch: alpha (rad), CL, and the lattice strip index that reaches its peak first.
+     */
     record FirstStall(double alpha, double lift, int unknown) {
     }
 
@@ -351,7 +354,8 @@ class LatticeMaximumLiftTest {
                         at + ": CL_max " + lattice.maximum().lift() + " against " + line.clMax() + ", "
                                 + maxDifference + " outside [-" + delta + " - 0.001, 0.001]");
             }
-            assertTrue(lattice.maximum().lift() >= first.lift(), at + ": the lattice's branch goes on past the first stall");
+            assertTrue(lattice.maximum().lift() >= first.lift(), at + ": the lattice's branch goes on past the first "
+                    + "stall");
         }
     }
 
@@ -407,7 +411,8 @@ class LatticeMaximumLiftTest {
                     at + ": the lattice departs by " + latticeDeviation + ", lifting-line theory by " + lineDeviation);
         }
         double elliptic = relationDeviation(lineSectionWing(a0, aspectRatio,
-                s -> new Surface("elliptic", true, new EllipticPlanform(0.5 * aspectRatio, 4.0 / Math.PI, 0, 0, 0, 0, 0, s),
+                s -> new Surface("elliptic", true, new EllipticPlanform(0.5 * aspectRatio, 4.0 / Math.PI, 0, 0, 0, 0, 0,
+                        s),
                         List.of(), LatticeSpec.DEFAULT)), a0);
         assertEquals(0.0, elliptic, LATTICE_DISCRETIZATION, "elliptic, A = " + aspectRatio);
     }

@@ -125,7 +125,8 @@ class MaximumLiftTest {
         previous = 2.0;
         for (double washout : new double[] {0.0, 2.0, 4.0, 6.0}) {
             double eta = maximum(solver, tapered(8.0, 0.4).withLinearWashout(washout * DEG)).firstStallEta();
-            assertTrue(eta < previous, washout + " deg washout: first stall at eta " + eta + ", inboard of " + previous);
+            assertTrue(eta < previous, washout + " deg washout: first stall at eta " + eta + ", inboard of "
+                    + previous);
             previous = eta;
         }
     }

@@ -105,7 +105,8 @@ class MultipleSolutionsTest {
                 assertEquals(3, roots.size(), at + ": three roots");
                 assertEquals(roots.get(0), up.liftCoefficient(), 1e-9, at + ": upward stays attached");
                 assertEquals(roots.get(2), down.liftCoefficient(), 1e-9, at + ": downward stays stalled");
-                assertEquals(1.0, up.stalledSpanFraction(), 1e-12, at + ": upward is past the peak, on the gentle fall");
+                assertEquals(1.0, up.stalledSpanFraction(), 1e-12, at + ": upward is past the peak, on the gentle "
+                        + "fall");
                 assertEquals(-1, up.index(), at + ": 13 harmonics without stiffness");
                 assertEquals(1.0, down.stalledSpanFraction(), 1e-12);
                 assertEquals(1, down.index(), at + ": the stalled branch rises again (positive slope)");
@@ -118,7 +119,8 @@ class MultipleSolutionsTest {
     /** Past the data of a section the solver reports a failure, never a number. */
     @Test
     void leavingTheSectionDataIsAFailureNotASolution() {
-        SectionLiftCurve shortTable = SectionLiftCurve.tableDegrees(new double[] {-10.0, 12.0}, new double[] {-0.9, 1.4});
+        SectionLiftCurve shortTable = SectionLiftCurve.tableDegrees(new double[] {-10.0, 12.0},
+                new double[] {-0.9, 1.4});
         NonlinearWing wing = NonlinearWing.uniform(LiftingLineWing.rectangular(8.0, 1.0, 2.0 * Math.PI), shortTable);
         NonlinearLiftingLineSolver solver = new NonlinearLiftingLineSolver();
         NonlinearFailure f = assertInstanceOf(NonlinearFailure.class, solver.solve(wing, 20.0 * DEG));
@@ -147,7 +149,8 @@ class MultipleSolutionsTest {
         NonlinearWing wing = ellipticWing();
         NonlinearSolution start = assertInstanceOf(NonlinearSolution.class,
                 new NonlinearLiftingLineSolver(8).solve(wing, 5.0 * DEG));
-        assertThrows(IllegalArgumentException.class, () -> new NonlinearLiftingLineSolver(16).solve(wing, 6.0 * DEG, start));
+        assertThrows(IllegalArgumentException.class, () -> new NonlinearLiftingLineSolver(16)
+                .solve(wing, 6.0 * DEG, start));
         assertThrows(IllegalArgumentException.class, () -> new NonlinearLiftingLineSolver(0));
         assertThrows(IllegalArgumentException.class, () -> new NonlinearLiftingLineSolver().solve(wing, Double.NaN));
     }

@@ -13,7 +13,8 @@ import picocli.CommandLine.Option;
 public final class BalanceOptions {
 
     @Option(names = "--cg", paramLabel = "X",
-            description = "Centre of gravity: a length with its unit, the x of the wing file's axes (0.62m, 24in), or a "
+            description = "Centre of gravity: a length with its unit, the x of the wing file's axes (0.62m, 24in), "
+                    + "or a "
                     + "percentage of the wing's mean aerodynamic chord (25%%mac). Repeatable.")
     List<String> cgs = List.of();
 

@@ -10,7 +10,8 @@ import picocli.CommandLine.Option;
 /** The option that lets stall results use an assumed cl_max for sections that give none. */
 public final class ClMaxOptions {
 
-    @Option(names = "--assume-cl-max", paramLabel = "CLMAX", arity = "0..1", fallbackValue = "" + StripLimits.CONSERVATIVE_CL_MAX,
+    @Option(names = "--assume-cl-max", paramLabel = "CLMAX", arity = "0..1",
+            fallbackValue = "" + StripLimits.CONSERVATIVE_CL_MAX,
             description = "For sections without cl-max data, assume this cl_max (flagged in the output). Without a "
                     + "value: the conservative default " + StripLimits.CONSERVATIVE_CL_MAX + ".")
     String assumeClMax;

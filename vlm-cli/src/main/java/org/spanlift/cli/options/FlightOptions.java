@@ -125,7 +125,8 @@ public final class FlightOptions {
         if (!(h >= StandardAtmosphere.MIN_ALTITUDE && h <= StandardAtmosphere.MAX_ALTITUDE)) {
             throw new InputException("--altitude", 0, "", "a pressure altitude must be from "
                     + Field.brief(StandardAtmosphere.MIN_ALTITUDE) + " m to "
-                    + Field.brief(StandardAtmosphere.MAX_ALTITUDE) + " m (geopotential, the standard atmosphere's range), got " + Field.brief(h) + " m");
+                    + Field.brief(StandardAtmosphere.MAX_ALTITUDE) + " m (geopotential, the standard atmosphere's "
+                    + "range), got " + Field.brief(h) + " m");
         }
         double dt;
         try {

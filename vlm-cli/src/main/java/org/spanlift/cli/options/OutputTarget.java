@@ -123,7 +123,8 @@ public final class OutputTarget {
         Path name = absolute.getFileName();
         int bytes = name == null ? 0 : name.toString().getBytes(StandardCharsets.UTF_8).length;
         if (bytes > MAX_NAME_BYTES) {
-            throw new InputException(option, 0, "", "the file name " + name + " is " + bytes + " bytes long; expected a "
+            throw new InputException(option, 0, "", "the file name " + name + " is " + bytes
+                    + " bytes long; expected a "
                     + "name of at most " + MAX_NAME_BYTES + " bytes");
         }
     }
@@ -233,7 +234,8 @@ public final class OutputTarget {
     public Written begin(Body body) {
         OutputTarget now = resolve(option, given);
         if (now.kind == Kind.STREAM) {
-            try (OutputStream out = Files.newOutputStream(now.file, StandardOpenOption.WRITE, StandardOpenOption.APPEND)) {
+            try (OutputStream out = Files.newOutputStream(now.file, StandardOpenOption.WRITE,
+                    StandardOpenOption.APPEND)) {
                 body.writeTo(out);
             } catch (IOException e) {
                 throw cannotWrite(option, given, e);

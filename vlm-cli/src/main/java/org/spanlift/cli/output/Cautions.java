@@ -32,7 +32,8 @@ public final class Cautions {
 
     /** Stall results of a sweep. */
     public static final String SWEEP = "Caution: stall results are linear-theory estimates for the wing alone; they "
-            + "inform design and do not replace flight test, airworthiness standards or licensed engineering judgement.";
+            + "inform design and do not replace flight test, airworthiness standards or licensed engineering "
+            + "judgement.";
 
     /** Loads columns of a sweep (limit loads of one case, clean). */
     public static final String SWEEP_LOADS = "Caution: loads.* columns are limit loads of the wing alone for "

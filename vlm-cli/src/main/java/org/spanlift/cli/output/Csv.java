@@ -84,7 +84,8 @@ public final class Csv {
                 while (i < n && record.charAt(i) != ',') {
                     char c = record.charAt(i++);
                     if (c == '"') {
-                        throw new IllegalArgumentException("a double quote inside an unquoted cell " + (out.size() + 1));
+                        throw new IllegalArgumentException("a double quote inside an unquoted cell "
+                                + (out.size() + 1));
                     }
                     cell.append(c);
                 }

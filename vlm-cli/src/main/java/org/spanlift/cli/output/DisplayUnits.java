@@ -99,7 +99,8 @@ public record DisplayUnits(System system, LengthUnit length) {
      * {@code 7355 N (750.0 kg)} or {@code 1653 lbf}.
      */
     public String weight(double newtons) {
-        return us() ? force(newtons) : force(newtons) + " (" + TextTable.fixed(newtons / StandardAtmosphere.G0, 1) + " kg)";
+        return us() ? force(newtons) : force(newtons) + " (" + TextTable.fixed(newtons / StandardAtmosphere.G0, 1)
+                + " kg)";
     }
 
     /** A speed with its unit: {@code 52.5 m/s} or {@code 102.0 kt}. */

@@ -143,7 +143,8 @@ public final class ChartFigure implements Figure {
             double baseline = bottom + ROW * r + 15;
             for (XYSeries s : row) {
                 symbol(g, s, x, baseline - 4);
-                Text.draw(g, s.getName(), LEGEND, x + SYMBOL + SYMBOL_GAP, baseline, Text.Align.LEFT, Palette.INK, null);
+                Text.draw(g, s.getName(), LEGEND, x + SYMBOL + SYMBOL_GAP, baseline, Text.Align.LEFT, Palette.INK,
+                        null);
                 x += entryWidth(s) + ENTRY_GAP;
             }
         }

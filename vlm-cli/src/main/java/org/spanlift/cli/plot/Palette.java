@@ -66,7 +66,8 @@ public final class Palette {
     public static BasicStroke line(int i, float width) {
         float[] dash = DASHES[Math.floorMod(i, DASHES.length)];
         return dash == null ? new BasicStroke(width, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND)
-                : new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, scale(dash, width / 1.6f), 0f);
+                : new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, scale(dash, width / 1.6f),
+                        0f);
     }
 
     /** The marker of the i-th series (cycling). */

@@ -134,7 +134,8 @@ public final class Plots {
                     Palette.line(1, 2.0f), SeriesMarkers.NONE);
             limitText = " The line section cl_max is each station's cl_max as the stall estimate of this configuration "
                     + "reads it (flap increments included; at " + (context.weight().isPresent() ? "the stall speed's "
-                    + "Reynolds numbers" : "the cl-max tables' lowest Reynolds number") + "), so the gap between cl and "
+                    + "Reynolds numbers" : "the cl-max tables' lowest Reynolds number")
+                    + "), so the gap between cl and "
                     + "cl_max is each station's margin" + (e.assumedClMax() ? "; some sections give no cl-max and an "
                     + "assumed value is used." : ".");
         }
@@ -166,7 +167,8 @@ public final class Plots {
         for (int i = 0; i < a.length; i++) {
             cl[i] = line.lift(Math.toRadians(a[i]));
         }
-        String title = String.format(Locale.ROOT, "Lift curve: slope %.3f per rad (%.4f per deg), zero lift at %.2f\u00b0",
+        String title = String.format(Locale.ROOT, "Lift curve: slope %.3f per rad (%.4f per deg), zero lift at "
+                + "%.2f\u00b0",
                 line.slope(), line.slope() * Math.PI / 180, Math.toDegrees(line.zeroLiftAngle()));
         XYChart c = chart(title, "angle of attack \u03b1 [deg]", maximum.isPresent() ? "CL"
                 : "CL  (inviscid linear theory: no stall)");
@@ -320,7 +322,8 @@ public final class Plots {
                 band = Math.max(band, 1.1 * Math.max(st.cl(), st.clBeyond()));
             }
         }
-        String title = String.format(Locale.ROOT, "Stall map: onset at CL = %.3f (\u03b1 = %.2f\u00b0), station \u03b7 = %.2f",
+        String title = String.format(Locale.ROOT, "Stall map: onset at CL = %.3f (\u03b1 = %.2f\u00b0), station \u03b7 "
+                + "= %.2f",
                 stall.lift(), Math.toDegrees(stall.alpha()), stall.eta());
         XYChart c = chart(title, "spanwise station y [" + u.symbol() + "], right tip positive",
                 "section cl at stall onset  and  cl_max");
@@ -490,13 +493,15 @@ public final class Plots {
             List<FigureContext> contexts, LengthUnit unit) {
         List<PlanformFigure.Layer> layers = new ArrayList<>();
         for (int i = 0; i < wings.size(); i++) {
-            layers.add(new PlanformFigure.Layer(legendLabel(labels.get(i), wings.size()), WingGeometry.outlines(wings.get(i)), List.of(), Map.of(),
+            layers.add(new PlanformFigure.Layer(legendLabel(labels.get(i), wings.size()),
+                    WingGeometry.outlines(wings.get(i)), List.of(), Map.of(),
                     Palette.series(i), Palette.line(i, 2f)));
         }
         String desc = FigureContext.sentence(keys, contexts) + " Top views of " + wings.size() + " wings overlaid "
                 + "to scale, each in its own file's axes (leading edge up, centreline dash-dotted); outlines only.";
         return new PlanformFigure("compare-planform", "Planforms overlaid", List.of("outlines to scale, each wing in "
-                + "its own file's axes", FigureContext.text(keys, contexts)), desc, layers, unit, OptionalDouble.empty());
+                + "its own file's axes", FigureContext.text(keys, contexts)), desc, layers, unit,
+                OptionalDouble.empty());
     }
 
     /**
@@ -644,7 +649,8 @@ public final class Plots {
         return c;
     }
 
-    private static void style(XYSeries s, Color colour, BasicStroke stroke, org.knowm.xchart.style.markers.Marker marker) {
+    private static void style(XYSeries s, Color colour, BasicStroke stroke,
+            org.knowm.xchart.style.markers.Marker marker) {
         s.setLineColor(colour);
         s.setLineStyle(stroke);
         s.setMarker(marker);

@@ -124,9 +124,11 @@ public final class Comparison {
             }
         }
         if (entries.stream().anyMatch(e -> e.stall().flatMap(StallStudy::flaps).isPresent())) {
-            String flaps = flapsDeg.isPresent() ? ", flaps " + Field.format(flapsDeg.getAsDouble()) + " deg" : ", flaps";
+            String flaps = flapsDeg.isPresent() ? ", flaps " + Field.format(flapsDeg.getAsDouble())
+                    + " deg" : ", flaps";
             for (ResultKey<StallEstimate> k : Vocabulary.select(Vocabulary.ONSET, FLAP_KEYS.toArray(String[]::new))) {
-                out.add(new Row(Vocabulary.FLAPS + k.key(), k, k.label() + flaps, e -> e.stall().flatMap(StallStudy::flaps)
+                out.add(new Row(Vocabulary.FLAPS + k.key(), k, k.label() + flaps,
+                        e -> e.stall().flatMap(StallStudy::flaps)
                         .map(f -> number(k.of(f.estimate()))).orElse(OptionalDouble.empty())));
             }
             ResultKey<StallStudy> inc = Vocabulary.find(Vocabulary.STUDY, "flap_increment_CL");
@@ -136,7 +138,8 @@ public final class Comparison {
         if (entries.stream().anyMatch(e -> e.stall().isPresent())) {
             ResultKey<MaximumLift> top = Vocabulary.find(Vocabulary.MAX_LIFT, "CL");
             out.add(new Row(Vocabulary.MAX_CLEAN + top.key(), top, top.label() + ", clean", e -> e.stall()
-                    .flatMap(s -> s.clean().maximumLiftIfAny()).map(m -> number(top.of(m))).orElse(OptionalDouble.empty())));
+                    .flatMap(s -> s.clean().maximumLiftIfAny()).map(m -> number(top.of(m)))
+                    .orElse(OptionalDouble.empty())));
             if (entries.stream().anyMatch(e -> e.stall().flatMap(StallStudy::flaps).isPresent())) {
                 out.add(new Row(Vocabulary.MAX_FLAPS + top.key(), top, top.label() + ", flaps", e -> e.stall()
                         .flatMap(StallStudy::flaps).flatMap(f -> f.maximumLiftIfAny()).map(m -> number(top.of(m)))

@@ -193,7 +193,8 @@ public final class ReportPage {
         WashoutPoint at = r.washout().orElse(r.atUpper());
         List<List<String>> rows = new ArrayList<>();
         for (WashoutRequirement q : w.requirements()) {
-            rows.add(List.of(q.describe(), Html.fixed(q.slack(at), 3) + " " + q.unit(), q.slack(at) >= 0 ? "yes" : "no"));
+            rows.add(List.of(q.describe(), Html.fixed(q.slack(at), 3) + " " + q.unit(),
+                    q.slack(at) >= 0 ? "yes" : "no"));
         }
         h.table("washout", "Requirements at that washout", List.of("requirement", "slack", "met"), rows);
         h.raw("<figure id=\"figure-washout-trade\">").line("");
@@ -235,7 +236,8 @@ public final class ReportPage {
                 == org.spanlift.balance.Balance.StallBasis.MAX_LIFT ? "the maximum lift of the section lift curves"
                         : "the linear stall onset, which errs safe") + ", with the tail's load."));
         if (first.forwardLimit().isPresent()) {
-            h.el("p", String.format(Locale.ROOT, "Forward limit of the centre of gravity, the elevator at its up stop at "
+            h.el("p", String.format(Locale.ROOT, "Forward limit of the centre of gravity, the elevator at its up "
+                    + "stop at "
                     + "the stall%s: %s of the mean aerodynamic chord.", first.flaps().isPresent() ? " with flaps" : "",
                     Html.fixed(100 * first.clean().macFraction(first.forwardLimit().getAsDouble()), 1) + "%"));
         }
@@ -271,7 +273,8 @@ public final class ReportPage {
                     margin.description()));
             c.maximumLiftIfAny().ifPresent(m -> key(h, "maximum CL, clean", Html.fixed(m.lift(), 3),
                     "from the section lift curves" + (m.synthetic() ? " (synthetic: built from cl_max)" : "") + "; "
-                            + Html.fixed(100 * m.stalledSpanFraction(), 0) + "% of the span past its section peak there"));
+                            + Html.fixed(100 * m.stalledSpanFraction(), 0)
+                            + "% of the span past its section peak there"));
             c.headlineEquivalent().ifPresent(v -> key(h, "stall speed, clean", Html.fixed(Airspeed.knots(v), 1)
                     + " kt EAS", Html.fixed(Airspeed.knots(c.headlineTrue().getAsDouble()), 1) + " kt TAS; "
                             + basisText(c) + "; wing alone, see the caution"));
@@ -294,7 +297,8 @@ public final class ReportPage {
         in.flaps().ifPresent(f -> header.add("flaps"));
         List<List<String>> rows = new ArrayList<>();
         Optional<StallStudy.Configuration> flapStall = in.stall().flatMap(StallStudy::flaps);
-        for (ResultKey<WingResult> k : Vocabulary.select(Vocabulary.WING, "lift_slope_per_rad", "zero_lift_angle_deg")) {
+        for (ResultKey<WingResult> k : Vocabulary.select(Vocabulary.WING, "lift_slope_per_rad",
+                "zero_lift_angle_deg")) {
             rows.add(row(Results.label(k, u), in, flapStall, (w, st) -> value(k, w.wingResult(), u)));
         }
         for (ResultKey<FlightPoint> k : Vocabulary.select(Vocabulary.POINT, "alpha_deg", "e", "CDi")) {
@@ -318,7 +322,8 @@ public final class ReportPage {
             }
             if (in.condition().isPresent()) {
                 rows.add(row("stall speed at maximum CL EAS [kt]", in, flapStall, (w, st) -> st.flatMap(
-                        c -> c.maximumLiftIfAny().flatMap(MaximumLift::speed)).map(v -> Html.fixed(Airspeed.knots(v.equivalent()), 1))
+                        c -> c.maximumLiftIfAny().flatMap(MaximumLift::speed))
+                        .map(v -> Html.fixed(Airspeed.knots(v.equivalent()), 1))
                         .orElse("\u2013")));
             }
         }

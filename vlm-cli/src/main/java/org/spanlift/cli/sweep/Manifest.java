@@ -125,13 +125,15 @@ public record Manifest(Map<String, String> fields) {
     private void validate(String file) {
         String version = required(file, "spanlift_sweep");
         if (!version.equals(VERSION)) {
-            throw new InputException(file, 1, "spanlift_sweep", "expected " + VERSION + " (this version of spanlift), got '"
+            throw new InputException(file, 1, "spanlift_sweep", "expected " + VERSION
+                    + " (this version of spanlift), got '"
                     + version + "'; run the sweep again without --resume");
         }
         required(file, "sweep");
         required(file, "design");
         if (!HEX.matcher(required(file, "fingerprint")).matches()) {
-            throw new InputException(file, 1, "fingerprint", "expected 64 hexadecimal digits, got '" + get("fingerprint") + "'");
+            throw new InputException(file, 1, "fingerprint", "expected 64 hexadecimal digits, got '"
+                    + get("fingerprint") + "'");
         }
         long cases = whole(file, "cases");
         String shardText = required(file, "shard");
@@ -139,7 +141,8 @@ public record Manifest(Map<String, String> fields) {
         try {
             shard = Shard.parse(shardText);
         } catch (InputException e) {
-            throw new InputException(file, 1, "shard", "expected i/n with 1 <= i <= n (such as 2/4), got '" + shardText + "'");
+            throw new InputException(file, 1, "shard", "expected i/n with 1 <= i <= n (such as 2/4), got '" + shardText
+                    + "'");
         }
         if (whole(file, "first_case") != shard.first(cases) || whole(file, "end_case") != shard.end(cases)) {
             throw new InputException(file, 1, "first_case", "shard " + shard + " of " + cases + " cases is cases "
@@ -195,7 +198,8 @@ public record Manifest(Map<String, String> fields) {
         List<String> c = Arrays.asList(required(file, "columns").split(",", -1));
         if (c.size() < 3 || !c.get(0).equals("case") || !c.get(1).equals("id") || !c.get(c.size() - 1).equals("error")
                 || c.stream().anyMatch(String::isEmpty) || new HashSet<>(c).size() != c.size()) {
-            throw new InputException(file, 1, "columns", "expected case,id, the parameters and results, then error; got '"
+            throw new InputException(file, 1, "columns", "expected case,id, the parameters and results, then error; "
+                    + "got '"
                     + get("columns") + "'");
         }
         return c;

@@ -80,7 +80,8 @@ public final class Ranker {
             value = Double.NaN;
         }
         if (!Double.isFinite(value)) {
-            throw new InputException(file, lineNumber, rankBy, "expected a finite number to rank by, got '" + cell + "'");
+            throw new InputException(file, lineNumber, rankBy, "expected a finite number to rank by, got '" + cell
+                    + "'");
         }
         Candidate c = new Candidate(value, Long.parseLong(row.get("case")), line);
         if (best.size() < keep) {

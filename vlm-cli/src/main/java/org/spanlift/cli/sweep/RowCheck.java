@@ -50,7 +50,8 @@ public final class RowCheck {
         }
         String index = row.get("case");
         if (!Long.toString(expected).equals(index)) {
-            throw bad(line, "case", "expected case " + expected + ", found " + (index == null ? "none" : "'" + index + "'"));
+            throw bad(line, "case", "expected case " + expected + ", found "
+                    + (index == null ? "none" : "'" + index + "'"));
         }
         String[] values = new String[paths.length];
         for (int p = 0; p < paths.length; p++) {
@@ -63,7 +64,8 @@ public final class RowCheck {
             String[] design = sweep.design().values(expected);
             for (int p = 0; p < paths.length; p++) {
                 if (!design[p].equals(values[p])) {
-                    throw bad(line, paths[p], "case " + expected + " has the value '" + values[p] + "' where this sweep "
+                    throw bad(line, paths[p], "case " + expected + " has the value '" + values[p]
+                            + "' where this sweep "
                             + "gives '" + design[p] + "'");
                 }
             }

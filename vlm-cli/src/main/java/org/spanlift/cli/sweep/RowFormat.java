@@ -17,11 +17,11 @@ import org.spanlift.sweep.Sweep;
 /**
  * How sweep rows are written and read back: CSV (a header line, then one line per case) or JSON Lines (one
  * flat object per case). Columns: {@code case} (index from 0 in the whole design), {@code id}, the parameter
- * paths, the derived paths (each case's derived value, empty when it could not be computed), the result columns, {@code feasible} (with constraints) and {@code error}. Numbers are written in
- * full precision (Java's shortest round-trip form); an absent value is an empty cell or null. A row ends
- * with a line feed: in JSON Lines every row is one line; in CSV a text cell holding a comma, a quote or a
- * line break is quoted (RFC 4180), so a row is complete when its line feed outside quotes is there
- * ({@link RowReader}).
+ * paths, the derived paths (each case's derived value, empty when it could not be computed), the result columns, {@code
+ * feasible} (with constraints) and {@code error}. Numbers are written in full precision (Java's shortest round-trip
+ * form); an absent value is an empty cell or null. A row ends with a line feed: in JSON Lines every row is one line; in
+ * CSV a text cell holding a comma, a quote or a line break is quoted (RFC 4180), so a row is complete when its line
+ * feed outside quotes is there ({@link RowReader}).
  */
 public enum RowFormat {
     CSV, JSONL;
@@ -162,7 +162,8 @@ public enum RowFormat {
         if (this == CSV) {
             List<String> cells = Csv.cells(line);
             if (cells.size() != names.size()) {
-                throw new IllegalArgumentException("the row has " + cells.size() + " cells, the header " + names.size());
+                throw new IllegalArgumentException("the row has " + cells.size() + " cells, the header "
+                        + names.size());
             }
             for (int i = 0; i < names.size(); i++) {
                 out.put(names.get(i), cells.get(i).isEmpty() ? null : cells.get(i));

@@ -21,12 +21,14 @@ public record Shard(int index, int count) {
     public static Shard parse(String text) {
         Matcher m = FORM.matcher(text);
         if (!m.matches()) {
-            throw new InputException("--shard", 0, "", "expected i/n with 1 <= i <= n (such as 2/4), got '" + text + "'");
+            throw new InputException("--shard", 0, "", "expected i/n with 1 <= i <= n (such as 2/4), got '" + text
+                    + "'");
         }
         int i = Integer.parseInt(m.group(1));
         int n = Integer.parseInt(m.group(2));
         if (n < 1 || i < 1 || i > n) {
-            throw new InputException("--shard", 0, "", "expected i/n with 1 <= i <= n (such as 2/4), got '" + text + "'");
+            throw new InputException("--shard", 0, "", "expected i/n with 1 <= i <= n (such as 2/4), got '" + text
+                    + "'");
         }
         return new Shard(i, n);
     }
@@ -40,7 +42,8 @@ public record Shard(int index, int count) {
     }
 
     private long bound(long cases, int k) {
-        return BigInteger.valueOf(cases).multiply(BigInteger.valueOf(k)).divide(BigInteger.valueOf(count)).longValueExact();
+        return BigInteger.valueOf(cases).multiply(BigInteger.valueOf(k)).divide(BigInteger.valueOf(count))
+                .longValueExact();
     }
 
     public boolean whole() {

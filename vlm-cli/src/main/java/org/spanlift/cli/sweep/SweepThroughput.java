@@ -18,9 +18,9 @@ import org.spanlift.sweep.Sweep;
  * planform varying (taper and span: a new factorization per case), (b) only twist varying (washout: one
  * factorization, new right-hand sides), each at 1 and 2 threads. Rows are formatted as for a file and
  * dropped. Every thread count is warmed up before any is measured (measuring one thread first, straight
- * after a single warm-up, had credited two threads with more than twice the rate). Run with {@code java -cp vlm-cli/target/spanlift.jar org.spanlift.cli.sweep.SweepThroughput}
- * (optional arguments: seconds per measurement, thread counts). Figures are for comparison side by side in
- * one run on one machine.
+ * after a single warm-up, had credited two threads with more than twice the rate). Run with {@code java -cp
+ * vlm-cli/target/spanlift.jar org.spanlift.cli.sweep.SweepThroughput} (optional arguments: seconds per measurement,
+ * thread counts). Figures are for comparison side by side in one run on one machine.
  */
 public final class SweepThroughput {
 
@@ -66,7 +66,8 @@ public final class SweepThroughput {
             Files.writeString(dir.resolve("w.wing.yaml"), WING, StandardCharsets.UTF_8);
             Sweep planform = SweepFileReader.read(write(dir, "p.sweep.yaml", PLANFORM), false);
             Sweep twist = SweepFileReader.read(write(dir, "t.sweep.yaml", TWIST), false);
-            System.out.printf(Locale.ROOT, "sweep throughput, lattice 24 x 6 per half, %d cores available, %.0f s per figure%n",
+            System.out.printf(Locale.ROOT, "sweep throughput, lattice 24 x 6 per half, %d cores available, %.0f s per "
+                    + "figure%n",
                     Runtime.getRuntime().availableProcessors(), seconds);
             for (Sweep s : List.of(planform, twist)) {
                 for (int j : jobs) {

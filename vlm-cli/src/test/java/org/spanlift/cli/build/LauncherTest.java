@@ -57,7 +57,8 @@ class LauncherTest {
         Files.createDirectories(home.resolve("bin"));
         Path java = home.resolve("bin").resolve("java");
         Files.writeString(java, "#!/bin/sh\n"
-                + "if [ \"$1\" = -version ]; then echo 'openjdk version \"" + reported + "\" 2020-01-01' >&2; exit 0; fi\n"
+                + "if [ \"$1\" = -version ]; then echo 'openjdk version \"" + reported
+                + "\" 2020-01-01' >&2; exit 0; fi\n"
                 + "for a in \"$@\"; do echo \"$a\"; done\n");
         Files.setPosixFilePermissions(java, PosixFilePermissions.fromString("rwxr-xr-x"));
         if (release != null) {

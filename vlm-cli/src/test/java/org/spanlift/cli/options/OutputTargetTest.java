@@ -113,7 +113,8 @@ class OutputTargetTest {
     @Test
     void aFolderIsRefusedByEveryKindOfWriter() throws IOException {
         Path folder = Files.createDirectory(dir.resolve("out.csv"));
-        refusedInOneLine(CliRun.of("solve", WING, "--output", folder.toString()), "--output: " + folder + " is a folder");
+        refusedInOneLine(CliRun.of("solve", WING, "--output", folder.toString()), "--output: " + folder
+                + " is a folder");
         refusedInOneLine(CliRun.of("solve", WING, "--span-load", folder.toString()), "--span-load: " + folder
                 + " is a folder");
         Path sweep = Runs.scenario(dir, Runs.SWEEP);
@@ -190,7 +191,8 @@ class OutputTargetTest {
         assertEquals(0, r.exitCode(), r.err());
         assertEquals(Set.of(name), namesIn(dir));
         Path tooLong = dir.resolve("y".repeat(252) + ".csv");
-        refusedInOneLine(CliRun.of("solve", WING, "--output", tooLong.toString()), "bytes long; expected a name of at most 255");
+        refusedInOneLine(CliRun.of("solve", WING, "--output", tooLong.toString()),
+                "bytes long; expected a name of at most 255");
 
         Path sweep = Runs.scenario(dir, Runs.SWEEP);
         CliRun s = CliRun.of("sweep", sweep.toString(), "--output", dir.resolve("z".repeat(245) + ".csv").toString());

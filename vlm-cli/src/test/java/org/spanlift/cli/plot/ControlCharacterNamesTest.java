@@ -32,7 +32,8 @@ class ControlCharacterNamesTest {
 
     @Test
     void xmlSafeLeavesOrdinaryTextAlone() {
-        assertEquals("Two-seat trainer, 20\u00b0 \u00b7 \"a\" <b>", SvgWriter.xmlSafe("Two-seat trainer, 20\u00b0 \u00b7 \"a\" <b>"));
+        assertEquals("Two-seat trainer, 20\u00b0 \u00b7 \"a\" <b>", SvgWriter.xmlSafe("Two-seat trainer, 20\u00b0 "
+                + "\u00b7 \"a\" <b>"));
         assertEquals("a\\u0001b", SvgWriter.xmlSafe("a\u0001b"));
         assertEquals("tab\tand\nline", SvgWriter.xmlSafe("tab\tand\nline"));
     }

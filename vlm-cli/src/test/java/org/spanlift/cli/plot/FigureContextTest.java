@@ -39,7 +39,8 @@ class FigureContextTest {
         assertEquals(Math.toRadians(20), flap.deflection("flap"), 0);
         assertEquals(0, flap.deflection("aileron"), 0);
         FigureContext both = FigureContext.of(TRAINER, deflections(-5, 7.5), Optional.empty());
-        assertEquals("flap 5\u00b0 trailing edge up, aileron 7.5\u00b0 (right trailing edge down, left up)", both.text());
+        assertEquals("flap 5\u00b0 trailing edge up, aileron 7.5\u00b0 (right trailing edge down, left up)",
+                both.text());
         assertEquals("no control deflected", FigureContext.of(TRAINER, deflections(0, 0), Optional.empty()).text());
     }
 

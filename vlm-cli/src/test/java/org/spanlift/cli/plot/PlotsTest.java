@@ -48,7 +48,8 @@ class PlotsTest {
     }
 
     private static void assertCarries(FigureContext context, Figure figure, List<String> subtitle) {
-        assertTrue(String.join(" ", subtitle).contains("flap 20\u00b0 trailing edge down"), figure.id() + ": " + subtitle);
+        assertTrue(String.join(" ", subtitle).contains("flap 20\u00b0 trailing edge down"), figure.id() + ": "
+                + subtitle);
         assertTrue(String.join(" ", subtitle).contains("weight 7355 N"), figure.id() + ": " + subtitle);
         assertTrue(String.join(" ", subtitle).contains("pressure altitude 1000 m"), figure.id() + ": " + subtitle);
         assertTrue(figure.description().startsWith(context.sentence()), figure.id() + ": " + figure.description());
@@ -89,7 +90,8 @@ class PlotsTest {
                     : new double[] {-flap.to() / unit, -flap.from() / unit};
             assertArrayEquals(expected, band.getXData(), 1e-12);
         }
-        assertTrue(map.legend().stream().flatMap(List::stream).anyMatch(Plots.FLAP_SPAN::equals), map.legend().toString());
+        assertTrue(map.legend().stream().flatMap(List::stream).anyMatch(Plots.FLAP_SPAN::equals),
+                map.legend().toString());
         assertTrue(map.description().contains("deflected flap (flap at 20 degrees)"), map.description());
 
         double[] clean = flaps(TRAINER, 0);
@@ -195,8 +197,8 @@ class PlotsTest {
         ChartFigure load = Plots.spanLoad(TRAINER, s, Optional.empty(), FigureContext.of(TRAINER.wing(), d,
                 Optional.empty()));
         assertNull(load.chart().getStyler().getYAxisMin(), "the axis is not cut at zero");
-        ChartFigure clean = Plots.spanLoad(TRAINER, TRAINER.solve(Math.toRadians(4), flaps(TRAINER, 0)), Optional.empty(),
-                FigureContext.undeflected());
+        ChartFigure clean = Plots.spanLoad(TRAINER, TRAINER.solve(Math.toRadians(4), flaps(TRAINER, 0)),
+                Optional.empty(), FigureContext.undeflected());
         assertEquals(Double.valueOf(0), clean.chart().getStyler().getYAxisMin(), "positive loads start at zero");
     }
 }

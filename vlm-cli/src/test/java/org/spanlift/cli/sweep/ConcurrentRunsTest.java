@@ -40,7 +40,8 @@ class ConcurrentRunsTest {
     @Test
     void aSecondSweepIntoTheSameOutputIsRefusedWhileTheFirstRuns() throws Exception {
         Path sweep = Runs.scenario(dir, LONG_SWEEP);
-        Runs.write(dir, "w.wing.yaml", Runs.WING.replace("lattice: {strips: 10, rows: 3}", "lattice: {strips: 32, rows: 8}"));
+        Runs.write(dir, "w.wing.yaml", Runs.WING.replace("lattice: {strips: 10, rows: 3}",
+                "lattice: {strips: 32, rows: 8}"));
         Path out = dir.resolve("x.csv");
         String javaBin = Path.of(System.getProperty("java.home"), "bin", "java").toString();
         ProcessBuilder pb = new ProcessBuilder(javaBin, "-cp", System.getProperty("java.class.path"),

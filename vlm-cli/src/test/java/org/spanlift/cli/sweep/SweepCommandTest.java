@@ -67,7 +67,8 @@ class SweepCommandTest {
         for (int i = 0; i < lines.size(); i++) {
             assertTrue(lines.get(i).startsWith("{\"case\":" + i + ",\"id\":\""), lines.get(i));
         }
-        assertTrue(lines.get(8).contains("\"surfaces.wing.trapezoid.taper\":0.6,\"surfaces.wing.trapezoid.washout\":0.5,"),
+        assertTrue(lines.get(8)
+                .contains("\"surfaces.wing.trapezoid.taper\":0.6,\"surfaces.wing.trapezoid.washout\":0.5,"),
                 lines.get(8));
         Path reordered = Runs.write(dir, "o.sweep.yaml", Runs.SWEEP.replace("{from: 0, to: 3, step: 0.5}", "[0.5, 0]"));
         Path other = dir.resolve("o.jsonl");
@@ -136,7 +137,8 @@ class SweepCommandTest {
         assertTrue(r.err().contains("21 cases") && r.err().contains("7 failed"), r.err());
         List<String> lines = Runs.read(out).lines().toList();
         assertEquals(22, lines.size());
-        assertTrue(lines.get(8).endsWith(",\"w.wing.yaml:6: surfaces[0].trapezoid.taper: must be from 0 to 10, got 11\""),
+        assertTrue(lines.get(8).endsWith(",\"w.wing.yaml:6: surfaces[0].trapezoid.taper: must be from 0 to 10, got "
+                + "11\""),
                 lines.get(8));
         assertTrue(lines.get(15).endsWith(","), "the case after the failures has no error: " + lines.get(15));
     }
@@ -151,7 +153,8 @@ class SweepCommandTest {
                 "s.sweep.yaml:4: parameters.surfaces.wing.trapezoid.washout.step: the step must not be zero"},
             {"{from: 0, to: 3, step: 0.5}", "{from: 0, to: 3, step: -0.5}",
                 "parameters.surfaces.wing.trapezoid.washout.step: the step must lead from 0 to 3"},
-            {"flight:", "design: {kind: latin-hypercube, cases: 20}\nflight:", "s.sweep.yaml:5: design.seed: missing key; expected a whole number"},
+            {"flight:", "design: {kind: latin-hypercube, cases: 20}\nflight:",
+                    "s.sweep.yaml:5: design.seed: missing key; expected a whole number"},
             {"{from: 0, to: 3, step: 0.5}", "{from: 0, to: 3, step: 0.0000001}\ndesign: grid",
                 "s.sweep.yaml:5: design: the full grid has 180000006 cases, more than 10000000; use --force"},
         };

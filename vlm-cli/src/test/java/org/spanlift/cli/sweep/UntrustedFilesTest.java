@@ -114,8 +114,8 @@ class UntrustedFilesTest {
         refusedInOneLine(r, out + ":4: id: case 2 has the id '" + editedId + "'", "run without --resume");
         assertEquals(cut, Runs.read(out));
 
-        String swapped = text.replace(lines.get(7) + "\n", "").replace(lines.get(8) + "\n", lines.get(8) + "\n" + lines.get(7)
-                + "\n");
+        String swapped = text.replace(lines.get(7) + "\n", "").replace(lines.get(8) + "\n", lines.get(8) + "\n"
+                + lines.get(7) + "\n");
         Runs.write(dir, "r.csv", swapped.substring(0, swapped.indexOf('\n', swapped.length() / 2) + 1));
         CliRun order = Runs.of("sweep", sweep.toString(), "-o", out.toString(), "--resume");
         refusedInOneLine(order, out + ":8: case: expected case 6, found '7'");

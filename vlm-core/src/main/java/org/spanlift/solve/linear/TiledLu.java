@@ -20,13 +20,13 @@ import java.util.concurrent.ForkJoinTask;
  * <p><b>How.</b> Panels of {@link #PANEL} columns are factorized column by column (right-looking inside the
  * panel); the panel's rows of U right of it follow by a forward substitution; the trailing accumulators take
  * the panel's products in one pass, {@link #TILE} columns at a time from a copy of the panel's U rows, four k
- * at a time for two rows at a time (a loop the JIT vectorizes: every array in it is indexed alike). The trailing update's rows are split
- * between the calling thread and the common fork-join pool when the options allow more than one thread and
- * the block is large enough to pay for it.
+ * at a time for two rows at a time (a loop the JIT vectorizes: every array in it is indexed alike). The trailing
+ * update's rows are split between the calling thread and the common fork-join pool when the options allow more than one
+ * thread and the block is large enough to pay for it.
  *
  * <p>Memory: the factor (n^2 doubles) besides the matrix given, which serves as the original entries and
- * is overwritten (rows swapped), and work space of three panels of {@link #PANEL} x n doubles. Golub and Van Loan, Matrix Computations, 4th ed., sections 3.2 and 3.4
- * (block LU, partial pivoting).
+ * is overwritten (rows swapped), and work space of three panels of {@link #PANEL} x n doubles. Golub and Van Loan,
+ * Matrix Computations, 4th ed., sections 3.2 and 3.4 (block LU, partial pivoting).
  */
 public final class TiledLu implements DenseLu {
 

@@ -17,7 +17,8 @@ class PhysicalRangeTest {
     void speedsFarBeyondAnyAircraftAreRefusedWithTheRange() {
         QuantityFormatException e = assertThrows(QuantityFormatException.class,
                 () -> PhysicalRange.SPEED.parse("1e160m/s"));
-        assertEquals("a speed must be from 0.1 m/s to 1000 m/s (about 0.19 kt to 1944 kt), got \"1e160m/s\"", e.getMessage());
+        assertEquals("a speed must be from 0.1 m/s to 1000 m/s (about 0.19 kt to 1944 kt), got \"1e160m/s\"",
+                e.getMessage());
         assertThrows(QuantityFormatException.class, () -> PhysicalRange.SPEED.parse("1e-300m/s"));
     }
 
