@@ -109,6 +109,15 @@ class BalanceCommandTest {
     }
 
     @Test
+    void aCentreOfGravityFarOutsideTheAirframeIsRefusedInOneLine() {
+        CliRun r = CliRun.of("balance", TRAINER, "--cg", "200m");
+        assertEquals(2, r.exitCode());
+        assertEquals(1, r.err().strip().lines().count(), r.err());
+        assertTrue(r.err().contains("the centre of gravity 200m lies"), r.err());
+        assertEquals("", r.out());
+    }
+
+    @Test
     void aTrimSpeedWithoutAWeightIsRefused() {
         CliRun r = CliRun.of("balance", TRAINER, "--cg", "25%mac", "--trim-speed", "90kt");
         assertEquals(2, r.exitCode());

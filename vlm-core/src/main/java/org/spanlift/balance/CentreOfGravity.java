@@ -3,6 +3,7 @@ package org.spanlift.balance;
 import java.util.Locale;
 import java.util.OptionalDouble;
 
+import org.spanlift.input.RefusedException;
 import org.spanlift.input.quantity.Decimal;
 import org.spanlift.input.quantity.Quantity;
 import org.spanlift.input.quantity.QuantityFormatException;
@@ -63,8 +64,20 @@ public record CentreOfGravity(String text, OptionalDouble x, OptionalDouble macF
         return s.length() > 40 ? s.substring(0, 40) + "..." : s;
     }
 
-    /** The x of the centre of gravity, m, on the balance's wing. */
+    /**
+     * The x of the centre of gravity, m, on the balance's wing.
+     *
+     * @throws RefusedException for a centre of gravity more than {@value #MAX_PERCENT}% of the MAC from the MAC's
+     *                          leading edge (far outside any airframe of this wing)
+     */
     public double x(Balance balance) {
-        return x.isPresent() ? x.getAsDouble() : balance.macPoint(macFraction.getAsDouble());
+        double at = x.isPresent() ? x.getAsDouble() : balance.macPoint(macFraction.getAsDouble());
+        double fraction = balance.macFraction(at);
+        if (!(Math.abs(fraction) <= MAX_PERCENT / 100)) {
+            throw new RefusedException(String.format(Locale.ROOT, "the centre of gravity %s lies %.0f%% of the mean "
+                    + "aerodynamic chord from its leading edge at x %.3f m; expected one within %.0f%%", text,
+                    100 * fraction, balance.macPoint(0), MAX_PERCENT));
+        }
+        return at;
     }
 }
