@@ -101,6 +101,7 @@ public final class Balance {
         return new Balance(analysis, deflections);
     }
 
+    /** The analysis of the configuration balanced. */
     public WingAnalysis analysis() {
         return analysis;
     }
@@ -150,7 +151,12 @@ public final class Balance {
         return fuselageSlope;
     }
 
-    /** The stick-fixed neutral point: where dCm/dCL vanishes, at zero angle of attack and elevator. */
+    /**
+     * The stick-fixed neutral point: where dCm/dCL vanishes, at zero angle of attack and elevator.
+     *
+     * @param x           its x, m, wing axes
+     * @param macFraction the fraction of the wing's MAC from its leading edge there
+     */
     public record NeutralPoint(double x, double macFraction) {
     }
 
@@ -396,6 +402,7 @@ public final class Balance {
      * The stall in balance, power off: the wing at its stall point (by the basis) with the elevator that makes
      * Cm = 0 about the centre of gravity, and the weight carried by every surface together.
      *
+     * @param basis           what the stall point stands on
      * @param lift            the configuration's CL
      * @param wingLift        the wing's CL on the reference area
      * @param alpha           rad

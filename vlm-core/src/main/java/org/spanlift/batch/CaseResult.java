@@ -12,9 +12,14 @@ import java.util.List;
  * results (aligned with the sweep's columns; a {@code Double}, a {@code Boolean} flag, or null where a value
  * does not exist, such as e near zero lift) or the error that stopped it.
  *
+ * @param index    the case's index in the design
+ * @param id       its stable id, {@value #ID_LENGTH} hex digits
+ * @param values   its parameter values, as text
  * @param derived  the case's derived values in the sweep's entry order (empty without derived entries), or null
  *                 when they could not be computed (the error says why)
+ * @param results  its results, aligned with the sweep's columns (all null when it failed)
  * @param feasible whether the case meets every constraint; null without constraints or when it failed
+ * @param error    the error that stopped it, or null
  */
 public record CaseResult(long index, String id, String[] values, double[] derived, Object[] results, Boolean feasible,
         String error) {
@@ -22,6 +27,7 @@ public record CaseResult(long index, String id, String[] values, double[] derive
     /** Hex digits of a case id (64 bits of SHA-256). */
     public static final int ID_LENGTH = 16;
 
+    /** True when an error stopped the case. */
     public boolean failed() {
         return error != null;
     }

@@ -13,10 +13,16 @@ import org.spanlift.geometry.Reference;
  * A steady flight condition: weight (N), load factor, the atmosphere at a pressure altitude, and
  * optionally the equivalent airspeed (m/s). At these speeds equivalent airspeed equals the calibrated
  * airspeed an indicator shows.
+ *
+ * @param weight          weight, N
+ * @param loadFactor      load factor n, positive
+ * @param atmosphere      the atmosphere at the pressure altitude
+ * @param equivalentSpeed equivalent airspeed, m/s, if given
  */
 public record FlightCondition(double weight, double loadFactor, AtmosphereState atmosphere,
         OptionalDouble equivalentSpeed) {
 
+    /** Checks that the weight and load factor are positive and finite. */
     public FlightCondition {
         if (!(weight > 0) || !Double.isFinite(weight)) {
             throw new IllegalArgumentException("the weight must be positive");
@@ -36,6 +42,7 @@ public record FlightCondition(double weight, double loadFactor, AtmosphereState 
         return loadFactor * weight;
     }
 
+    /** The true airspeed in the atmosphere, m/s, when an equivalent airspeed is given. */
     public OptionalDouble trueSpeed() {
         return equivalentSpeed.isPresent()
                 ? OptionalDouble.of(Airspeed.trueFromEquivalent(equivalentSpeed.getAsDouble(), atmosphere))

@@ -21,6 +21,7 @@ import java.util.List;
 public record EllipticPlanform(double semiSpan, double rootChord, double rootNoseX, double rootNoseZ,
         double dihedral, double rootTwist, double washout, String sectionName) implements Planform {
 
+    /** Checks that the semi-span and root chord are positive and a section is named. */
     public EllipticPlanform {
         if (!(semiSpan > 0) || !(rootChord > 0)) {
             throw new IllegalArgumentException("an elliptic planform needs a positive span and root chord");

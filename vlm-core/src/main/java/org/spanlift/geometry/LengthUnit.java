@@ -4,8 +4,11 @@ import java.util.Locale;
 
 /** The length units a wing file may use. */
 public enum LengthUnit {
+    /** Metres. */
     M("m", 1.0),
+    /** International feet. */
     FT("ft", 0.3048),
+    /** International inches. */
     IN("in", 0.0254);
 
     private final String symbol;
@@ -16,6 +19,7 @@ public enum LengthUnit {
         this.metres = metres;
     }
 
+    /** The symbol a wing file writes: {@code m}, {@code ft} or {@code in}. */
     public String symbol() {
         return symbol;
     }
@@ -25,6 +29,7 @@ public enum LengthUnit {
         return metres;
     }
 
+    /** The unit of a symbol (surrounding blanks and case ignored). */
     public static LengthUnit parse(String text) {
         for (LengthUnit u : values()) {
             if (u.symbol.equals(text.trim().toLowerCase(Locale.ROOT))) {

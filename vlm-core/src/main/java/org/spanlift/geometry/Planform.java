@@ -15,12 +15,16 @@ public sealed interface Planform permits StationPlanform, EllipticPlanform, Retw
     /** Largest y the surface covers (the tip). */
     double yEnd();
 
+    /** The local chord at y, m. */
     double chord(double y);
 
+    /** The x of the leading edge at y, m (aft positive). */
     double noseX(double y);
 
+    /** The z of the leading edge at y, m (up positive). */
     double noseZ(double y);
 
+    /** The local twist (incidence) at y, rad, positive nose-up. */
     double twist(double y);
 
     /**

@@ -16,6 +16,10 @@ import java.util.List;
  */
 public record RetwistedPlanform(Planform base, double[] knots, double[] change) implements Planform {
 
+    /**
+     * Copies the arrays and checks them: a base without a twist change, one finite change per knot, knots
+     * increasing from the root with the last at the tip.
+     */
     public RetwistedPlanform {
         knots = knots.clone();
         change = change.clone();

@@ -35,6 +35,7 @@ public record Section(String name, CamberLine camber, double incidenceCorrection
         OptionalDouble measuredZeroLiftAngle, Optional<MeasuredLiftCurve> liftCurve,
         NavigableMap<Double, MeasuredLiftCurve> flapLiftCurves) {
 
+    /** Keeps the flap lift curves in an unmodifiable copy sorted by deflection. */
     public Section {
         flapLiftCurves = Collections.unmodifiableNavigableMap(new TreeMap<>(flapLiftCurves));
     }
@@ -56,6 +57,7 @@ public record Section(String name, CamberLine camber, double incidenceCorrection
                 OptionalDouble.empty());
     }
 
+    /** The same section with the given cl_max against Reynolds number. */
     public Section withClMax(Table table) {
         return new Section(name, camber, incidenceCorrection, liftSlope, Optional.of(table), flapClMaxIncrement,
                 dragPolar, measuredZeroLiftAngle, liftCurve, flapLiftCurves);

@@ -5,9 +5,12 @@ import java.util.List;
 /**
  * A planform given by stations, with chord, leading edge and twist linear in y between them. The
  * spanwise integrals are exact for that piecewise-linear geometry.
+ *
+ * @param stations the stations, y increasing from root to tip (copied)
  */
 public record StationPlanform(List<Station> stations) implements Planform {
 
+    /** Copies the stations and checks that there are at least two, y increasing from root to tip. */
     public StationPlanform {
         stations = List.copyOf(stations);
         if (stations.size() < 2) {

@@ -6,6 +6,11 @@ import java.util.List;
  * One lifting surface. A mirrored surface is described on its right half (y from the root up) and has a
  * mirror image on the left; otherwise the description is the whole surface.
  *
+ * @param name              the surface's name
+ * @param mirrored          true when described on its right half with a mirror image on the left
+ * @param planform          its planform
+ * @param controls          its controls (copied)
+ * @param lattice           its lattice density
  * @param fuselageHalfWidth y of the wing-fuselage junction of a mirrored surface, m (0: none). The lattice
  *                          carries the surface through the fuselage; the stations inboard of the junction
  *                          are covered by it and are not candidates for stall onset
@@ -14,6 +19,10 @@ import java.util.List;
 public record Surface(String name, boolean mirrored, Planform planform, List<ControlSurface> controls,
         LatticeSpec lattice, double fuselageHalfWidth, SurfaceRole role) {
 
+    /**
+     * Copies the controls and checks them: elevators only on a tail or canard; the fuselage half-width from 0
+     * to below the tip, and positive only on a mirrored surface.
+     */
     public Surface {
         controls = List.copyOf(controls);
         for (ControlSurface c : controls) {
@@ -97,6 +106,7 @@ public record Surface(String name, boolean mirrored, Planform planform, List<Con
                 fuselageHalfWidth);
     }
 
+    /** The same surface with another lattice. */
     public Surface withLattice(LatticeSpec spec) {
         return new Surface(name, mirrored, planform, controls, spec, fuselageHalfWidth, role);
     }

@@ -26,6 +26,10 @@ import java.util.List;
 public record Trapezoid(double span, double rootChord, double taper, double quarterChordSweep, double dihedral,
         double rootTwist, double washout, String section, double rootNoseX, double rootNoseZ) {
 
+    /**
+     * Checks the values: a positive span and root chord, a taper of 0 or more, sweep and dihedral below 90 degrees
+     * in size, finite twists and nose, and a section named.
+     */
     public Trapezoid {
         if (!(span > 0) || !(rootChord > 0) || !(taper >= 0) || !Double.isFinite(span)
                 || !Double.isFinite(rootChord) || !Double.isFinite(taper)) {

@@ -17,6 +17,11 @@ import java.util.TreeSet;
  * <p>The first surface is the wing: a first surface without a role gets {@link SurfaceRole#WING}, and no other
  * surface may have it; at most one surface is the tail and one the canard.
  *
+ * @param name             the wing's name
+ * @param displayUnit      the file's length unit, for display only
+ * @param reference        the reference values of the coefficients
+ * @param surfaces         the surfaces, the wing first
+ * @param sections         the sections by name
  * @param fuselage         the fuselage of the empirical pitching-moment estimate, if described
  * @param thrustLineHeight the height of the thrust line above the centre of gravity, m, if given (thrust along
  *                         the body x axis, equal to the drag in level flight)
@@ -24,6 +29,11 @@ import java.util.TreeSet;
 public record Wing(String name, LengthUnit displayUnit, Reference reference, List<Surface> surfaces,
         Map<String, Section> sections, Optional<Fuselage> fuselage, OptionalDouble thrustLineHeight) {
 
+    /**
+     * Copies the surfaces and sections and checks them: at least one surface, the first the wing (one of role
+     * other taken as such), at most one wing, tail and canard, a finite thrust-line height, and every section
+     * a surface names.
+     */
     public Wing {
         if (surfaces.isEmpty()) {
             throw new IllegalArgumentException("a wing needs at least one surface");
@@ -116,6 +126,7 @@ public record Wing(String name, LengthUnit displayUnit, Reference reference, Lis
         return all;
     }
 
+    /** The control of the given name, if there is one. */
     public Optional<ControlSurface> control(String name) {
         return controls().stream().filter(c -> c.name().equals(name)).findFirst();
     }

@@ -26,6 +26,7 @@ public final class Field {
     /** The line of the key this value belongs to, 0 when it has none (the document, a list item). */
     private final int keyLine;
 
+    /** A field of the given file at the dotted path, holding the value. */
     public Field(String file, String path, YamlValue value) {
         this(file, path, value, 0);
     }
@@ -37,10 +38,12 @@ public final class Field {
         this.keyLine = keyLine;
     }
 
+    /** The file the value was read from, as messages name it. */
     public String file() {
         return file;
     }
 
+    /** The dotted field path of the value, empty for the whole document. */
     public String path() {
         return path;
     }
@@ -53,6 +56,7 @@ public final class Field {
         return value instanceof YamlValue.Scalar || keyLine <= 0 ? value.line() : keyLine;
     }
 
+    /** The value itself. */
     public YamlValue value() {
         return value;
     }
@@ -130,6 +134,7 @@ public final class Field {
         return new Field(file, child(key), e.get().value(), e.get().keyLine());
     }
 
+    /** The items of a list, each with its index in the path; anything else is refused. */
     public List<Field> items() {
         if (!(value instanceof YamlValue.Sequence seq)) {
             throw error("expected a list, got " + value.describe());
@@ -150,6 +155,7 @@ public final class Field {
         return out;
     }
 
+    /** The value as text; a missing value, a list or a mapping is refused. */
     public String text() {
         if (value instanceof YamlValue.Scalar s && !s.isNull()) {
             return s.text();
@@ -182,6 +188,7 @@ public final class Field {
         return d;
     }
 
+    /** A finite number greater than zero. */
     public double positive() {
         double d = number();
         if (!(d > 0)) {
@@ -199,6 +206,7 @@ public final class Field {
         return d;
     }
 
+    /** A whole number within [lo, hi]. */
     public int integer(int lo, int hi) {
         double d = number();
         if (d != Math.rint(d)) {
@@ -210,6 +218,7 @@ public final class Field {
         return (int) d;
     }
 
+    /** {@code true} or {@code false} (case-insensitive, unquoted). */
     public boolean bool() {
         if (value instanceof YamlValue.Scalar s && s.plain()) {
             String t = s.text().toLowerCase(Locale.ROOT);
@@ -313,6 +322,7 @@ public final class Field {
         return text.length() > 40 ? text.substring(0, 37) + "..." : text;
     }
 
+    /** A number for a message: a whole number under 1e15 in size without a decimal point, else as Java prints it. */
     public static String format(double d) {
         return d == Math.rint(d) && Math.abs(d) < 1e15 ? String.valueOf((long) d) : String.valueOf(d);
     }

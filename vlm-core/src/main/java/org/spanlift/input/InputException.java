@@ -13,11 +13,16 @@ public class InputException extends RuntimeException {
     /** The longest field path a message shows; a longer one (a key of a file's own making) is cut short. */
     private static final int MAX_FIELD = 120;
 
+    /** The file the problem is in. */
     private final String file;
+    /** The 1-based line of the problem, 0 when unknown. */
     private final int line;
+    /** The dotted field path, null or empty when none. */
     private final String field;
+    /** What is wrong and what is expected, without the location. */
     private final String problem;
 
+    /** A problem at the given file, 1-based line (0 when unknown) and dotted field path (null or empty for none). */
     public InputException(String file, int line, String field, String problem) {
         super(format(file, line, field, problem));
         this.file = file;
@@ -59,14 +64,17 @@ public class InputException extends RuntimeException {
         return b.toString();
     }
 
+    /** The file the problem is in. */
     public String file() {
         return file;
     }
 
+    /** The 1-based line of the problem, 0 when unknown. */
     public int line() {
         return line;
     }
 
+    /** The dotted field path, null or empty when the problem is not at one field. */
     public String field() {
         return field;
     }

@@ -10,6 +10,7 @@ public class RefusedException extends RuntimeException {
 
     private static final long serialVersionUID = 1L;
 
+    /** A refusal with the given message, made one line. */
     public RefusedException(String message) {
         super(InputException.oneLine(message));
     }

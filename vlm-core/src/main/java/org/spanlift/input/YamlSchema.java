@@ -37,9 +37,12 @@ public final class YamlSchema {
      */
     public record Node(Kind kind, Map<String, Node> keys, Node element, boolean leaf) {
 
+        /** A plain value. */
         public static final Node VALUE = new Node(Kind.VALUE, Map.of(), null, true);
+        /** A list of plain values (numbers), chosen by index. */
         public static final Node NUMBERS = new Node(Kind.INDEXED_LIST, Map.of(), VALUE, false);
 
+        /** The names of the keys, sorted. */
         public Set<String> keyNames() {
             return new TreeSet<>(keys.keySet());
         }

@@ -11,6 +11,7 @@ import java.util.Optional;
  */
 public sealed interface YamlValue permits YamlValue.Scalar, YamlValue.Mapping, YamlValue.Sequence {
 
+    /** The 1-based line the value starts on. */
     int line();
 
     /** What this value is, for messages: "a number", "a mapping", "a list". */
@@ -18,6 +19,10 @@ public sealed interface YamlValue permits YamlValue.Scalar, YamlValue.Mapping, Y
 
     /**
      * A scalar: its text and whether it was plain (unquoted) in the file.
+     *
+     * @param text  the text as written (without quotes)
+     * @param plain true when unquoted
+     * @param line  its 1-based line
      */
     record Scalar(String text, boolean plain, int line) implements YamlValue {
         @Override
@@ -26,17 +31,30 @@ public sealed interface YamlValue permits YamlValue.Scalar, YamlValue.Mapping, Y
             return plain ? "'" + shown + "'" : "the quoted text \"" + shown + "\"";
         }
 
+        /** Whether this is YAML's null: plain and empty, {@code ~} or {@code null} (any case). */
         public boolean isNull() {
             return plain && (text.isEmpty() || text.equals("~") || text.equalsIgnoreCase("null"));
         }
     }
 
-    /** One key of a mapping, with the line of the key. */
+    /**
+     * One key of a mapping, with the line of the key.
+     *
+     * @param key     the key
+     * @param keyLine the key's 1-based line
+     * @param value   its value
+     */
     record Entry(String key, int keyLine, YamlValue value) {
     }
 
-    /** A mapping with string keys in file order; keys are unique. */
+    /**
+     * A mapping with string keys in file order; keys are unique.
+     *
+     * @param entries the entries, in file order
+     * @param line    the mapping's 1-based line
+     */
     record Mapping(List<Entry> entries, int line) implements YamlValue {
+        /** Copies the entries. */
         public Mapping {
             entries = List.copyOf(entries);
         }
@@ -46,10 +64,12 @@ public sealed interface YamlValue permits YamlValue.Scalar, YamlValue.Mapping, Y
             return "a mapping";
         }
 
+        /** The entry of the key, if present. */
         public Optional<Entry> entry(String key) {
             return entries.stream().filter(e -> e.key().equals(key)).findFirst();
         }
 
+        /** The value of the key, if present. */
         public Optional<YamlValue> get(String key) {
             return entry(key).map(Entry::value);
         }
@@ -68,8 +88,14 @@ public sealed interface YamlValue permits YamlValue.Scalar, YamlValue.Mapping, Y
         }
     }
 
-    /** A list. */
+    /**
+     * A list.
+     *
+     * @param items the items, in file order
+     * @param line  the list's 1-based line
+     */
     record Sequence(List<YamlValue> items, int line) implements YamlValue {
+        /** Copies the items. */
         public Sequence {
             items = List.copyOf(items);
         }
@@ -79,6 +105,7 @@ public sealed interface YamlValue permits YamlValue.Scalar, YamlValue.Mapping, Y
             return "a list";
         }
 
+        /** A copy with the item at the index replaced. */
         public Sequence with(int index, YamlValue value) {
             List<YamlValue> copy = new ArrayList<>(items);
             copy.set(index, value);

@@ -31,7 +31,9 @@ import org.spanlift.input.quantity.QuantityKind;
  */
 public final class CasesReader {
 
+    /** Keys accepted at the top of a cases file. */
     public static final Set<String> TOP_KEYS = Set.of("cases");
+    /** Keys accepted in each item of {@code cases}. */
     public static final Set<String> CASE_KEYS = Set.of("name", "weight", "load-factor", "speed", "altitude",
             "aileron", "other-side");
     /** Load factors accepted, both signs. */
@@ -42,11 +44,13 @@ public final class CasesReader {
     private CasesReader() {
     }
 
+    /** Reads and checks a cases file. */
     public static List<LoadCase> read(Path path) {
         String file = path.toString();
         return parse(TextFile.read(path, "cases file"), file);
     }
 
+    /** Parses and checks a cases file's text; {@code file} names it in messages. */
     public static List<LoadCase> parse(String text, String file) {
         YamlValue tree = YamlParser.parse(text, file, "a list of load cases under the key cases");
         Field root = new Field(file, "", tree);

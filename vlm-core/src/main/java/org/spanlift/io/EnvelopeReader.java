@@ -29,20 +29,26 @@ import org.spanlift.input.YamlValue;
  */
 public final class EnvelopeReader {
 
+    /** Keys accepted at the top of an envelope file. */
     public static final Set<String> TOP_KEYS = Set.of("weight", "altitude", "load-factors", "speeds", "gusts",
             "lift-slope", "cl-min");
+    /** Keys accepted under {@code load-factors}. */
     public static final Set<String> FACTOR_KEYS = Set.of("positive", "negative", "negative-at-vd");
+    /** Keys accepted under {@code speeds}. */
     public static final Set<String> SPEED_KEYS = Set.of("va", "vb", "vc", "vd");
+    /** Keys accepted under {@code gusts}. */
     public static final Set<String> GUST_KEYS = Set.of("vb", "vc", "vd");
 
     private EnvelopeReader() {
     }
 
+    /** Reads and checks an envelope file. */
     public static EnvelopeSpec read(Path path) {
         String file = path.toString();
         return parse(TextFile.read(path, "envelope file"), file);
     }
 
+    /** Parses and checks an envelope file's text; {@code file} names it in messages. */
     public static EnvelopeSpec parse(String text, String file) {
         YamlValue tree = YamlParser.parse(text, file,
                 "an envelope description (weight, load-factors, speeds and gusts)");

@@ -73,8 +73,9 @@ public final class SectionLiftCurveReader {
     /** Keys of each entry of {@code flap-lift-curves}. */
     public static final Set<String> FLAP_CURVE_KEYS = Set.of("deflection", "file", "reynolds", "alpha", "cl");
 
-    /** Fewest and most angles of a curve. */
+    /** Fewest angles of a curve. */
     public static final int MIN_ANGLES = 4;
+    /** Most angles of a curve. */
     public static final int MAX_ANGLES = 1000;
     /** Most Reynolds numbers of a curve. */
     public static final int MAX_REYNOLDS = 50;
@@ -84,8 +85,9 @@ public final class SectionLiftCurveReader {
     public static final double ALPHA_LIMIT_DEG = 90;
     /** Largest |cl|. */
     public static final double CL_LIMIT = 5;
-    /** Range of the Reynolds numbers. */
+    /** Smallest Reynolds number accepted. */
     public static final double MIN_REYNOLDS = 1e3;
+    /** Largest Reynolds number accepted. */
     public static final double MAX_REYNOLDS_NUMBER = 1e9;
     /** Largest flap deflection of a flap curve, degrees (the range of {@code flap-cl-max}). */
     public static final double MAX_FLAP_DEFLECTION_DEG = 60;

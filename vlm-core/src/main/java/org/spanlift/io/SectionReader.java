@@ -28,10 +28,14 @@ import org.spanlift.section.ThinAirfoil;
  */
 public final class SectionReader {
 
+    /** Keys accepted in each entry of a wing file's {@code sections}. */
     public static final Set<String> KEYS = Set.of("camber", "camber-file", "zero-lift-angle", "lift-slope", "cl-max",
             "flap-cl-max", "drag-polar", "lift-curve", "flap-lift-curves");
+    /** Keys of a {@code cl-max} given as a table against Reynolds number. */
     public static final Set<String> CL_MAX_TABLE_KEYS = Set.of("reynolds", "values");
+    /** Keys of {@code flap-cl-max}. */
     public static final Set<String> FLAP_KEYS = Set.of("deflection", "increment");
+    /** Keys of {@code drag-polar}. */
     public static final Set<String> POLAR_KEYS = Set.of("reynolds", "cl", "cd");
 
     private SectionReader() {

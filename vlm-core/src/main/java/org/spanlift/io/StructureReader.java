@@ -40,7 +40,9 @@ public final class StructureReader {
     /** Keys of the {@code structure} section. */
     public static final Set<String> KEYS = Set.of("spar", "mass", "mass-centre", "mass-table", "point-masses",
             "longitudinal-axis");
+    /** Keys of each row of {@code mass-table}. */
     public static final Set<String> TABLE_KEYS = Set.of("y", "mass-per-span");
+    /** Keys of each item of {@code point-masses}. */
     public static final Set<String> POINT_KEYS = Set.of("name", "mass", "y", "x", "chord-fraction");
 
     private StructureReader() {

@@ -46,30 +46,42 @@ import org.spanlift.section.CamberLines;
  */
 public final class WingFileReader {
 
-    /** Keys accepted at each level of a wing file (the schema sweeps check their paths against). */
+    /** Keys accepted at the top of a wing file (the schema sweeps check their paths against these sets). */
     public static final Set<String> TOP_KEYS = Set.of("name", "units", "reference", "surfaces", "sections",
             "structure", "fuselage", "thrust-line");
+    /** Keys accepted under {@code reference}. */
     public static final Set<String> REFERENCE_KEYS = Set.of("area", "span", "chord", "moment-point");
+    /** Keys accepted in each item of {@code surfaces}. */
     public static final Set<String> SURFACE_KEYS = Set.of("name", "mirror", "section", "stations", "trapezoid",
             "elliptic", "controls", "lattice", "fuselage-half-width", "role");
+    /** Keys accepted in each item of a surface's {@code stations}. */
     public static final Set<String> STATION_KEYS = Set.of("y", "chord", "nose-x", "nose-z", "twist", "section");
+    /** Keys accepted under a surface's {@code trapezoid}. */
     public static final Set<String> TRAPEZOID_KEYS = Set.of("span", "root-chord", "taper", "sweep", "dihedral",
             "washout", "root-twist", "root-nose");
+    /** Keys accepted under a surface's {@code elliptic}. */
     public static final Set<String> ELLIPTIC_KEYS = Set.of("span", "root-chord", "dihedral", "washout",
             "root-twist", "root-nose");
+    /** Keys accepted in each item of a surface's {@code controls}. */
     public static final Set<String> CONTROL_KEYS = Set.of("name", "kind", "from", "to", "chord-fraction",
             "deflection", "limits");
+    /** Keys accepted under {@code fuselage}. */
     public static final Set<String> FUSELAGE_KEYS = Set.of("length", "width", "nose-x");
+    /** Keys accepted under {@code thrust-line}. */
     public static final Set<String> THRUST_LINE_KEYS = Set.of("height");
 
     /** Largest control deflection or travel limit accepted, degrees either way. */
     public static final double MAX_DEFLECTION_DEG = 45;
+    /** Keys accepted under a surface's {@code lattice}. */
     public static final Set<String> LATTICE_KEYS = Set.of("strips", "rows", "strip-spacing", "row-spacing");
+    /** Keys accepted in each entry of {@code sections}. */
     public static final Set<String> SECTION_KEYS = SectionReader.KEYS;
 
-    /** Largest lattice accepted: strips per surface, rows, and panels over the whole wing. */
+    /** Largest lattice accepted: strips per surface. */
     public static final int MAX_STRIPS = 400;
+    /** Largest lattice accepted: chordwise rows. */
     public static final int MAX_ROWS = 64;
+    /** Largest lattice accepted: panels over the whole wing. */
     public static final int MAX_PANELS = 12_000;
 
     /**
@@ -85,8 +97,9 @@ public final class WingFileReader {
      */
     public static final double MIN_LENGTH_M = 0.001;
 
-    /** Range of a reference area, m^2: from 1 mm by 1 mm to 10 km by 10 km. */
+    /** Smallest reference area accepted, m^2 (1 mm by 1 mm). */
     public static final double MIN_AREA_M2 = MIN_LENGTH_M * MIN_LENGTH_M;
+    /** Largest reference area accepted, m^2 (10 km by 10 km). */
     public static final double MAX_AREA_M2 = MAX_LENGTH_M * MAX_LENGTH_M;
 
     /** Name of the section a station gets when neither it nor its surface names one: a flat plate. */

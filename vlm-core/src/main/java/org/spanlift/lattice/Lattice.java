@@ -170,14 +170,17 @@ public final class Lattice {
         return bPoint[p];
     }
 
+    /** The x of trailing point k, m. */
     public double trailingX(int k) {
         return trailing[3 * k];
     }
 
+    /** The y of trailing point k, m. */
     public double trailingY(int k) {
         return trailing[3 * k + 1];
     }
 
+    /** The z of trailing point k, m. */
     public double trailingZ(int k) {
         return trailing[3 * k + 2];
     }
@@ -245,10 +248,12 @@ public final class Lattice {
         return mirrored;
     }
 
+    /** The spanwise strips, in strip-index order. */
     public List<Strip> strips() {
         return strips;
     }
 
+    /** Index in {@link #strips()} of the strip the panel belongs to. */
     public int stripOf(int panel) {
         return stripOf[panel];
     }
@@ -279,50 +284,62 @@ public final class Lattice {
         return cutoff[panel];
     }
 
+    /** The x of the start A of panel p's bound leg, m. */
     public double ax(int p) {
         return a[3 * p];
     }
 
+    /** The y of the start A of panel p's bound leg, m. */
     public double ay(int p) {
         return a[3 * p + 1];
     }
 
+    /** The z of the start A of panel p's bound leg, m. */
     public double az(int p) {
         return a[3 * p + 2];
     }
 
+    /** The x of the end B of panel p's bound leg, m. */
     public double bx(int p) {
         return b[3 * p];
     }
 
+    /** The y of the end B of panel p's bound leg, m. */
     public double by(int p) {
         return b[3 * p + 1];
     }
 
+    /** The z of the end B of panel p's bound leg, m. */
     public double bz(int p) {
         return b[3 * p + 2];
     }
 
+    /** The x of panel p's control point (three-quarter chord), m. */
     public double cx(int p) {
         return control[3 * p];
     }
 
+    /** The y of panel p's control point, m. */
     public double cy(int p) {
         return control[3 * p + 1];
     }
 
+    /** The z of panel p's control point, m. */
     public double cz(int p) {
         return control[3 * p + 2];
     }
 
+    /** The x component of panel p's unit normal (pointing up). */
     public double nx(int p) {
         return normal[3 * p];
     }
 
+    /** The y component of panel p's unit normal. */
     public double ny(int p) {
         return normal[3 * p + 1];
     }
 
+    /** The z component of panel p's unit normal. */
     public double nz(int p) {
         return normal[3 * p + 2];
     }

@@ -29,8 +29,12 @@ public final class Envelope {
     /**
      * One point of the envelope with the gust formula's intermediate values where it is a gust point.
      *
+     * @param loadCase     the point as a load case
+     * @param kind         {@code manoeuvre} or {@code gust}
      * @param speedName    the design speed it stands at ({@code VA}, {@code VC}, ...)
      * @param gustVelocity the derived gust velocity, m/s (NaN for a manoeuvre point)
+     * @param massRatio    the gust mass ratio mu_g (NaN for a manoeuvre point)
+     * @param alleviation  the gust alleviation factor K_g (NaN for a manoeuvre point)
      */
     public record Point(LoadCase loadCase, String kind, String speedName, double gustVelocity, double massRatio,
             double alleviation) {

@@ -8,22 +8,35 @@ import java.util.function.Function;
  * negative value over all cases, with the index of the case that gives it. Immutable: the arrays are
  * copied on the way in and every array accessor returns a copy.
  *
- * @param y stations, m
+ * @param y       stations, m
+ * @param shear   extremes of the shear, N
+ * @param bending extremes of the bending moment, N m
+ * @param torsion extremes of the torsion, N m
  */
 public record Governing(double[] y, Extremes shear, Extremes bending, Extremes torsion) {
 
+    /** Copies the stations. */
     public Governing {
         y = y.clone();
     }
 
+    /** A copy of the stations, m. */
     @Override
     public double[] y() {
         return y.clone();
     }
 
-    /** Per station: the maximum and its case index, the minimum and its case index. */
+    /**
+     * Per station: the maximum and its case index, the minimum and its case index.
+     *
+     * @param max     largest value at each station
+     * @param maxCase index of the case giving it
+     * @param min     most negative value at each station
+     * @param minCase index of the case giving it
+     */
     public record Extremes(double[] max, int[] maxCase, double[] min, int[] minCase) {
 
+        /** Checks that the arrays share one length and copies them. */
         public Extremes {
             int n = max.length;
             if (maxCase.length != n || min.length != n || minCase.length != n) {
@@ -35,27 +48,32 @@ public record Governing(double[] y, Extremes shear, Extremes bending, Extremes t
             minCase = minCase.clone();
         }
 
+        /** A copy of the largest value at each station (N or N m). */
         @Override
         public double[] max() {
             return max.clone();
         }
 
+        /** A copy of the index of the case giving the largest value at each station. */
         @Override
         public int[] maxCase() {
             return maxCase.clone();
         }
 
+        /** A copy of the most negative value at each station (N or N m). */
         @Override
         public double[] min() {
             return min.clone();
         }
 
+        /** A copy of the index of the case giving the most negative value at each station. */
         @Override
         public int[] minCase() {
             return minCase.clone();
         }
     }
 
+    /** The governing cases over the given loads, which share their stations; case indices are into the list. */
     public static Governing of(List<SpanwiseLoads> cases) {
         if (cases.isEmpty()) {
             throw new IllegalArgumentException("no load cases");

@@ -137,6 +137,7 @@ public final class LoadsAnalysis {
         return new LoadsAnalysis(analysis, structure, deflections);
     }
 
+    /** The structure the loads are computed with. */
     public WingStructure structure() {
         return structure;
     }

@@ -39,9 +39,15 @@ public record SpanwiseLoads(LoadCase loadCase, double alpha, double liftCoeffici
 
     /** Which half the loads are of. */
     public enum Side {
-        BOTH, RIGHT, LEFT
+        /** A symmetric case: the right half standing for both. */
+        BOTH,
+        /** The right half of an unsymmetrical case. */
+        RIGHT,
+        /** The left half of an unsymmetrical case, in its own mirror axes. */
+        LEFT
     }
 
+    /** Checks that the arrays share one length and copies them. */
     public SpanwiseLoads {
         int n = y.length;
         if (shear.length != n || bending.length != n || torsion.length != n || chordShear.length != n
@@ -56,48 +62,58 @@ public record SpanwiseLoads(LoadCase loadCase, double alpha, double liftCoeffici
         chordBending = chordBending.clone();
     }
 
+    /** A copy of the stations, m. */
     @Override
     public double[] y() {
         return y.clone();
     }
 
+    /** A copy of the shear at each station, N, positive up. */
     @Override
     public double[] shear() {
         return shear.clone();
     }
 
+    /** A copy of the bending moment at each station, N m, positive for up-bending. */
     @Override
     public double[] bending() {
         return bending.clone();
     }
 
+    /** A copy of the torsion at each station, N m, positive nose-up. */
     @Override
     public double[] torsion() {
         return torsion.clone();
     }
 
+    /** A copy of the chordwise shear at each station, N, positive for an aft load outboard. */
     @Override
     public double[] chordShear() {
         return chordShear.clone();
     }
 
+    /** A copy of the chordwise bending at each station, N m, positive for an aft load outboard. */
     @Override
     public double[] chordBending() {
         return chordBending.clone();
     }
 
+    /** The number of stations. */
     public int stations() {
         return y.length;
     }
 
+    /** The shear at the root (the first station), N. */
     public double rootShear() {
         return shear[0];
     }
 
+    /** The bending moment at the root (the first station), N m. */
     public double rootBending() {
         return bending[0];
     }
 
+    /** The torsion at the root (the first station), N m. */
     public double rootTorsion() {
         return torsion[0];
     }

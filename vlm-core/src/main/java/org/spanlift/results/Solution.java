@@ -50,6 +50,7 @@ public final class Solution {
         TrefftzPlane.normalwash(lattice, stripCirculation, normalwash);
     }
 
+    /** The angle of attack, rad. */
     public double alpha() {
         return alpha;
     }
@@ -59,10 +60,12 @@ public final class Solution {
         return deflections[control];
     }
 
+    /** The lattice solved on. */
     public Lattice lattice() {
         return lattice;
     }
 
+    /** The reference values of the coefficients. */
     public Reference reference() {
         return reference;
     }

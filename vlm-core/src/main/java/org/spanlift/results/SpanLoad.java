@@ -17,6 +17,7 @@ package org.spanlift.results;
 public record SpanLoad(double[] y, double[] chord, double[] cl, double[] clc, double[] circulation,
         double[] inducedAngle, double[] yLeft, double[] yRight) {
 
+    /** Checks that the arrays share one length and copies them. */
     public SpanLoad {
         int n = y.length;
         if (chord.length != n || cl.length != n || clc.length != n || circulation.length != n
@@ -33,45 +34,54 @@ public record SpanLoad(double[] y, double[] chord, double[] cl, double[] clc, do
         yRight = yRight.clone();
     }
 
+    /** The number of strips. */
     public int size() {
         return y.length;
     }
 
+    /** A copy of the spanwise stations of the strips' control points, m. */
     @Override
     public double[] y() {
         return y.clone();
     }
 
+    /** A copy of the local chords, m. */
     @Override
     public double[] chord() {
         return chord.clone();
     }
 
+    /** A copy of the section lift coefficients 2 Gamma / (V c). */
     @Override
     public double[] cl() {
         return cl.clone();
     }
 
+    /** A copy of c * cl = 2 Gamma / V, m. */
     @Override
     public double[] clc() {
         return clc.clone();
     }
 
+    /** A copy of Gamma / V, m. */
     @Override
     public double[] circulation() {
         return circulation.clone();
     }
 
+    /** A copy of the local induced angles, rad (positive where the downwash lowers the angle). */
     @Override
     public double[] inducedAngle() {
         return inducedAngle.clone();
     }
 
+    /** A copy of the strips' left edges, m. */
     @Override
     public double[] yLeft() {
         return yLeft.clone();
     }
 
+    /** A copy of the strips' right edges, m. */
     @Override
     public double[] yRight() {
         return yRight.clone();

@@ -36,6 +36,10 @@ public final class CoordinateMeanLine implements CamberLine {
     private final double leadingEdgeX;
     private final double leadingEdgeY;
 
+    /**
+     * A mean line from the upper and lower surfaces' splines (y against s = sqrt(x), unit chord), with the
+     * chord length, chord-line angle and leading edge found in the file (its units and coordinates).
+     */
     public CoordinateMeanLine(String designation, CubicSpline upper, CubicSpline lower,
                        double chordInFileUnits, double chordAngle, double leadingEdgeX, double leadingEdgeY) {
         this.leadingEdgeX = leadingEdgeX;

@@ -13,6 +13,7 @@ public final class CubicSpline {
     private final double[] y;
     private final double[] d;   // first derivative at each knot
 
+    /** The spline through (t[i], y[i]): at least four knots, t strictly increasing (arrays copied). */
     public CubicSpline(double[] t, double[] y) {
         int n = t.length;
         if (n < 4 || y.length != n) {
@@ -108,6 +109,7 @@ public final class CubicSpline {
         return Math.max(0, Math.min(t.length - 2, i));
     }
 
+    /** The spline's value at x (the end cubic continued beyond the end knots). */
     public double value(double x) {
         int i = interval(x);
         double h = t[i + 1] - t[i];
@@ -119,6 +121,7 @@ public final class CubicSpline {
         return h00 * y[i] + h10 * h * d[i] + h01 * y[i + 1] + h11 * h * d[i + 1];
     }
 
+    /** The spline's derivative dy/dt at x. */
     public double derivative(double x) {
         int i = interval(x);
         double h = t[i + 1] - t[i];

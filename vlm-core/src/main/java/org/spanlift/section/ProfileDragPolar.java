@@ -13,6 +13,7 @@ import java.util.List;
  */
 public record ProfileDragPolar(double[] reynolds, List<Table> polars) {
 
+    /** Copies the arrays and checks that there is one polar per Reynolds number, at least one. */
     public ProfileDragPolar {
         reynolds = reynolds.clone();
         polars = List.copyOf(polars);
@@ -27,6 +28,7 @@ public record ProfileDragPolar(double[] reynolds, List<Table> polars) {
         return reynolds.clone();
     }
 
+    /** The profile drag coefficient at section lift coefficient {@code cl} and Reynolds number {@code re}. */
     public double cd(double cl, double re) {
         int n = reynolds.length;
         if (n == 1 || re <= reynolds[0]) {

@@ -28,10 +28,12 @@ public final class Table {
         this.y = y.clone();
     }
 
+    /** A table of one value everywhere. */
     public static Table constant(double value) {
         return new Table(new double[] {0}, new double[] {value});
     }
 
+    /** The value at t: linear between the abscissae, the end value beyond them. */
     public double at(double t) {
         if (t <= x[0]) {
             return y[0];

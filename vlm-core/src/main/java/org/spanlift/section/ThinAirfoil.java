@@ -27,7 +27,14 @@ public final class ThinAirfoil {
     private ThinAirfoil() {
     }
 
-    /** All thin-airfoil results of one line. {@code idealAngle} and {@code idealLiftCoefficient} may be absent. */
+    /**
+     * All thin-airfoil results of one line. {@code idealAngle} and {@code idealLiftCoefficient} may be absent.
+     *
+     * @param zeroLiftAngle        the zero-lift angle, rad
+     * @param quarterChordMoment   the moment coefficient about the quarter chord
+     * @param idealAngle           the ideal angle, rad, if defined
+     * @param idealLiftCoefficient the ideal lift coefficient, if defined
+     */
     public record Result(double zeroLiftAngle, double quarterChordMoment,
                          OptionalDouble idealAngle, OptionalDouble idealLiftCoefficient) {
     }

@@ -90,6 +90,7 @@ public final class InfluenceCache {
             }
         }
 
+        /** The symmetric system, factorized on first use. */
         public InfluenceSystem symmetric() {
             if (symmetric == null) {
                 count();
@@ -98,6 +99,7 @@ public final class InfluenceCache {
             return symmetric;
         }
 
+        /** The antisymmetric system, factorized on first use (with the symmetric one, if that is not yet). */
         public InfluenceSystem antisymmetric() {
             if (antisymmetric == null) {
                 count();
@@ -112,6 +114,7 @@ public final class InfluenceCache {
             return antisymmetric;
         }
 
+        /** The full system (no symmetry), factorized on first use. */
         public InfluenceSystem full() {
             if (full == null) {
                 count();

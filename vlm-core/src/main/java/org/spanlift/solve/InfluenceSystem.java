@@ -52,7 +52,12 @@ public final class InfluenceSystem {
         return new InfluenceSystem(symmetry, assemble(lattice, symmetry, options.threads()), n, options);
     }
 
-    /** The symmetric and antisymmetric systems of a mirrored lattice. */
+    /**
+     * The symmetric and antisymmetric systems of a mirrored lattice.
+     *
+     * @param symmetric     the symmetric system
+     * @param antisymmetric the antisymmetric system
+     */
     public record Pair(InfluenceSystem symmetric, InfluenceSystem antisymmetric) {
     }
 
@@ -114,6 +119,7 @@ public final class InfluenceSystem {
         return a;
     }
 
+    /** The symmetry the system was built for. */
     public Symmetry symmetry() {
         return symmetry;
     }

@@ -8,6 +8,9 @@ import org.spanlift.input.RefusedException;
  * CL against alpha at fixed deflections: CL = slope sin(alpha - zeroLiftAngle), exact in linear theory with
  * the freestream (cos alpha, 0, sin alpha). So {@code slope} is dCL/dalpha at zero lift, per radian, and
  * {@code zeroLiftAngle} is in radians.
+ *
+ * @param slope         dCL/dalpha at zero lift, per radian
+ * @param zeroLiftAngle the zero-lift angle of attack, rad
  */
 public record LiftCurve(double slope, double zeroLiftAngle) {
 

@@ -6,6 +6,7 @@ public final class SingularSystemException extends RefusedException {
 
     private static final long serialVersionUID = 1L;
 
+    /** A refusal with the given message. */
     public SingularSystemException(String message) {
         super(message);
     }

@@ -85,14 +85,17 @@ public final class WingAnalysis {
                 systems, lattice.mirrored());
     }
 
+    /** The wing analysed. */
     public Wing wing() {
         return wing;
     }
 
+    /** The wing's lattice. */
     public Lattice lattice() {
         return lattice;
     }
 
+    /** The basis solutions every condition is superposed from. */
     public BasisSolutions basis() {
         return basis;
     }

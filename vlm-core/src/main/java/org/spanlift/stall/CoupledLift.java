@@ -28,7 +28,12 @@ public final class CoupledLift {
         this.branch = branch;
     }
 
-    /** A point of the curve: the lattice solution and the share of the span past its section peak. */
+    /**
+     * A point of the curve: the lattice solution and the share of the span past its section peak.
+     *
+     * @param solution            the lattice solution
+     * @param stalledSpanFraction the share of the span past its section peak
+     */
     public record Point(Solution solution, double stalledSpanFraction) {
     }
 

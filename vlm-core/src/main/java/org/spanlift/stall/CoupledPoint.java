@@ -28,6 +28,7 @@ public record CoupledPoint(double alpha, Status status, double lift, double[] co
         CURVE_ENDS
     }
 
+    /** Copies the arrays. */
     public CoupledPoint {
         corrections = corrections.clone();
         cl = cl.clone();
@@ -38,20 +39,24 @@ public record CoupledPoint(double alpha, Status status, double lift, double[] co
         return new CoupledPoint(alpha, status, Double.NaN, last, new double[0], new double[0], false, 0);
     }
 
+    /** True when the solve converged. */
     public boolean converged() {
         return status == Status.CONVERGED;
     }
 
+    /** A copy of the incidence corrections per unknown, rad. */
     @Override
     public double[] corrections() {
         return corrections.clone();
     }
 
+    /** A copy of the section cl per unknown. */
     @Override
     public double[] cl() {
         return cl.clone();
     }
 
+    /** A copy of the effective section angles of attack per unknown, rad. */
     @Override
     public double[] sectionAngles() {
         return sectionAngles.clone();

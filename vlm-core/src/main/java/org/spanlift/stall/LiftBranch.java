@@ -370,6 +370,7 @@ public final class LiftBranch {
         return false;
     }
 
+    /** The coupling of the lattice with the section lift curves the branch was traced on. */
     public SectionCoupling coupling() {
         return coupling;
     }

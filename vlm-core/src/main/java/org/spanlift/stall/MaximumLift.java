@@ -52,13 +52,21 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
     public static final double SPEED_TOLERANCE = 1e-7;
     private static final int MAX_ITERATIONS = 50;
 
+    /** Copies the lists and arrays. */
     public MaximumLift {
         strips = List.copyOf(strips);
         curve = List.copyOf(curve);
         multipleSolutions = multipleSolutions.map(double[]::clone);
     }
 
-    /** The first strip past its peak on the branch: its y (right-hand), eta, and the wing's alpha and CL. */
+    /**
+     * The first strip past its peak on the branch: its y (right-hand), eta, and the wing's alpha and CL.
+     *
+     * @param y     the strip's y (right-hand), m
+     * @param eta   y over the semi-span
+     * @param alpha the wing's angle of attack there, rad
+     * @param lift  the wing's CL there
+     */
     public record FirstStall(double y, double eta, double alpha, double lift) {
     }
 
@@ -76,20 +84,43 @@ public record MaximumLift(double lift, double alpha, boolean peak, LiftBranch.En
      * One strip at the maximum: cl, its section curve's peak, the effective angle and the peak's angle (rad);
      * the wing's angle of attack at which it passed its peak on the path, if it did; its cl at the path's last
      * angle.
+     *
+     * @param y            the strip's y, m
+     * @param eta          |y| over the semi-span
+     * @param cl           its section cl
+     * @param peakCl       its section curve's peak cl
+     * @param sectionAngle its effective section angle of attack, rad
+     * @param peakAngle    the peak's angle, rad
+     * @param stallAlpha   the wing's angle of attack at which it passed its peak, rad, if it did
+     * @param clBeyond     its cl at the path's last angle
      */
     public record StripState(double y, double eta, double cl, double peakCl, double sectionAngle, double peakAngle,
             OptionalDouble stallAlpha, double clBeyond) {
+        /** True when the strip's effective angle is past its section curve's peak. */
         public boolean pastPeak() {
             return sectionAngle > peakAngle;
         }
     }
 
-    /** One converged point of the coupled lift curve. */
+    /**
+     * One converged point of the coupled lift curve.
+     *
+     * @param alpha               angle of attack, rad
+     * @param lift                CL
+     * @param inducedDrag         induced drag coefficient
+     * @param pitchingMoment      pitching-moment coefficient, positive nose-up
+     * @param stalledSpanFraction the share of the span past its section peak
+     */
     public record CurvePoint(double alpha, double lift, double inducedDrag, double pitchingMoment,
             double stalledSpanFraction) {
     }
 
-    /** The stall speed at the maximum lift, with the Reynolds numbers iterated together with it. */
+    /**
+     * The stall speed at the maximum lift, with the Reynolds numbers iterated together with it.
+     *
+     * @param equivalent equivalent airspeed, m/s
+     * @param trueSpeed  true airspeed, m/s
+     */
     public record Speed(double equivalent, double trueSpeed) {
     }
 

@@ -8,8 +8,10 @@ public final class MissingSectionDataException extends RefusedException {
 
     private static final long serialVersionUID = 1L;
 
+    /** The sections without cl_max. */
     private final List<String> sections;
 
+    /** The refusal naming the sections without cl_max. */
     public MissingSectionDataException(List<String> sections) {
         super("section" + (sections.size() > 1 ? "s " : " ") + String.join(", ", sections)
                 + (sections.size() > 1 ? " give" : " gives") + " no cl-max; add cl-max to the section data, or allow "
@@ -17,6 +19,7 @@ public final class MissingSectionDataException extends RefusedException {
         this.sections = List.copyOf(sections);
     }
 
+    /** The names of the sections without cl_max. */
     public List<String> sections() {
         return sections;
     }

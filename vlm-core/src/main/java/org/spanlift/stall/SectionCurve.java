@@ -57,7 +57,12 @@ public interface SectionCurve {
         return new Line(slope, zeroLift);
     }
 
-    /** See {@link SectionCurve#line}. */
+    /**
+     * See {@link SectionCurve#line}.
+     *
+     * @param liftSlope the slope dcl/dalpha, per radian
+     * @param zeroLift  the zero-lift angle, rad
+     */
     record Line(double liftSlope, double zeroLift) implements SectionCurve {
         @Override
         public double lift(double alpha) {
@@ -192,7 +197,13 @@ public interface SectionCurve {
         }
     }
 
-    /** See {@link SectionCurve#blend}. */
+    /**
+     * See {@link SectionCurve#blend}.
+     *
+     * @param a the curve of weight 1 - w
+     * @param b the curve of weight w
+     * @param w the weight of {@code b}
+     */
     record Blend(SectionCurve a, SectionCurve b, double w) implements SectionCurve {
         @Override
         public double lift(double alpha) {
@@ -215,7 +226,13 @@ public interface SectionCurve {
         }
     }
 
-    /** See {@link SectionCurve#shifted}. */
+    /**
+     * See {@link SectionCurve#shifted}.
+     *
+     * @param base  the curve moved
+     * @param shift the move to lower angles, rad
+     * @param raise the rise of cl
+     */
     record Shifted(SectionCurve base, double shift, double raise) implements SectionCurve {
         @Override
         public double lift(double alpha) {

@@ -42,6 +42,7 @@ public record StallEstimate(double lift, double wingLift, double alpha, double y
         boolean assumedClMax, boolean defaultFlapIncrement, Optional<ControlEnd> besideControlEnd, LiftCurve line,
         OptionalDouble pointedTipFrom) {
 
+    /** Copies the strips. */
     public StallEstimate {
         strips = List.copyOf(strips);
     }
@@ -64,17 +65,34 @@ public record StallEstimate(double lift, double wingLift, double alpha, double y
     public record ControlEnd(String control, double y, Optional<Reach> firstOnControl) {
     }
 
-    /** A wing CL at which a strip reaches its cl_max, and the strip's y (the right-hand one). */
+    /**
+     * A wing CL at which a strip reaches its cl_max, and the strip's y (the right-hand one).
+     *
+     * @param lift the wing CL
+     * @param y    the strip's y (the right-hand one), m
+     */
     public record Reach(double lift, double y) {
     }
 
-    /** The smallest margin to cl_max over the aileron span. */
+    /**
+     * The smallest margin to cl_max over the aileron span.
+     *
+     * @param dcl the smallest cl_max - cl over the aileron span
+     * @param y   where it is, m
+     */
     public record AileronMargin(double dcl, double y) {
     }
 
     /**
      * One strip at stall onset.
      *
+     * @param y             the strip's spanwise station, m
+     * @param eta           |y| over the semi-span
+     * @param chord         its chord, m
+     * @param section       its section's name
+     * @param reynolds      its Reynolds number (0 when unknown)
+     * @param clMax         its section cl_max
+     * @param clAtOnset     its section cl at the wing's stall onset
      * @param clBasic       section cl at zero wing lift (the basic load)
      * @param clAdditional  section cl per unit wing CL (the additional load), at zero lift
      * @param sectionAngle  the effective section angle of attack at onset, alpha_0 + cl / a0 with the

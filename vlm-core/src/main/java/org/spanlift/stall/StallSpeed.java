@@ -20,6 +20,7 @@ public record StallSpeed(double equivalent, double trueSpeed, StallEstimate esti
     public static final double TOLERANCE = 1e-9;
     private static final int MAX_ITERATIONS = 100;
 
+    /** The stall speed of the condition at the given deflections (rad, control order). */
     public static StallSpeed of(WingAnalysis analysis, double[] deflections, StripLimits limits,
             FlightCondition condition) {
         double nu = condition.atmosphere().kinematicViscosity();

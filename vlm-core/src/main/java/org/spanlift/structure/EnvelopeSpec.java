@@ -27,6 +27,7 @@ public record EnvelopeSpec(List<Double> weights, double altitude, double positiv
         double negativeAtDive, double va, OptionalDouble vb, double vc, double vd, OptionalDouble gustB,
         double gustC, double gustD, OptionalDouble liftSlope, OptionalDouble minimumLift) {
 
+    /** Copies the weights. */
     public EnvelopeSpec {
         weights = List.copyOf(weights);
     }

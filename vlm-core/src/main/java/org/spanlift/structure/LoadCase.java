@@ -28,6 +28,7 @@ public record LoadCase(String name, double weight, double loadFactor, double equ
      */
     public record Asymmetry(java.util.OptionalDouble aileron, java.util.OptionalDouble otherSide) {
 
+        /** Checks that exactly one of the two is given, and a share lies from 0 to 1. */
         public Asymmetry {
             if (aileron.isPresent() == otherSide.isPresent()) {
                 throw new IllegalArgumentException("an unsymmetrical case has either an aileron deflection or a share");
@@ -47,6 +48,7 @@ public record LoadCase(String name, double weight, double loadFactor, double equ
     /** Sea-level standard density rho0, kg/m^3. */
     public static final double RHO0 = org.spanlift.atmosphere.StandardAtmosphere.RHO0;
 
+    /** Checks that the weight and speed are positive and finite and the load factor finite. */
     public LoadCase {
         if (!(weight > 0) || !Double.isFinite(weight)) {
             throw new IllegalArgumentException("a load case needs a positive weight");

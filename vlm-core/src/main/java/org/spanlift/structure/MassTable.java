@@ -9,6 +9,7 @@ package org.spanlift.structure;
  */
 public record MassTable(double[] y, double[] perSpan) {
 
+    /** Checks the rows (at least two, y increasing, mass per span finite and not negative) and copies them. */
     public MassTable {
         if (y.length < 2 || y.length != perSpan.length) {
             throw new IllegalArgumentException("a mass table needs at least two rows of y and mass per span");
@@ -25,11 +26,13 @@ public record MassTable(double[] y, double[] perSpan) {
         }
     }
 
+    /** A copy of the stations, m. */
     @Override
     public double[] y() {
         return y.clone();
     }
 
+    /** A copy of the mass per unit span at each station, kg/m. */
     @Override
     public double[] perSpan() {
         return perSpan.clone();

@@ -11,6 +11,7 @@ package org.spanlift.structure;
  */
 public record PointMass(String name, double mass, double x, double y) {
 
+    /** Checks that the mass is finite and not negative and the position finite. */
     public PointMass {
         if (!(mass >= 0) || !Double.isFinite(mass)) {
             throw new IllegalArgumentException("a point mass must not be negative");

@@ -37,6 +37,10 @@ public record WingStructure(double sparFraction, double massCentreFraction, Opti
         this(sparFraction, massCentreFraction, wingMass, table, pointMasses, OptionalDouble.empty());
     }
 
+    /**
+     * Checks the values (chord fractions from 0 to 1, not both a wing mass and a table, a finite mass not
+     * negative, a longitudinal axis within 30 degrees) and copies the point masses.
+     */
     public WingStructure {
         if (!(sparFraction >= 0 && sparFraction <= 1) || !(massCentreFraction >= 0 && massCentreFraction <= 1)) {
             throw new IllegalArgumentException("chord fractions must be from 0 to 1");

@@ -11,10 +11,12 @@ import java.util.stream.Stream;
  * operands (result columns or numbers) and a comparison ({@code <}, {@code <=}, {@code >}, {@code >=}). A
  * case whose operand has no value (e absent near zero lift, no aileron) does not meet it.
  *
- * @param text  the constraint as written
- * @param left  the left operand: a column name, or null when {@code leftValue} is a number
- * @param op    the comparison
- * @param right the right operand: a column name, or null when {@code rightValue} is a number
+ * @param text       the constraint as written
+ * @param left       the left operand: a column name, or null when {@code leftValue} is a number
+ * @param leftValue  the left operand's number (when {@code left} is null)
+ * @param op         the comparison
+ * @param right      the right operand: a column name, or null when {@code rightValue} is a number
+ * @param rightValue the right operand's number (when {@code right} is null)
  */
 public record Constraint(String text, String left, double leftValue, String op, String right, double rightValue) {
 

@@ -61,10 +61,12 @@ public final class Derivation {
         return NONE;
     }
 
+    /** The derived entries, in file order. */
     public List<Derived> derived() {
         return derived;
     }
 
+    /** True when there are no derived values. */
     public boolean isEmpty() {
         return derived.isEmpty();
     }

@@ -59,7 +59,9 @@ public final class Expression {
      */
     public static final class ExpressionException extends RuntimeException {
         private static final long serialVersionUID = 1L;
+        /** The character of the expression the failure is at, counted from 1. */
         private final int position;
+        /** What is wrong, without the position. */
         private final String problem;
 
         ExpressionException(String problem, int position) {

@@ -104,10 +104,12 @@ public final class Parameter {
         return line;
     }
 
+    /** True when the values are a range rather than a list. */
     public boolean isRange() {
         return list == null;
     }
 
+    /** True when the range gives a step. */
     public boolean hasStep() {
         return step != null;
     }

@@ -42,6 +42,7 @@ public record Sweep(String file, String baseName, Path basePath, YamlValue baseT
         OptionalDouble assumeClMax, Optional<LoadCase> loadCase, Optional<CentreOfGravity> centreOfGravity,
         String fingerprint) {
 
+    /** Copies the lists. */
     public Sweep {
         parameters = List.copyOf(parameters);
         columns = List.copyOf(columns);

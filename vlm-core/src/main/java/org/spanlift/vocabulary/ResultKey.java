@@ -23,6 +23,7 @@ import java.util.function.Function;
 public record ResultKey<S>(String key, ResultUnit unit, String label, String description, int decimals,
         Set<Need> needs, Function<S, Object> value) {
 
+    /** Copies the needs into an unmodifiable set. */
     public ResultKey {
         needs = needs.isEmpty() ? Set.of() : Set.copyOf(EnumSet.copyOf(needs));
     }

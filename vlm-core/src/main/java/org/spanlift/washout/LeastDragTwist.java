@@ -28,6 +28,7 @@ import org.spanlift.solve.WingAnalysis;
  */
 public record LeastDragTwist(double lift, double alpha, double[] twist, double[] y, Solution solution) {
 
+    /** Copies the arrays. */
     public LeastDragTwist {
         twist = twist.clone();
         y = y.clone();

@@ -38,22 +38,26 @@ public final class QuadraticProgram {
      * @param multipliers their multipliers, at least zero, in {@code active}'s order
      */
     public record Solution(boolean feasible, double[] x, double value, int[] active, double[] multipliers) {
+        /** Copies the arrays. */
         public Solution {
             x = x.clone();
             active = active.clone();
             multipliers = multipliers.clone();
         }
 
+        /** A copy of the minimiser. */
         @Override
         public double[] x() {
             return x.clone();
         }
 
+        /** A copy of the indices of the active constraints. */
         @Override
         public int[] active() {
             return active.clone();
         }
 
+        /** A copy of the active constraints' multipliers, in {@code active}'s order. */
         @Override
         public double[] multipliers() {
             return multipliers.clone();

@@ -89,6 +89,7 @@ public final class TwistDesign {
      *                   mean knot interval (for even knots the second difference of the changes); infinite: none
      */
     public record Shape(double[] knots, double lower, double upper, double smoothness) {
+        /** Copies the knots and checks that the bounds do not decrease and the smoothness is not negative. */
         public Shape {
             knots = knots.clone();
             if (!(upper >= lower) || !(smoothness >= 0)) {
@@ -96,6 +97,7 @@ public final class TwistDesign {
             }
         }
 
+        /** A copy of the knots' y, m. */
         @Override
         public double[] knots() {
             return knots.clone();
@@ -120,10 +122,12 @@ public final class TwistDesign {
     public record Result(boolean met, Optional<WashoutPoint> design, double[] change, boolean fromLinear,
             boolean settled, int rounds, OptionalDouble critical, Optional<WashoutPoint> linear,
             WashoutPoint unwashed) {
+        /** Copies the changes. */
         public Result {
             change = change.clone();
         }
 
+        /** A copy of the twist change at each knot, rad. */
         @Override
         public double[] change() {
             return change.clone();

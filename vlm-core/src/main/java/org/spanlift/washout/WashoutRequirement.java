@@ -64,6 +64,8 @@ public sealed interface WashoutRequirement {
     /**
      * The least section margin (cl_max - cl) over the aileron span at stall onset at least {@code dcl}: slack
      * = margin - dcl.
+     *
+     * @param dcl the least margin required
      */
     record AileronMargin(double dcl) implements WashoutRequirement {
         @Override

@@ -21,6 +21,7 @@ public record LuOptions(Method method, int threads) {
     /** What the engine uses: the tiled LU on as many threads as the machine has processors. */
     public static final LuOptions DEFAULT = new LuOptions(Method.TILED, Runtime.getRuntime().availableProcessors());
 
+    /** Checks that a method is given. */
     public LuOptions {
         if (method == null) {
             throw new IllegalArgumentException("a factorization method is required");
