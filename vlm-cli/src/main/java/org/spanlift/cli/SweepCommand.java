@@ -20,14 +20,13 @@ import org.spanlift.cli.sweep.Ranker;
 import org.spanlift.cli.sweep.ResultsFile;
 import org.spanlift.cli.sweep.RowFormat;
 import org.spanlift.cli.sweep.Shard;
+import org.spanlift.cli.sweep.SweepNotes;
 import org.spanlift.cli.sweep.SweepRunner;
 import org.spanlift.cli.options.InputFiles;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.options.OutputTarget;
-import org.spanlift.cli.output.Cautions;
 import org.spanlift.input.InputException;
 import org.spanlift.sweep.Ranking;
-import org.spanlift.sweep.ResultColumn;
 import org.spanlift.sweep.Sweep;
 
 import picocli.CommandLine.Command;
@@ -207,21 +206,7 @@ public final class SweepCommand implements Callable<Integer> {
                     + (sweep.constraints().isEmpty() ? "" : "; " + tally.feasible() + " of " + cases
                             + " cases meet the constraints"));
         }
-        if (failed > 0) {
-            err.println("  some cases failed; their rows say why (column error)");
-        }
-        if (sweep.columns().stream().anyMatch(ResultColumn::needsClMax)) {
-            if (sweep.assumeClMax().isPresent()) {
-                err.println("  NOTE: sections without cl-max data use the assumed cl_max "
-                        + sweep.assumeClMax().getAsDouble() + " (column " + ResultColumn.ASSUMED_CL_MAX + ")");
-            }
-            err.println("  " + Cautions.SWEEP);
-        }
-        if (sweep.columns().stream().anyMatch(ResultColumn::needsLoadCase)) {
-            err.println("  load case: " + sweep.loadCase().orElseThrow().name() + ", clean");
-            err.println("  " + Cautions.SWEEP_LOADS);
-        }
-        err.flush();
+        SweepNotes.print(err, sweep, failed);
     }
 
     /** Where progress goes: standard error, or nowhere with {@code --progress none}. */

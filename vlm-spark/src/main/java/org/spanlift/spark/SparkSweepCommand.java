@@ -16,7 +16,6 @@ import org.spanlift.cli.SpanliftCommand;
 import org.spanlift.cli.options.InputFiles;
 import org.spanlift.cli.options.OutputOptions;
 import org.spanlift.cli.options.OutputTarget;
-import org.spanlift.cli.output.Cautions;
 import org.spanlift.cli.sweep.Manifest;
 import org.spanlift.cli.sweep.Progress;
 import org.spanlift.cli.sweep.ProgressMode;
@@ -24,10 +23,10 @@ import org.spanlift.cli.sweep.Ranker;
 import org.spanlift.cli.sweep.ResultsFile;
 import org.spanlift.cli.sweep.RowFormat;
 import org.spanlift.cli.sweep.Shard;
+import org.spanlift.cli.sweep.SweepNotes;
 import org.spanlift.input.InputException;
 import org.spanlift.io.SweepFileReader;
 import org.spanlift.sweep.Ranking;
-import org.spanlift.sweep.ResultColumn;
 import org.spanlift.sweep.Sweep;
 
 import picocli.CommandLine.Command;
@@ -178,21 +177,7 @@ public final class SparkSweepCommand implements Callable<Integer> {
                     + (sweep.constraints().isEmpty() ? "" : "; " + counts.feasible() + " of " + counts.cases()
                             + " cases meet the constraints"));
         }
-        if (counts.failed() > 0) {
-            err.println("  some cases failed; their rows say why (column error)");
-        }
-        if (sweep.columns().stream().anyMatch(ResultColumn::needsClMax)) {
-            if (sweep.assumeClMax().isPresent()) {
-                err.println("  NOTE: sections without cl-max data use the assumed cl_max "
-                        + sweep.assumeClMax().getAsDouble() + " (column " + ResultColumn.ASSUMED_CL_MAX + ")");
-            }
-            err.println("  " + Cautions.SWEEP);
-        }
-        if (sweep.columns().stream().anyMatch(ResultColumn::needsLoadCase)) {
-            err.println("  load case: " + sweep.loadCase().orElseThrow().name() + ", clean");
-            err.println("  " + Cautions.SWEEP_LOADS);
-        }
-        err.flush();
+        SweepNotes.print(err, sweep, counts.failed());
         return counts.failed() > 0 ? SpanliftCommand.EXIT_FAILED_CASES : 0;
     }
 
