@@ -192,7 +192,38 @@ public final class BenchmarkReport {
             o.ifPresent(r -> out.append(String.format(Locale.ROOT, "  --jobs %s: %8.1f ms per sweep, %6.0f cases/s%n",
                     r.unknowns(), r.wall() * 1e3, 429 / r.wall())));
         }
+        two.ifPresent(r -> caseParts(rows, r, out));
         out.append('\n');
+    }
+
+    /**
+     * Where a case goes, in core milliseconds: with two jobs on two cores each case runs on one thread, so a
+     * case costs 2 x wall / 429 core ms (an upper bound: a core may idle at the end). The assembly and the LU
+     * are the one-thread figures at 256 unknowns (the sweep's lattice); the rest is the difference.
+     */
+    private static void caseParts(List<Row> rows, Row two, StringBuilder out) {
+        Optional<Row> assembly = find(rows, "SystemBenchmark.assemble", "256");
+        Optional<Row> lu = find(rows, "SystemBenchmark.luTiled1", "256");
+        Optional<Row> floor = find(rows, "FloorBenchmark.sqrtDivide", "256");
+        if (assembly.isEmpty() || lu.isEmpty()) {
+            return;
+        }
+        double cores = Runtime.getRuntime().availableProcessors();
+        double caseMs = cores * two.wall() / 429 * 1e3;
+        double assemblyMs = assembly.get().wall() * 1e3;
+        double luMs = lu.get().wall() * 1e3;
+        double restMs = caseMs - assemblyMs - luMs;
+        out.append(String.format(Locale.ROOT, "  where a case goes (--jobs 2, each case on one thread): %.2f core ms "
+                + "= %.0f cores x wall / 429%n", caseMs, cores));
+        out.append(String.format(Locale.ROOT, "    assembly %.2f ms (%.0f%%)%s%n", assemblyMs,
+                100 * assemblyMs / caseMs,
+                floor.map(f -> String.format(Locale.ROOT, "; its square roots and divisions alone take %.2f ms on "
+                        + "this machine (FloorBenchmark): %.1fx that floor", f.wall() * 1e3,
+                        assembly.get().wall() / f.wall())).orElse("")));
+        out.append(String.format(Locale.ROOT, "    LU, tiled on one thread, %.2f ms (%.0f%%); its limit, OpenBLAS's LU "
+                + "at n = 256, follows from run.sh%n", luMs, 100 * luMs / caseMs));
+        out.append(String.format(Locale.ROOT, "    the rest %.2f ms (%.0f%%): the case's wing tree, lattice, strip "
+                + "limits, basis solves, Trefftz plane, row; no arithmetic floor%n", restMs, 100 * restMs / caseMs));
     }
 
     private static String lu(Row r, double flops) {

@@ -17,9 +17,6 @@ import picocli.CommandLine.Command;
 /** The {@code spanlift} command: vortex-lattice analysis of light-aircraft wings. */
 @Command(name = "spanlift", mixinStandardHelpOptions = true, versionProvider = VersionProvider.class,
         description = "Vortex-lattice wing analysis: span load, lift slope, induced drag and span efficiency.",
-        subcommands = {SolveCommand.class, StallCommand.class, LoadsCommand.class, SweepCommand.class,
-                MergeCommand.class, PlotCommand.class, ReportCommand.class, CompareCommand.class,
-                ValidateCommand.class, WashoutCommand.class, BalanceCommand.class},
         footer = {"", "Exit codes: 0 success; 1 the run finished but some case failed; 2 bad input, usage, or an"
                 + " environment the run cannot proceed in (a full disk); 3 internal error."})
 public final class SpanliftCommand implements Runnable {
@@ -31,6 +28,11 @@ public final class SpanliftCommand implements Runnable {
     /** Exit code for an internal error (a bug: please report it). */
     public static final int EXIT_INTERNAL = 3;
 
+    /** The commands, in the order the help lists them. */
+    private static final List<Class<?>> COMMANDS = List.of(SolveCommand.class, StallCommand.class,
+            LoadsCommand.class, SweepCommand.class, MergeCommand.class, PlotCommand.class, ReportCommand.class,
+            CompareCommand.class, ValidateCommand.class, WashoutCommand.class, BalanceCommand.class);
+
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
@@ -39,9 +41,33 @@ public final class SpanliftCommand implements Runnable {
         throw new CommandLine.ParameterException(spec.commandLine(), "a command is required");
     }
 
-    /** A configured command line (used by {@link #main} and by tests). */
+    /** The configured command line with every command (the help, the documentation, tests). */
     public static CommandLine commandLine() {
+        return configured(COMMANDS);
+    }
+
+    /**
+     * The command line {@link #main} runs {@code args} with: when they start with a command's name, one holding
+     * that command alone, so that picocli builds the model of one command instead of all of them (a third of a
+     * short run's wall time went there); otherwise {@link #commandLine()}. Either parses and runs the command the
+     * same way.
+     */
+    public static CommandLine commandLine(String... args) {
+        if (args.length > 0) {
+            for (Class<?> command : COMMANDS) {
+                if (command.getAnnotation(Command.class).name().equals(args[0])) {
+                    return configured(List.of(command));
+                }
+            }
+        }
+        return commandLine();
+    }
+
+    private static CommandLine configured(List<Class<?>> commands) {
         CommandLine cl = new CommandLine(new SpanliftCommand());
+        for (Class<?> command : commands) {
+            cl.addSubcommand(command);
+        }
         for (CommandLine sub : cl.getSubcommands().values()) {
             if (sub.getCommand() instanceof OffersFormats command) {
                 OutputOptions.describeFormats(sub.getCommandSpec(), command.formats());
@@ -145,7 +171,7 @@ public final class SpanliftCommand implements Runnable {
         System.setProperty("java.awt.headless", "true");
         int code;
         try {
-            code = commandLine().execute(args);
+            code = commandLine(args).execute(args);
         } catch (Error e) {
             // Beyond the execution strategy's reach (while the command line was being parsed, say).
             code = internalError(e, new PrintWriter(System.err, true));

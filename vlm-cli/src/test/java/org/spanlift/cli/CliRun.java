@@ -12,8 +12,9 @@ public record CliRun(int exitCode, String out, String err) {
     /** The demo wings at the repository root, seen from the module folder. */
     public static final Path GEOMETRIES = Path.of("..", "geometries");
 
+    /** Runs {@code args} on the command line {@code main} builds for them. */
     public static CliRun of(String... args) {
-        CommandLine cl = SpanliftCommand.commandLine();
+        CommandLine cl = SpanliftCommand.commandLine(args);
         StringWriter out = new StringWriter();
         StringWriter err = new StringWriter();
         cl.setOut(new PrintWriter(out));

@@ -58,6 +58,20 @@ class HelpTest {
         assertTrue(r.err().contains("this command writes"), r.err());
     }
 
+    /** main builds the command named first alone (start-up); it is the same command as in the full line. */
+    @Test
+    void aCommandNamedFirstIsBuiltAloneAndIsTheSameCommand() {
+        CommandLine full = SpanliftCommand.commandLine();
+        for (var e : full.getSubcommands().entrySet()) {
+            CommandLine alone = SpanliftCommand.commandLine(e.getKey(), "--help");
+            assertEquals(List.of(e.getKey()), List.copyOf(alone.getSubcommands().keySet()));
+            assertEquals(e.getValue().getUsageMessage(), alone.getSubcommands().get(e.getKey()).getUsageMessage(),
+                    e.getKey());
+        }
+        assertEquals(full.getSubcommands().keySet(), SpanliftCommand.commandLine("--help").getSubcommands().keySet());
+        assertEquals(full.getSubcommands().keySet(), SpanliftCommand.commandLine("slove").getSubcommands().keySet());
+    }
+
     @Test
     void noCommandIsAUsageError() {
         CliRun r = CliRun.of();
