@@ -389,7 +389,9 @@ public final class LoadsAnalysis {
             double ly = lattice.by(i) - lattice.ay(i);
             double gx = basis.alongX(i);
             for (int c = 0; c < deflections.length; c++) {
-                gx += deflections[c] * basis.control(c, i);
+                if (deflections[c] != 0) {
+                    gx += deflections[c] * basis.control(c, i);
+                }
             }
             x += 2 * gx * ly;
             z += 2 * basis.alongZ(i) * ly;

@@ -1,6 +1,8 @@
 package org.spanlift.solve;
 
 import java.util.List;
+import java.util.concurrent.atomic.AtomicReferenceArray;
+import java.util.function.IntFunction;
 
 import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
@@ -21,12 +23,20 @@ public final class BasisSolutions {
 
     private final double[] alongX;
     private final double[] alongZ;
-    private final double[][] controls;
+    /** Each control's solution, or null until it is first needed (an aileron's) or when it has no basis. */
+    private final AtomicReferenceArray<double[]> controls;
+    /** Whether each control has a basis. */
+    private final boolean[] solved;
+    /** Solves an aileron's basis on first use; null once nothing is left to solve. */
+    private final IntFunction<double[]> later;
 
-    private BasisSolutions(double[] alongX, double[] alongZ, double[][] controls) {
+    private BasisSolutions(double[] alongX, double[] alongZ, double[][] controls, boolean[] solved,
+            IntFunction<double[]> later) {
         this.alongX = alongX;
         this.alongZ = alongZ;
-        this.controls = controls;
+        this.controls = new AtomicReferenceArray<>(controls);
+        this.solved = solved;
+        this.later = later;
     }
 
     /**
@@ -43,32 +53,52 @@ public final class BasisSolutions {
             rhsZ[i] = -lattice.nz(i);
         }
         boolean halves = useSymmetry && lattice.mirrored();
-        boolean aileronNeeded = false;
-        for (int c = 0; c < controlList.size(); c++) {
-            aileronNeeded |= needed[c] && controlList.get(c).kind() == ControlKind.AILERON;
-        }
-        if (halves && aileronNeeded) {
-            systems.antisymmetric(); // builds both half-span systems in one assembly pass
-        }
         InfluenceSystem main = halves ? systems.symmetric() : systems.full();
         double[] x = expand(lattice, main, rhsX, 1);
         double[] z = expand(lattice, main, rhsZ, 1);
         double[][] controlSolutions = new double[controlList.size()][];
+        boolean[] solved = needed.clone();
+        boolean anyLater = false;
         for (int c = 0; c < controlList.size(); c++) {
-            if (!needed[c]) {
-                continue;
-            }
-            double[] rhs = new double[n];
-            for (int i = 0; i < n; i++) {
-                if (lattice.controlOf(i) == c) {
-                    rhs[i] = -lattice.controlSign(i);
-                }
-            }
             boolean aileron = controlList.get(c).kind() == ControlKind.AILERON;
-            controlSolutions[c] = halves && aileron ? expand(lattice, systems.antisymmetric(), rhs, -1)
-                    : expand(lattice, main, rhs, 1);
+            if (needed[c] && !(halves && aileron)) {
+                controlSolutions[c] = expand(lattice, main, controlRhs(lattice, c), 1);
+            }
+            anyLater |= needed[c] && halves && aileron;
         }
-        return new BasisSolutions(x, z, controlSolutions);
+        // An aileron's basis needs the antisymmetric system, a second factorization: it is solved when a
+        // deflection first asks for it, so a run that never deflects an aileron never factorizes that system.
+        IntFunction<double[]> later = anyLater
+                ? c -> expand(lattice, systems.antisymmetric(), controlRhs(lattice, c), -1) : null;
+        return new BasisSolutions(x, z, controlSolutions, solved, later);
+    }
+
+    /** The right-hand side of control {@code c}'s basis: its panels turned by one radian. */
+    private static double[] controlRhs(Lattice lattice, int c) {
+        int n = lattice.panelCount();
+        double[] rhs = new double[n];
+        for (int i = 0; i < n; i++) {
+            if (lattice.controlOf(i) == c) {
+                rhs[i] = -lattice.controlSign(i);
+            }
+        }
+        return rhs;
+    }
+
+    /** Control {@code c}'s solution, solved now if it was left for later; null when it has no basis. */
+    private double[] controlSolution(int c) {
+        double[] s = controls.get(c);
+        if (s != null || !solved[c]) {
+            return s;
+        }
+        synchronized (this) {
+            s = controls.get(c);
+            if (s == null) {
+                s = later.apply(c);
+                controls.set(c, s);
+            }
+            return s;
+        }
     }
 
     /**
@@ -100,9 +130,27 @@ public final class BasisSolutions {
         checkDeflections(deflections);
         double c = Math.cos(alpha);
         double s = Math.sin(alpha);
+        double[][] deflected = deflectedSolutions(deflections);
         for (int i = 0; i < out.length; i++) {
-            out[i] = c * alongX(i, deflections) + s * alongZ[i];
+            double g = alongX[i];
+            for (int k = 0; k < deflected.length; k++) {
+                if (deflections[k] != 0) {
+                    g += deflections[k] * deflected[k][i];
+                }
+            }
+            out[i] = c * g + s * alongZ[i];
         }
+    }
+
+    /** The solutions of the deflected controls (null for the others), solving any left for later. */
+    private double[][] deflectedSolutions(double[] deflections) {
+        double[][] deflected = new double[deflections.length][];
+        for (int k = 0; k < deflections.length; k++) {
+            if (deflections[k] != 0) {
+                deflected[k] = controlSolution(k);
+            }
+        }
+        return deflected;
     }
 
     /**
@@ -111,9 +159,9 @@ public final class BasisSolutions {
      */
     public double alongX(int panel, double[] deflections) {
         double g = alongX[panel];
-        for (int k = 0; k < controls.length; k++) {
+        for (int k = 0; k < deflections.length; k++) {
             if (deflections[k] != 0) {
-                g += deflections[k] * controls[k][panel];
+                g += deflections[k] * controlSolution(k)[panel];
             }
         }
         return g;
@@ -121,12 +169,12 @@ public final class BasisSolutions {
 
     /** Refuses a deflection of a control that was solved without its basis. */
     public void checkDeflections(double[] deflections) {
-        if (deflections.length != controls.length) {
-            throw new IllegalArgumentException("expected " + controls.length + " deflections, got "
+        if (deflections.length != solved.length) {
+            throw new IllegalArgumentException("expected " + solved.length + " deflections, got "
                     + deflections.length);
         }
-        for (int k = 0; k < controls.length; k++) {
-            if (deflections[k] != 0 && controls[k] == null) {
+        for (int k = 0; k < solved.length; k++) {
+            if (deflections[k] != 0 && !solved[k]) {
                 throw new IllegalStateException("control " + k + " was solved without its basis");
             }
         }
@@ -147,6 +195,7 @@ public final class BasisSolutions {
      * a control solved without its basis).
      */
     public double control(int c, int panel) {
-        return controls[c] == null ? 0 : controls[c][panel];
+        double[] s = controlSolution(c);
+        return s == null ? 0 : s[panel];
     }
 }

@@ -71,7 +71,10 @@ public final class InfluenceCache {
         return reuses;
     }
 
-    /** The systems of one geometry, each factorized on first use. */
+    /**
+     * The systems of one geometry, each factorized on first use; safe to use from several threads (a wing's
+     * analysis may factorize its antisymmetric system late, on whichever thread first deflects an aileron).
+     */
     public final class Systems {
         private final Lattice lattice;
         private InfluenceSystem symmetric;
@@ -91,7 +94,7 @@ public final class InfluenceCache {
         }
 
         /** The symmetric system, factorized on first use. */
-        public InfluenceSystem symmetric() {
+        public synchronized InfluenceSystem symmetric() {
             if (symmetric == null) {
                 count();
                 symmetric = InfluenceSystem.of(lattice, Symmetry.SYMMETRIC, options);
@@ -100,7 +103,7 @@ public final class InfluenceCache {
         }
 
         /** The antisymmetric system, factorized on first use (with the symmetric one, if that is not yet). */
-        public InfluenceSystem antisymmetric() {
+        public synchronized InfluenceSystem antisymmetric() {
             if (antisymmetric == null) {
                 count();
                 if (symmetric == null) {
@@ -115,7 +118,7 @@ public final class InfluenceCache {
         }
 
         /** The full system (no symmetry), factorized on first use. */
-        public InfluenceSystem full() {
+        public synchronized InfluenceSystem full() {
             if (full == null) {
                 count();
                 full = InfluenceSystem.of(lattice, Symmetry.FULL, options);
