@@ -21,6 +21,9 @@
 # Then the jar's size, its start-up (--version), solve of the trainer at 100 x 10 per half (2000 panels) and at
 # its default lattice (best of 3 each), and the planform sweep (benchmarks/planform.sweep.yaml) with
 # --jobs 1 and 2 from the command line, JVM start included, with a check that both outputs are the same bytes.
+# Beside the 2000-panel solve, when python3 with NumPy, SciPy and PyYAML is present, the plain NumPy script
+# benchmarks/numpy_reference.py on the same file (best of 3, Python start included) and its time over spanlift's.
+# The script is run by the interpreter python3 resolves to, so that a version manager's shim is not timed.
 set -euo pipefail
 
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
@@ -38,7 +41,7 @@ while [ $# -gt 0 ]; do
     --no-jmh) jmh=0 ;;
     --no-build) build=0 ;;
     --) shift; jmh_args+=("$@"); break ;;
-    -h|--help) sed -n '2,24p' "$0"; exit 0 ;;
+    -h|--help) sed -n '2,26p' "$0"; exit 0 ;;
     *) echo "run.sh: unknown option $1 (JMH arguments go after --)" >&2; exit 2 ;;
   esac
   shift
@@ -133,7 +136,22 @@ if [ "$cli" = 1 ]; then
     echo "  vlm-cli/target/spanlift.jar: $(( $(stat -c %s vlm-cli/target/spanlift.jar) / 1024 )) KiB"
     echo "  ${launcher[*]} --version: best of 3 $(best "${launcher[@]}" --version) ms wall (JVM start and class loading)"
     sed 's/^    mirror: true$/    mirror: true\n    lattice: {strips: 100, rows: 10}/' "$WING" > "$OUT/trainer-2000.wing.yaml"
-    echo "  solve of the trainer at 100 x 10 per half (2000 panels): best of 3 $(best "${launcher[@]}" solve "$OUT/trainer-2000.wing.yaml") ms wall"
+    t2000=$(best "${launcher[@]}" solve "$OUT/trainer-2000.wing.yaml")
+    echo "  solve of the trainer at 100 x 10 per half (2000 panels): best of 3 $t2000 ms wall"
+    # The interpreter python3 resolves to (a version manager's shim in front of it is not timed).
+    py=$(python3 -c 'import numpy, scipy.linalg, yaml, sys; print(sys.executable)' 2> /dev/null || true)
+    if [ -n "$py" ]; then
+      if "$py" benchmarks/numpy_reference.py "$OUT/trainer-2000.wing.yaml" > /dev/null; then
+        tpy=$(best "$py" benchmarks/numpy_reference.py "$OUT/trainer-2000.wing.yaml")
+        awk -v p="$tpy" -v j="$t2000" 'BEGIN {
+          printf "  the same in NumPy/SciPy (benchmarks/numpy_reference.py, full span, Python start included):"
+          printf " best of 3 %d ms wall; NumPy time / spanlift time %.2f\n", p, p / j }'
+      else
+        echo "  benchmarks/numpy_reference.py failed: the NumPy reference not timed"
+      fi
+    else
+      echo "  (no python3 with NumPy, SciPy and PyYAML: the NumPy reference not timed)"
+    fi
     echo "  solve of the trainer at its default lattice (512 panels): best of 3 $(best "${launcher[@]}" solve "$WING") ms wall"
     echo "Planform sweep from the command line, JVM start included (benchmarks/planform.sweep.yaml, 429 cases)"
     for j in 1 2; do
