@@ -155,14 +155,15 @@ def build_lattice(path):
     return a, b, p, nrm, eps, area
 
 
-def influence(a, b, p, nrm):
+def influence(a, b, p, nrm, whole=False):
     """A[i, j] = n_i . v_j(P_i): normalwash at control point i of horseshoe j at unit circulation.
 
     Broadcast over a few control points at a time by all panels, so that each temporary (block x panels) stays
     under 125 KiB: glibc's malloc then reuses its heap instead of mapping fresh pages for every temporary.
     Measured on the 2000-panel trainer: about 0.14 s, against 0.4 to 1.3 s for one broadcast over the whole
-    matrix or blocks of 128 rows, the time going to page faults."""
-    block = max(1, 16000 // len(a))
+    matrix or blocks of 128 rows, the time going to page faults. With whole=True (--whole), the one broadcast
+    over the whole matrix that a plain script writes."""
+    block = len(p) if whole else max(1, 16000 // len(a))
     out = np.empty((len(p), len(a)))
     ax, ay, az, bx, by, bz = (q[None, :, k] for q in (a, b) for k in range(3))
     r0x, r0y, r0z = bx - ax, by - ay, bz - az
@@ -188,12 +189,14 @@ def main():
     parser = argparse.ArgumentParser(description=__doc__.split("\n")[0])
     parser.add_argument("wing")
     parser.add_argument("--compare", metavar="JAR", help="afterwards, compare with java -jar JAR solve")
+    parser.add_argument("--whole", action="store_true",
+                        help="assemble in one broadcast over the whole matrix (the plain way) instead of blocks")
     args = parser.parse_args()
 
     t0 = time.perf_counter()
     a, b, p, nrm, eps, area = build_lattice(args.wing)
     t1 = time.perf_counter()
-    matrix = influence(a, b, p, nrm)
+    matrix = influence(a, b, p, nrm, args.whole)
     t2 = time.perf_counter()
     lu = scipy.linalg.lu_factor(matrix, overwrite_a=True, check_finite=False)
     t3 = time.perf_counter()

@@ -23,14 +23,15 @@ import org.spanlift.results.Solution;
 import org.spanlift.solve.WingAnalysis;
 
 /**
- * The demo trainer wing at 24 strips x 6 rows per half (144 unknowns in each of the symmetric and
- * antisymmetric systems) and at the default lattice, 32 x 8 (256 unknowns; {@code lattice} sets it), solved over the
- * nine angles of attack of {@code spanlift solve}'s
+ * The demo trainer wing at 24 strips x 6 rows per half (144 unknowns in its symmetric system) and at the default
+ * lattice, 32 x 8 (256 unknowns; {@code lattice} sets it), solved over the nine angles of attack of
+ * {@code spanlift solve}'s
  * default list (-4 to 12 degrees in steps of 2), coefficients included. The file is read once, in setup.
  *
  * <ul>
  * <li>{@link #sweep}: the whole job, {@code WingAnalysis.of(wing)} (lattice, assembly and factorization of
- * both systems, basis solves) and then nine solves with their coefficients;</li>
+ * the symmetric system, basis solves; the ailerons stay at zero, so the antisymmetric system is not built) and
+ * then nine solves with their coefficients;</li>
  * <li>{@link #analysis}: {@code WingAnalysis.of(wing)} alone;</li>
  * <li>{@link #solves}: the nine solves and coefficients alone, on an analysis built in setup.</li>
  * </ul>
