@@ -148,10 +148,8 @@ if [ "$cli" = 1 ]; then
         tplain=$(best "$py" benchmarks/numpy_reference.py --whole "$OUT/trainer-2000.wing.yaml")
         awk -v p="$tpy" -v w="$tplain" -v j="$t2000" 'BEGIN {
           printf "  the same in NumPy/SciPy (benchmarks/numpy_reference.py, full span, Python start included):\n"
-          printf "    assembled in one broadcast (--whole, the plain way): best of 3 %d ms wall;"
-          printf " NumPy time / spanlift time %.2f\n", w, w / j
-          printf "    assembled in blocks of rows (tuned): best of 3 %d ms wall; NumPy time / spanlift time %.2f\n", p,
-            p / j }'
+          printf "    assembled in one broadcast (--whole, the plain way): best of 3 %d ms wall; NumPy time / spanlift time %.2f\n", w, w / j
+          printf "    assembled in blocks of rows (tuned): best of 3 %d ms wall; NumPy time / spanlift time %.2f\n", p, p / j }'
       else
         echo "  benchmarks/numpy_reference.py failed: the NumPy reference not timed"
       fi

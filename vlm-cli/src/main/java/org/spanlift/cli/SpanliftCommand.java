@@ -49,10 +49,13 @@ public final class SpanliftCommand implements Runnable {
     /**
      * The command line {@link #main} runs {@code args} with: when they start with a command's name, one holding
      * that command alone, so that picocli builds the model of one command instead of all of them (a third of a
-     * short run's wall time went there); otherwise {@link #commandLine()}. Either parses and runs the command the
-     * same way.
+     * short run's wall time went there); for {@code --version} alone, one without commands; otherwise
+     * {@link #commandLine()}. Either parses and runs the command the same way.
      */
     public static CommandLine commandLine(String... args) {
+        if (args.length == 1 && (args[0].equals("--version") || args[0].equals("-V"))) {
+            return configured(List.of()); // the version needs no command
+        }
         if (args.length > 0) {
             for (Class<?> command : COMMANDS) {
                 if (command.getAnnotation(Command.class).name().equals(args[0])) {

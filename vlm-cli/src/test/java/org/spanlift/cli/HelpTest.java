@@ -3,6 +3,8 @@ package org.spanlift.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.PrintWriter;
+import java.io.StringWriter;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -70,6 +72,12 @@ class HelpTest {
         }
         assertEquals(full.getSubcommands().keySet(), SpanliftCommand.commandLine("--help").getSubcommands().keySet());
         assertEquals(full.getSubcommands().keySet(), SpanliftCommand.commandLine("slove").getSubcommands().keySet());
+        CliRun version = CliRun.of("--version");
+        assertEquals(0, version.exitCode());
+        StringWriter fullVersion = new StringWriter();
+        full.setOut(new PrintWriter(fullVersion));
+        assertEquals(0, full.execute("--version"));
+        assertEquals(fullVersion.toString(), version.out());
     }
 
     @Test
