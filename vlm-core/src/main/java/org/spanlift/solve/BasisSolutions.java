@@ -27,7 +27,7 @@ public final class BasisSolutions {
     private final AtomicReferenceArray<double[]> controls;
     /** Whether each control has a basis. */
     private final boolean[] solved;
-    /** Solves an aileron's basis on first use; null once nothing is left to solve. */
+    /** Solves an aileron's basis on first use; null when no control was left for later. */
     private final IntFunction<double[]> later;
 
     private BasisSolutions(double[] alongX, double[] alongZ, double[][] controls, boolean[] solved,
