@@ -3,11 +3,8 @@ package org.spanlift.lattice;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
-import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
-import java.util.Set;
-import java.util.TreeSet;
 
 /**
  * The discretized wing: panels, each carrying a horseshoe vortex, grouped in spanwise strips. Arrays are
@@ -91,39 +88,49 @@ public final class Lattice {
         int count = trailingCutoff.length;
         double[] core2 = new double[count];
         Arrays.fill(core2, Double.POSITIVE_INFINITY);
-        List<Set<Integer>> surfaces = new ArrayList<>();
-        for (int k = 0; k < count; k++) {
-            surfaces.add(new TreeSet<>());
+        int surfaces = 0;
+        for (Strip st : strips) {
+            surfaces = Math.max(surfaces, st.surface() + 1);
         }
+        boolean[] onSurface = new boolean[count * surfaces]; // [k * surfaces + s]: a leg of point k is on surface s
+        int[] panelsOn = new int[surfaces];
         for (int p = 0; p < stripOf.length; p++) {
             Strip st = strips.get(stripOf[p]);
             double half = 0.5 * st.width();
-            for (int k : new int[] {aPoint[p], bPoint[p]}) {
-                core2[k] = Math.min(core2[k], half * half);
-                surfaces.get(k).add(st.surface());
-            }
+            core2[aPoint[p]] = Math.min(core2[aPoint[p]], half * half);
+            core2[bPoint[p]] = Math.min(core2[bPoint[p]], half * half);
+            onSurface[aPoint[p] * surfaces + st.surface()] = true;
+            onSurface[bPoint[p] * surfaces + st.surface()] = true;
+            panelsOn[st.surface()]++;
         }
-        Map<Integer, double[]> controlsBySurface = new HashMap<>(); // distinct control (y, z) of each surface
-        Map<Integer, Set<Vec>> distinct = new HashMap<>();
+        // Each surface's control points (y, z), a repeat of the one before dropped: the rows of a strip share
+        // theirs. The bound is a minimum, so repeats left in would not change it, only cost time.
+        double[][] controlsOn = new double[surfaces][];
+        int[] used = new int[surfaces];
+        for (int s = 0; s < surfaces; s++) {
+            controlsOn[s] = new double[2 * panelsOn[s]];
+        }
         for (int p = 0; p < stripOf.length; p++) {
-            distinct.computeIfAbsent(strips.get(stripOf[p]).surface(), s -> new LinkedHashSet<>())
-                    .add(new Vec(0, control[3 * p + 1], control[3 * p + 2]));
-        }
-        distinct.forEach((surface, set) -> {
-            double[] yz = new double[2 * set.size()];
-            int i = 0;
-            for (Vec v : set) {
-                yz[i++] = v.y();
-                yz[i++] = v.z();
+            int s = strips.get(stripOf[p]).surface();
+            double y = control[3 * p + 1];
+            double z = control[3 * p + 2];
+            double[] yz = controlsOn[s];
+            int m = used[s];
+            if (m == 0 || yz[m - 2] != y || yz[m - 1] != z) {
+                yz[m] = y;
+                yz[m + 1] = z;
+                used[s] = m + 2;
             }
-            controlsBySurface.put(surface, yz);
-        });
+        }
         for (int k = 0; k < count; k++) {
             double qy = trailing[3 * k + 1];
             double qz = trailing[3 * k + 2];
-            for (int surface : surfaces.get(k)) {
-                double[] yz = controlsBySurface.get(surface);
-                for (int i = 0; i < yz.length; i += 2) {
+            for (int s = 0; s < surfaces; s++) {
+                if (!onSurface[k * surfaces + s]) {
+                    continue;
+                }
+                double[] yz = controlsOn[s];
+                for (int i = 0; i < used[s]; i += 2) {
                     // the kernel's own arithmetic for the distance, so the bound holds exactly
                     double ry = yz[i] - qy;
                     double rz = yz[i + 1] - qz;

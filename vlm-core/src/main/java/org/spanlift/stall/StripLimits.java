@@ -1,7 +1,9 @@
 package org.spanlift.stall;
 
 import java.util.ArrayList;
+import java.util.IdentityHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.OptionalDouble;
 
 import org.spanlift.geometry.ControlKind;
@@ -104,6 +106,7 @@ public final class StripLimits {
         boolean assumed = false;
         boolean defaultIncrement = false;
         List<String> missing = new ArrayList<>();
+        Map<Section, Double> zeroLift = new IdentityHashMap<>(); // one quadrature per section, not per strip
         for (int i = 0; i < n; i++) {
             Strip st = lattice.strips().get(ids.get(i));
             double y = Math.abs(st.y());
@@ -122,7 +125,8 @@ public final class StripLimits {
             w[i] = blend.weight();
             names[i] = blend.weight() < 0.5 ? blend.inner() : blend.outer();
             slope[i] = (1 - w[i]) * a.liftSlope() + w[i] * b.liftSlope();
-            alpha0[i] = (1 - w[i]) * zeroLift(a) + w[i] * zeroLift(b);
+            alpha0[i] = (1 - w[i]) * zeroLift.computeIfAbsent(a, StripLimits::zeroLift)
+                    + w[i] * zeroLift.computeIfAbsent(b, StripLimits::zeroLift);
             int c = flapAt(main, controls, y);
             if (c >= 0 && deflections[c] > 0) {
                 double deg = Math.toDegrees(deflections[c]);
