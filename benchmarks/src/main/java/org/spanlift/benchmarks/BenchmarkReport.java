@@ -192,14 +192,19 @@ public final class BenchmarkReport {
             o.ifPresent(r -> out.append(String.format(Locale.ROOT, "  --jobs %s: %8.1f ms per sweep, %6.0f cases/s%n",
                     r.unknowns(), r.wall() * 1e3, 429 / r.wall())));
         }
+        if (one.isPresent() && two.isPresent() && two.get().wall() > 0.8 * one.get().wall()) {
+            out.append("  NOTE: two jobs were hardly faster than one: the second core was not all there (another"
+                    + " process or the host); the split below then counts its idle time in \"the rest\"\n");
+        }
         two.ifPresent(r -> caseParts(rows, r, out));
         out.append('\n');
     }
 
     /**
-     * Where a case goes, in core milliseconds: with two jobs on two cores each case runs on one thread, so a
-     * case costs 2 x wall / 429 core ms (an upper bound: a core may idle at the end). The assembly and the LU
-     * are the one-thread figures at 256 unknowns (the sweep's lattice); the rest is the difference.
+     * Where a case goes, in core milliseconds: with two jobs each case runs on one thread, so a case costs
+     * jobs x wall / 429 core ms, jobs = 2 or the processors if fewer (an upper bound: a core may idle at the
+     * end, or be taken by the host). The assembly and the LU are the one-thread figures at 256 unknowns (the
+     * sweep's lattice); the rest is the difference.
      */
     private static void caseParts(List<Row> rows, Row two, StringBuilder out) {
         Optional<Row> assembly = find(rows, "SystemBenchmark.assemble", "256");
@@ -208,13 +213,13 @@ public final class BenchmarkReport {
         if (assembly.isEmpty() || lu.isEmpty()) {
             return;
         }
-        double cores = Runtime.getRuntime().availableProcessors();
+        double cores = Math.min(2, Runtime.getRuntime().availableProcessors());
         double caseMs = cores * two.wall() / 429 * 1e3;
         double assemblyMs = assembly.get().wall() * 1e3;
         double luMs = lu.get().wall() * 1e3;
         double restMs = caseMs - assemblyMs - luMs;
         out.append(String.format(Locale.ROOT, "  where a case goes (--jobs 2, each case on one thread): %.2f core ms "
-                + "= %.0f cores x wall / 429%n", caseMs, cores));
+                + "= %.0f jobs x wall / 429%n", caseMs, cores));
         out.append(String.format(Locale.ROOT, "    assembly %.2f ms (%.0f%%)%s%n", assemblyMs,
                 100 * assemblyMs / caseMs,
                 floor.map(f -> String.format(Locale.ROOT, "; its square roots and divisions alone take %.2f ms on "

@@ -117,6 +117,11 @@ public final class InfluenceCache {
             return antisymmetric;
         }
 
+        /** Whether the antisymmetric system has been built. */
+        synchronized boolean hasAntisymmetric() {
+            return antisymmetric != null;
+        }
+
         /** The full system (no symmetry), factorized on first use. */
         public synchronized InfluenceSystem full() {
             if (full == null) {

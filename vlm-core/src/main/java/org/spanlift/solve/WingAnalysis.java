@@ -5,6 +5,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
+import org.spanlift.geometry.ControlKind;
 import org.spanlift.geometry.ControlSurface;
 import org.spanlift.geometry.Vec3;
 import org.spanlift.geometry.Wing;
@@ -81,6 +82,12 @@ public final class WingAnalysis {
             }
         }
         InfluenceCache.Systems systems = cache.systems(lattice);
+        for (int c = 0; c < n; c++) {
+            if (needed[c] && lattice.mirrored() && wing.controls().get(c).kind() == ControlKind.AILERON) {
+                systems.antisymmetric(); // an aileron will be deflected: both half-span systems in one pass
+                break;
+            }
+        }
         return new WingAnalysis(wing, lattice, BasisSolutions.solve(lattice, wing.controls(), systems, true, needed),
                 systems, lattice.mirrored());
     }

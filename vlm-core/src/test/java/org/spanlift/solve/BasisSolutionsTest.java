@@ -2,6 +2,7 @@ package org.spanlift.solve;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
@@ -21,6 +22,8 @@ import org.spanlift.geometry.Spacing;
 import org.spanlift.geometry.Surface;
 import org.spanlift.geometry.Trapezoid;
 import org.spanlift.geometry.Wing;
+import org.spanlift.lattice.Lattice;
+import org.spanlift.lattice.LatticeBuilder;
 import org.spanlift.section.CamberLines;
 
 /** The basis solutions, an aileron's solved only when a deflection first asks for it. */
@@ -61,6 +64,28 @@ class BasisSolutionsTest {
         } finally {
             pool.shutdown();
         }
+    }
+
+    @Test
+    void theAntisymmetricSystemIsBuiltOnlyWhenAnAileronIsDeflected() {
+        Wing wing = wing();
+        Lattice lattice = LatticeBuilder.build(wing);
+        InfluenceCache.Systems systems = new InfluenceCache(1).systems(lattice);
+        boolean[] both = {true, true};
+        BasisSolutions basis = BasisSolutions.solve(lattice, wing.controls(), systems, true, both);
+        double[] g = new double[lattice.panelCount()];
+        basis.combine(6 * DEG, new double[] {20 * DEG, 0}, g);
+        assertFalse(systems.hasAntisymmetric(), "a flap and an undeflected aileron need the symmetric system only");
+        basis.combine(6 * DEG, new double[] {0, 5 * DEG}, g);
+        assertTrue(systems.hasAntisymmetric(), "an aileron deflection builds it");
+
+        // a sweep's analysis whose deflections include an aileron's builds both at once, from one pass
+        InfluenceCache cache = new InfluenceCache(1);
+        WingAnalysis.of(wing, cache, new double[] {0, 5 * DEG});
+        assertTrue(cache.systems(lattice).hasAntisymmetric());
+        InfluenceCache flapsOnly = new InfluenceCache(1);
+        WingAnalysis.of(wing, flapsOnly, new double[] {20 * DEG, 0});
+        assertFalse(flapsOnly.systems(lattice).hasAntisymmetric());
     }
 
     @Test

@@ -49,7 +49,9 @@ public final class LongSolveNotice {
     static double estimatedSeconds(Wing wing) {
         double n = unknowns(wing);
         boolean mirrored = wing.surfaces().stream().allMatch(Surface::mirrored);
-        boolean ailerons = wing.controls().stream().anyMatch(c -> c.kind() == ControlKind.AILERON);
+        // the antisymmetric system is built only when an aileron is deflected
+        boolean ailerons = wing.controls().stream().anyMatch(c -> c.kind() == ControlKind.AILERON
+                && c.deflection() != 0);
         int systems = mirrored && ailerons ? 2 : 1;
         return systems * (2.0 / 3.0 * n * n * n / FLOPS + SECONDS_PER_ELEMENT * n * n);
     }
